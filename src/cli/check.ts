@@ -1,0 +1,27 @@
+import { Command } from 'commander';
+import { InputError, WarmcastError, type InputProblem } from '../errors.js';
+import { describePathway, readPathway } from '../io/index.js';
+import type { CliIo } from './cli-io.js';
+
+/** `warmcast check FILE...`: report what each pathway file holds, or every problem in it. */
+export function checkCommand(io: CliIo): Command {
+  return new Command('check')
+    .description('check pathway files: what was read (years, columns, units, interpolation, splice) or every problem found')
+    .argument('<pathway...>', 'pathway CSV files or bundled names')
+    .option('--no-splice', 'check without splicing onto the bundled history')
+    .addHelpText('after', '\nExample:\n  warmcast check my-pathway.csv pathways/swift.csv\n')
+    .action((pathways: string[], opts: { splice: boolean }) => {
+      const problems: InputProblem[] = [];
+      for (const arg of pathways) {
+        try {
+          const { parsed, pathway } = readPathway(arg, { splice: opts.splice });
+          io.stdout(describePathway(parsed, pathway).join('\n') + '\n\n');
+        } catch (e) {
+          if (e instanceof InputError) problems.push(...e.problems);
+          else if (e instanceof WarmcastError) problems.push({ file: arg, code: e.code, message: e.message });
+          else throw e;
+        }
+      }
+      if (problems.length > 0) throw new InputError(problems);
+    });
+}

@@ -1,0 +1,95 @@
+import { readFileSync } from 'node:fs';
+import { resolve } from 'node:path';
+import { InvalidArgumentError, Option, type Command } from 'commander';
+import { calibrate, type CalibrationTargets } from '../climate/calibrate.js';
+import type { ClimateParams } from '../climate/params.js';
+import { InputError } from '../errors.js';
+import { parseParams } from '../io/read-params.js';
+import type { CliIo } from './cli-io.js';
+
+/** Coerces a finite number option. */
+export function numberOption(name: string) {
+  return (text: string): number => {
+    const v = Number(text);
+    if (text.trim() === '' || !Number.isFinite(v)) throw new InvalidArgumentError(`${name} must be a number, got "${text}"`);
+    return v;
+  };
+}
+
+/** Coerces a whole-number year option. */
+export function yearOption(text: string): number {
+  const v = Number(text);
+  if (!Number.isInteger(v) || v < 1000 || v > 3000) throw new InvalidArgumentError(`must be a year such as 2100, got "${text}"`);
+  return v;
+}
+
+/** Coerces `1850-1900` into an inclusive year range. */
+export function yearRangeOption(text: string): [number, number] {
+  const m = /^\s*(\d{4})\s*[-:]\s*(\d{4})\s*$/.exec(text);
+  if (!m || Number(m[1]) > Number(m[2])) throw new InvalidArgumentError(`must be a year range such as 1850-1900, got "${text}"`);
+  return [Number(m[1]), Number(m[2])];
+}
+
+/** Coerces a comma-separated list of numbers (`1.5,2,3`). */
+export function numberListOption(name: string) {
+  return (text: string): number[] => {
+    const parts = text.split(',').map((s) => s.trim());
+    const values = parts.map(Number);
+    if (parts.some((p) => p === '') || values.some((v) => !Number.isFinite(v))) {
+      throw new InvalidArgumentError(`${name} must be numbers separated by commas, such as 1.5,2,3; got "${text}"`);
+    }
+    return values;
+  };
+}
+
+/** The model options shared by run, compare, ensemble and calibrate. */
+export interface ModelOptions {
+  params?: string;
+  ecs?: number;
+  tcr?: number;
+  co2Formula?: 'ar6' | 'log';
+}
+
+/** Adds `--params`, `--ecs`, `--tcr` and `--co2-formula` to a command. */
+export function addModelOptions(cmd: Command): Command {
+  return cmd
+    .option('--params <file>', 'model parameters JSON (any subset of the keys `warmcast calibrate` prints)')
+    .option('--ecs <kelvin>', 'equilibrium climate sensitivity target, K (default 3.0, IPCC AR6 best estimate)', numberOption('--ecs'))
+    .option('--tcr <kelvin>', 'transient climate response target, K (default 1.8, IPCC AR6 best estimate)', numberOption('--tcr'))
+    .addOption(new Option('--co2-formula <name>', 'CO2 forcing: ar6 (Meinshausen et al. 2020 + AR6 adjustment) or log (Myhre et al. 1998)').choices(['ar6', 'log']));
+}
+
+/**
+ * Resolves the model parameters from a `--params` file and flags (flags win over the file, explicit
+ * physical parameters win over ECS/TCR targets) through `calibrate`.
+ *
+ * @returns the parameters and the params file read, if any (for provenance)
+ */
+export function resolveModelParams(
+  opts: ModelOptions,
+  io: CliIo,
+  overrides: CalibrationTargets = {},
+): { params: ClimateParams; paramsFile?: string } {
+  let targets: CalibrationTargets = {};
+  let paramsFile: string | undefined;
+  if (opts.params !== undefined) {
+    paramsFile = resolve(io.cwd, opts.params);
+    let text: string;
+    try {
+      text = readFileSync(paramsFile, 'utf8');
+    } catch (e) {
+      const code = (e as NodeJS.ErrnoException).code;
+      const why = code === 'ENOENT' ? 'does not exist' : code === 'EISDIR' ? 'is a directory, not a file' : `cannot be read (${code})`;
+      throw new InputError([{ file: opts.params, code: 'input.unreadable', message: `parameters file ${why}`, expected: 'a JSON file of model parameters' }]);
+    }
+    targets = parseParams(text, opts.params);
+  }
+  for (const [k, v] of Object.entries(overrides)) if (v !== undefined) (targets as Record<string, unknown>)[k] = v;
+  if (opts.ecs !== undefined) targets.ecsK = opts.ecs;
+  if (opts.tcr !== undefined) targets.tcrK = opts.tcr;
+  if (opts.co2Formula !== undefined) targets.co2Formula = opts.co2Formula;
+  // A flag target should win over physical values from a file that would otherwise override it.
+  if (opts.ecs !== undefined) delete targets.feedbackWm2K;
+  if (opts.tcr !== undefined) delete targets.exchangeWm2K;
+  return { params: calibrate(targets), paramsFile };
+}

@@ -1,0 +1,56 @@
+import { createHash } from 'node:crypto';
+import { readFileSync } from 'node:fs';
+import { DateTime } from 'luxon';
+import { paramsToJson, type ClimateParams } from '../climate/params.js';
+import { packageVersion } from './version.js';
+
+/** Where an output came from; every file warmcast writes carries one. */
+export interface Provenance {
+  tool: 'warmcast';
+  version: string;
+  /** UTC time the output was made, ISO 8601. */
+  created_utc: string;
+  /** Each input file with its SHA-256. */
+  inputs: { path: string; sha256: string }[];
+  /** Model parameters as `--params` reads them. */
+  parameters: Record<string, number | string>;
+  /** Baseline of the warming columns. */
+  baseline: string;
+  /** Random seed, for ensembles. */
+  seed?: number;
+  /** Notes on the pathways: history splice, interpolation, gases held at 1750 values. */
+  notes: string[];
+  /** The caution that goes with every output. */
+  caution: string;
+}
+
+/** The caution every report and file carries. */
+export const CAUTION =
+  'Reduced-complexity, global-mean estimate from a two-box energy balance model; it carries the uncertainty shown and more. ' +
+  'For decisions, defer to the IPCC assessments and to your own jurisdiction\'s official guidance.';
+
+/** SHA-256 of a file's bytes, hex. */
+export function sha256File(path: string): string {
+  return createHash('sha256').update(readFileSync(path)).digest('hex');
+}
+
+/** Builds the provenance record for files read (`inputs`, absolute paths) and the parameters used. */
+export function buildProvenance(args: {
+  inputs: string[];
+  params: ClimateParams;
+  baseline: readonly [number, number];
+  notes: string[];
+  seed?: number;
+}): Provenance {
+  return {
+    tool: 'warmcast',
+    version: packageVersion(),
+    created_utc: DateTime.utc().toISO() ?? new Date().toISOString(),
+    inputs: [...new Set(args.inputs)].map((path) => ({ path, sha256: sha256File(path) })),
+    parameters: paramsToJson(args.params),
+    baseline: `${args.baseline[0]}-${args.baseline[1]}`,
+    ...(args.seed !== undefined ? { seed: args.seed } : {}),
+    notes: args.notes,
+    caution: CAUTION,
+  };
+}

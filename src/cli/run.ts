@@ -1,0 +1,86 @@
+import { Command, Option } from 'commander';
+import { resolve } from 'node:path';
+import { ConfigError } from '../errors.js';
+import { readPathway } from '../io/load-pathway.js';
+import { projectPathway, type Projection } from '../projection/index.js';
+import type { CliIo } from './cli-io.js';
+import { addModelOptions, numberOption, resolveModelParams, yearOption, yearRangeOption, type ModelOptions } from './options.js';
+import { clipProjection, projectionTable, writeTableOutput } from './output.js';
+import { printProjectionSummary } from './summary.js';
+
+/** The pathway `warmcast run` uses when none is given. */
+export const DEFAULT_PATHWAY = 'delayed';
+
+interface RunOptions extends ModelOptions {
+  out?: string;
+  from?: number;
+  to?: number;
+  baseline: [number, number];
+  splice: boolean;
+  chart: boolean;
+  method: 'odex' | 'exact';
+  rtol: number;
+  atol: number;
+}
+
+/** `warmcast run [pathway...]`: project warming for pathways; summary and chart, or a file with `--out`. */
+export function runCommand(io: CliIo): Command {
+  const cmd = new Command('run')
+    .description('project year-by-year warming for one or more pathways (file paths or bundled names)')
+    .argument('[pathway...]', `pathway CSV files or bundled names (default: ${DEFAULT_PATHWAY}; see \`warmcast pathways\`)`)
+    .option('-o, --out <file>', 'write the full yearly trajectory; the extension picks the format: .csv (+ .meta.json), .json, .md; - for stdout as CSV')
+    .option('--from <year>', 'first year to report (the model still starts from pre-industrial)', yearOption)
+    .option('--to <year>', 'last year to report', yearOption)
+    .option('--baseline <years>', 'baseline period for warming', yearRangeOption, [1850, 1900])
+    .option('--no-splice', 'do not splice a pathway that starts late onto the bundled history')
+    .option('--no-chart', 'omit the terminal chart');
+  addModelOptions(cmd)
+    .addOption(new Option('--method <name>', 'temperature stepping: odex (ODE solver) or exact (matrix-exponential propagator)').choices(['odex', 'exact']).default('odex'))
+    .option('--rtol <value>', 'odex relative tolerance', numberOption('--rtol'), 1e-10)
+    .option('--atol <value>', 'odex absolute tolerance, K', numberOption('--atol'), 1e-10)
+    .addHelpText(
+      'after',
+      '\nExamples:\n  warmcast run                                  # the default bundled pathway\n  warmcast run my-pathway.csv --out out.csv\n  warmcast run swift --ecs 4 --tcr 2.2 --to 2100\n  warmcast run steady --params params.json --out steady.md\n',
+    )
+    .action((pathways: string[], opts: RunOptions) => {
+      const args = pathways.length > 0 ? pathways : [DEFAULT_PATHWAY];
+      if (opts.out !== undefined && args.length > 1) {
+        throw new ConfigError('--out takes one pathway; to put several side by side use `warmcast compare`', 'out');
+      }
+      if (!(opts.rtol > 0 && opts.atol > 0)) throw new ConfigError('--rtol and --atol must be positive', 'rtol');
+      const { params, paramsFile } = resolveModelParams(opts, io);
+      const projections: { projection: Projection; file: string }[] = [];
+      for (const arg of args) {
+        const read = readPathway(arg, { splice: opts.splice });
+        const full = projectPathway(read.pathway, {
+          params,
+          baseline: opts.baseline,
+          method: opts.method,
+          tolerances: { relativeTolerance: opts.rtol, absoluteTolerance: opts.atol, maxStepsPerUnit: 2000 },
+        });
+        projections.push({ projection: clipProjection(full, opts.from, opts.to), file: read.parsed.file });
+      }
+      const report = opts.out === '-' ? io.stderr : io.stdout;
+      if (opts.out !== undefined) {
+        const { projection, file } = projections[0];
+        const inputs = [file, ...(paramsFile ? [paramsFile] : [])];
+        const written = writeTableOutput(resolveOut(opts.out, io), projectionTable(projection), {
+          inputs,
+          params,
+          baseline: opts.baseline,
+          notes: [...projection.provenance.notes, ...projection.notes],
+          io,
+          allowed: ['.csv', '.json', '.md'],
+        });
+        for (const w of written) io.stderr(`wrote ${w}\n`);
+      }
+      for (const { projection } of projections) {
+        printProjectionSummary(projection, { write: report, color: opts.out === '-' ? io.stderrIsTTY : io.stdoutIsTTY, chart: opts.chart });
+      }
+    });
+  return cmd;
+}
+
+function resolveOut(out: string, io: CliIo): string {
+  return out === '-' ? out : resolve(io.cwd, out);
+}

@@ -1,0 +1,76 @@
+import { peak, valueAtYear } from '../metrics/index.js';
+import type { Projection } from '../projection/index.js';
+import { terminalChart } from '../report/index.js';
+import { CAUTION } from './provenance.js';
+
+/** Years whose warming the summary always states, where the run covers them. */
+const HEADLINE_YEARS = [2030, 2050, 2100];
+
+/** Columns of the short yearly table the summary prints. */
+const TABLE_COLUMNS = [
+  ['warming_k', 'warming K', 2],
+  ['deep_ocean_k', 'deep ocean K', 2],
+  ['forcing_wm2', 'ERF W m-2', 2],
+  ['imbalance_wm2', 'imbalance W m-2', 2],
+  ['co2_ppm', 'CO2 ppm', 1],
+] as const;
+
+/**
+ * Prints what `warmcast run` shows on a terminal: a heading with the pathway and its splice, a short
+ * table every 10 years over the future (or 25 over a long history), the headline lines (warming in
+ * 2030, 2050, 2100, peak and its year), a chart, the notes and the caution.
+ */
+export function printProjectionSummary(p: Projection, out: { write: (s: string) => void; color: boolean; chart: boolean }): void {
+  const { years, columns } = p;
+  const first = years[0];
+  const last = years[years.length - 1];
+  const w = columns.warming_k;
+  const lines: string[] = [];
+  lines.push(`${p.name} (${p.provenance.source})`);
+  lines.push(
+    `  ECS ${p.params.ecsK.toFixed(2)} K, TCR ${p.params.tcrK.toFixed(2)} K, CO2 forcing ${p.params.co2Formula}; ` +
+      `warming relative to the ${p.baseline[0]}-${p.baseline[1]} mean`,
+  );
+  if (p.provenance.spliceYear !== undefined) lines.push(`  history spliced in: years before ${p.provenance.spliceYear} come from the bundled history`);
+  lines.push('');
+
+  const start = p.provenance.spliceYear !== undefined && p.provenance.spliceYear >= first ? p.provenance.spliceYear : first;
+  const step = last - start > 200 ? 25 : 10;
+  const rows: number[] = [];
+  for (let y = Math.ceil(start / step) * step; y <= last; y += step) rows.push(y);
+  if (rows[0] !== start) rows.unshift(start);
+  if (rows[rows.length - 1] !== last) rows.push(last);
+  const header = ['year', ...TABLE_COLUMNS.map(([, label]) => label)];
+  const widths = header.map((h) => Math.max(h.length, 6));
+  lines.push('  ' + header.map((h, i) => h.padStart(widths[i])).join('  '));
+  for (const y of rows) {
+    const cells = [String(y), ...TABLE_COLUMNS.map(([col, , digits]) => valueAtYear(years, columns[col], y).toFixed(digits))];
+    lines.push('  ' + cells.map((c, i) => c.padStart(widths[i])).join('  '));
+  }
+  lines.push('');
+
+  const headline = HEADLINE_YEARS.filter((y) => y >= first && y <= last).map((y) => `${y}: ${valueAtYear(years, w, y).toFixed(2)} K`);
+  if (headline.length > 0) lines.push(`  warming in ${headline.join(', ')}`);
+  const top = peak(years, w);
+  lines.push(`  peak warming ${top.value.toFixed(2)} K in ${top.year}${top.year === last ? ' (the last year: still rising)' : ''}`);
+  out.write(lines.join('\n') + '\n');
+
+  if (out.chart) {
+    const chartFrom = Math.max(first, Math.min(1850, last));
+    const i0 = chartFrom - first;
+    out.write(
+      '\n' +
+        terminalChart([{ label: p.name, years: years.subarray(i0), values: w.subarray(i0) }], {
+          title: `Global surface warming, ${p.name} (K relative to ${p.baseline[0]}-${p.baseline[1]})`,
+          yLabel: 'K',
+          height: 12,
+          color: out.color,
+          thresholds: [1.5, 2],
+        }) +
+        '\n',
+    );
+  }
+  const notes = [...p.provenance.notes, ...p.notes];
+  if (notes.length > 0) out.write('\n' + notes.map((n) => `  note: ${n}`).join('\n') + '\n');
+  out.write(`\n  ${CAUTION}\n\n`);
+}

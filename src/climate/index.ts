@@ -1,0 +1,10 @@
+export { calibrate, onePercentForcing, transientResponse } from './calibrate.js';
+export type { CalibrationTargets } from './calibrate.js';
+export { energyBalance } from './energy-balance.js';
+export type { EnergyBalanceMethod, EnergyBalanceResult } from './energy-balance.js';
+export { propagateTwoBoxInto, twoBoxPropagator } from './exact-propagator.js';
+export type { TwoBoxPropagator } from './exact-propagator.js';
+export { CALIBRATION_DEFAULTS, PARAM_KEYS, paramsToJson } from './params.js';
+export type { ClimateParams, ClimateParamsJson } from './params.js';
+export { abruptResponse, topOfAtmosphereImbalance, twoBoxDerivativesInto, twoBoxMatrix, twoBoxModes } from './two-box.js';
+export type { TwoBoxModes, TwoBoxParams } from './two-box.js';

@@ -1,0 +1,7 @@
+export { FORCING_AGENTS, forcingByAgent, ghgForcingFunction } from './agents.js';
+export type { ForcingAgent, ForcingInputs, ForcingOptions, ForcingSeries, GhgForcing } from './agents.js';
+export { ch4ErfAr6 } from './ch4.js';
+export { co2ErfAr6, co2Forcing, co2ForcingLog, co2SarfMeinshausen, forcingOfDoubling } from './co2.js';
+export type { Co2Formula } from './co2.js';
+export { AR6_ERF_OVER_SARF, MEINSHAUSEN_2020, MYHRE_1998_CO2_COEFFICIENT, PREINDUSTRIAL } from './constants.js';
+export { n2oErfAr6 } from './n2o.js';

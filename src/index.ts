@@ -1,0 +1,12 @@
+// warmcast's library surface: pathway reading, forcing, the energy balance model, calibration and
+// projections. Everything here is pure except the file readers in io/.
+export * from './errors.js';
+export * from './pathway.js';
+export * from './forcing/index.js';
+export * from './climate/index.js';
+export * from './projection/index.js';
+export { parsePathway, toAnnual, spliceOntoHistory, loadPathway, readPathway, loadHistory, listBundledPathways, describePathway } from './io/index.js';
+export type { ParsedPathway, ReadPathwayResult, BundledPathway } from './io/index.js';
+export { parseParams } from './io/read-params.js';
+export { DEFAULT_TOLERANCES } from './numerics/integrate-steps.js';
+export type { OdeTolerances } from './numerics/integrate-steps.js';

@@ -1,0 +1,27 @@
+/**
+ * The io layer: reading and validating pathway files, putting them on the annual grid, splicing them
+ * onto the bundled history, and writing results (CSV, Markdown, JSON) atomically. Only this folder
+ * and `cli/` touch the file system.
+ */
+export { parsePathway, type ParsedPathway } from './parse-pathway.js';
+export { VALUE_BOUNDS, type ValueBounds } from './value-bounds.js';
+export { isoDateToYear, type IsoDateYear } from './iso-date-year.js';
+export { editDistance, nearestName } from './nearest-name.js';
+export { describeTimeSteps } from './time-steps.js';
+export { toAnnual } from './to-annual.js';
+export { spliceOntoHistory } from './splice-onto-history.js';
+export { readTextFile, MAX_PATHWAY_BYTES } from './read-text-file.js';
+export {
+  bundledPathwaysDir,
+  bundledPathwayNames,
+  listBundledPathways,
+  loadHistory,
+  type BundledPathway,
+} from './bundled-pathways.js';
+export { loadPathway, readPathway, type LoadPathwayOptions, type ReadPathwayResult } from './load-pathway.js';
+export { describePathway } from './describe-pathway.js';
+export { tableColumns, type Table, type TableColumn } from './table.js';
+export { formatCsv } from './format-csv.js';
+export { formatMarkdown } from './format-markdown.js';
+export { formatJson } from './format-json.js';
+export { writeFileAtomic, type WriteFileAtomicOptions } from './write-file-atomic.js';

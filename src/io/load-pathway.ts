@@ -1,0 +1,101 @@
+import { existsSync, realpathSync } from 'node:fs';
+import { join } from 'node:path';
+import { InputError } from '../errors.js';
+import type { Pathway } from '../pathway.js';
+import { bundledPathwayNames, bundledPathwaysDir, loadHistory } from './bundled-pathways.js';
+import { parsePathway, type ParsedPathway } from './parse-pathway.js';
+import { readTextFile } from './read-text-file.js';
+import { spliceOntoHistory } from './splice-onto-history.js';
+import { toAnnual } from './to-annual.js';
+
+/** Options of loadPathway and readPathway. */
+export interface LoadPathwayOptions {
+  /** Splice the pathway onto the bundled history when it starts later (default true). */
+  splice?: boolean;
+  /** Folder of bundled pathways and history.csv (default: the one shipped with warmcast). */
+  pathwaysDir?: string;
+}
+
+/** Every stage of reading one pathway, for `warmcast check`. */
+export interface ReadPathwayResult {
+  /** The rows as read from the file. */
+  parsed: ParsedPathway;
+  /** The file's own values on the annual grid. */
+  annual: Pathway;
+  /** What a run uses: `annual`, spliced onto the history unless that was turned off or not needed. */
+  pathway: Pathway;
+}
+
+/**
+ * Reads a pathway and keeps each stage: the parsed rows, the file's annual values and the pathway a
+ * run uses. See loadPathway for how `arg` is found and what can fail.
+ *
+ * @example
+ * const { parsed, pathway } = readPathway('swift');
+ * describePathway(parsed, pathway) // lines for `warmcast check`
+ */
+export function readPathway(arg: string, options: LoadPathwayOptions = {}): ReadPathwayResult {
+  // Looked up only when needed, so a user's file can be read without splicing even if the bundled folder is gone.
+  const pathwaysDir = () => options.pathwaysDir ?? bundledPathwaysDir();
+  const { path, source } = locate(arg, pathwaysDir);
+  const parsed = parsePathway(readTextFile(path), path);
+  let annual = toAnnual(parsed);
+  if (source !== path) annual = { ...annual, provenance: { ...annual.provenance, source } };
+  let pathway = annual;
+  if (options.splice !== false && !isHistoryFile(path, pathwaysDir())) {
+    pathway = spliceOntoHistory(annual, loadHistory(pathwaysDir()));
+  }
+  return { parsed, annual, pathway };
+}
+
+/**
+ * Reads a pathway for a run. `arg` is a file path or the name of a bundled pathway (`swift` or
+ * `swift.csv` for `pathways/swift.csv`); an existing file wins over a bundled name. The file is read
+ * (at most MAX_PATHWAY_BYTES, UTF-8), validated (parsePathway), put on the annual grid (toAnnual) and,
+ * unless `splice: false`, spliced onto the bundled history (spliceOntoHistory) when it starts later
+ * than the history. A bundled pathway's provenance source is `bundled:<name>`; a file's is its path.
+ *
+ * @param arg - file path or bundled pathway name
+ * @param options - `splice` (default true), `pathwaysDir` (default: the bundled folder)
+ * @returns the annual Pathway a run uses
+ * @throws InputError (exit 2) when the file is missing and not a bundled name (the message lists the
+ *   bundled names), a folder, unreadable, too large, not UTF-8, or invalid
+ * @example
+ * loadPathway('swift').provenance.spliceYear // 2025
+ * loadPathway('my-plan.csv', { splice: false }).years[0] // the file's first year
+ */
+export function loadPathway(arg: string, options: LoadPathwayOptions = {}): Pathway {
+  return readPathway(arg, options).pathway;
+}
+
+/** Finds the file behind `arg`: an existing path, else a bundled name. */
+function locate(arg: string, pathwaysDir: () => string): { path: string; source: string } {
+  if (arg !== '' && existsSync(arg)) return { path: arg, source: arg };
+  let dir: string | undefined;
+  try {
+    dir = pathwaysDir();
+  } catch {
+    // A missing bundled folder must not hide the real problem: the file the user named does not exist.
+  }
+  if (dir !== undefined && /^[\w.-]+$/.test(arg)) {
+    const name = arg.toLowerCase().endsWith('.csv') ? arg.slice(0, -4) : arg;
+    const path = join(dir, `${name}.csv`);
+    if (existsSync(path)) return { path, source: `bundled:${name}` };
+  }
+  const names = dir === undefined ? [] : bundledPathwayNames(dir);
+  throw new InputError([{
+    file: arg,
+    code: 'input.not-found',
+    message: 'must be an existing file or the name of a bundled pathway',
+    value: arg,
+    expected: names.length > 0
+      ? `a CSV file path or one of the bundled pathways: ${names.join(', ')}`
+      : 'a CSV file path (no bundled pathways were found)',
+  }]);
+}
+
+function isHistoryFile(path: string, pathwaysDir: string): boolean {
+  const history = join(pathwaysDir, 'history.csv');
+  if (!existsSync(history)) return false;
+  return realpathSync(path) === realpathSync(history);
+}

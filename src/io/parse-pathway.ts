@@ -1,0 +1,475 @@
+import Papa from 'papaparse';
+import { InputError, type InputProblem } from '../errors.js';
+import { GASES, PATHWAY_COLUMNS, type Gas, type PathwayColumn } from '../pathway.js';
+import { isoDateToYear } from './iso-date-year.js';
+import { nearestName } from './nearest-name.js';
+import { VALUE_BOUNDS } from './value-bounds.js';
+
+/** A pathway file as read, before interpolation: one entry per data row, in file order. */
+export interface ParsedPathway {
+  /** File path as given (used in every message). */
+  file: string;
+  /** `# name:` metadata, else the file's base name without its extension. */
+  name: string;
+  /** Every `# key: value` comment line, keys lower-cased (a later line with the same key wins). */
+  metadata: Record<string, string>;
+  /** Which time column the file uses. */
+  timeColumn: 'year' | 'date';
+  /** Decimal year label of each row, strictly ascending (dates converted by isoDateToYear). */
+  times: Float64Array;
+  /** Data columns present, canonical lower-case names, one value per row in the column's unit. */
+  columns: Partial<Record<PathwayColumn, Float64Array>>;
+  /** 1-based physical line of each row in the file (comment and blank lines counted). */
+  rowLines: Int32Array;
+  /** 1-based physical line of the header row. */
+  headerLine: number;
+}
+
+/** Time labels must lie in this span of years (common practice, no source: catches typos such as 20300). */
+const YEAR_MIN = 1000;
+const YEAR_MAX = 3000;
+
+/** More problems than this are summarised in one final problem, so a wrong file cannot flood a terminal. */
+const MAX_PROBLEMS = 1000;
+
+const NUMBER = /^[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:e[+-]?\d+)?$/i;
+const DECIMAL_COMMA_NUMBER = /^[+-]?(?:\d+,\d*|,\d+)(?:e[+-]?\d+)?$/i;
+const NOT_FINITE = /^[+-]?(?:nan|inf|infinity)$/i;
+const METADATA = /^#\s*([a-z][a-z0-9_-]*)\s*:\s*(.*)$/i;
+
+/** Columns that name a gas in a unit warmcast does not take, with the conversion to say. */
+const UNIT_HINTS: Readonly<Record<string, string>> = {
+  co2_gtc: 'co2_gtco2 (Gt CO2 per year: multiply Gt C by 44/12 = 3.664)',
+  co2_pgc: 'co2_gtco2 (Gt CO2 per year: multiply Pg C by 44/12 = 3.664)',
+  n2o_tgn: 'n2o_mt (Mt N2O per year: multiply Tg N by 44/28 = 1.571)',
+  n2o_mtn: 'n2o_mt (Mt N2O per year: multiply Mt N by 44/28 = 1.571)',
+};
+
+type CellRole =
+  | { kind: 'time'; name: 'year' | 'date'; header: string }
+  | { kind: 'data'; column: PathwayColumn; header: string }
+  | { kind: 'skip' };
+
+/**
+ * Reads and validates the text of a pathway CSV file (no file system access: pass the text).
+ *
+ * Format: UTF-8 text (a leading byte-order mark is dropped), lines ended by LF, CRLF or CR. Lines
+ * whose first non-blank character is `#` are comments; `# key: value` comments become metadata
+ * (`# name: Swift transition`). Blank lines, and lines holding only delimiters (spreadsheets write
+ * `,,,` rows), are skipped. Comment, blank and skipped lines all count in line numbers. The first
+ * other line is the header. The delimiter is `,`; when the header has no comma outside quotes but a
+ * `;` (or a tab), that is the delimiter and numbers may then use a decimal comma (`415,2`).
+ * Cells may be quoted with `"` (`""` inside a quoted cell is one quote); a quoted cell cannot span
+ * lines. Header names are trimmed and matched case-insensitively against `year` or `date` (exactly
+ * one of them) and PATHWAY_COLUMNS. Numbers are plain decimals or exponent forms (`4.152e2`), without
+ * units or thousands separators; NaN, Infinity and empty cells are refused; values must lie in
+ * VALUE_BOUNDS. `year` values are whole or decimal years, `date` values ISO 8601 dates converted by
+ * isoDateToYear; either must lie between 1000 and 3000 and increase strictly down the file (gaps are
+ * fine: toAnnual interpolates).
+ *
+ * Every problem in the file is collected (up to 1000, then one summary problem), each with its
+ * physical line, column, the offending text and the expected form.
+ *
+ * @param text - the whole file's contents
+ * @param file - the path or name to report in messages (also the name when there is no `# name:`)
+ * @returns the rows, in file order
+ * @throws InputError listing every problem found
+ * @example
+ * const p = parsePathway('# name: Demo\nyear,co2_ppm\n2030,440\n2040,460\n', 'demo.csv');
+ * p.name // 'Demo'
+ * p.times // Float64Array [2030, 2040]
+ * p.columns.co2_ppm // Float64Array [440, 460]
+ * p.rowLines // Int32Array [3, 4]
+ */
+export function parsePathway(text: string, file: string): ParsedPathway {
+  const problems: InputProblem[] = [];
+  let dropped = 0;
+  const report = (p: Omit<InputProblem, 'file'>) => {
+    if (problems.length < MAX_PROBLEMS) problems.push({ file, ...p });
+    else dropped++;
+  };
+
+  const body = text.charCodeAt(0) === 0xfeff ? text.slice(1) : text;
+  if (body.trim() === '') {
+    throw new InputError([{
+      file,
+      code: 'input.empty',
+      message: 'must not be empty',
+      expected: 'a header row such as "year,co2_ppm" followed by one row per year',
+    }]);
+  }
+
+  const lines = body.split(/\r\n|\r|\n/);
+  const metadata: Record<string, string> = {};
+  let headerLine = 0;
+  let delimiter = ',';
+  let roles: CellRole[] = [];
+  let headerCells: string[] = [];
+  let timeRole: Extract<CellRole, { kind: 'time' }> | undefined;
+
+  const times: number[] = [];
+  const rowLines: number[] = [];
+  const values = new Map<PathwayColumn, number[]>();
+  const lineOfTime = new Map<number, number>();
+  let latestTime = -Infinity;
+  let latestTimeLine = 0;
+
+  for (let i = 0; i < lines.length; i++) {
+    const lineNumber = i + 1;
+    const trimmed = lines[i].trim();
+    if (trimmed === '') continue;
+    if (trimmed.startsWith('#')) {
+      const m = METADATA.exec(trimmed);
+      if (m) metadata[m[1].toLowerCase()] = m[2].trim();
+      continue;
+    }
+
+    if (headerLine === 0) {
+      headerLine = lineNumber;
+      delimiter = detectDelimiter(lines[i]);
+      const cells = splitCells(lines[i], delimiter, lineNumber, report);
+      if (cells === undefined) break;
+      headerCells = cells;
+      roles = readHeader(cells, lineNumber, report);
+      const timeRoles = roles.filter((r): r is Extract<CellRole, { kind: 'time' }> => r.kind === 'time');
+      if (timeRoles.length === 1) timeRole = timeRoles[0];
+      for (const r of roles) if (r.kind === 'data') values.set(r.column, []);
+      continue;
+    }
+
+    const cells = splitCells(lines[i], delimiter, lineNumber, report);
+    if (cells === undefined) continue;
+    if (cells.every((c) => c.trim() === '')) continue;
+    if (cells.length !== headerCells.length) {
+      report({
+        code: 'input.cell-count',
+        line: lineNumber,
+        message: `must have ${headerCells.length} cells like the header on line ${headerLine}, found ${cells.length}`,
+        value: lines[i],
+        expected: `${headerCells.length} cells separated by "${delimiter === '\t' ? '\\t' : delimiter}"`,
+      });
+      continue;
+    }
+
+    rowLines.push(lineNumber);
+    let time = NaN;
+    for (let j = 0; j < cells.length; j++) {
+      const role = roles[j];
+      const cell = cells[j].trim();
+      if (role.kind === 'time') {
+        if (role !== timeRole) continue;
+        time = readTime(cell, role, lineNumber, delimiter, report);
+      } else if (role.kind === 'data') {
+        values.get(role.column)!.push(readValue(cell, role, lineNumber, delimiter, report));
+      }
+    }
+    times.push(time);
+
+    if (timeRole && Number.isFinite(time)) {
+      const earlier = lineOfTime.get(time);
+      if (earlier !== undefined) {
+        report({
+          code: 'input.duplicate-time',
+          line: lineNumber,
+          column: timeRole.header,
+          message: `must not repeat a ${timeRole.name}: the same ${timeRole.name} is on line ${earlier}`,
+          value: cells[roles.indexOf(timeRole)].trim(),
+          expected: `each ${timeRole.name} once, increasing down the file`,
+        });
+      } else {
+        if (time < latestTime) {
+          report({
+            code: 'input.time-order',
+            line: lineNumber,
+            column: timeRole.header,
+            message: `must increase down the file: this row comes after ${formatTime(latestTime)} on line ${latestTimeLine}`,
+            value: cells[roles.indexOf(timeRole)].trim(),
+            expected: `${timeRole.name === 'year' ? 'years' : 'dates'} in increasing order`,
+          });
+        } else {
+          latestTime = time;
+          latestTimeLine = lineNumber;
+        }
+        lineOfTime.set(time, lineNumber);
+      }
+    }
+  }
+
+  if (headerLine === 0) {
+    report({
+      code: 'input.no-header',
+      message: 'must have a header row (the file holds only comments and blank lines)',
+      expected: 'a header row such as "year,co2_ppm" followed by one row per year',
+    });
+  } else if (rowLines.length === 0 && headerCells.length > 0) {
+    report({
+      code: 'input.no-rows',
+      line: headerLine,
+      message: 'must have at least one data row after the header',
+      expected: 'one row per year, such as "2030,440"',
+    });
+  }
+
+  if (dropped > 0) {
+    problems.push({
+      file,
+      code: 'input.too-many-problems',
+      message: `${dropped} more problems not listed (the first ${MAX_PROBLEMS} are above)`,
+    });
+  }
+  if (problems.length > 0) throw new InputError(problems);
+
+  const columns: Partial<Record<PathwayColumn, Float64Array>> = {};
+  for (const column of PATHWAY_COLUMNS) {
+    const v = values.get(column);
+    if (v) columns[column] = Float64Array.from(v);
+  }
+  return {
+    file,
+    name: metadata.name || baseName(file),
+    metadata,
+    timeColumn: timeRole!.name,
+    times: Float64Array.from(times),
+    columns,
+    rowLines: Int32Array.from(rowLines),
+    headerLine,
+  };
+}
+
+type Report = (p: Omit<InputProblem, 'file'>) => void;
+
+/** `,` unless the header has no comma outside quotes and has a `;` (or else a tab). */
+function detectDelimiter(headerLine: string): string {
+  let inQuotes = false;
+  const seen = new Set<string>();
+  for (const ch of headerLine) {
+    if (ch === '"') inQuotes = !inQuotes;
+    else if (!inQuotes && (ch === ',' || ch === ';' || ch === '\t')) seen.add(ch);
+  }
+  if (seen.has(',')) return ',';
+  if (seen.has(';')) return ';';
+  if (seen.has('\t')) return '\t';
+  return ',';
+}
+
+/** The cells of one physical line (papaparse does the quoting), or undefined after a quote problem. */
+function splitCells(line: string, delimiter: string, lineNumber: number, report: Report): string[] | undefined {
+  const parsed = Papa.parse<string[]>(line, { delimiter, quoteChar: '"', escapeChar: '"', header: false });
+  const quoteError = parsed.errors.find((e) => e.type === 'Quotes');
+  if (quoteError) {
+    report({
+      code: 'input.bad-quotes',
+      line: lineNumber,
+      message: quoteError.code === 'MissingQuotes'
+        ? 'must close every quoted cell on the same line'
+        : 'must end a quoted cell right after its closing quote',
+      value: line,
+      expected: 'cells such as 415.2 or "415.2" (a quote inside a quoted cell written "")',
+    });
+    return undefined;
+  }
+  return parsed.data[0] ?? [];
+}
+
+/** Assigns each header cell its role and reports header problems. */
+function readHeader(cells: string[], line: number, report: Report): CellRole[] {
+  const roles: CellRole[] = [];
+  const firstIndex = new Map<string, number>();
+  const known: readonly string[] = ['year', 'date', ...PATHWAY_COLUMNS];
+  let unknownCount = 0;
+
+  cells.forEach((cell, j) => {
+    const header = cell.trim();
+    const key = header.toLowerCase();
+    if (header === '') {
+      report({
+        code: 'input.empty-column-name',
+        line,
+        column: String(j + 1),
+        message: `must name every column (header cell ${j + 1} is empty)`,
+        expected: `one of ${known.join(', ')}`,
+      });
+      roles.push({ kind: 'skip' });
+      return;
+    }
+    const earlier = firstIndex.get(key);
+    if (earlier !== undefined) {
+      report({
+        code: 'input.duplicate-column',
+        line,
+        column: header,
+        message: `must name each column once: header cells ${earlier + 1} and ${j + 1} are both "${key}"`,
+        value: header,
+        expected: 'each column once',
+      });
+      roles.push({ kind: 'skip' });
+      return;
+    }
+    firstIndex.set(key, j);
+    if (key === 'year' || key === 'date') {
+      roles.push({ kind: 'time', name: key, header });
+    } else if ((PATHWAY_COLUMNS as readonly string[]).includes(key)) {
+      roles.push({ kind: 'data', column: key as PathwayColumn, header });
+    } else {
+      unknownCount++;
+      const hint = UNIT_HINTS[key.replace(/[^a-z0-9]+/g, '_')];
+      const guess = hint === undefined ? nearestName(key, known) : undefined;
+      report({
+        code: 'input.unknown-column',
+        line,
+        column: header,
+        message: hint !== undefined
+          ? `must be a known column name; give ${hint}`
+          : guess !== undefined
+            ? `must be a known column name; did you mean "${guess}"?`
+            : 'must be a known column name',
+        value: header,
+        expected: `one of ${known.join(', ')}`,
+      });
+      roles.push({ kind: 'skip' });
+    }
+  });
+
+  const timeRoles = roles.filter((r) => r.kind === 'time');
+  if (timeRoles.length === 0) {
+    report({
+      code: 'input.no-time-column',
+      line,
+      message: 'must have a time column',
+      expected: 'a column named "year" (whole or decimal years) or "date" (ISO 8601 dates such as 2030-07-02)',
+    });
+  } else if (timeRoles.length > 1) {
+    report({
+      code: 'input.two-time-columns',
+      line,
+      column: timeRoles[1].header,
+      message: 'must have one time column, not both "year" and "date"',
+      value: timeRoles[1].header,
+      expected: 'either a "year" or a "date" column',
+    });
+  }
+
+  const dataRoles = roles.filter((r): r is Extract<CellRole, { kind: 'data' }> => r.kind === 'data');
+  for (const gas of Object.keys(GASES) as Gas[]) {
+    const { concentration, emission } = GASES[gas];
+    const conc = dataRoles.find((r) => r.column === concentration);
+    const emis = dataRoles.find((r) => r.column === emission);
+    if (conc && emis) {
+      const later = roles.indexOf(conc) > roles.indexOf(emis) ? conc : emis;
+      report({
+        code: 'input.gas-twice',
+        line,
+        column: later.header,
+        message: `must give ${gas.toUpperCase()} either as a concentration (${concentration}) or as emissions (${emission}), not both`,
+        value: later.header,
+        expected: `one column per gas: ${concentration} or ${emission}`,
+      });
+    }
+  }
+  if (dataRoles.length === 0 && unknownCount === 0) {
+    report({
+      code: 'input.no-data-columns',
+      line,
+      message: 'must have at least one data column besides the time column',
+      expected: `one or more of ${PATHWAY_COLUMNS.join(', ')}`,
+    });
+  }
+  return roles;
+}
+
+type NumberRead = { ok: true; value: number } | { ok: false; code: string; message: string; expected: string };
+
+/** Reads one number cell; a decimal comma is accepted when the delimiter is not a comma. */
+function readNumber(cell: string, delimiter: string): NumberRead {
+  const decimalComma = delimiter !== ',';
+  const example = decimalComma ? '415,2 or 415.2' : '415.2';
+  if (cell === '') {
+    return { ok: false, code: 'input.empty-cell', message: 'must not be empty', expected: `a number such as ${example} in every cell` };
+  }
+  if (NOT_FINITE.test(cell)) {
+    return { ok: false, code: 'input.not-finite', message: 'must be a finite number', expected: `a number such as ${example}` };
+  }
+  if (NUMBER.test(cell)) return { ok: true, value: Number(cell) };
+  if (decimalComma && DECIMAL_COMMA_NUMBER.test(cell)) return { ok: true, value: Number(cell.replace(',', '.')) };
+  return {
+    ok: false,
+    code: 'input.bad-number',
+    message: 'must be a number',
+    expected: decimalComma
+      ? `a number such as ${example}, without units or thousands separators`
+      : `a number such as ${example}, with a decimal point and without units or thousands separators`,
+  };
+}
+
+function readValue(
+  cell: string,
+  role: Extract<CellRole, { kind: 'data' }>,
+  line: number,
+  delimiter: string,
+  report: Report,
+): number {
+  const read = readNumber(cell, delimiter);
+  if (!read.ok) {
+    report({ code: read.code, line, column: role.header, message: read.message, value: cell, expected: read.expected });
+    return NaN;
+  }
+  const b = VALUE_BOUNDS[role.column];
+  if (!(read.value >= b.min && read.value <= b.max)) {
+    report({
+      code: 'input.out-of-range',
+      line,
+      column: role.header,
+      message: `must be a plausible value for ${b.quantity}`,
+      value: cell,
+      expected: `a value from ${b.min} to ${b.max} ${b.unit}`,
+    });
+  }
+  return read.value;
+}
+
+function readTime(
+  cell: string,
+  role: Extract<CellRole, { kind: 'time' }>,
+  line: number,
+  delimiter: string,
+  report: Report,
+): number {
+  const at = { line, column: role.header, value: cell };
+  if (role.name === 'year') {
+    const read = readNumber(cell, delimiter);
+    if (!read.ok) {
+      report({ ...at, code: read.code, message: read.message, expected: 'a year such as 2030 or 2030.5' });
+      return NaN;
+    }
+    if (!(read.value >= YEAR_MIN && read.value <= YEAR_MAX)) {
+      report({ ...at, code: 'input.bad-year', message: `must be a year from ${YEAR_MIN} to ${YEAR_MAX}`, expected: 'a year such as 2030 or 2030.5' });
+      return NaN;
+    }
+    return read.value;
+  }
+  if (cell === '') {
+    report({ ...at, code: 'input.empty-cell', message: 'must not be empty', expected: 'an ISO 8601 date such as 2030-07-02 in every row' });
+    return NaN;
+  }
+  const read = isoDateToYear(cell);
+  if (!read.ok) {
+    report({ ...at, code: 'input.bad-date', message: `must be an ISO 8601 date: ${read.reason}`, expected: 'a full date such as 2030-07-02' });
+    return NaN;
+  }
+  if (!(read.year >= YEAR_MIN && read.year <= YEAR_MAX)) {
+    report({ ...at, code: 'input.bad-year', message: `must be a date in the years ${YEAR_MIN} to ${YEAR_MAX}`, expected: 'a full date such as 2030-07-02' });
+    return NaN;
+  }
+  return read.year;
+}
+
+function formatTime(t: number): string {
+  return Number.isInteger(t) ? String(t) : t.toFixed(3);
+}
+
+/** The last path segment without its extension (`pathways/swift.csv` -> `swift`). */
+function baseName(file: string): string {
+  const last = file.split(/[\\/]/).pop() ?? file;
+  const dot = last.lastIndexOf('.');
+  return dot > 0 ? last.slice(0, dot) : last;
+}

@@ -1,0 +1,141 @@
+import { InputError } from '../errors.js';
+import { GASES, PATHWAY_COLUMNS, type Pathway, type PathwayColumn } from '../pathway.js';
+
+/**
+ * Joins a pathway that starts after the history's first year onto that history, so that a run
+ * starts from the historical baseline. With F the pathway's first year and H its history's last:
+ *
+ * - years before F come from the history, years from F on from the pathway; the result runs from the
+ *   history's first year to the pathway's last year. A pathway that starts inside the history's span
+ *   (say 1900) wins from its first year on.
+ * - a column the pathway lacks continues from the history while the history covers it, and is then
+ *   held at its year-H value (a note says so).
+ * - a gas the pathway gives in the other form than the history does (the pathway gives `co2_gtco2`,
+ *   the history `co2_ppm`): both series are kept. The history's form holds the history's values
+ *   before F and NaN from F on; the pathway's form is NaN before F. The carbon cycle joins the two.
+ * - a column in the pathway but not in the history (nor its other form) is NaN before F.
+ * - a column in neither stays absent (physics holds it at pre-industrial and says so).
+ * - when F is more than one year after H, the years in between are bridged linearly from the
+ *   history's year-H value to the pathway's year-F value, column by column.
+ *
+ * A pathway starting at or before the history's first year is returned as it is.
+ *
+ * @param future - the annual pathway read from a file
+ * @param history - the annual history (normally the bundled history.csv)
+ * @returns a new Pathway with `provenance.spliceYear` = F and notes on what came from where
+ * @throws InputError when the years between H and F must be bridged for a column the history lacks
+ * @example
+ * const s = spliceOntoHistory(future2025to2150, history1750to2024);
+ * s.years[0] // 1750
+ * s.provenance.spliceYear // 2025
+ * s.provenance.notes // [..., 'spliced onto bundled history at 2025 (1750-2024 from history.csv)']
+ */
+export function spliceOntoHistory(future: Pathway, history: Pathway): Pathway {
+  const fy = future.years;
+  const hy = history.years;
+  const f0 = fy[0];
+  const fLast = fy[fy.length - 1];
+  const h0 = hy[0];
+  const hLast = hy[hy.length - 1];
+  if (f0 <= h0) return future;
+
+  const count = fLast - h0 + 1;
+  const years = new Float64Array(count);
+  for (let i = 0; i < count; i++) years[i] = h0 + i;
+  const bridged = f0 > hLast + 1;
+
+  const series: Partial<Record<PathwayColumn, Float64Array>> = {};
+  const held: PathwayColumn[] = [];
+  const bridgedColumns: PathwayColumn[] = [];
+  const unbridgeable: PathwayColumn[] = [];
+  const notInHistory: PathwayColumn[] = [];
+  const switched: [given: PathwayColumn, replaced: PathwayColumn][] = [];
+
+  for (const column of PATHWAY_COLUMNS) {
+    const fs = future.series[column];
+    const hs = history.series[column];
+    if (!fs && !hs) continue;
+    const other = otherForm(column);
+    const out = new Float64Array(count);
+    if (fs) {
+      if (!hs && !(other && history.series[other])) notInHistory.push(column);
+      if (bridged) (hs ? bridgedColumns : unbridgeable).push(column);
+      for (let i = 0; i < count; i++) {
+        const y = years[i];
+        if (y >= f0) out[i] = fs[y - f0];
+        else if (!hs) out[i] = NaN;
+        else if (y <= hLast) out[i] = hs[y - h0];
+        else out[i] = hs[hLast - h0] + ((fs[0] - hs[hLast - h0]) * (y - hLast)) / (f0 - hLast);
+      }
+    } else if (hs && other && future.series[other]) {
+      switched.push([other, column]);
+      for (let i = 0; i < count; i++) {
+        const y = years[i];
+        out[i] = y < f0 && y <= hLast ? hs[y - h0] : NaN;
+      }
+    } else if (hs) {
+      held.push(column);
+      for (let i = 0; i < count; i++) {
+        const y = years[i];
+        out[i] = hs[Math.min(y, hLast) - h0];
+      }
+    }
+    series[column] = out;
+  }
+
+  if (unbridgeable.length > 0) {
+    throw new InputError([{
+      file: future.provenance.source,
+      column: unbridgeable.join(', '),
+      code: 'input.splice-gap',
+      message: `must start by ${hLast + 1} to follow the history, which ends in ${hLast}: the history has no `
+        + `${unbridgeable.join(', ')} to bridge ${hLast + 1}-${f0 - 1} from`,
+      value: String(f0),
+      expected: `rows from ${hLast + 1} on`,
+    }]);
+  }
+
+  const fromHistory = history.provenance.source.startsWith('bundled:');
+  const notes = [
+    ...future.provenance.notes,
+    `spliced onto ${fromHistory ? 'bundled ' : ''}history at ${f0} (${h0}-${Math.min(f0 - 1, hLast)} from ${historyFile(history)})`,
+  ];
+  if (bridgedColumns.length > 0) {
+    notes.push(`${hLast + 1}-${f0 - 1} bridged linearly from the history's ${hLast} value to the file's ${f0} value `
+      + `(${bridgedColumns.join(', ')})`);
+  }
+  if (held.length > 0) {
+    notes.push(fLast > hLast
+      ? `${held.join(', ')} not in file: taken from history to ${hLast}, then held at the ${hLast} value`
+      : `${held.join(', ')} not in file: taken from history`);
+  }
+  for (const [given, replaced] of switched) {
+    notes.push(`${given} given instead of the history's ${replaced}: ${replaced} holds history values to `
+      + `${Math.min(f0 - 1, hLast)} and is NaN from ${f0}; ${given} is NaN before ${f0}`);
+  }
+  if (notInHistory.length > 0) notes.push(`${notInHistory.join(', ')} not in history: NaN before ${f0}`);
+
+  return {
+    name: future.name,
+    years,
+    series,
+    metadata: future.metadata,
+    provenance: { source: future.provenance.source, spliceYear: f0, notes },
+  };
+}
+
+/** The other column of the same gas (`co2_ppm` <-> `co2_gtco2`), or undefined for forcing columns. */
+function otherForm(column: PathwayColumn): PathwayColumn | undefined {
+  for (const { concentration, emission } of Object.values(GASES)) {
+    if (column === concentration) return emission;
+    if (column === emission) return concentration;
+  }
+  return undefined;
+}
+
+/** `bundled:history` -> `history.csv`; a path -> its last segment. */
+function historyFile(history: Pathway): string {
+  const source = history.provenance.source;
+  if (source.startsWith('bundled:')) return `${source.slice('bundled:'.length)}.csv`;
+  return source.split(/[\\/]/).pop() ?? source;
+}

@@ -1,0 +1,66 @@
+/**
+ * The pathway data model shared by every layer: an annual grid of years with named series.
+ * Readers in `io/` build it; physics in `carbon/`, `forcing/` and `climate/` consume it.
+ */
+
+/** Concentration columns: CO2 in ppm, CH4 and N2O in ppb. */
+export const CONCENTRATION_COLUMNS = ['co2_ppm', 'ch4_ppb', 'n2o_ppb'] as const;
+/** Emission columns: CO2 in Gt CO2 per year, CH4 in Mt CH4 per year, N2O in Mt N2O per year. */
+export const EMISSION_COLUMNS = ['co2_gtco2', 'ch4_mt', 'n2o_mt'] as const;
+/** Prescribed effective radiative forcing columns, W m-2. */
+export const FORCING_COLUMNS = ['aerosol_wm2', 'other_wm2', 'solar_wm2', 'volcanic_wm2'] as const;
+/** Every data column a pathway file may hold, in canonical order. */
+export const PATHWAY_COLUMNS = [...CONCENTRATION_COLUMNS, ...EMISSION_COLUMNS, ...FORCING_COLUMNS] as const;
+
+export type ConcentrationColumn = (typeof CONCENTRATION_COLUMNS)[number];
+export type EmissionColumn = (typeof EMISSION_COLUMNS)[number];
+export type ForcingColumn = (typeof FORCING_COLUMNS)[number];
+export type PathwayColumn = (typeof PATHWAY_COLUMNS)[number];
+
+/** The three well-mixed gases and their emission/concentration column pair. */
+export const GASES = {
+  co2: { concentration: 'co2_ppm', emission: 'co2_gtco2' },
+  ch4: { concentration: 'ch4_ppb', emission: 'ch4_mt' },
+  n2o: { concentration: 'n2o_ppb', emission: 'n2o_mt' },
+} as const satisfies Record<string, { concentration: ConcentrationColumn; emission: EmissionColumn }>;
+export type Gas = keyof typeof GASES;
+
+/** Units of each column, for reports and `warmcast check`. */
+export const COLUMN_UNITS: Record<PathwayColumn, string> = {
+  co2_ppm: 'ppm',
+  ch4_ppb: 'ppb',
+  n2o_ppb: 'ppb',
+  co2_gtco2: 'Gt CO2 yr-1',
+  ch4_mt: 'Mt CH4 yr-1',
+  n2o_mt: 'Mt N2O yr-1',
+  aerosol_wm2: 'W m-2',
+  other_wm2: 'W m-2',
+  solar_wm2: 'W m-2',
+  volcanic_wm2: 'W m-2',
+};
+
+/** Where the values of a pathway came from, carried into every output. */
+export interface PathwayProvenance {
+  /** Path of the file read, or `bundled:<name>`. */
+  source: string;
+  /** First year taken from the file when it was spliced onto the bundled history, else undefined. */
+  spliceYear?: number;
+  /** Human-readable notes: interpolation, splice, columns held at pre-industrial values. */
+  notes: string[];
+}
+
+/**
+ * A pathway on an annual grid. `years` are consecutive integers; each series has one value per year
+ * (a concentration, an emission rate, or a forcing, in the column's unit).
+ */
+export interface Pathway {
+  /** Display name (from `# name:` metadata, else the file name). */
+  name: string;
+  /** Consecutive integer years, ascending. */
+  years: Float64Array;
+  /** Series present, keyed by column name, each the same length as `years`. */
+  series: Partial<Record<PathwayColumn, Float64Array>>;
+  /** `# key: value` metadata lines of the file. */
+  metadata: Record<string, string>;
+  provenance: PathwayProvenance;
+}

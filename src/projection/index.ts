@@ -1,0 +1,2 @@
+export { PROJECTION_COLUMNS, projectPathway, rebase } from './project-pathway.js';
+export type { Projection, ProjectionOptions } from './project-pathway.js';

@@ -1,0 +1,115 @@
+import { energyBalance, type EnergyBalanceMethod } from '../climate/energy-balance.js';
+import type { ClimateParams } from '../climate/params.js';
+import { ConfigError } from '../errors.js';
+import { FORCING_AGENTS, forcingByAgent, type ForcingAgent, type ForcingOptions } from '../forcing/agents.js';
+import { PREINDUSTRIAL } from '../forcing/constants.js';
+import { DEFAULT_TOLERANCES, type OdeTolerances } from '../numerics/integrate-steps.js';
+import { EMISSION_COLUMNS, GASES, type Pathway, type PathwayProvenance } from '../pathway.js';
+
+/** Options of {@link projectPathway}. */
+export interface ProjectionOptions {
+  /** Resolved climate parameters (see `calibrate`). */
+  params: ClimateParams;
+  /** Baseline period for `warming_k`, inclusive years. Default 1850-1900 (IPCC AR6 convention). */
+  baseline?: readonly [number, number];
+  /** Temperature stepping: `odex` (default) or the exact propagator. */
+  method?: EnergyBalanceMethod;
+  /** odex tolerances. */
+  tolerances?: OdeTolerances;
+  /** Multiplier on prescribed aerosol forcing (1 = as given). */
+  aerosolScale?: number;
+}
+
+/** Output columns of a projection, in CSV order (DESIGN.md). Emission-driven runs add more. */
+export const PROJECTION_COLUMNS = [
+  'warming_k',
+  'deep_ocean_k',
+  'forcing_wm2',
+  'imbalance_wm2',
+  'co2_ppm',
+  'ch4_ppb',
+  'n2o_ppb',
+  ...FORCING_AGENTS.map((a) => `forcing_${a}_wm2` as const),
+] as const;
+
+/** A year-by-year warming projection for one pathway. */
+export interface Projection {
+  /** Pathway display name. */
+  name: string;
+  /** Where the pathway came from, with the splice and interpolation notes. */
+  provenance: PathwayProvenance;
+  /** Parameters used. */
+  params: ClimateParams;
+  /** Baseline period of `warming_k` and `deep_ocean_k`. */
+  baseline: readonly [number, number];
+  /** Consecutive integer years. */
+  years: Float64Array;
+  /**
+   * Output series by column name: `warming_k` and `deep_ocean_k` relative to the baseline mean (K),
+   * forcing and imbalance in W m-2, concentrations in ppm/ppb, and for emission-driven runs the
+   * emissions, `cumulative_co2_gtco2` and `airborne_fraction`.
+   */
+  columns: Record<string, Float64Array>;
+  /** Things the user should know about this run (gases held at 1750 values, ...). */
+  notes: string[];
+}
+
+/**
+ * Projects warming for a pathway: concentrations -> ERF by agent (IPCC AR6 formulas) -> two-box
+ * energy balance integrated by odex from pre-industrial equilibrium at the first year -> warming
+ * relative to the baseline mean.
+ *
+ * @param pathway annual pathway (concentrations and prescribed forcing)
+ * @param options parameters, baseline, method
+ * @throws ConfigError when the baseline lies outside the pathway's years
+ */
+export function projectPathway(pathway: Pathway, options: ProjectionOptions): Projection {
+  const { params } = options;
+  const baseline = options.baseline ?? ([1850, 1900] as const);
+  const years = pathway.years;
+  const n = years.length;
+  const notes: string[] = [];
+  const s = pathway.series;
+
+  if (EMISSION_COLUMNS.some((c) => s[c] !== undefined)) {
+    throw new ConfigError(`${pathway.name}: emission columns need the carbon cycle, which this build does not have yet`, 'pathway');
+  }
+  for (const [gas, cols] of Object.entries(GASES)) {
+    if (!s[cols.concentration]) notes.push(`${gas.toUpperCase()} not given: held at its 1750 value`);
+  }
+  const forcingOptions: ForcingOptions = { co2Formula: params.co2Formula, forcing2xWm2: params.forcing2xWm2, aerosolScale: options.aerosolScale };
+  const forcing = forcingByAgent(n, { co2Ppm: s.co2_ppm, ch4Ppb: s.ch4_ppb, n2oPpb: s.n2o_ppb, prescribed: s }, forcingOptions);
+  const eb = energyBalance(params, forcing.total, options.method ?? 'odex', options.tolerances ?? DEFAULT_TOLERANCES);
+
+  const columns: Record<string, Float64Array> = {
+    warming_k: rebase(years, eb.surfaceK, baseline, pathway.name),
+    deep_ocean_k: rebase(years, eb.deepK, baseline, pathway.name),
+    forcing_wm2: forcing.total,
+    imbalance_wm2: eb.imbalanceWm2,
+    co2_ppm: s.co2_ppm ?? new Float64Array(n).fill(PREINDUSTRIAL.co2Ppm),
+    ch4_ppb: s.ch4_ppb ?? new Float64Array(n).fill(PREINDUSTRIAL.ch4Ppb),
+    n2o_ppb: s.n2o_ppb ?? new Float64Array(n).fill(PREINDUSTRIAL.n2oPpb),
+  };
+  for (const a of FORCING_AGENTS) columns[`forcing_${a}_wm2`] = forcing.byAgent[a as ForcingAgent];
+  return { name: pathway.name, provenance: pathway.provenance, params, baseline, years, columns, notes };
+}
+
+/**
+ * Subtracts the mean over the baseline years (inclusive) from a series.
+ * @throws ConfigError when the series does not cover the whole baseline
+ */
+export function rebase(years: Float64Array, values: Float64Array, baseline: readonly [number, number], name = 'pathway'): Float64Array {
+  const [from, to] = baseline;
+  const first = years[0];
+  const last = years[years.length - 1];
+  if (!(from <= to) || from < first || to > last) {
+    throw new ConfigError(
+      `baseline ${from}-${to} must lie within ${name}'s years ${first}-${last}; give --baseline with years the run covers`,
+      'baseline',
+    );
+  }
+  let sum = 0;
+  for (let y = from; y <= to; y++) sum += values[y - first];
+  const mean = sum / (to - from + 1);
+  return values.map((v) => v - mean);
+}
