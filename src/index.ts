@@ -7,6 +7,6 @@ export * from './climate/index.js';
 export * from './projection/index.js';
 export { parsePathway, toAnnual, spliceOntoHistory, loadPathway, readPathway, loadHistory, listBundledPathways, describePathway } from './io/index.js';
 export type { ParsedPathway, ReadPathwayResult, BundledPathway } from './io/index.js';
-export { parseParams } from './io/read-params.js';
+export { parseParams } from './io/index.js';
 export { DEFAULT_TOLERANCES } from './numerics/integrate-steps.js';
 export type { OdeTolerances } from './numerics/integrate-steps.js';

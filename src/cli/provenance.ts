@@ -2,6 +2,7 @@ import { createHash } from 'node:crypto';
 import { readFileSync } from 'node:fs';
 import { DateTime } from 'luxon';
 import { paramsToJson, type ClimateParams } from '../climate/params.js';
+import { standardCautions } from '../report/standard-cautions.js';
 import { packageVersion } from './version.js';
 
 /** Where an output came from; every file warmcast writes carries one. */
@@ -24,10 +25,8 @@ export interface Provenance {
   caution: string;
 }
 
-/** The caution every report and file carries. */
-export const CAUTION =
-  'Reduced-complexity, global-mean estimate from a two-box energy balance model; it carries the uncertainty shown and more. ' +
-  'For decisions, defer to the IPCC assessments and to your own jurisdiction\'s official guidance.';
+/** The cautions every file carries, for a single central run (ensembles pass their own uncertainty text). */
+export const CAUTION = standardCautions().join(' ');
 
 /** SHA-256 of a file's bytes, hex. */
 export function sha256File(path: string): string {
@@ -41,6 +40,7 @@ export function buildProvenance(args: {
   baseline: readonly [number, number];
   notes: string[];
   seed?: number;
+  caution?: string;
 }): Provenance {
   return {
     tool: 'warmcast',
@@ -51,6 +51,6 @@ export function buildProvenance(args: {
     baseline: `${args.baseline[0]}-${args.baseline[1]}`,
     ...(args.seed !== undefined ? { seed: args.seed } : {}),
     notes: args.notes,
-    caution: CAUTION,
+    caution: args.caution ?? CAUTION,
   };
 }

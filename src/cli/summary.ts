@@ -1,7 +1,7 @@
-import { peak, valueAtYear } from '../metrics/index.js';
+import { crossingPeriod, peak, valueAtYear } from '../metrics/index.js';
 import type { Projection } from '../projection/index.js';
 import { terminalChart } from '../report/index.js';
-import { CAUTION } from './provenance.js';
+import { standardCautions } from '../report/standard-cautions.js';
 
 /** Years whose warming the summary always states, where the run covers them. */
 const HEADLINE_YEARS = [2030, 2050, 2100];
@@ -53,6 +53,14 @@ export function printProjectionSummary(p: Projection, out: { write: (s: string) 
   if (headline.length > 0) lines.push(`  warming in ${headline.join(', ')}`);
   const top = peak(years, w);
   lines.push(`  peak warming ${top.value.toFixed(2)} K in ${top.year}${top.year === last ? ' (the last year: still rising)' : ''}`);
+  for (const level of [1.5, 2]) {
+    const c = crossingPeriod(years, w, level);
+    lines.push(
+      c === undefined
+        ? `  ${level} K: 20-year mean not above it by ${last}`
+        : `  ${level} K: first reached in ${c.year}${c.atStart ? ' or earlier' : ''} (mean of ${c.firstYear}-${c.lastYear} is ${c.mean.toFixed(2)} K; the IPCC AR6 20-year-mean rule)`,
+    );
+  }
   out.write(lines.join('\n') + '\n');
 
   if (out.chart) {
@@ -72,5 +80,5 @@ export function printProjectionSummary(p: Projection, out: { write: (s: string) 
   }
   const notes = [...p.provenance.notes, ...p.notes];
   if (notes.length > 0) out.write('\n' + notes.map((n) => `  note: ${n}`).join('\n') + '\n');
-  out.write(`\n  ${CAUTION}\n\n`);
+  out.write('\n' + standardCautions().map((c) => `  caution: ${c}`).join('\n') + '\n\n');
 }

@@ -1,0 +1,44 @@
+import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { afterAll, describe, expect, it } from 'vitest';
+import { describePathway } from '../../src/io/describe-pathway.js';
+import { readPathway } from '../../src/io/load-pathway.js';
+
+const dir = mkdtempSync(join(tmpdir(), 'warmcast-describe-'));
+afterAll(() => rmSync(dir, { recursive: true, force: true }));
+writeFileSync(join(dir, 'history.csv'), 'year,co2_ppm,ch4_ppb,solar_wm2\n2020,410,1870,0.1\n2021,412,1880,0.2\n2022,414,1890,0.3\n');
+writeFileSync(join(dir, 'calm.csv'),
+  '# name: Calm\n# description: A short test pathway\nyear,co2_gtco2,aerosol_wm2\n2023,40,-1.1\n2028,30,-0.9\n2033,20,-0.5\n');
+
+describe('describePathway', () => {
+  it('describePathway lists file, rows, years, steps, columns with units, splice, notes and missing gases', () => {
+    const { parsed, pathway } = readPathway('calm', { pathwaysDir: dir });
+    expect(describePathway(parsed, pathway)).toEqual([
+      `file: ${join(dir, 'calm.csv')}`,
+      'name: Calm',
+      'description: A short test pathway',
+      'rows read: 3 (lines 4-6)',
+      'time column: year',
+      'years in file: 2023 to 2033',
+      'steps: 5-year steps, interpolated to annual',
+      'columns:',
+      '  co2_gtco2 (Gt CO2 yr-1): 20 to 40',
+      '  aerosol_wm2 (W m-2): -1.1 to -0.5',
+      'splice: spliced onto bundled history at 2023 (2020-2022 from history.csv)',
+      'run covers: 2020 to 2033 (14 years)',
+      'note: ch4_ppb, solar_wm2 not in file: taken from history to 2022, then held at the 2022 value',
+      "note: co2_gtco2 given instead of the history's co2_ppm: co2_ppm holds history values to 2022 and is NaN from 2023; co2_gtco2 is NaN before 2023",
+      'note: aerosol_wm2 not in history: NaN before 2023',
+      'gases not given (held at pre-industrial): N2O',
+    ]);
+  });
+
+  it('describePathway says "no interpolation" and "splice: none" for an annual file read without splicing', () => {
+    const { parsed, pathway } = readPathway('history', { pathwaysDir: dir, splice: false });
+    const lines = describePathway(parsed, pathway);
+    expect(lines).toContain('steps: 1-year steps on whole years (no interpolation)');
+    expect(lines).toContain('splice: none');
+    expect(lines).toContain('gases not given (held at pre-industrial): N2O');
+  });
+});

@@ -1,0 +1,39 @@
+import fc from 'fast-check';
+import { describe, expect, it } from 'vitest';
+import { formatJson } from '../../src/io/format-json.js';
+
+describe('formatJson', () => {
+  it('formatJson writes provenance, columns and one object per row, keys in column order', () => {
+    const json = formatJson({
+      columns: ['pathway', 'year', 'warming_k'],
+      data: [Float64Array.of(2030), Float64Array.of(NaN)],
+      textColumns: { pathway: ['swift'] },
+    }, { source: 'bundled:swift', notes: ['n'] });
+    expect(json).toBe(
+      '{\n'
+      + '  "provenance": {\n    "source": "bundled:swift",\n    "notes": [\n      "n"\n    ]\n  },\n'
+      + '  "columns": ["pathway","year","warming_k"],\n'
+      + '  "rows": [\n    {"pathway":"swift","year":2030,"warming_k":null}\n  ]\n'
+      + '}\n',
+    );
+  });
+
+  it('formatJson numbers read back with JSON.parse exactly; NaN and infinities become null (ECMA-404 has no NaN)', () => {
+    fc.assert(fc.property(fc.array(fc.double(), { minLength: 1, maxLength: 40 }), (xs) => {
+      const values = Float64Array.from(xs);
+      const back = JSON.parse(formatJson({ columns: ['x'], data: [values] }, {}));
+      expect(back.columns).toEqual(['x']);
+      values.forEach((x, i) => {
+        const v = back.rows[i].x;
+        if (Number.isFinite(x)) expect(v === x).toBe(true);
+        else expect(v).toBeNull();
+      });
+    }), { numRuns: 300 });
+  });
+
+  it('formatJson of an empty table is valid JSON with no rows', () => {
+    expect(JSON.parse(formatJson({ columns: ['year'], data: [new Float64Array(0)] }, { a: 1 }))).toEqual({
+      provenance: { a: 1 }, columns: ['year'], rows: [],
+    });
+  });
+});

@@ -1,0 +1,64 @@
+import fc from 'fast-check';
+import { describe, expect, it } from 'vitest';
+import { isoDateToYear } from '../../src/io/iso-date-year.js';
+
+/**
+ * Independent oracle: the same convention computed with the JavaScript Date's UTC day arithmetic
+ * instead of luxon. Label = year + (noon of the day - 1 Jan) / (length of the year) - 0.5.
+ */
+function oracle(y: number, month: number, day: number): number {
+  const start = Date.UTC(y, 0, 1);
+  const length = Date.UTC(y + 1, 0, 1) - start;
+  return y + (Date.UTC(y, month - 1, day) + 12 * 3_600_000 - start) / length - 0.5;
+}
+
+const year = (text: string) => {
+  const r = isoDateToYear(text);
+  if (!r.ok) return expect.fail(`${text}: ${r.reason}`);
+  return r.year;
+};
+
+describe('isoDateToYear', () => {
+  it('isoDateToYear(2030-07-02) is exactly 2030: noon of 2 July is mid-year in a 365-day year', () => {
+    // 31+28+31+30+31+30 = 181 days before 1 July; noon of 2 July is 182.5 days in; 182.5/365 = 0.5.
+    expect(year('2030-07-02')).toBe(2030);
+  });
+
+  it('isoDateToYear(2032-07-02) is 2032 + 183.5/366 - 0.5 in a leap year (hand computation)', () => {
+    expect(year('2032-07-02')).toBe(2032 + 183.5 / 366 - 0.5);
+  });
+
+  it('isoDateToYear(2030-01-01) is 2029.5 + 0.5/365: a mean centred on New Year', () => {
+    expect(year('2030-01-01')).toBeCloseTo(2029.5 + 0.5 / 365, 12);
+  });
+
+  it('isoDateToYear reads a time and offset as an instant: 14:00+02:00 on 2 July is noon UTC', () => {
+    expect(year('2030-07-02T14:00:00+02:00')).toBe(2030);
+  });
+
+  it('isoDateToYear reads ordinal (2030-183) and week (2030-W27-2) dates as 2 July 2030 (ISO 8601 calendar, hand-checked)', () => {
+    // 2030-01-01 is a Tuesday, so ISO week 1 starts Monday 2029-12-31 and week 27 on Monday 1 July.
+    expect(year('2030-183')).toBe(2030);
+    expect(year('2030-W27-2')).toBe(2030);
+  });
+
+  it('isoDateToYear agrees with Date.UTC day arithmetic for any calendar date from 1000 to 2999', () => {
+    fc.assert(fc.property(fc.date({ min: new Date(Date.UTC(1000, 0, 1)), max: new Date(Date.UTC(2999, 11, 31)), noInvalidDate: true }), (d) => {
+      const y = d.getUTCFullYear();
+      const m = d.getUTCMonth() + 1;
+      const day = d.getUTCDate();
+      const text = `${String(y).padStart(4, '0')}-${String(m).padStart(2, '0')}-${String(day).padStart(2, '0')}`;
+      expect(Math.abs(year(text) - oracle(y, m, day))).toBeLessThan(1e-9);
+    }), { numRuns: 300 });
+  });
+
+  it('isoDateToYear refuses a year, month or week alone (they name spans, not centres)', () => {
+    for (const text of ['2030', '2030-07', '2030-W27']) {
+      expect(isoDateToYear(text)).toEqual({ ok: false, reason: 'a year, month or week alone is not a date' });
+    }
+  });
+
+  it('isoDateToYear refuses impossible and non-ISO dates', () => {
+    for (const text of ['2030-13-01', '2031-02-29', '02/07/2030', 'soon', '']) expect(isoDateToYear(text).ok).toBe(false);
+  });
+});

@@ -1,0 +1,107 @@
+import { describe, expect, it } from 'vitest';
+import { InputError } from '../../src/errors.js';
+import { spliceOntoHistory } from '../../src/io/splice-onto-history.js';
+import type { Pathway, PathwayColumn } from '../../src/pathway.js';
+
+function pathway(first: number, series: Partial<Record<PathwayColumn, number[]>>, source: string): Pathway {
+  const length = Object.values(series)[0]!.length;
+  return {
+    name: source,
+    years: Float64Array.from({ length }, (_, i) => first + i),
+    series: Object.fromEntries(Object.entries(series).map(([k, v]) => [k, Float64Array.from(v!)])),
+    metadata: {},
+    provenance: { source, notes: [] },
+  };
+}
+
+/** History 2000-2004: CO2 370-374 ppm, solar 0.1-0.5, aerosol -1.0 to -1.4 W m-2. */
+const history = pathway(2000, {
+  co2_ppm: [370, 371, 372, 373, 374],
+  aerosol_wm2: [-1.0, -1.1, -1.2, -1.3, -1.4],
+  solar_wm2: [0.1, 0.2, 0.3, 0.4, 0.5],
+}, 'bundled:history');
+
+const values = (p: Pathway, c: PathwayColumn) => Array.from(p.series[c]!);
+
+describe('spliceOntoHistory', () => {
+  it('spliceOntoHistory puts history before the first future year and the future from it on', () => {
+    const future = pathway(2005, { co2_ppm: [380, 381, 382], aerosol_wm2: [-0.5, -0.4, -0.3] }, 'plan.csv');
+    const s = spliceOntoHistory(future, history);
+    expect(Array.from(s.years)).toEqual([2000, 2001, 2002, 2003, 2004, 2005, 2006, 2007]);
+    expect(values(s, 'co2_ppm')).toEqual([370, 371, 372, 373, 374, 380, 381, 382]);
+    expect(values(s, 'aerosol_wm2')).toEqual([-1.0, -1.1, -1.2, -1.3, -1.4, -0.5, -0.4, -0.3]);
+    expect(s.provenance.source).toBe('plan.csv');
+    expect(s.provenance.spliceYear).toBe(2005);
+    expect(s.name).toBe('plan.csv');
+  });
+
+  it('spliceOntoHistory continues a column the future lacks from history, then holds its last value', () => {
+    const future = pathway(2005, { co2_ppm: [380, 381, 382] }, 'plan.csv');
+    const s = spliceOntoHistory(future, history);
+    expect(values(s, 'solar_wm2')).toEqual([0.1, 0.2, 0.3, 0.4, 0.5, 0.5, 0.5, 0.5]);
+    expect(s.provenance.notes).toEqual([
+      'spliced onto bundled history at 2005 (2000-2004 from history.csv)',
+      'aerosol_wm2, solar_wm2 not in file: taken from history to 2004, then held at the 2004 value',
+    ]);
+  });
+
+  it('spliceOntoHistory keeps both forms when the future gives CO2 emissions and history concentrations', () => {
+    const future = pathway(2005, { co2_gtco2: [40, 38, 36] }, 'plan.csv');
+    const s = spliceOntoHistory(future, history);
+    const nan = NaN;
+    expect(values(s, 'co2_ppm')).toEqual([370, 371, 372, 373, 374, nan, nan, nan]);
+    expect(values(s, 'co2_gtco2')).toEqual([nan, nan, nan, nan, nan, 40, 38, 36]);
+    expect(s.provenance.notes).toContain(
+      "co2_gtco2 given instead of the history's co2_ppm: co2_ppm holds history values to 2004 and is NaN from 2005; "
+      + 'co2_gtco2 is NaN before 2005',
+    );
+  });
+
+  it('spliceOntoHistory lets a future that starts inside the history win from its first year', () => {
+    const future = pathway(2002, { co2_ppm: [400, 401, 402, 403, 404, 405] }, 'plan.csv');
+    const s = spliceOntoHistory(future, history);
+    expect(Array.from(s.years)).toEqual([2000, 2001, 2002, 2003, 2004, 2005, 2006, 2007]);
+    expect(values(s, 'co2_ppm')).toEqual([370, 371, 400, 401, 402, 403, 404, 405]);
+    expect(values(s, 'solar_wm2')).toEqual([0.1, 0.2, 0.3, 0.4, 0.5, 0.5, 0.5, 0.5]);
+    expect(s.provenance.notes[0]).toBe('spliced onto bundled history at 2002 (2000-2001 from history.csv)');
+  });
+
+  it('spliceOntoHistory of a future ending inside history ends with the future and holds nothing', () => {
+    const future = pathway(2001, { co2_ppm: [400, 401] }, 'plan.csv');
+    const s = spliceOntoHistory(future, history);
+    expect(Array.from(s.years)).toEqual([2000, 2001, 2002]);
+    expect(values(s, 'solar_wm2')).toEqual([0.1, 0.2, 0.3]);
+    expect(s.provenance.notes[1]).toBe('aerosol_wm2, solar_wm2 not in file: taken from history');
+  });
+
+  it('spliceOntoHistory returns a future starting at or before the history unchanged', () => {
+    const same = pathway(2000, { co2_ppm: [1, 2] }, 'a.csv');
+    const earlier = pathway(1990, { co2_ppm: [1, 2] }, 'b.csv');
+    expect(spliceOntoHistory(same, history)).toBe(same);
+    expect(spliceOntoHistory(earlier, history)).toBe(earlier);
+  });
+
+  it('spliceOntoHistory leaves a column in neither absent and a future-only column NaN before the splice', () => {
+    const future = pathway(2005, { co2_ppm: [380, 381], other_wm2: [0.4, 0.5] }, 'plan.csv');
+    const s = spliceOntoHistory(future, history);
+    expect(s.series.ch4_ppb).toBeUndefined();
+    expect(values(s, 'other_wm2')).toEqual([NaN, NaN, NaN, NaN, NaN, 0.4, 0.5]);
+    expect(s.provenance.notes).toContain('other_wm2 not in history: NaN before 2005');
+  });
+
+  it('spliceOntoHistory bridges a gap between history and future linearly', () => {
+    const future = pathway(2007, { co2_ppm: [383, 384] }, 'plan.csv');
+    const s = spliceOntoHistory(future, history);
+    // From (2004, 374) to (2007, 383): 3 ppm per year, so 377 and 380 in 2005 and 2006.
+    expect(values(s, 'co2_ppm')).toEqual([370, 371, 372, 373, 374, 377, 380, 383, 384]);
+    expect(s.provenance.notes).toContain("2005-2006 bridged linearly from the history's 2004 value to the file's 2007 value (co2_ppm)");
+  });
+
+  it('spliceOntoHistory refuses a gap it cannot bridge (emissions after a concentration history)', () => {
+    const future = pathway(2007, { co2_gtco2: [40, 38] }, 'plan.csv');
+    expect(() => spliceOntoHistory(future, history)).toThrow(InputError);
+    expect(() => spliceOntoHistory(future, history)).toThrow(
+      'plan.csv: column "co2_gtco2": must start by 2005 to follow the history, which ends in 2004',
+    );
+  });
+});

@@ -1,0 +1,103 @@
+import { readFileSync } from 'node:fs';
+import { fileURLToPath } from 'node:url';
+import fc from 'fast-check';
+import { describe, expect, it } from 'vitest';
+import { InputError } from '../../src/errors.js';
+import { parsePathway } from '../../src/io/parse-pathway.js';
+import { toAnnual } from '../../src/io/to-annual.js';
+import { expectAllClose, expectClose } from '../asserts.js';
+
+const awkward = (name: string) => {
+  const path = fileURLToPath(new URL(`../fixtures/awkward/${name}`, import.meta.url));
+  return parsePathway(readFileSync(path, 'utf8'), `awkward/${name}`);
+};
+
+describe('toAnnual', () => {
+  it('toAnnual(awkward/year-gaps.csv) interpolates 5- and 10-year gaps linearly (hand-computed values)', () => {
+    const p = toAnnual(awkward('year-gaps.csv'));
+    expect(p.years[0]).toBe(2025);
+    expect(p.years.length).toBe(26);
+    const at = (y: number) => p.series.co2_gtco2![y - 2025];
+    // Between (2025, 40) and (2030, 35): 40 - 5 * 2/5 = 38 in 2027.
+    expect(at(2027)).toBe(38);
+    // Between (2030, 35) and (2040, 20): 35 - 15 * 3/10 = 30.5 in 2033.
+    expect(at(2033)).toBe(30.5);
+    // Between (2040, 20) and (2050, 0): 10 in 2045.
+    expect(at(2045)).toBe(10);
+    // Rows land exactly on their years.
+    expect([at(2025), at(2030), at(2040), at(2050)]).toEqual([40, 35, 20, 0]);
+    // Between (2030, 9.5) and (2040, 8): 9.5 - 1.5 * 7/10 = 8.45 in 2037 (rounding of one step: 1 ulp-scale).
+    expectClose(p.series.n2o_mt![2037 - 2025], 8.45, 1e-12, 'n2o_mt 2037');
+    expect(p.provenance).toEqual({
+      source: 'awkward/year-gaps.csv',
+      notes: ['interpolated linearly from 4 rows (irregular steps of 5 to 10 years) to 26 annual values'],
+    });
+    expect(p.name).toBe('Emission steps');
+  });
+
+  it('toAnnual on 26 rows in 5-year steps 2025-2150 gives 126 annual values and says so', () => {
+    const rows = Array.from({ length: 26 }, (_, i) => `${2025 + 5 * i},${420 + 2 * i}`).join('\n');
+    const p = toAnnual(parsePathway(`year,co2_ppm\n${rows}\n`, 'steps.csv'));
+    expect(p.years.length).toBe(126);
+    expect(p.years[125]).toBe(2150);
+    // Row i is (2025 + 5i, 420 + 2i): between (2145, 468) and (2150, 470), 468 + 2 * 4/5 = 469.6 in 2149.
+    expectClose(p.series.co2_ppm![124], 469.6, 1e-12, '2149');
+    expect(p.provenance.notes).toEqual(['interpolated linearly from 26 rows (5-year steps) to 126 annual values']);
+  });
+
+  it('toAnnual(awkward/decimal-years.csv) puts mid-year rows 2025.5..2027.5 on 2026 and 2027 (midpoints 421, 423)', () => {
+    const p = toAnnual(awkward('decimal-years.csv'));
+    expect(Array.from(p.years)).toEqual([2026, 2027]);
+    expect(Array.from(p.series.co2_ppm!)).toEqual([421, 423]);
+    expect(p.provenance.notes).toEqual(['interpolated linearly from 3 rows (1-year steps) to 2 annual values']);
+  });
+
+  it('toAnnual(awkward/dates.csv) keeps 2030-2032 although the leap-year row sits half a day past 2032', () => {
+    const p = toAnnual(awkward('dates.csv'));
+    expect(Array.from(p.years)).toEqual([2030, 2031, 2032]);
+    // 2032 lies between (2031, 442) and (2032 + 183.5/366 - 0.5, 444): hand computation.
+    const t2 = 2032 + 183.5 / 366 - 0.5;
+    expectAllClose(p.series.co2_ppm!, [440, 442, 442 + (2 * 1) / (t2 - 2031)], 1e-12, 'co2_ppm');
+  });
+
+  it('toAnnual copies a file already on consecutive whole years unchanged, with no note', () => {
+    const parsed = parsePathway('year,co2_ppm,solar_wm2\n2025,420.1,0.01\n2026,422.3,-0.02\n', 'annual.csv');
+    const p = toAnnual(parsed);
+    expect(Array.from(p.series.co2_ppm!)).toEqual([420.1, 422.3]);
+    expect(Array.from(p.series.solar_wm2!)).toEqual([0.01, -0.02]);
+    expect(p.provenance.notes).toEqual([]);
+  });
+
+  it('toAnnual reproduces a straight line exactly at every year, for any row spacing (property)', () => {
+    fc.assert(fc.property(
+      fc.uniqueArray(fc.integer({ min: 0, max: 400 }), { minLength: 2, maxLength: 20 }),
+      fc.double({ min: -5, max: 5, noNaN: true }),
+      (quarters, slope) => {
+        const times = quarters.sort((a, b) => a - b).map((q) => 2000 + q / 4);
+        const line = (t: number) => 1000 + slope * (t - 2000); // stays within 500-1500 ppm
+        const text = `year,co2_ppm\n${times.map((t) => `${t},${line(t)}`).join('\n')}\n`;
+        const parsed = parsePathway(text, 'line.csv');
+        if (Math.ceil(times[0]) > Math.floor(times[times.length - 1])) {
+          expect(() => toAnnual(parsed)).toThrow(InputError);
+          return;
+        }
+        const p = toAnnual(parsed);
+        expect(p.years[0]).toBe(Math.ceil(times[0]));
+        expect(p.years[p.years.length - 1]).toBe(Math.floor(times[times.length - 1]));
+        expectAllClose(p.series.co2_ppm!, Array.from(p.years, line), 1e-9, 'straight line');
+      },
+    ), { numRuns: 200 });
+  });
+
+  it('toAnnual refuses rows that span no whole year', () => {
+    const parsed = parsePathway('year,co2_ppm\n2030.2,440\n2030.7,441\n', 'short.csv');
+    expect(() => toAnnual(parsed)).toThrow(InputError);
+    expect(() => toAnnual(parsed)).toThrow('short.csv:2: column "year": must span at least one whole year: the rows run from 2030.2 to 2030.7');
+  });
+
+  it('toAnnual of a single row on a whole year gives that one year', () => {
+    const p = toAnnual(parsePathway('year,co2_ppm\n2030,440\n', 'one.csv'));
+    expect(Array.from(p.years)).toEqual([2030]);
+    expect(Array.from(p.series.co2_ppm!)).toEqual([440]);
+  });
+});
