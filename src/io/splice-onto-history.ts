@@ -9,7 +9,8 @@ import { GASES, PATHWAY_COLUMNS, type Pathway, type PathwayColumn } from '../pat
  *   history's first year to the pathway's last year. A pathway that starts inside the history's span
  *   (say 1900) wins from its first year on.
  * - a column the pathway lacks continues from the history while the history covers it, and is then
- *   held at its year-H value (a note says so).
+ *   held at the mean of the history's last 11 years (one solar cycle, so that the phase of the solar
+ *   cycle or a recent eruption at the end of the record is not carried forward; a note says so).
  * - a gas the pathway gives in the other form than the history does (the pathway gives `co2_gtco2`,
  *   the history `co2_ppm`): both series are kept. The history's form holds the history's values
  *   before F and NaN from F on; the pathway's form is NaN before F. The carbon cycle joins the two.
@@ -75,9 +76,10 @@ export function spliceOntoHistory(future: Pathway, history: Pathway): Pathway {
       }
     } else if (hs) {
       held.push(column);
+      const level = tailMean(hs, HELD_MEAN_YEARS);
       for (let i = 0; i < count; i++) {
         const y = years[i];
-        out[i] = hs[Math.min(y, hLast) - h0];
+        out[i] = y <= hLast ? hs[y - h0] : level;
       }
     }
     series[column] = out;
@@ -106,7 +108,7 @@ export function spliceOntoHistory(future: Pathway, history: Pathway): Pathway {
   }
   if (held.length > 0) {
     notes.push(fLast > hLast
-      ? `${held.join(', ')} not in file: taken from history to ${hLast}, then held at the ${hLast} value`
+      ? `${held.join(', ')} not in file: taken from history to ${hLast}, then held at the mean of ${Math.max(h0, hLast - HELD_MEAN_YEARS + 1)}-${hLast}`
       : `${held.join(', ')} not in file: taken from history`);
   }
   for (const [given, replaced] of switched) {
@@ -131,6 +133,16 @@ function otherForm(column: PathwayColumn): PathwayColumn | undefined {
     if (column === emission) return concentration;
   }
   return undefined;
+}
+
+/** Years averaged for a column held beyond the history: one 11-year solar cycle (Hathaway 2015, Living Rev. Sol. Phys. 12, 4: mean cycle length about 11 years; from memory). */
+const HELD_MEAN_YEARS = 11;
+
+function tailMean(values: Float64Array, years: number): number {
+  const n = Math.min(years, values.length);
+  let sum = 0;
+  for (let i = values.length - n; i < values.length; i++) sum += values[i];
+  return sum / n;
 }
 
 /** `bundled:history` -> `history.csv`; a path -> its last segment. */

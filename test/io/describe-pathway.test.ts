@@ -27,7 +27,7 @@ describe('describePathway', () => {
       '  aerosol_wm2 (W m-2): -1.1 to -0.5',
       'splice: spliced onto bundled history at 2023 (2020-2022 from history.csv)',
       'run covers: 2020 to 2033 (14 years)',
-      'note: ch4_ppb, solar_wm2 not in file: taken from history to 2022, then held at the 2022 value',
+      'note: ch4_ppb, solar_wm2 not in file: taken from history to 2022, then held at the mean of 2020-2022',
       "note: co2_gtco2 given instead of the history's co2_ppm: co2_ppm holds history values to 2022 and is NaN from 2023; co2_gtco2 is NaN before 2023",
       'note: aerosol_wm2 not in history: NaN before 2023',
       'gases not given (held at pre-industrial): N2O',

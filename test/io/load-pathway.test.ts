@@ -38,7 +38,7 @@ describe('loadPathway', () => {
       notes: [
         'interpolated linearly from 2 rows (10-year steps) to 11 annual values',
         'spliced onto bundled history at 2023 (2020-2022 from history.csv)',
-        'solar_wm2, volcanic_wm2 not in file: taken from history to 2022, then held at the 2022 value',
+        'solar_wm2, volcanic_wm2 not in file: taken from history to 2022, then held at the mean of 2020-2022',
       ],
     });
     expect(loadPathway('calm.csv', { pathwaysDir }).provenance.source).toBe('bundled:calm');
