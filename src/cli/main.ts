@@ -2,6 +2,7 @@ import { Command, CommanderError } from 'commander';
 import { WarmcastError } from '../errors.js';
 import { calibrateCommand } from './calibrate.js';
 import { checkCommand } from './check.js';
+import { compareCommand } from './compare.js';
 import type { CliIo } from './cli-io.js';
 import { pathwaysCommand } from './pathways.js';
 import { runCommand } from './run.js';
@@ -24,8 +25,8 @@ export async function main(argv: string[], io: CliIo): Promise<number> {
     .version(packageVersion(), '-V, --version')
     .option('--debug', 'show stack traces for errors')
     .showHelpAfterError('(add --help for usage)')
-    .addHelpText('after', '\nExamples:\n  warmcast run                      # the default bundled pathway\n  warmcast run swift --out swift.csv\n  warmcast pathways\n');
-  for (const make of [runCommand, calibrateCommand, checkCommand, pathwaysCommand]) {
+    .addHelpText('after', '\nExamples:\n  warmcast run                      # the default bundled pathway\n  warmcast run swift --out swift.csv\n  warmcast compare steady delayed swift --out report.html\n  warmcast pathways\n');
+  for (const make of [runCommand, compareCommand, calibrateCommand, checkCommand, pathwaysCommand]) {
     program.addCommand(make(io));
   }
   const configure = (cmd: Command) => {

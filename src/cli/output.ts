@@ -4,7 +4,7 @@ import { ConfigError } from '../errors.js';
 import { formatCsv, formatJson, formatMarkdown, writeFileAtomic, type Table } from '../io/index.js';
 import type { Projection } from '../projection/index.js';
 import type { CliIo } from './cli-io.js';
-import { buildProvenance } from './provenance.js';
+import { buildProvenance, type Provenance } from './provenance.js';
 
 /** A projection restricted to years from..to (inclusive); the run itself is unchanged. */
 export function clipProjection(p: Projection, from?: number, to?: number): Projection {
@@ -27,7 +27,10 @@ export function projectionTable(p: Projection): Table {
   return { columns: ['year', ...names], data: [p.years, ...names.map((n) => p.columns[n])] };
 }
 
-/** What {@link writeTableOutput} needs for provenance and safety. */
+/** Output formats by extension; each renders the whole file from the provenance record. */
+export type Renderers = Partial<Record<'.csv' | '.json' | '.md' | '.svg' | '.html', (provenance: Provenance) => string>>;
+
+/** What {@link writeOutput} needs for provenance and safety. */
 export interface OutputContext {
   /** Absolute paths of every input file (hashed into provenance; never overwritten). */
   inputs: string[];
@@ -35,45 +38,52 @@ export interface OutputContext {
   baseline: readonly [number, number];
   notes: string[];
   seed?: number;
+  /** Caution text for the provenance (default: the single-run cautions). */
+  caution?: string;
   io: CliIo;
-  /** Extensions this command writes. */
-  allowed: string[];
-  /** Extra formats (`.svg`, `.html`) the command renders itself. */
-  render?: Record<string, () => string>;
 }
 
 /**
- * Writes a table to `path` in the format its extension names, atomically, with provenance: inside
- * the file for JSON and Markdown, in a `.meta.json` sidecar for CSV (so spreadsheets get a clean
- * table). `-` writes CSV to stdout.
+ * Writes `path` in the format its extension names, atomically, with provenance: inside the file for
+ * JSON, Markdown, SVG and HTML, in a `.meta.json` sidecar for CSV (so spreadsheets get a clean
+ * table). `-` writes the CSV form to stdout.
  *
  * @returns the paths written
  * @throws ConfigError for an extension the command does not write
  */
-export function writeTableOutput(path: string, table: Table, ctx: OutputContext): string[] {
-  const provenance = buildProvenance({ inputs: ctx.inputs, params: ctx.params, baseline: ctx.baseline, notes: ctx.notes, seed: ctx.seed });
+export function writeOutput(path: string, renderers: Renderers, ctx: OutputContext): string[] {
+  const provenance = buildProvenance(ctx);
   if (path === '-') {
-    ctx.io.stdout(formatCsv(table));
+    ctx.io.stdout(renderers['.csv']!(provenance));
     return [];
   }
-  const ext = extname(path).toLowerCase();
-  if (!ctx.allowed.includes(ext)) {
-    throw new ConfigError(`--out ${path}: the extension must be one of ${ctx.allowed.join(', ')} (it picks the format)`, 'out');
+  const ext = extname(path).toLowerCase() as keyof Renderers;
+  const render = renderers[ext];
+  if (!render) {
+    throw new ConfigError(`--out ${path}: the extension must be one of ${Object.keys(renderers).join(', ')} (it picks the format)`, 'out');
   }
-  const write = (target: string, content: string) => writeFileAtomic(target, content, { inputs: ctx.inputs });
+  const content = render(provenance);
+  const write = (target: string, text: string) => writeFileAtomic(target, text, { inputs: ctx.inputs });
   if (ext === '.csv') {
     const sidecar = path.slice(0, -ext.length) + '.meta.json';
-    write(path, formatCsv(table));
+    write(path, content);
     write(sidecar, JSON.stringify(provenance, null, 2) + '\n');
     return [path, sidecar];
   }
-  if (ext === '.json') write(path, formatJson(table, provenance));
-  else if (ext === '.md') write(path, markdownWithProvenance(table, provenance));
-  else write(path, ctx.render![ext]());
+  write(path, content);
   return [path];
 }
 
-function markdownWithProvenance(table: Table, provenance: ReturnType<typeof buildProvenance>): string {
+/** The formats of a plain yearly table: CSV, JSON with provenance, Markdown with provenance below. */
+export function tableRenderers(table: Table): Renderers {
+  return {
+    '.csv': () => formatCsv(table),
+    '.json': (p) => formatJson(table, p),
+    '.md': (p) => markdownWithProvenance(table, p),
+  };
+}
+
+function markdownWithProvenance(table: Table, provenance: Provenance): string {
   const inputs = provenance.inputs.map((i) => `${i.path} (sha256 ${i.sha256.slice(0, 12)}…)`).join('; ');
   return (
     formatMarkdown(table, 4) +

@@ -5,7 +5,7 @@ import { readPathway } from '../io/load-pathway.js';
 import { projectPathway, type Projection } from '../projection/index.js';
 import type { CliIo } from './cli-io.js';
 import { addModelOptions, numberOption, resolveModelParams, yearOption, yearRangeOption, type ModelOptions } from './options.js';
-import { clipProjection, projectionTable, writeTableOutput } from './output.js';
+import { clipProjection, projectionTable, tableRenderers, writeOutput } from './output.js';
 import { printProjectionSummary } from './summary.js';
 
 /** The pathway `warmcast run` uses when none is given. */
@@ -18,6 +18,7 @@ interface RunOptions extends ModelOptions {
   baseline: [number, number];
   splice: boolean;
   chart: boolean;
+  carbonFeedback: boolean;
   method: 'odex' | 'exact';
   rtol: number;
   atol: number;
@@ -33,6 +34,7 @@ export function runCommand(io: CliIo): Command {
     .option('--to <year>', 'last year to report', yearOption)
     .option('--baseline <years>', 'baseline period for warming', yearRangeOption, [1850, 1900])
     .option('--no-splice', 'do not splice a pathway that starts late onto the bundled history')
+    .option('--no-carbon-feedback', 'emission-driven runs: switch off the carbon-climate feedback on uptake')
     .option('--no-chart', 'omit the terminal chart');
   addModelOptions(cmd)
     .addOption(new Option('--method <name>', 'temperature stepping: odex (ODE solver) or exact (matrix-exponential propagator)').choices(['odex', 'exact']).default('odex'))
@@ -56,6 +58,7 @@ export function runCommand(io: CliIo): Command {
           params,
           baseline: opts.baseline,
           method: opts.method,
+          carbonFeedback: opts.carbonFeedback,
           tolerances: { relativeTolerance: opts.rtol, absoluteTolerance: opts.atol, maxStepsPerUnit: 2000 },
         });
         projections.push({ projection: clipProjection(full, opts.from, opts.to), file: read.parsed.file });
@@ -64,13 +67,12 @@ export function runCommand(io: CliIo): Command {
       if (opts.out !== undefined) {
         const { projection, file } = projections[0];
         const inputs = [file, ...(paramsFile ? [paramsFile] : [])];
-        const written = writeTableOutput(resolveOut(opts.out, io), projectionTable(projection), {
+        const written = writeOutput(resolveOut(opts.out, io), tableRenderers(projectionTable(projection)), {
           inputs,
           params,
           baseline: opts.baseline,
           notes: [...projection.provenance.notes, ...projection.notes],
           io,
-          allowed: ['.csv', '.json', '.md'],
         });
         for (const w of written) io.stderr(`wrote ${w}\n`);
       }

@@ -1,3 +1,4 @@
+import { runEmissionDriven, type EmissionRunResult } from '../carbon/run-emission-driven.js';
 import { energyBalance, type EnergyBalanceMethod } from '../climate/energy-balance.js';
 import type { ClimateParams } from '../climate/params.js';
 import { ConfigError } from '../errors.js';
@@ -18,9 +19,14 @@ export interface ProjectionOptions {
   tolerances?: OdeTolerances;
   /** Multiplier on prescribed aerosol forcing (1 = as given). */
   aerosolScale?: number;
+  /** Carbon-climate feedback on CO2 uptake in emission-driven runs (default true). */
+  carbonFeedback?: boolean;
 }
 
-/** Output columns of a projection, in CSV order (DESIGN.md). Emission-driven runs add more. */
+/**
+ * Output columns of a projection, in CSV order (DESIGN.md). Emission-driven runs add `co2_gtco2`,
+ * `ch4_mt`, `n2o_mt` (given or diagnosed), `cumulative_co2_gtco2` (from 1850) and `airborne_fraction`.
+ */
 export const PROJECTION_COLUMNS = [
   'warming_k',
   'deep_ocean_k',
@@ -52,6 +58,8 @@ export interface Projection {
   columns: Record<string, Float64Array>;
   /** Things the user should know about this run (gases held at 1750 values, ...). */
   notes: string[];
+  /** The carbon-cycle result of an emission-driven run (budget, diagnosed emissions, mass balance). */
+  carbon?: EmissionRunResult;
 }
 
 /**
@@ -71,15 +79,35 @@ export function projectPathway(pathway: Pathway, options: ProjectionOptions): Pr
   const notes: string[] = [];
   const s = pathway.series;
 
-  if (EMISSION_COLUMNS.some((c) => s[c] !== undefined)) {
-    throw new ConfigError(`${pathway.name}: emission columns need the carbon cycle, which this build does not have yet`, 'pathway');
-  }
   for (const [gas, cols] of Object.entries(GASES)) {
-    if (!s[cols.concentration]) notes.push(`${gas.toUpperCase()} not given: held at its 1750 value`);
+    if (!s[cols.concentration] && !s[cols.emission]) notes.push(`${gas.toUpperCase()} not given: held at its 1750 value`);
   }
   const forcingOptions: ForcingOptions = { co2Formula: params.co2Formula, forcing2xWm2: params.forcing2xWm2, aerosolScale: options.aerosolScale };
+  const tolerances = options.tolerances ?? DEFAULT_TOLERANCES;
+
+  if (EMISSION_COLUMNS.some((c) => s[c] !== undefined)) {
+    // Emission-driven: carbon boxes, gas burdens and temperatures advance together in one ODE system.
+    const r = runEmissionDriven(pathway, params, { forcing: forcingOptions, feedback: options.carbonFeedback ?? true, tolerances });
+    const columns: Record<string, Float64Array> = {
+      warming_k: rebase(years, r.surfaceK, baseline, pathway.name),
+      deep_ocean_k: rebase(years, r.deepK, baseline, pathway.name),
+      forcing_wm2: r.forcing.total,
+      imbalance_wm2: r.imbalanceWm2,
+      co2_ppm: r.co2Ppm,
+      ch4_ppb: r.ch4Ppb,
+      n2o_ppb: r.n2oPpb,
+    };
+    for (const a of FORCING_AGENTS) columns[`forcing_${a}_wm2`] = r.forcing.byAgent[a as ForcingAgent];
+    columns.co2_gtco2 = r.co2EmissionsGtco2;
+    columns.ch4_mt = r.ch4EmissionsMt;
+    columns.n2o_mt = r.n2oEmissionsMt;
+    columns.cumulative_co2_gtco2 = r.cumulativeCo2Gtco2;
+    columns.airborne_fraction = r.airborneFraction;
+    return { name: pathway.name, provenance: pathway.provenance, params, baseline, years, columns, notes: [...notes, ...r.notes], carbon: r };
+  }
+
   const forcing = forcingByAgent(n, { co2Ppm: s.co2_ppm, ch4Ppb: s.ch4_ppb, n2oPpb: s.n2o_ppb, prescribed: s }, forcingOptions);
-  const eb = energyBalance(params, forcing.total, options.method ?? 'odex', options.tolerances ?? DEFAULT_TOLERANCES);
+  const eb = energyBalance(params, forcing.total, options.method ?? 'odex', tolerances);
 
   const columns: Record<string, Float64Array> = {
     warming_k: rebase(years, eb.surfaceK, baseline, pathway.name),

@@ -1,0 +1,41 @@
+/**
+ * The carbon layer: emissions -> concentrations. CO2 boxes with a carbon-climate feedback on uptake,
+ * single-lifetime CH4 and N2O mass balances, and the emission-driven run that couples them with the
+ * two-box energy balance in one ODE state vector.
+ */
+export { co2ImpulseResponse, CO2_BOX_COUNT, integratedImpulseResponse, integratedImpulseResponseSlope, JOOS_2013 } from './co2-impulse-response.js';
+export { COUPLED_STATE, coupledModel } from './coupled-model.js';
+export type { CoupledModel, CoupledModelSpec, GasStepInput } from './coupled-model.js';
+export { diagnoseEmissions } from './diagnose-emissions.js';
+export type { DiagnosedEmissions } from './diagnose-emissions.js';
+export {
+  CH4_CYCLE,
+  gasEmissionsForTendency,
+  gasLifetimeYr,
+  gasSinkMt,
+  gasTendencyPpbPerYr,
+  N2O_CYCLE,
+  withConstantLifetime,
+} from './gas-cycle.js';
+export type { GasCycle } from './gas-cycle.js';
+export { co2PulseResponse } from './pulse-response.js';
+export type { PulseOptions, PulseResponse } from './pulse-response.js';
+export { runEmissionDriven } from './run-emission-driven.js';
+export type { CarbonBudget, EmissionRunOptions, EmissionRunResult } from './run-emission-driven.js';
+export {
+  GTC_PER_PPM,
+  GTCO2_PER_GTC,
+  gtcToGtco2,
+  gtcToPpm,
+  gtco2ToGtc,
+  MOLAR_MASS,
+  MT_CH4_PER_PPB,
+  MT_N2O_PER_PPB,
+  MT_N_PER_PPB_N2O,
+  mtCh4ToPpb,
+  mtN2oToPpb,
+  ppbToMtCh4,
+  ppbToMtN2o,
+  ppmToGtc,
+} from './units.js';
+export { irf100Target, MILLAR_2017, uptakeTimescaleScaling } from './uptake-feedback.js';

@@ -1,0 +1,93 @@
+import { Command } from 'commander';
+import { resolve } from 'node:path';
+import { formatCsv } from '../io/index.js';
+import { readPathway } from '../io/load-pathway.js';
+import { comparePathways, milestoneYears, type PathwayWarming } from '../metrics/index.js';
+import { projectPathway } from '../projection/index.js';
+import { comparisonCharts, comparisonHtml, comparisonJson, comparisonLongTable, comparisonMarkdown, comparisonText } from '../report/index.js';
+import type { CliIo } from './cli-io.js';
+import { addModelOptions, numberListOption, resolveModelParams, yearRangeOption, type ModelOptions } from './options.js';
+import { writeOutput } from './output.js';
+import { paramsToJson } from '../climate/params.js';
+
+interface CompareOptions extends ModelOptions {
+  out?: string;
+  years?: number[];
+  thresholds: number[];
+  baseline: [number, number];
+  splice: boolean;
+  chart: boolean;
+  carbonFeedback: boolean;
+}
+
+/** `warmcast compare <pathway...>`: pathways side by side against the first, as tables, charts and reports. */
+export function compareCommand(io: CliIo): Command {
+  const cmd = new Command('compare')
+    .description('compare pathways year by year against the first (the reference): milestones, peaks, threshold crossings')
+    .argument('<pathway...>', 'pathway CSV files or bundled names; the first is the reference')
+    .option('-o, --out <file>', 'write the comparison; the extension picks the format: .md, .csv (+ .meta.json), .json, .svg, .html')
+    .option('--years <list>', 'milestone years, e.g. 2030,2040,2050,2100 (default every 10 years over the future)', numberListOption('--years'))
+    .option('--thresholds <list>', 'warming levels in K whose crossing years are reported', numberListOption('--thresholds'), [1.5, 2])
+    .option('--baseline <years>', 'baseline period for warming', yearRangeOption, [1850, 1900])
+    .option('--no-splice', 'do not splice pathways that start late onto the bundled history')
+    .option('--no-carbon-feedback', 'emission-driven runs: switch off the carbon-climate feedback on uptake')
+    .option('--no-chart', 'omit the terminal chart');
+  addModelOptions(cmd)
+    .addHelpText(
+      'after',
+      '\nExamples:\n  warmcast compare steady delayed swift\n  warmcast compare steady swift --years 2030,2050,2100 --out table.md\n  warmcast compare steady delayed swift --out report.html\n',
+    )
+    .action((args: string[], opts: CompareOptions) => {
+      const { params, paramsFile } = resolveModelParams(opts, io);
+      const files: string[] = [];
+      const notes: string[] = [];
+      const runs = args.map((arg) => {
+        const read = readPathway(arg, { splice: opts.splice });
+        files.push(read.parsed.file);
+        const p = projectPathway(read.pathway, { params, baseline: opts.baseline, carbonFeedback: opts.carbonFeedback });
+        notes.push(...[...p.provenance.notes, ...p.notes].map((n) => `${p.name}: ${n}`));
+        return p;
+      });
+      const ref = runs[0];
+      const last = ref.years[ref.years.length - 1];
+      const firstFuture = ref.provenance.spliceYear ?? ref.years[0];
+      const pathways: PathwayWarming[] = runs.map((p) => ({
+        label: p.name,
+        years: p.years,
+        warmingK: p.columns.warming_k,
+        ...(p.columns.co2_gtco2 ? { co2Gtco2: p.columns.co2_gtco2 } : {}),
+      }));
+      const c = comparePathways(pathways, {
+        milestoneYears: opts.years ?? milestoneYears(firstFuture, last, 10),
+        thresholdsK: opts.thresholds,
+        cumulativeFromYear: firstFuture,
+      });
+      const baseline = `${opts.baseline[0]}-${opts.baseline[1]}`;
+      const fromYear = Math.max(ref.years[0], Math.min(1850, last));
+      if (opts.out !== undefined) {
+        const inputs = [...files, ...(paramsFile ? [paramsFile] : [])];
+        const assumptions: Record<string, string> = {
+          'Climate sensitivity': `ECS ${params.ecsK.toFixed(2)} K, TCR ${params.tcrK.toFixed(2)} K (two-box model calibrated to them)`,
+          'CO2 forcing': params.co2Formula === 'log' ? 'Myhre et al. 1998, 5.35 ln(C/C0)' : 'Meinshausen et al. 2020 with IPCC AR6 adjustments',
+          Baseline: `warming relative to the ${baseline} mean`,
+          'History splice': runs.map((p) => `${p.name}: ${p.provenance.spliceYear ? `bundled history before ${p.provenance.spliceYear}` : 'none'}`).join('; '),
+          Parameters: Object.entries(paramsToJson(params)).map(([k, v]) => `${k} ${typeof v === 'number' ? +v.toPrecision(5) : v}`).join(', '),
+        };
+        const written = writeOutput(
+          resolve(io.cwd, opts.out),
+          {
+            '.csv': () => formatCsv(comparisonLongTable(c)),
+            '.json': (p) => comparisonJson(c, p),
+            '.md': (p) => comparisonMarkdown(c, { provenance: p, baseline }),
+            '.svg': () => comparisonCharts(c, { fromYear, baseline })[0],
+            '.html': (p) => comparisonHtml(c, { provenance: p, assumptions, baseline, fromYear }),
+          },
+          { inputs, params, baseline: opts.baseline, notes, io },
+        );
+        for (const w of written) io.stderr(`wrote ${w}\n`);
+      }
+      const write = opts.out === '-' ? io.stderr : io.stdout;
+      write(comparisonText(c, { color: opts.out === '-' ? io.stderrIsTTY : io.stdoutIsTTY, fromYear, baseline, noChart: !opts.chart }));
+    });
+  return cmd;
+}

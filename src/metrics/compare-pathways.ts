@@ -1,0 +1,151 @@
+import { ConfigError } from '../errors.js';
+import { crossingPeriod, type CrossingPeriod } from './crossing-year.js';
+import { cumulativeToNetZero, type NetZero } from './cumulative-to-net-zero.js';
+import { differences } from './differences.js';
+import { peak, type Peak } from './peak.js';
+import type { Series } from './series.js';
+import { valueAtYear } from './value-at-year.js';
+
+/** Ensemble percentiles of warming, K relative to 1850-1900, one value per year. */
+export interface WarmingRange {
+  p05: Float64Array;
+  p17: Float64Array;
+  p83: Float64Array;
+  p95: Float64Array;
+}
+
+/** One pathway's projected warming, as a comparison takes it. */
+export interface PathwayWarming {
+  /** Display name; names in one comparison must be distinct. */
+  label: string;
+  /** Consecutive integer years, ascending. */
+  years: Float64Array;
+  /** Warming, K relative to 1850-1900 (the central estimate, or the median of an ensemble). */
+  warmingK: Float64Array;
+  /** Ensemble percentiles, when an ensemble was run. */
+  range?: WarmingRange;
+  /** Net CO2 emissions, Gt CO2 per year, when the run is emission-driven. */
+  co2Gtco2?: Float64Array;
+}
+
+/** What a comparison reports and how. */
+export interface ComparisonOptions {
+  /** Years of the milestone table. */
+  milestoneYears: readonly number[];
+  /** Warming levels whose crossing years are reported, K (default 1.5 and 2, the Paris Agreement levels). */
+  thresholdsK?: readonly number[];
+  /** Averaging period for crossings, years (default 20, the IPCC AR6 convention). */
+  windowYears?: number;
+  /** Years whose warming every pathway summary states (default 2050 and 2100). */
+  keyYears?: readonly number[];
+  /** First year counted in cumulative CO2 emissions (default each pathway's first year). */
+  cumulativeFromYear?: number;
+}
+
+/** Warming of one pathway at one milestone year. */
+export interface MilestoneValue {
+  year: number;
+  /** Warming, K; NaN when the pathway does not cover the year. */
+  warmingK: number;
+  /** This pathway minus the reference, K; 0 for the reference itself; NaN when either lacks the year. */
+  differenceK: number;
+  /** Ensemble percentiles at the year, K, when the pathway has a range. */
+  range?: { p05: number; p17: number; p83: number; p95: number };
+}
+
+/** One pathway's results within a comparison. */
+export interface PathwayComparison extends PathwayWarming {
+  /** Warming minus the reference's, K, on the years both cover. */
+  differenceK: Series;
+  milestones: MilestoneValue[];
+  /** Highest annual warming, K, and its year. */
+  peak: Peak;
+  /** True when the peak is the last year: warming is still rising (or flat) at the end of the data. */
+  stillRising: boolean;
+  /** One entry per threshold, in order: the first 20-year period above it, or undefined. */
+  crossings: { thresholdK: number; period: CrossingPeriod | undefined }[];
+  /** Warming at each key year, K (NaN when not covered). */
+  keyYears: { year: number; warmingK: number }[];
+  /** Cumulative CO2 emissions to net zero, Gt CO2, for emission-driven pathways. */
+  netZero?: NetZero;
+  firstYear: number;
+  lastYear: number;
+}
+
+/** Several pathways side by side, the first one the reference. */
+export interface Comparison {
+  /** Label of the reference (first) pathway. */
+  reference: string;
+  milestoneYears: number[];
+  thresholdsK: number[];
+  windowYears: number;
+  keyYears: number[];
+  pathways: PathwayComparison[];
+}
+
+/**
+ * Compares pathways against the first: warming and its difference from the reference at each
+ * milestone year, and per pathway the peak and its year, the AR6 crossing year of each threshold
+ * (see `crossingPeriod`), warming at the key years and, when emissions are given, cumulative CO2
+ * emissions to net zero.
+ *
+ * @param pathways one or more pathways; the first is the reference
+ * @param options milestone years, thresholds (K), averaging window, key years
+ * @returns the comparison; arrays of the inputs are shared, not copied
+ * @throws ConfigError when no pathway is given or two share a label
+ * @example
+ * const years = Float64Array.from({ length: 81 }, (_, i) => 2020 + i);
+ * const c = comparePathways(
+ *   [{ label: 'steady', years, warmingK: years.map((y) => 1.2 + 0.02 * (y - 2020)) },
+ *    { label: 'swift', years, warmingK: years.map((y) => 1.2 + 0.01 * (y - 2020)) }],
+ *   { milestoneYears: [2050] },
+ * );
+ * c.pathways[1].milestones[0] // { year: 2050, warmingK: ≈1.5, differenceK: ≈-0.3 }
+ * c.pathways[0].crossings[0].period?.year // 2035
+ */
+export function comparePathways(pathways: readonly PathwayWarming[], options: ComparisonOptions): Comparison {
+  if (pathways.length === 0) throw new ConfigError('a comparison must be given at least one pathway', 'pathways');
+  const seen = new Set<string>();
+  for (const p of pathways) {
+    if (seen.has(p.label)) throw new ConfigError(`pathway names in a comparison must be distinct; "${p.label}" appears twice`, 'pathways');
+    seen.add(p.label);
+  }
+  const thresholdsK = [...(options.thresholdsK ?? [1.5, 2])];
+  const windowYears = options.windowYears ?? 20;
+  const keyYears = [...(options.keyYears ?? [2050, 2100])];
+  const milestoneYears = [...options.milestoneYears];
+  const ref = pathways[0];
+  const refSeries: Series = { years: ref.years, values: ref.warmingK };
+
+  const results = pathways.map((p): PathwayComparison => {
+    const diff = differences(refSeries, { years: p.years, values: p.warmingK });
+    const top = peak(p.years, p.warmingK);
+    const milestones = milestoneYears.map((year): MilestoneValue => {
+      const m: MilestoneValue = { year, warmingK: valueAtYear(p.years, p.warmingK, year), differenceK: valueAtYear(diff.years, diff.values, year) };
+      if (p.range) {
+        const r = p.range;
+        m.range = {
+          p05: valueAtYear(p.years, r.p05, year),
+          p17: valueAtYear(p.years, r.p17, year),
+          p83: valueAtYear(p.years, r.p83, year),
+          p95: valueAtYear(p.years, r.p95, year),
+        };
+      }
+      return m;
+    });
+    const result: PathwayComparison = {
+      ...p,
+      differenceK: diff,
+      milestones,
+      peak: top,
+      stillRising: top.index === p.years.length - 1,
+      crossings: thresholdsK.map((thresholdK) => ({ thresholdK, period: crossingPeriod(p.years, p.warmingK, thresholdK, windowYears) })),
+      keyYears: keyYears.map((year) => ({ year, warmingK: valueAtYear(p.years, p.warmingK, year) })),
+      firstYear: p.years[0],
+      lastYear: p.years[p.years.length - 1],
+    };
+    if (p.co2Gtco2) result.netZero = cumulativeToNetZero(p.years, p.co2Gtco2, options.cumulativeFromYear);
+    return result;
+  });
+  return { reference: ref.label, milestoneYears, thresholdsK, windowYears, keyYears, pathways: results };
+}

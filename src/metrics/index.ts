@@ -1,0 +1,14 @@
+export { comparePathways } from './compare-pathways.js';
+export type { Comparison, ComparisonOptions, MilestoneValue, PathwayComparison, PathwayWarming, WarmingRange } from './compare-pathways.js';
+export { crossingPeriod, crossingYear } from './crossing-year.js';
+export type { CrossingPeriod } from './crossing-year.js';
+export { cumulativeToNetZero } from './cumulative-to-net-zero.js';
+export type { NetZero } from './cumulative-to-net-zero.js';
+export { differences } from './differences.js';
+export { milestoneYears } from './milestone-years.js';
+export { peak } from './peak.js';
+export type { Peak } from './peak.js';
+export { runningMean } from './running-mean.js';
+export type { WindowAlignment } from './running-mean.js';
+export type { Series } from './series.js';
+export { valueAtYear } from './value-at-year.js';

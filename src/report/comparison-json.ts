@@ -1,0 +1,80 @@
+import type { Comparison } from '../metrics/compare-pathways.js';
+
+/**
+ * A comparison as JSON with its provenance: the settings (reference, window, thresholds, milestone
+ * and key years), then per pathway its summary (peak, crossings with their 20-year periods,
+ * warming at key years, milestones with differences from the reference, cumulative CO2 to net zero
+ * when emission-driven) and its annual series (`years`, `warming_k`, `difference_k`, and the
+ * ensemble percentiles and `co2_gtco2` when present). Keys are snake_case like the CSV columns.
+ * Numbers keep full precision; NaN and "not crossed" are `null`. Two-space indentation, with each
+ * list of plain values on one line, so files diff cleanly.
+ *
+ * @param c the comparison
+ * @param provenance the record the CLI built, written first as it is
+ * @returns JSON text ending in a newline
+ * @example
+ * JSON.parse(comparisonJson(c, { version: '0.1.0' })).pathways[0].peak // { year: 2100, warming_k: 2.7, still_rising: true }
+ */
+export function comparisonJson(c: Comparison, provenance: object): string {
+  const num = (v: number) => (Number.isFinite(v) ? v : null);
+  const list = (a: ArrayLike<number>) => Array.from(a, num);
+  const doc = {
+    provenance,
+    reference: c.reference,
+    window_years: c.windowYears,
+    thresholds_k: c.thresholdsK,
+    milestone_years: c.milestoneYears,
+    key_years: c.keyYears,
+    pathways: c.pathways.map((p) => ({
+      pathway: p.label,
+      first_year: p.firstYear,
+      last_year: p.lastYear,
+      peak: { year: num(p.peak.year), warming_k: num(p.peak.value), still_rising: p.stillRising },
+      crossings: p.crossings.map(({ thresholdK, period }) => ({
+        threshold_k: thresholdK,
+        year: period ? period.year : null,
+        period_first_year: period ? period.firstYear : null,
+        period_last_year: period ? period.lastYear : null,
+        period_mean_k: period ? period.mean : null,
+        at_start: period ? period.atStart : null,
+      })),
+      key_years: p.keyYears.map((k) => ({ year: k.year, warming_k: num(k.warmingK) })),
+      milestones: p.milestones.map((m) => ({
+        year: m.year,
+        warming_k: num(m.warmingK),
+        difference_k: num(m.differenceK),
+        ...(m.range
+          ? { warming_p05_k: num(m.range.p05), warming_p17_k: num(m.range.p17), warming_p83_k: num(m.range.p83), warming_p95_k: num(m.range.p95) }
+          : {}),
+      })),
+      ...(p.netZero
+        ? {
+            net_zero: {
+              year: p.netZero.year ?? null,
+              cumulative_co2_gtco2: num(p.netZero.total),
+              from_year: p.netZero.fromYear,
+              to_year: p.netZero.toYear,
+            },
+          }
+        : {}),
+      annual: {
+        years: list(p.years),
+        warming_k: list(p.warmingK),
+        difference_k: list(Array.from(p.years, (y) => {
+          const i = p.differenceK.years.indexOf(y);
+          return i < 0 ? NaN : p.differenceK.values[i];
+        })),
+        ...(p.range
+          ? { warming_p05_k: list(p.range.p05), warming_p17_k: list(p.range.p17), warming_p83_k: list(p.range.p83), warming_p95_k: list(p.range.p95) }
+          : {}),
+        ...(p.co2Gtco2 ? { co2_gtco2: list(p.co2Gtco2) } : {}),
+      },
+    })),
+  };
+  // Put each list of plain values on one line. JSON strings never hold a raw line break, so only
+  // the layout whitespace between items is touched.
+  const text = JSON.stringify(doc, null, 2).replace(/\[([^\[\]{}]*)\]/g, (whole, inner: string) =>
+    inner.includes('\n') ? `[${inner.trim().replace(/,\n\s*/g, ', ')}]` : whole,
+  );
+  return text + '\n';
+}

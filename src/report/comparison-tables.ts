@@ -1,0 +1,95 @@
+import type { Comparison, PathwayComparison } from '../metrics/compare-pathways.js';
+import { kelvin, MISSING, signedKelvin } from './format-numbers.js';
+import type { TextTable } from './text-table.js';
+
+/** Options of {@link comparisonTables}. */
+export interface ComparisonTableOptions {
+  /** Baseline period the warming is relative to, as printed (default `1850-1900`). */
+  baseline?: string;
+}
+
+/**
+ * The two tables of a comparison, as formatted cells:
+ *
+ * - `milestones`: one row per milestone year; per pathway its warming (K, 2 decimals, with the
+ *   5-95 % ensemble range in brackets when there is one) and, after the reference, its difference
+ *   from the reference (K, signed).
+ * - `summary`: one row per pathway: peak warming and its year (marked "still rising" when the peak
+ *   is the last year), the crossing year of each threshold under the AR6 20-year-mean rule ("not
+ *   crossed by END" when none), warming at the key years and, when any pathway is emission-driven,
+ *   cumulative CO2 emissions to net zero (Gt CO2, whole numbers) and the net-zero year.
+ *
+ * A value a pathway does not cover is `n/a`.
+ *
+ * @param c the comparison (see comparePathways)
+ * @param options baseline text
+ * @example
+ * comparisonTables(c).milestones.columns // ['Year', 'steady (K)', 'swift (K)', 'swift vs steady (K)']
+ */
+export function comparisonTables(c: Comparison, options: ComparisonTableOptions = {}): { milestones: TextTable; summary: TextTable } {
+  const baseline = options.baseline ?? '1850-1900';
+  const [ref, ...others] = c.pathways;
+  const anyRange = c.pathways.some((p) => p.range);
+
+  const columns = ['Year', `${ref.label} (K)`];
+  for (const p of others) columns.push(`${p.label} (K)`, `${p.label} vs ${ref.label} (K)`);
+  const rows = c.milestoneYears.map((year, m) => {
+    const row = [String(year), warmingCell(ref, m)];
+    for (const p of others) row.push(warmingCell(p, m), signedKelvin(p.milestones[m].differenceK));
+    return row;
+  });
+  const milestoneNotes = [`Warming in K relative to ${baseline}. Differences are each pathway minus the reference, ${ref.label}.`];
+  if (anyRange) milestoneNotes.push('Brackets: the 5-95 % (very likely) range of the ensemble.');
+
+  const netZero = c.pathways.some((p) => p.netZero);
+  const sColumns = ['Pathway', 'Peak (K)', 'Peak year'];
+  sColumns.push(...c.thresholdsK.map((t) => `Reaches ${+t.toPrecision(6)} K`));
+  sColumns.push(...c.keyYears.map((y) => `${y} (K)`));
+  if (netZero) sColumns.push('CO2 to net zero (Gt CO2)', 'Net-zero year');
+  const sRows = c.pathways.map((p) => {
+    const row = [p.label, kelvin(p.peak.value), Number.isFinite(p.peak.year) ? `${p.peak.year}${p.stillRising ? ' (still rising)' : ''}` : MISSING];
+    for (const { period } of p.crossings) {
+      row.push(period === undefined ? `not crossed by ${p.lastYear}` : period.atStart ? `${period.year} or earlier` : String(period.year));
+    }
+    for (const k of p.keyYears) row.push(kelvin(k.warmingK));
+    if (netZero) {
+      const z = p.netZero;
+      if (!z) row.push('n/a (concentration-driven)', MISSING);
+      else if (z.year === undefined) row.push(`${Math.round(z.total)} to ${z.toYear}`, `not reached by ${p.lastYear}`);
+      else row.push(String(Math.round(z.total)), String(z.year));
+    }
+    return row;
+  });
+  const summaryNotes = [
+    `Peak: highest annual warming (K relative to ${baseline}). Reaches: the middle year of the first ${c.windowYears}-year period whose mean ` +
+      'warming exceeds the level, the IPCC AR6 WG1 convention for global warming levels (of the two middle years, the earlier); ' +
+      `"or earlier" when the first complete ${c.windowYears}-year period of the data is already above it.`,
+  ];
+  if (netZero) {
+    const from = [...new Set(c.pathways.flatMap((p) => (p.netZero ? [p.netZero.fromYear] : [])))].join(', ');
+    summaryNotes.push(`CO2 to net zero: net CO2 emissions summed from ${from} up to the year before they first reach zero or below.`);
+  }
+  return {
+    milestones: {
+      caption: `Warming at milestone years (K relative to ${baseline})`,
+      columns,
+      rows,
+      numeric: columns.map(() => true),
+      notes: milestoneNotes,
+    },
+    summary: {
+      caption: 'Per pathway',
+      columns: sColumns,
+      rows: sRows,
+      numeric: sColumns.map((_, j) => j > 0),
+      notes: summaryNotes,
+    },
+  };
+}
+
+function warmingCell(p: PathwayComparison, m: number): string {
+  const v = p.milestones[m];
+  const central = kelvin(v.warmingK);
+  if (!v.range || central === MISSING) return central;
+  return `${central} [${kelvin(v.range.p05)} to ${kelvin(v.range.p95)}]`;
+}

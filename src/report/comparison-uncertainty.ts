@@ -1,0 +1,22 @@
+import type { Comparison } from '../metrics/compare-pathways.js';
+
+/**
+ * The sentence on uncertainty a comparison's reports carry: which pathways have ensemble ranges
+ * and what those ranges cover; undefined when none has one (standardCautions then says that no
+ * range is shown).
+ *
+ * @param c the comparison
+ * @example
+ * comparisonUncertainty(c) // 'Ranges (shaded; 5-95 % in brackets) are shown for delayed: ...'
+ */
+export function comparisonUncertainty(c: Comparison): string | undefined {
+  const withRange = c.pathways.filter((p) => p.range).map((p) => p.label);
+  if (withRange.length === 0) return undefined;
+  const without = c.pathways.filter((p) => !p.range).map((p) => p.label);
+  return (
+    `Ranges are shown for ${withRange.join(', ')}: the 5-95 % (very likely) range in brackets and shaded, and the 17-83 % (likely) ` +
+    'range shaded darker, across the sampled model parameters. They cover parameter uncertainty only; uncertainty in the pathway ' +
+    'itself and in the model structure comes on top.' +
+    (without.length > 0 ? ` ${without.join(', ')}: single central estimates, no range.` : '')
+  );
+}

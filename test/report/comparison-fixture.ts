@@ -1,0 +1,34 @@
+// A comparison of three synthetic pathways shared by the comparison writer tests: a steady rise,
+// a slowing one with an ensemble range, and a levelling one that is emission-driven.
+import { comparePathways, milestoneYears } from '../../src/metrics/index.js';
+
+export const years = Float64Array.from({ length: 251 }, (_, i) => 1850 + i);
+const steady = years.map((y) => (y < 1950 ? 0.002 * (y - 1850) : 0.2 + 0.022 * (y - 1950)));
+const delayed = years.map((y) => (y < 2020 ? steady[y - 1850] : steady[170] + 0.02 * (y - 2020) - 0.00012 * (y - 2020) ** 2));
+const swift = years.map((y) => (y < 2020 ? steady[y - 1850] : steady[170] + 0.6 * (1 - Math.exp(-(y - 2020) / 15))));
+const emissions = years.map((y) => (y < 2020 ? 40 : Math.max(-5, 40 - 1.5 * (y - 2020))));
+
+export const provenance = {
+  tool: 'warmcast',
+  version: '0.1.0',
+  created_utc: '2025-01-01T00:00:00.000Z',
+  inputs: [{ path: '/data/steady.csv', sha256: '0f'.repeat(32) }],
+  parameters: { ecs_k: 3, tcr_k: 1.8, co2_formula: 'ar6' },
+  seed: 42,
+};
+
+export function fixtureComparison() {
+  return comparePathways(
+    [
+      { label: 'steady', years, warmingK: steady },
+      {
+        label: 'delayed',
+        years,
+        warmingK: delayed,
+        range: { p05: delayed.map((v) => v * 0.7), p17: delayed.map((v) => v * 0.85), p83: delayed.map((v) => v * 1.15), p95: delayed.map((v) => v * 1.3) },
+      },
+      { label: 'swift', years, warmingK: swift, co2Gtco2: emissions },
+    ],
+    { milestoneYears: milestoneYears(2024, 2100), cumulativeFromYear: 2020 },
+  );
+}

@@ -1,0 +1,39 @@
+import { describe, expect, it } from 'vitest';
+import { comparisonJson } from '../../src/report/comparison-json.js';
+import { fixtureComparison, provenance, years } from './comparison-fixture.js';
+
+describe('comparisonJson', () => {
+  const c = fixtureComparison();
+  const text = comparisonJson(c, provenance);
+  const doc = JSON.parse(text);
+
+  it('comparisonJson carries the provenance unchanged, first', () => {
+    expect(doc.provenance).toEqual(provenance);
+    expect(Object.keys(doc)[0]).toBe('provenance');
+  });
+
+  it('comparisonJson numbers are the comparison\'s at full precision: milestones, peaks, crossings, annual series', () => {
+    c.pathways.forEach((p, k) => {
+      const j = doc.pathways[k];
+      expect(j.pathway).toBe(p.label);
+      expect(j.peak).toEqual({ year: p.peak.year, warming_k: p.peak.value, still_rising: p.stillRising });
+      expect(j.milestones.map((m: { warming_k: number }) => m.warming_k)).toEqual(p.milestones.map((m) => m.warmingK));
+      expect(j.milestones.map((m: { difference_k: number }) => m.difference_k)).toEqual(p.milestones.map((m) => m.differenceK));
+      expect(j.crossings.map((x: { year: number }) => x.year)).toEqual(p.crossings.map((x) => x.period!.year));
+      expect(j.annual.years).toEqual(Array.from(years));
+      expect(j.annual.warming_k).toEqual(Array.from(p.warmingK));
+    });
+    expect(doc.pathways[2].net_zero).toEqual({ year: 2047, cumulative_co2_gtco2: 553.5, from_year: 2020, to_year: 2046 });
+    expect(doc.pathways[0].net_zero).toBeUndefined();
+    expect(doc.pathways[1].annual.warming_p95_k).toEqual(Array.from(c.pathways[1].range!.p95));
+  });
+
+  it('comparisonJson writes NaN and "not crossed" as null, and each list of plain values on one line', () => {
+    const cc = { ...c, pathways: c.pathways.map((p) => ({ ...p, crossings: [{ thresholdK: 5, period: undefined }], milestones: [{ year: 2200, warmingK: NaN, differenceK: NaN }] })) };
+    const j = JSON.parse(comparisonJson(cc, {}));
+    expect(j.pathways[0].crossings[0].year).toBeNull();
+    expect(j.pathways[0].milestones[0].warming_k).toBeNull();
+    expect(text).toMatch(/"years": \[1850, 1851, /);
+    expect(text.endsWith('}\n')).toBe(true);
+  });
+});

@@ -1,0 +1,32 @@
+import Papa from 'papaparse';
+import { describe, expect, it } from 'vitest';
+import { formatCsv } from '../../src/io/format-csv.js';
+import { comparisonLongTable } from '../../src/report/comparison-long-table.js';
+import { fixtureComparison, years } from './comparison-fixture.js';
+
+describe('comparisonLongTable', () => {
+  const c = fixtureComparison();
+  const t = comparisonLongTable(c);
+
+  it('comparisonLongTable has one row per pathway and year with the tidy columns pathway, year, warming_k, difference_k, ...', () => {
+    expect(t.columns).toEqual(['pathway', 'year', 'warming_k', 'difference_k', 'warming_p05_k', 'warming_p17_k', 'warming_p83_k', 'warming_p95_k', 'co2_gtco2']);
+    expect(t.textColumns.pathway.length).toBe(3 * years.length);
+    expect(t.data.length).toBe(t.columns.length - 1);
+  });
+
+  it('comparisonLongTable written by io formatCsv reads back with papaparse to the same numbers (reference library)', () => {
+    const parsed = Papa.parse<Record<string, string>>(formatCsv(t), { header: true, skipEmptyLines: true }).data;
+    expect(parsed.length).toBe(3 * years.length);
+    c.pathways.forEach((p, k) => {
+      for (let i = 0; i < years.length; i += 37) {
+        const row = parsed[k * years.length + i];
+        expect(row.pathway).toBe(p.label);
+        expect(Number(row.year)).toBe(years[i]);
+        expect(Number(row.warming_k)).toBe(p.warmingK[i]);
+        expect(Number(row.difference_k)).toBe(p.warmingK[i] - c.pathways[0].warmingK[i]);
+        expect(row.warming_p05_k === '').toBe(!p.range);
+        expect(row.co2_gtco2 === '').toBe(!p.co2Gtco2);
+      }
+    });
+  });
+});

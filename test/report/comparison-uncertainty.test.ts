@@ -1,0 +1,13 @@
+import { describe, expect, it } from 'vitest';
+import { comparisonUncertainty } from '../../src/report/comparison-uncertainty.js';
+import { fixtureComparison } from './comparison-fixture.js';
+
+describe('comparisonUncertainty', () => {
+  it('comparisonUncertainty names the pathways with ranges and those without, and is undefined when none has one', () => {
+    const c = fixtureComparison();
+    const text = comparisonUncertainty(c)!;
+    expect(text).toMatch(/^Ranges are shown for delayed: the 5-95 % \(very likely\)/);
+    expect(text).toMatch(/steady, swift: single central estimates, no range\.$/);
+    expect(comparisonUncertainty({ ...c, pathways: c.pathways.filter((p) => !p.range) })).toBeUndefined();
+  });
+});

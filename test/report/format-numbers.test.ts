@@ -1,0 +1,12 @@
+import { describe, expect, it } from 'vitest';
+import { kelvin, signedKelvin } from '../../src/report/format-numbers.js';
+
+describe('kelvin and signedKelvin', () => {
+  it('kelvin prints fixed decimals, n/a for NaN, and never a negative zero', () => {
+    expect([kelvin(1.23456), kelvin(1.5, 1), kelvin(NaN), kelvin(-0.001), kelvin(-0.006)]).toEqual(['1.23', '1.5', 'n/a', '0.00', '-0.01']);
+  });
+
+  it('signedKelvin marks positive differences with +, leaves zero and negatives as they print', () => {
+    expect([signedKelvin(0.123), signedKelvin(-0.05), signedKelvin(0.001), signedKelvin(-0.001), signedKelvin(NaN)]).toEqual(['+0.12', '-0.05', '0.00', '0.00', 'n/a']);
+  });
+});
