@@ -1,3 +1,4 @@
+import { NumericalError } from '../errors.js';
 import { DEFAULT_TOLERANCES, integrateSteps, type OdeTolerances } from '../numerics/integrate-steps.js';
 import { twoBoxPropagator, propagateTwoBoxInto } from './exact-propagator.js';
 import { topOfAtmosphereImbalance, twoBoxDerivativesInto, type TwoBoxParams } from './two-box.js';
@@ -43,7 +44,8 @@ export function energyBalance(
     propagateTwoBoxInto(twoBoxPropagator(p), forcingWm2, surfaceK, deepK);
   } else {
     const dy = [0, 0];
-    evaluations = integrateSteps(
+    try {
+      evaluations = integrateSteps(
       (k, s, y) => {
         const f = forcingWm2[k] + s * (forcingWm2[k + 1] - forcingWm2[k]);
         twoBoxDerivativesInto(p, f, y[0], y[1], dy);
@@ -56,9 +58,27 @@ export function energyBalance(
         surfaceK[k + 1] = y[0];
         deepK[k + 1] = y[1];
       },
-    );
+      );
+    } catch (e) {
+      throw e instanceof NumericalError ? explainFailure(p, e) : e;
+    }
   }
   const imbalanceWm2 = new Float64Array(n);
   for (let i = 0; i < n; i++) imbalanceWm2[i] = topOfAtmosphereImbalance(p, forcingWm2[i], surfaceK[i], deepK[i]);
   return { surfaceK, deepK, imbalanceWm2, evaluations };
+}
+
+/**
+ * Adds the likely culprit to an integrator failure: the explicit odex steps must resolve the fastest
+ * time scale, about C / (lambda + epsilon gamma), so a tiny upper heat capacity or a huge exchange
+ * makes the system stiff. Names the parameter and suggests the exact propagator.
+ */
+function explainFailure(p: TwoBoxParams, e: NumericalError): NumericalError {
+  const fastYears = p.upperHeatCapacity / (p.feedbackWm2K + p.deepEfficacy * p.exchangeWm2K);
+  return new NumericalError(
+    `${e.message}. The fastest time scale is ${fastYears.toExponential(2)} yr (upper_heat_capacity ${p.upperHeatCapacity} W yr m-2 K-1 ` +
+      `over feedback_wm2k + deep_efficacy x exchange_wm2k = ${(p.feedbackWm2K + p.deepEfficacy * p.exchangeWm2K).toPrecision(4)} W m-2 K-1): ` +
+      'raise upper_heat_capacity, or use --method exact',
+    e.code,
+  );
 }
