@@ -1,0 +1,52 @@
+import { mkdtempSync, readFileSync, readdirSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import Papa from 'papaparse';
+import { describe, expect, it } from 'vitest';
+import { captureIo } from '../../src/cli/cli-io.js';
+import { main } from '../../src/cli/main.js';
+
+const tmp = () => mkdtempSync(join(tmpdir(), 'warmcast-compare-'));
+
+describe('warmcast compare', () => {
+  it('prints milestones, differences from the reference, crossings and a legend that names each marker', async () => {
+    const io = captureIo();
+    expect(await main(['compare', 'steady', 'delayed', 'swift-emissions', '--years', '2030,2050,2100'], io)).toBe(0);
+    expect(io.out).toMatch(/Delayed action vs Steady growth/);
+    expect(io.out).toMatch(/Reaches 1\.5 K/);
+    expect(io.out).toMatch(/CO2 to net zero/);
+    expect(io.out).toMatch(/o─ Steady growth/);
+  });
+
+  it('writes a long CSV whose reference differences are zero and whose other differences equal warming minus the reference', async () => {
+    const dir = tmp();
+    const io = captureIo();
+    expect(await main(['compare', 'steady', 'swift', '--out', join(dir, 'c.csv')], io)).toBe(0);
+    expect(readdirSync(dir).sort()).toEqual(['c.csv', 'c.meta.json']);
+    const rows = Papa.parse<Record<string, string>>(readFileSync(join(dir, 'c.csv'), 'utf8').trim(), { header: true }).data;
+    const ref = new Map<number, number>();
+    for (const r of rows.filter((r) => r.pathway === 'Steady growth')) {
+      expect(Number(r.difference_k)).toBe(0);
+      ref.set(Number(r.year), Number(r.warming_k));
+    }
+    for (const r of rows.filter((r) => r.pathway === 'Swift transition')) {
+      expect(Number(r.difference_k)).toBe(Number(r.warming_k) - ref.get(Number(r.year))!);
+    }
+  });
+
+  it('writes Markdown, JSON, SVG and HTML, each with provenance or a title, and refuses an unknown extension', async () => {
+    const dir = tmp();
+    for (const ext of ['md', 'json', 'svg', 'html']) {
+      expect(await main(['compare', 'steady', 'swift', '--out', join(dir, `c.${ext}`)], captureIo()), ext).toBe(0);
+    }
+    expect(readFileSync(join(dir, 'c.md'), 'utf8')).toMatch(/sha256|SHA-256/i);
+    expect(JSON.parse(readFileSync(join(dir, 'c.json'), 'utf8')).provenance.tool).toBe('warmcast');
+    expect(readFileSync(join(dir, 'c.svg'), 'utf8')).toMatch(/^<svg[\s\S]*<\/svg>\s*$/);
+    const html = readFileSync(join(dir, 'c.html'), 'utf8');
+    expect(html).toMatch(/<svg/);
+    expect(html).not.toMatch(/(src|href)="https?:/);
+    const io = captureIo();
+    expect(await main(['compare', 'steady', 'swift', '--out', join(dir, 'c.xlsx')], io)).toBe(2);
+    expect(io.err).toMatch(/extension must be one of/);
+  });
+});
