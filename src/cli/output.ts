@@ -1,10 +1,9 @@
 import { extname } from 'node:path';
-import type { ClimateParams } from '../climate/params.js';
 import { ConfigError } from '../errors.js';
 import { formatCsv, formatJson, formatMarkdown, writeFileAtomic, type Table } from '../io/index.js';
 import type { Projection } from '../projection/index.js';
 import type { CliIo } from './cli-io.js';
-import { buildProvenance, type Provenance } from './provenance.js';
+import { buildProvenance, type Provenance, type ProvenanceInput } from './provenance.js';
 
 /** A projection restricted to years from..to (inclusive); the run itself is unchanged. */
 export function clipProjection(p: Projection, from?: number, to?: number): Projection {
@@ -30,16 +29,8 @@ export function projectionTable(p: Projection): Table {
 /** Output formats by extension; each renders the whole file from the provenance record. */
 export type Renderers = Partial<Record<'.csv' | '.json' | '.md' | '.svg' | '.html', (provenance: Provenance) => string>>;
 
-/** What {@link writeOutput} needs for provenance and safety. */
-export interface OutputContext {
-  /** Absolute paths of every input file (hashed into provenance; never overwritten). */
-  inputs: string[];
-  params: ClimateParams;
-  baseline: readonly [number, number];
-  notes: string[];
-  seed?: number;
-  /** Caution text for the provenance (default: the single-run cautions). */
-  caution?: string;
+/** What {@link writeOutput} needs: the provenance inputs and where to write stdout. */
+export interface OutputContext extends ProvenanceInput {
   io: CliIo;
 }
 

@@ -33,15 +33,20 @@ export function sha256File(path: string): string {
   return createHash('sha256').update(readFileSync(path)).digest('hex');
 }
 
-/** Builds the provenance record for files read (`inputs`, absolute paths) and the parameters used. */
-export function buildProvenance(args: {
+/** What a provenance record is built from. */
+export interface ProvenanceInput {
+  /** Absolute paths of every input file (hashed; never overwritten by outputs). */
   inputs: string[];
   params: ClimateParams;
   baseline: readonly [number, number];
   notes: string[];
   seed?: number;
+  /** Caution text (default: the single-run cautions). */
   caution?: string;
-}): Provenance {
+}
+
+/** Builds the provenance record for files read (`inputs`, absolute paths) and the parameters used. */
+export function buildProvenance(args: ProvenanceInput): Provenance {
   return {
     tool: 'warmcast',
     version: packageVersion(),
