@@ -3,6 +3,7 @@ import { WarmcastError } from '../errors.js';
 import { calibrateCommand } from './calibrate.js';
 import { checkCommand } from './check.js';
 import { compareCommand } from './compare.js';
+import { ensembleCommand, mergeCommand } from './ensemble.js';
 import type { CliIo } from './cli-io.js';
 import { pathwaysCommand } from './pathways.js';
 import { runCommand } from './run.js';
@@ -25,8 +26,8 @@ export async function main(argv: string[], io: CliIo): Promise<number> {
     .version(packageVersion(), '-V, --version')
     .option('--debug', 'show stack traces for errors')
     .showHelpAfterError('(add --help for usage)')
-    .addHelpText('after', '\nExamples:\n  warmcast run                      # the default bundled pathway\n  warmcast run swift --out swift.csv\n  warmcast compare steady delayed swift --out report.html\n  warmcast pathways\n');
-  for (const make of [runCommand, compareCommand, calibrateCommand, checkCommand, pathwaysCommand]) {
+    .addHelpText('after', '\nExamples:\n  warmcast run                      # the default bundled pathway\n  warmcast run swift --out swift.csv\n  warmcast compare steady delayed swift --out report.html\n  warmcast ensemble swift --members 2000 --seed 7 --out swift-ens.csv\n  warmcast pathways\n');
+  for (const make of [runCommand, compareCommand, ensembleCommand, mergeCommand, calibrateCommand, checkCommand, pathwaysCommand]) {
     program.addCommand(make(io));
   }
   const configure = (cmd: Command) => {

@@ -34,7 +34,9 @@ export function printProjectionSummary(p: Projection, out: { write: (s: string) 
   if (p.provenance.spliceYear !== undefined) lines.push(`  history spliced in: years before ${p.provenance.spliceYear} come from the bundled history`);
   lines.push('');
 
-  const start = p.provenance.spliceYear !== undefined && p.provenance.spliceYear >= first ? p.provenance.spliceYear : first;
+  const splice = p.provenance.spliceYear;
+  // The table starts at the splice year only when that year is shown: `--to` may end the report before it.
+  const start = splice !== undefined && splice >= first && splice <= last ? splice : first;
   const step = last - start > 200 ? 25 : 10;
   const rows: number[] = [];
   for (let y = Math.ceil(start / step) * step; y <= last; y += step) rows.push(y);

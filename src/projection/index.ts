@@ -1,2 +1,3 @@
 export { PROJECTION_COLUMNS, projectPathway, rebase } from './project-pathway.js';
 export type { Projection, ProjectionOptions } from './project-pathway.js';
+export { ensembleInput } from './ensemble-input.js';

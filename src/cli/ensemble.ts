@@ -1,0 +1,203 @@
+import { Command, InvalidArgumentError } from 'commander';
+import { readFileSync } from 'node:fs';
+import { resolve } from 'node:path';
+import { ConfigError, InputError } from '../errors.js';
+import { ensembleTable, mergeShards, runEnsemble, shardFromJson, shardToJson, summarizeEnsemble, type EnsembleResult } from '../ensemble/index.js';
+import { formatCsv, type Table } from '../io/index.js';
+import { readPathway } from '../io/load-pathway.js';
+import { ensembleInput } from '../projection/index.js';
+import { standardCautions, terminalChart } from '../report/index.js';
+import type { CliIo } from './cli-io.js';
+import { addModelOptions, numberListOption, numberOption, resolveModelParams, yearRangeOption, type ModelOptions } from './options.js';
+import { tableRenderers, writeOutput } from './output.js';
+import { progressBar } from './progress.js';
+
+interface EnsembleCliOptions extends ModelOptions {
+  members: number;
+  seed: number;
+  thresholds: number[];
+  baseline: [number, number];
+  shard?: { index: number; count: number };
+  workers?: number;
+  out?: string;
+  splice: boolean;
+  chart: boolean;
+}
+
+/** The uncertainty sentence of an ensemble's outputs. */
+function uncertaintyText(r: EnsembleResult): string {
+  return (
+    `Ranges are the 5-95 % and 17-83 % spread of ${r.memberCount} members whose ECS, TCR, 2xCO2 forcing and aerosol forcing ` +
+    'were drawn to match the IPCC AR6 assessed ranges; they do not include uncertainty in the pathway, in the model structure or, for emission pathways, in the carbon cycle.'
+  );
+}
+
+function wholeNumber(name: string, min: number) {
+  return (text: string): number => {
+    const v = Number(text);
+    if (!Number.isInteger(v) || v < min) throw new InvalidArgumentError(`${name} must be a whole number of at least ${min}, got "${text}"`);
+    return v;
+  };
+}
+
+function shardOption(text: string): { index: number; count: number } {
+  const m = /^(\d+)\/(\d+)$/.exec(text.trim());
+  if (!m || Number(m[1]) < 1 || Number(m[1]) > Number(m[2])) throw new InvalidArgumentError(`must be K/N with 1 <= K <= N, such as 3/100; got "${text}"`);
+  return { index: Number(m[1]), count: Number(m[2]) };
+}
+
+/** `warmcast ensemble <pathway>`: seeded parameter ensemble, percentiles and exceedance probabilities. */
+export function ensembleCommand(io: CliIo): Command {
+  const cmd = new Command('ensemble')
+    .description('run a seeded parameter ensemble (AR6-matched ECS, TCR, 2xCO2 and aerosol forcing): warming percentiles and threshold probabilities')
+    .argument('<pathway>', 'pathway CSV file or bundled name')
+    .option('-n, --members <count>', 'ensemble members', wholeNumber('--members', 1), 1000)
+    .option('--seed <integer>', 'random seed (same seed, same output on any machine and any number of workers)', wholeNumber('--seed', 0), 1)
+    .option('--thresholds <list>', 'warming levels in K for exceedance probabilities', numberListOption('--thresholds'), [1.5, 2, 3])
+    .option('--baseline <years>', 'baseline period for warming', yearRangeOption, [1850, 1900])
+    .option('--shard <K/N>', 'run only the K-th of N equal slices of the members and write them as a shard file (.json) for `warmcast merge`', shardOption)
+    .option('--workers <count>', 'threads (default: chosen by run size; the output does not depend on it)', wholeNumber('--workers', 1))
+    .option('-o, --out <file>', 'write the yearly percentiles and probabilities: .csv (+ .meta.json), .json, .md; with --shard a .json shard file')
+    .option('--no-splice', 'do not splice a pathway that starts late onto the bundled history')
+    .option('--no-chart', 'omit the terminal chart');
+  addModelOptions(cmd)
+    .addHelpText(
+      'after',
+      '\nExamples:\n  warmcast ensemble swift --members 2000 --seed 7 --out swift-ens.csv\n' +
+        '  warmcast ensemble swift --members 1000000 --seed 7 --shard 3/100 --out shard-3.json   # one task of an array job\n' +
+        '  warmcast merge shard-*.json --out swift-ens.csv\n',
+    )
+    .action(async (arg: string, opts: EnsembleCliOptions) => {
+      if (opts.seed >= 2 ** 32) throw new ConfigError('--seed must be below 2^32', 'seed');
+      const { params, paramsFile } = resolveModelParams(opts, io);
+      const read = readPathway(arg, { splice: opts.splice });
+      const { input, notes } = ensembleInput(read.pathway, params);
+      const inputs = [read.parsed.file, ...(paramsFile ? [paramsFile] : [])];
+      const result = await runEnsemble(input, {
+        members: opts.members,
+        seed: opts.seed,
+        thresholds: opts.thresholds,
+        baseline: opts.baseline,
+        shard: opts.shard,
+        workers: opts.workers,
+        onProgress: progressBar(io, 'members', 20_000),
+      });
+      const allNotes = [...read.pathway.provenance.notes, ...notes, ...result.notes];
+      if (opts.shard) {
+        if (!opts.out || !opts.out.toLowerCase().endsWith('.json')) throw new ConfigError('--shard writes a shard file: give --out NAME.json', 'out');
+        writeOutput(resolve(io.cwd, opts.out), { '.json': () => shardToJson(result.members) }, { inputs, params, baseline: opts.baseline, notes: allNotes, seed: opts.seed, io });
+        io.stderr(`wrote shard ${opts.shard.index}/${opts.shard.count} (${result.memberCount} members) to ${opts.out}; combine all shards with \`warmcast merge\`\n`);
+        return;
+      }
+      emitEnsemble(result, read.pathway.name, { out: opts.out, chart: opts.chart, inputs, params, notes: allNotes, io });
+    });
+  return cmd;
+}
+
+/** `warmcast merge SHARD...`: combine shard files into exactly what one whole run gives. */
+export function mergeCommand(io: CliIo): Command {
+  const cmd = new Command('merge')
+    .description('combine the shard files of one ensemble (from `warmcast ensemble --shard K/N`) into its full statistics')
+    .argument('<shard...>', 'shard files (.json), all K from 1 to N of one ensemble')
+    .option('-o, --out <file>', 'write the yearly percentiles and probabilities: .csv (+ .meta.json), .json, .md')
+    .option('--no-chart', 'omit the terminal chart');
+  addModelOptions(cmd)
+    .addHelpText('after', '\nExample:\n  warmcast merge shard-*.json --out swift-ens.csv\n')
+    .action((files: string[], opts: ModelOptions & { out?: string; chart: boolean }) => {
+      const shards = files.map((file) => {
+        let text: string;
+        try {
+          text = readFileSync(resolve(io.cwd, file), 'utf8');
+        } catch (e) {
+          throw new InputError([{ file, code: 'input.unreadable', message: `shard file cannot be read (${(e as NodeJS.ErrnoException).code})`, expected: 'a shard file written by `warmcast ensemble --shard K/N`' }]);
+        }
+        return { file, members: shardFromJson(text, file) };
+      });
+      const result = summarizeEnsemble(mergeShards(shards));
+      const { params } = resolveModelParams(opts, io);
+      emitEnsemble(result, 'merged ensemble', {
+        out: opts.out,
+        chart: opts.chart,
+        inputs: files.map((f) => resolve(io.cwd, f)),
+        params,
+        notes: result.notes,
+        io,
+      });
+    });
+  return cmd;
+}
+
+/** Writes an ensemble's table (if asked) and prints its summary and chart. */
+function emitEnsemble(
+  result: EnsembleResult,
+  name: string,
+  ctx: { out?: string; chart: boolean; inputs: string[]; params: ReturnType<typeof resolveModelParams>['params']; notes: string[]; io: CliIo },
+): void {
+  const { io } = ctx;
+  const t = ensembleTable(result);
+  const table: Table = { columns: t.columns, data: t.columns.map((c) => t.values[c]) };
+  const caution = [standardCautions()[0], uncertaintyText(result), standardCautions()[2]].join(' ');
+  if (ctx.out !== undefined) {
+    const written = writeOutput(ctx.out === '-' ? '-' : resolve(io.cwd, ctx.out), { ...tableRenderers(table), '.csv': () => formatCsv(table) }, {
+      inputs: ctx.inputs,
+      params: ctx.params,
+      baseline: result.config.baseline,
+      notes: ctx.notes,
+      seed: result.config.seed,
+      caution,
+      io,
+    });
+    for (const w of written) io.stderr(`wrote ${w}\n`);
+  }
+  const write = ctx.out === '-' ? io.stderr : io.stdout;
+  write(ensembleSummary(result, name));
+  if (ctx.chart) {
+    const { years, percentiles: p } = result;
+    const i0 = Math.max(0, Math.min(1850, years[years.length - 1]) - years[0]);
+    const part = (a: Float64Array) => a.subarray(i0);
+    write(
+      '\n' +
+        terminalChart(
+          [
+            { label: '95th percentile', years: part(years), values: part(p.p95) },
+            { label: '83rd', years: part(years), values: part(p.p83) },
+            { label: 'median', years: part(years), values: part(p.p50) },
+            { label: '17th', years: part(years), values: part(p.p17) },
+            { label: '5th percentile', years: part(years), values: part(p.p05) },
+          ],
+          { title: `Warming, ${name}: median with 5-95 % and 17-83 % ranges (K relative to ${result.config.baseline.join('-')})`, yLabel: 'K', height: 14, color: ctx.out === '-' ? io.stderrIsTTY : io.stdoutIsTTY, thresholds: [1.5, 2] },
+        ) +
+        '\n',
+    );
+  }
+  write('\n' + [standardCautions()[0], uncertaintyText(result), standardCautions()[2]].map((c) => `  caution: ${c}`).join('\n') + '\n\n');
+}
+
+/** The headline lines of an ensemble: members, seed, redraws, sampled ranges, crossing probabilities. */
+function ensembleSummary(r: EnsembleResult, name: string): string {
+  const lines: string[] = [];
+  const c = r.config;
+  const pct = (v: number | null) => (v === null ? 'n/a (run too short)' : `${(100 * v).toFixed(0)} %`);
+  lines.push(`${name}: ${r.memberCount} members, seed ${c.seed}; ${r.redraws} unphysical draws redrawn; warming relative to ${c.baseline.join('-')}`);
+  const q = (k: 'ecsK' | 'tcrK') => r.parameters[k as keyof typeof r.parameters];
+  const ecs = q('ecsK');
+  const tcr = q('tcrK');
+  if (ecs && tcr) {
+    lines.push(
+      `  sampled ECS ${ecs.p50.toFixed(2)} K [${ecs.p05.toFixed(2)}-${ecs.p95.toFixed(2)}], TCR ${tcr.p50.toFixed(2)} K [${tcr.p05.toFixed(2)}-${tcr.p95.toFixed(2)}] (median [5-95 %]); ECS-TCR correlation ${r.ecsTcrCorrelation.toFixed(2)}`,
+    );
+  }
+  const { years, percentiles: p } = r;
+  for (const y of [2030, 2050, 2100]) {
+    const i = y - years[0];
+    if (i >= 0 && i < years.length) {
+      lines.push(`  ${y}: median ${p.p50[i].toFixed(2)} K, likely (17-83 %) ${p.p17[i].toFixed(2)}-${p.p83[i].toFixed(2)} K, very likely (5-95 %) ${p.p05[i].toFixed(2)}-${p.p95[i].toFixed(2)} K`);
+    }
+  }
+  for (const x of r.crossings) {
+    const by = x.byMilestone.map((m) => `by ${m.year} ${pct(m.probability)}`).join(', ');
+    const median = x.medianYear === null ? `fewer than half of the members cross it by ${years[years.length - 1]}` : `median crossing year ${x.medianYear}`;
+    lines.push(`  ${x.thresholdK} K (20-year mean): probability of crossing ${by}; ${median}`);
+  }
+  return lines.join('\n') + '\n';
+}

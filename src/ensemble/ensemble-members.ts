@@ -1,0 +1,53 @@
+import type { Co2Formula } from '../forcing/co2.js';
+import type { MemberParameter } from './sample-members.js';
+import type { EnsembleSampling } from './sampling.js';
+
+/**
+ * What defines an ensemble, apart from which members a piece of it holds. Two pieces merge only
+ * when their configurations are identical.
+ */
+export interface EnsembleConfig {
+  /** How member streams and draws are made (MEMBER_STREAM_SCHEME and the draw layout). */
+  scheme: string;
+  /** Random seed, integer in [0, 2^32). */
+  seed: number;
+  /** Members of the whole ensemble (all shards together). */
+  membersTotal: number;
+  /** First year of the annual grid. */
+  firstYear: number;
+  /** Number of years. */
+  yearCount: number;
+  /** Baseline of the warming values, inclusive years. */
+  baseline: [number, number];
+  /** Warming levels for exceedance probabilities, K. */
+  thresholds: number[];
+  /** Years at which crossing probabilities are reported. */
+  milestones: number[];
+  /** CO2 formula of the input forcing. */
+  co2Formula: Co2Formula;
+  /** Sampling of the parameters. */
+  sampling: EnsembleSampling;
+  /** Checksum of the input forcing series (FNV-1a over their bytes), to refuse merging different pathways. */
+  inputChecksum: string;
+}
+
+/**
+ * The raw members of an ensemble or of one shard of it: every member's yearly warming and
+ * parameters. Everything an ensemble reports is computed from this, so shards holding it merge into
+ * exactly what one run gives.
+ */
+export interface EnsembleMembers {
+  config: EnsembleConfig;
+  /** Which shard this is (1-based index of `count`); undefined for a whole ensemble. */
+  shard?: { index: number; count: number };
+  /** Global index of the first member held. */
+  memberStart: number;
+  /** Members held. */
+  memberCount: number;
+  /** Warming relative to the baseline mean, K, year-major: year k of member memberStart + r at k * memberCount + r. */
+  warmingK: Float64Array;
+  /** Each member's parameters. */
+  parameters: Record<MemberParameter, Float64Array>;
+  /** Unphysical draws discarded while drawing these members. */
+  redraws: number;
+}

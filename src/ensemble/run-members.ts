@@ -1,0 +1,121 @@
+import { propagateTwoBoxInto } from '../climate/exact-propagator.js';
+import type { TwoBoxParams } from '../climate/two-box.js';
+import type { Co2Formula } from '../forcing/co2.js';
+import { drawMember, emptyDraw, memberSampler, storeDraw, type MemberParameter } from './sample-members.js';
+import { memberGenerators } from './member-generators.js';
+import { emptyTwoBoxPropagator, modalTwoBoxPropagatorInto } from './modal-propagator.js';
+import type { EnsembleSampling } from './sampling.js';
+
+/**
+ * Everything a member run needs, as plain data (it is sent to worker threads as is).
+ *
+ * Concentration-driven runs: a member's forcing is its CO2 multiplier times the CO2 agent, its
+ * aerosol multiplier times the aerosol agent, plus the sum of the other agents, all precomputed once
+ * per pathway. Emission-driven runs (the carbon cycle of src/carbon/) hook in here: the task would
+ * carry the emissions and the carbon-cycle settings, {@link drawMember} would draw the member's
+ * carbon-cycle parameters after its climate ones (so the climate draws of member i stay the same),
+ * and {@link runMembersInto} would integrate the member's CO2 concentration before its forcing.
+ */
+export interface MemberTask {
+  seed: number;
+  sampling: EnsembleSampling;
+  /** Formula the CO2 agent was computed with, at its own 2xCO2 forcing. */
+  co2Formula: Co2Formula;
+  /** CO2 ERF at each year, W m-2 (unscaled). */
+  co2Wm2: Float64Array;
+  /** Aerosol ERF at each year, W m-2 (unscaled). */
+  aerosolWm2: Float64Array;
+  /** Sum of every other agent's ERF at each year, W m-2. */
+  otherWm2: Float64Array;
+  /** Indices of the first and last baseline years (inclusive). */
+  baselineFrom: number;
+  baselineTo: number;
+}
+
+/**
+ * Where member results go: a block of `memberCount` members starting at member `blockStart`, stored
+ * year-major (all members of year 0, then of year 1, ...), the layout per-year statistics read.
+ */
+export interface MemberBlock {
+  /** Global index of the block's first member. */
+  blockStart: number;
+  /** Members in the block (the length of each year's row). */
+  memberCount: number;
+  /** Warming relative to the baseline mean, K: year k of member blockStart + r at k * memberCount + r. */
+  warmingK: Float64Array;
+  /** Parameters of each member, indexed by r. */
+  parameters: Record<MemberParameter, Float64Array>;
+}
+
+/** How often (in members) a member run reports progress. */
+export const PROGRESS_EVERY = 250;
+
+/** Members run before their rows are copied into the year-major block together (282 kB for 551 years). */
+const STAGE_MEMBERS = 64;
+
+/**
+ * Runs members [from, to): draws each member's parameters from its own stream (so the result of
+ * member i depends only on the seed and i), builds its exact one-year propagator (the closed-form
+ * modal one, equal to `twoBoxPropagator` to rounding), assembles its forcing and steps the two-box
+ * model from equilibrium with `propagateTwoBoxInto`, then stores the surface warming relative to the
+ * member's own baseline mean.
+ *
+ * @param task the shared inputs
+ * @param from first member (global index)
+ * @param to end member, exclusive
+ * @param block receives members from..to-1 (which must lie within it)
+ * @param onProgress called with the number of members done so far in this call
+ * @returns unphysical draws discarded in total
+ */
+export function runMembersInto(task: MemberTask, from: number, to: number, block: MemberBlock, onProgress?: (done: number) => void): number {
+  const n = task.co2Wm2.length;
+  const { co2Wm2, aerosolWm2, otherWm2, baselineFrom, baselineTo } = task;
+  const { upperHeatCapacity, deepHeatCapacity, deepEfficacy } = task.sampling;
+  const sampler = memberSampler(task.sampling, task.co2Formula);
+  const next = memberGenerators(task.seed, from);
+  const draw = emptyDraw();
+  const forcing = new Float64Array(n);
+  const deep = new Float64Array(n);
+  // Member-major staging rows, copied year by year into the block every STAGE_MEMBERS members, so
+  // that writes to the large year-major block are contiguous runs.
+  const stage = new Float64Array(STAGE_MEMBERS * n);
+  const baselineYears = baselineTo - baselineFrom + 1;
+  const params: TwoBoxParams = { upperHeatCapacity, deepHeatCapacity, feedbackWm2K: NaN, exchangeWm2K: NaN, deepEfficacy };
+  const prop = emptyTwoBoxPropagator();
+  let redraws = 0;
+  let staged = 0;
+  for (let i = from; i < to; i++) {
+    redraws += drawMember(next(), sampler, draw);
+    storeDraw(block.parameters, i - block.blockStart, draw);
+    params.feedbackWm2K = draw.feedbackWm2K;
+    params.exchangeWm2K = draw.exchangeWm2K;
+    modalTwoBoxPropagatorInto(params, prop);
+    const co2Scale = draw.forcing2xScale;
+    const aerosolScale = draw.aerosolScale;
+    for (let k = 0; k < n; k++) forcing[k] = co2Scale * co2Wm2[k] + aerosolScale * aerosolWm2[k] + otherWm2[k];
+    const surface = stage.subarray(staged * n, (staged + 1) * n);
+    propagateTwoBoxInto(prop, forcing, surface, deep);
+    // The baseline mean as `rebase` in src/projection computes it: summed in year order.
+    let sum = 0;
+    for (let k = baselineFrom; k <= baselineTo; k++) sum += surface[k];
+    const mean = sum / baselineYears;
+    for (let k = 0; k < n; k++) surface[k] -= mean;
+    staged++;
+    if (staged === STAGE_MEMBERS || i + 1 === to) {
+      flushStage(stage, staged, n, block, i + 1 - staged - block.blockStart);
+      staged = 0;
+    }
+    if (onProgress && ((i - from + 1) % PROGRESS_EVERY === 0 || i + 1 === to)) onProgress(i - from + 1);
+  }
+  return redraws;
+}
+
+/** Copies `count` staged member rows into the block's year-major layout from member column `column`. */
+function flushStage(stage: Float64Array, count: number, n: number, block: MemberBlock, column: number): void {
+  const w = block.warmingK;
+  const stride = block.memberCount;
+  for (let k = 0; k < n; k++) {
+    const base = k * stride + column;
+    for (let j = 0; j < count; j++) w[base + j] = stage[j * n + k];
+  }
+}

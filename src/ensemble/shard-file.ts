@@ -1,0 +1,202 @@
+import { InputError, type InputProblem } from '../errors.js';
+import type { EnsembleConfig, EnsembleMembers } from './ensemble-members.js';
+import type { AssessedRange } from './assessed-range.js';
+import { MEMBER_PARAMETERS, MEMBER_PARAMETER_KEYS, type MemberParameter } from './sample-members.js';
+import type { EnsembleSampling } from './sampling.js';
+
+/** The `format` field of a shard file. */
+export const SHARD_FORMAT = 'warmcast-ensemble-shard';
+/** Version of the shard layout. */
+export const SHARD_VERSION = 1;
+
+/** JSON keys of the sampling description. */
+const SAMPLING_KEYS = {
+  ecsK: 'ecs_k',
+  tcrK: 'tcr_k',
+  forcing2xScale: 'forcing_2x_scale',
+  aerosolScale: 'aerosol_scale',
+  ecsTcrCorrelation: 'ecs_tcr_correlation',
+  upperHeatCapacity: 'upper_heat_capacity',
+  deepHeatCapacity: 'deep_heat_capacity',
+  deepEfficacy: 'deep_efficacy',
+} as const satisfies Record<keyof EnsembleSampling, string>;
+const RANGE_FIELDS = ['ecsK', 'tcrK', 'forcing2xScale', 'aerosolScale'] as const;
+const PERCENTILE_FIELDS = ['p05', 'p17', 'p50', 'p83', 'p95'] as const;
+
+/**
+ * Bytes of a shard file: every member's yearly warming and its six parameters as little-endian
+ * Float64 in base64 (4/3 of 8 bytes per value), plus under 2 kB of description.
+ * @example shardFileBytes(10_000, 551) // ≈ 59.4 MB
+ */
+export function shardFileBytes(members: number, years: number): number {
+  return Math.ceil(((members * (years + MEMBER_PARAMETERS.length) * 8) / 3) * 4) + 2000;
+}
+
+/**
+ * Writes members (a shard, or a whole ensemble) as the JSON text of a shard file. The values are
+ * stored exactly (Float64 bit patterns in base64), so merging shard files gives bit for bit what one
+ * run gives; the size is given by {@link shardFileBytes} (about 5.9 kB per member for 1750-2300).
+ *
+ * @param members from runEnsemble(...).members
+ * @returns JSON text
+ * @example writeFile('shard-3.json', shardToJson(result.members)) // in src/cli
+ */
+export function shardToJson(members: EnsembleMembers): string {
+  const c = members.config;
+  const sampling = Object.fromEntries(Object.entries(SAMPLING_KEYS).map(([field, key]) => [key, c.sampling[field as keyof EnsembleSampling]]));
+  return JSON.stringify({
+    format: SHARD_FORMAT,
+    version: SHARD_VERSION,
+    note: 'Raw members of a warmcast ensemble; combine all shards of one ensemble with `warmcast merge`.',
+    config: {
+      scheme: c.scheme,
+      seed: c.seed,
+      members_total: c.membersTotal,
+      first_year: c.firstYear,
+      year_count: c.yearCount,
+      baseline: c.baseline,
+      thresholds: c.thresholds,
+      milestones: c.milestones,
+      co2_formula: c.co2Formula,
+      sampling,
+      input_checksum: c.inputChecksum,
+    },
+    shard: members.shard ?? null,
+    member_start: members.memberStart,
+    member_count: members.memberCount,
+    redraws: members.redraws,
+    encoding: 'float64 little-endian, base64; warming_k year-major (year k of member member_start + r at k * member_count + r)',
+    warming_k: float64ToBase64(members.warmingK),
+    parameters: Object.fromEntries(MEMBER_PARAMETERS.map((name) => [MEMBER_PARAMETER_KEYS[name], float64ToBase64(members.parameters[name])])),
+  });
+}
+
+/**
+ * Reads the JSON text of a shard file back into members, checking its structure.
+ *
+ * @param text file content
+ * @param file the file's name, for messages
+ * @throws InputError (exit 2) listing what is wrong: not JSON, not a shard file, a missing or
+ *   malformed field, or data of the wrong length
+ */
+export function shardFromJson(text: string, file: string): EnsembleMembers {
+  const problems: InputProblem[] = [];
+  const problem = (field: string, message: string, expected?: string) =>
+    problems.push({ file, column: field, code: 'input.bad-shard', message, ...(expected ? { expected } : {}) });
+  let doc: Record<string, unknown>;
+  try {
+    doc = JSON.parse(text) as Record<string, unknown>;
+  } catch (e) {
+    throw new InputError([{ file, code: 'input.bad-shard', message: `must be a JSON shard file (${(e as Error).message})` }]);
+  }
+  if (doc === null || typeof doc !== 'object' || doc.format !== SHARD_FORMAT) {
+    throw new InputError([{ file, code: 'input.bad-shard', message: `must be a warmcast ensemble shard file (format "${SHARD_FORMAT}")` }]);
+  }
+  if (doc.version !== SHARD_VERSION) {
+    throw new InputError([{ file, code: 'input.bad-shard', message: `must be shard format version ${SHARD_VERSION}, got ${JSON.stringify(doc.version)}` }]);
+  }
+  const cfg = (isObject(doc.config) ? doc.config : {}) as Record<string, unknown>;
+  if (!isObject(doc.config)) problem('config', 'must be an object');
+  const int = (value: unknown, field: string, min = 0): number => {
+    if (typeof value === 'number' && Number.isInteger(value) && value >= min) return value;
+    problem(field, `must be a whole number of at least ${min}`);
+    return NaN;
+  };
+  const numbers = (value: unknown, field: string): number[] => {
+    if (Array.isArray(value) && value.every((v) => typeof v === 'number' && Number.isFinite(v))) return value as number[];
+    problem(field, 'must be a list of numbers');
+    return [];
+  };
+  const seed = int(cfg.seed, 'config.seed');
+  const membersTotal = int(cfg.members_total, 'config.members_total', 1);
+  const firstYear = int(cfg.first_year, 'config.first_year');
+  const yearCount = int(cfg.year_count, 'config.year_count', 1);
+  const baseline = numbers(cfg.baseline, 'config.baseline');
+  if (baseline.length !== 2) problem('config.baseline', 'must be two years [from, to]');
+  const thresholds = numbers(cfg.thresholds, 'config.thresholds');
+  const milestones = numbers(cfg.milestones, 'config.milestones');
+  if (cfg.co2_formula !== 'ar6' && cfg.co2_formula !== 'log') problem('config.co2_formula', 'must be "ar6" or "log"');
+  if (typeof cfg.scheme !== 'string') problem('config.scheme', 'must be a string');
+  if (typeof cfg.input_checksum !== 'string') problem('config.input_checksum', 'must be a string');
+  const sampling = readSampling(cfg.sampling, problem);
+
+  let shard: { index: number; count: number } | undefined;
+  if (doc.shard !== null) {
+    const s = (isObject(doc.shard) ? doc.shard : {}) as Record<string, unknown>;
+    shard = { index: int(s.index, 'shard.index', 1), count: int(s.count, 'shard.count', 1) };
+  }
+  const memberStart = int(doc.member_start, 'member_start');
+  const memberCount = int(doc.member_count, 'member_count', 1);
+  const redraws = int(doc.redraws, 'redraws');
+  const warmingK = base64ToFloat64(doc.warming_k, memberCount * yearCount, 'warming_k', problem);
+  const stored = (isObject(doc.parameters) ? doc.parameters : {}) as Record<string, unknown>;
+  const parameters = Object.fromEntries(
+    MEMBER_PARAMETERS.map((name) => [name, base64ToFloat64(stored[MEMBER_PARAMETER_KEYS[name]], memberCount, `parameters.${MEMBER_PARAMETER_KEYS[name]}`, problem)]),
+  ) as Record<MemberParameter, Float64Array>;
+  if (problems.length > 0) throw new InputError(problems);
+
+  const config: EnsembleConfig = {
+    scheme: cfg.scheme as string,
+    seed,
+    membersTotal,
+    firstYear,
+    yearCount,
+    baseline: [baseline[0], baseline[1]],
+    thresholds,
+    milestones,
+    co2Formula: cfg.co2_formula as EnsembleConfig['co2Formula'],
+    sampling: sampling!,
+    inputChecksum: cfg.input_checksum as string,
+  };
+  return { config, shard, memberStart, memberCount, warmingK, parameters, redraws };
+}
+
+function readSampling(value: unknown, problem: (field: string, message: string) => void): EnsembleSampling | undefined {
+  if (!isObject(value)) {
+    problem('config.sampling', 'must be an object');
+    return undefined;
+  }
+  const v = value as Record<string, unknown>;
+  const out: Record<string, unknown> = {};
+  for (const [field, key] of Object.entries(SAMPLING_KEYS)) {
+    const x = v[key];
+    if ((RANGE_FIELDS as readonly string[]).includes(field)) {
+      const r = (isObject(x) ? x : {}) as Record<string, unknown>;
+      if (!PERCENTILE_FIELDS.every((p) => typeof r[p] === 'number')) problem(`config.sampling.${key}`, 'must have numbers p05, p17, p50, p83, p95');
+      out[field] = Object.fromEntries(PERCENTILE_FIELDS.map((p) => [p, r[p]])) as unknown as AssessedRange;
+    } else {
+      if (typeof x !== 'number') problem(`config.sampling.${key}`, 'must be a number');
+      out[field] = x;
+    }
+  }
+  return out as unknown as EnsembleSampling;
+}
+
+function isObject(value: unknown): value is object {
+  return value !== null && typeof value === 'object' && !Array.isArray(value);
+}
+
+const LITTLE_ENDIAN = new Uint8Array(Float64Array.of(1).buffer)[7] === 0x3f;
+
+function float64ToBase64(values: Float64Array): string {
+  if (LITTLE_ENDIAN) return Buffer.from(values.buffer, values.byteOffset, values.byteLength).toString('base64');
+  const bytes = new DataView(new ArrayBuffer(values.length * 8));
+  for (let i = 0; i < values.length; i++) bytes.setFloat64(i * 8, values[i], true);
+  return Buffer.from(bytes.buffer).toString('base64');
+}
+
+function base64ToFloat64(value: unknown, length: number, field: string, problem: (field: string, message: string, expected?: string) => void): Float64Array {
+  const out = new Float64Array(Number.isInteger(length) ? length : 0);
+  if (typeof value !== 'string' || !/^[A-Za-z0-9+/]*={0,2}$/.test(value)) {
+    problem(field, 'must be base64 text');
+    return out;
+  }
+  const bytes = Buffer.from(value, 'base64');
+  if (bytes.length !== out.length * 8) {
+    problem(field, `must hold ${out.length} Float64 values (${out.length * 8} bytes), got ${bytes.length} bytes`);
+    return out;
+  }
+  const view = new DataView(bytes.buffer, bytes.byteOffset, bytes.byteLength);
+  for (let i = 0; i < out.length; i++) out[i] = view.getFloat64(i * 8, true);
+  return out;
+}

@@ -1,0 +1,291 @@
+import { quantilesInPlace } from '../numerics/quantiles.js';
+import type { EnsembleConfig, EnsembleMembers } from './ensemble-members.js';
+import { RUNNING_MEAN_WINDOW } from './running-mean.js';
+import { MEMBER_PARAMETERS, type MemberParameter } from './sample-members.js';
+import { describeSampling } from './sampling.js';
+import { MEMBER_STREAM_SCHEME } from './member-generators.js';
+
+/** The percentiles every ensemble reports, as probabilities, and their names. */
+export const PERCENTILES = [0.05, 0.17, 0.5, 0.83, 0.95] as const;
+export const PERCENTILE_NAMES = ['p05', 'p17', 'p50', 'p83', 'p95'] as const;
+export type PercentileName = (typeof PERCENTILE_NAMES)[number];
+
+/** When the ensemble crosses one warming level. */
+export interface ThresholdCrossing {
+  /** Warming level, K above the baseline. */
+  thresholdK: number;
+  /**
+   * Share of members whose 20-year mean has exceeded the level by each milestone year; null when
+   * the run does not cover the 20-year window around that year.
+   */
+  byMilestone: { year: number; probability: number | null }[];
+  /** First year by which at least half of the members have crossed; null if fewer than half cross within the run. */
+  medianYear: number | null;
+  /** Share of members that cross at all within the run. */
+  probabilityWithinRun: number;
+}
+
+/** Summary quantiles of one sampled parameter across members. */
+export type ParameterSummary = Record<PercentileName, number> & { mean: number };
+
+/** The statistics of an ensemble (or of one shard of it), per year and overall. */
+export interface EnsembleResult {
+  /** Annual grid. */
+  years: Float64Array;
+  /** The definition of the ensemble. */
+  config: EnsembleConfig;
+  /** Members summarised here (all of them unless this is a shard). */
+  memberCount: number;
+  /** The shard these members are, if not the whole ensemble. */
+  shard?: { index: number; count: number };
+  /** Warming percentiles per year, K relative to the baseline: p05 .. p95. */
+  percentiles: Record<PercentileName, Float64Array>;
+  /**
+   * Per threshold (in config order): share of members whose 20-year mean warming around each year
+   * exceeds the threshold; NaN where the 20-year window leaves the run.
+   */
+  probAbove: Float64Array[];
+  /** Per threshold: crossing probabilities by milestone years and the median crossing year. */
+  crossings: ThresholdCrossing[];
+  /** Unphysical draws discarded (redrawn) while sampling these members. */
+  redraws: number;
+  /** Quantiles and mean of each sampled or derived parameter. */
+  parameters: Record<MemberParameter, ParameterSummary>;
+  /** Pearson correlation of the members' ECS and TCR. */
+  ecsTcrCorrelation: number;
+  /** How the numbers were made, one sentence each, for the provenance of an output. */
+  notes: string[];
+  /** The raw members (to write a shard file, or for further statistics). */
+  members: EnsembleMembers;
+  /** Threads that ran the members (1 when run in the calling thread, or for merged shards). */
+  workersUsed: number;
+}
+
+/**
+ * The parts of a summary that scan every member-year, as computed by {@link yearPercentilesInto} and
+ * {@link exceedanceCountsInto} (possibly split over threads: percentiles by years, counts by members).
+ */
+export interface MemberStatistics {
+  /** The five percentiles (PERCENTILES order), each one value per year. */
+  percentiles: Float64Array[];
+  /** From exceedanceCountsInto over all members. */
+  counts: Float64Array;
+}
+
+/**
+ * Computes an ensemble's statistics from its members: per year the warming percentiles (one
+ * selection per year over the members, Hyndman & Fan 1996 definition 7) and the share of members
+ * whose 20-year mean exceeds each threshold; per threshold the probability of having crossed by
+ * each milestone year and the median crossing year; the spread of the parameters. A deterministic
+ * function of the members in order, so merged shards give exactly what one run gives.
+ *
+ * @param members raw members of a run or of merged shards
+ * @param workersUsed recorded in the result (default 1)
+ * @param statistics the member-year scans if already done (by worker threads); computed here otherwise
+ * @example summarizeEnsemble(members).percentiles.p50 // median warming per year, K
+ */
+export function summarizeEnsemble(members: EnsembleMembers, workersUsed = 1, statistics?: MemberStatistics): EnsembleResult {
+  const { config, memberCount: m } = members;
+  const n = config.yearCount;
+  const thresholds = config.thresholds;
+  const years = Float64Array.from({ length: n }, (_, k) => config.firstYear + k);
+  let stats = statistics;
+  if (!stats) {
+    stats = { percentiles: PERCENTILES.map(() => new Float64Array(n)), counts: new Float64Array(exceedanceCountsLength(thresholds.length, n)) };
+    yearPercentilesInto(members.warmingK, m, 0, n, stats.percentiles);
+    exceedanceCountsInto(members.warmingK, m, n, thresholds, 0, m, stats.counts);
+  }
+  const percentiles = Object.fromEntries(PERCENTILE_NAMES.map((name, j) => [name, stats.percentiles[j]])) as Record<PercentileName, Float64Array>;
+
+  const first = RUNNING_MEAN_WINDOW.before;
+  const last = n - 1 - RUNNING_MEAN_WINDOW.after;
+  const probAbove = thresholds.map((_, j) => {
+    const p = new Float64Array(n).fill(NaN);
+    for (let k = first; k <= last; k++) p[k] = stats.counts[j * n + k] / m;
+    return p;
+  });
+  const crossings = thresholds.map((thresholdK, j): ThresholdCrossing => {
+    const crossedAt = stats.counts.subarray((thresholds.length + j) * n, (thresholds.length + j + 1) * n);
+    const cumulative = new Float64Array(n);
+    let total = 0;
+    for (let k = first; k <= last; k++) cumulative[k] = total += crossedAt[k];
+    let medianYear: number | null = null;
+    for (let k = first; k <= last; k++) {
+      if (2 * cumulative[k] >= m) {
+        medianYear = years[k];
+        break;
+      }
+    }
+    const byMilestone = config.milestones.map((year) => {
+      const k = year - config.firstYear;
+      return { year, probability: k >= first && k <= last ? cumulative[k] / m : null };
+    });
+    return { thresholdK, byMilestone, medianYear, probabilityWithinRun: total / m };
+  });
+
+  const parameters = Object.fromEntries(MEMBER_PARAMETERS.map((name) => [name, summarizeValues(members.parameters[name])])) as Record<
+    MemberParameter,
+    ParameterSummary
+  >;
+
+  return {
+    years,
+    config,
+    memberCount: m,
+    shard: members.shard,
+    percentiles,
+    probAbove,
+    crossings,
+    redraws: members.redraws,
+    parameters,
+    ecsTcrCorrelation: pearson(members.parameters.ecsK, members.parameters.tcrK),
+    notes: ensembleNotes(members),
+    members,
+    workersUsed,
+  };
+}
+
+/**
+ * Warming percentiles (PERCENTILES) of years [yearFrom, yearTo) across all m members, each year
+ * by selection on a copy of its member values.
+ *
+ * @param warmingK year-major member values (year k of member r at k * m + r)
+ * @param m members
+ * @param yearFrom first year index
+ * @param yearTo end year index, exclusive
+ * @param out one array per percentile, indexed by year
+ */
+export function yearPercentilesInto(warmingK: Float64Array, m: number, yearFrom: number, yearTo: number, out: Float64Array[]): void {
+  const column = new Float64Array(m);
+  const q = new Float64Array(PERCENTILES.length);
+  for (let k = yearFrom; k < yearTo; k++) {
+    column.set(warmingK.subarray(k * m, (k + 1) * m));
+    quantilesInPlace(column, PERCENTILES, q);
+    for (let j = 0; j < out.length; j++) out[j][k] = q[j];
+  }
+}
+
+/** Length of the counts array of {@link exceedanceCountsInto}. */
+export function exceedanceCountsLength(thresholds: number, n: number): number {
+  return 2 * thresholds * n;
+}
+
+/** Members whose running sums are advanced together (their state stays in cache). */
+const MEMBER_CHUNK = 2048;
+
+/**
+ * Adds, for members [memberFrom, memberTo), the count of members whose 20-year mean warming around
+ * each year exceeds each threshold (counts[j * n + k]) and a histogram of the year index at which
+ * each member's 20-year mean first exceeds it (counts[(T + j) * n + k]). The 20-year means are the
+ * sliding sums of running-mean.ts, advanced for a chunk of members at once. Counts are whole numbers,
+ * so partial counts from threads add up exactly in any order.
+ *
+ * @param warmingK year-major member values
+ * @param m members in the layout
+ * @param n years
+ * @param thresholds levels, K
+ * @param memberFrom first member
+ * @param memberTo end member, exclusive
+ * @param counts receives the counts (added to; length exceedanceCountsLength)
+ */
+export function exceedanceCountsInto(
+  warmingK: Float64Array,
+  m: number,
+  n: number,
+  thresholds: readonly number[],
+  memberFrom: number,
+  memberTo: number,
+  counts: Float64Array,
+): void {
+  const { before, after } = RUNNING_MEAN_WINDOW;
+  const width = before + after + 1;
+  const t = thresholds.length;
+  if (n < width || t === 0) return;
+  const sums = new Float64Array(MEMBER_CHUNK);
+  // crossed[r * t + j] = 1 once member r's 20-year mean has exceeded threshold j.
+  const crossed = new Uint8Array(MEMBER_CHUNK * t);
+  const above = new Float64Array(t);
+  const first = new Float64Array(t);
+  for (let r0 = memberFrom; r0 < memberTo; r0 += MEMBER_CHUNK) {
+    const size = Math.min(MEMBER_CHUNK, memberTo - r0);
+    sums.fill(0);
+    crossed.fill(0);
+    for (let k = 0; k < width; k++) {
+      const row = k * m + r0;
+      for (let r = 0; r < size; r++) sums[r] += warmingK[row + r];
+    }
+    for (let c = before; c + after < n; c++) {
+      above.fill(0);
+      first.fill(0);
+      for (let r = 0; r < size; r++) {
+        const mean = sums[r] / width;
+        for (let j = 0; j < t; j++) {
+          if (mean > thresholds[j]) {
+            above[j]++;
+            if (crossed[r * t + j] === 0) {
+              crossed[r * t + j] = 1;
+              first[j]++;
+            }
+          }
+        }
+      }
+      for (let j = 0; j < t; j++) {
+        counts[j * n + c] += above[j];
+        counts[(t + j) * n + c] += first[j];
+      }
+      if (c + after + 1 < n) {
+        const enter = (c + after + 1) * m + r0;
+        const leave = (c - before) * m + r0;
+        for (let r = 0; r < size; r++) sums[r] += warmingK[enter + r] - warmingK[leave + r];
+      }
+    }
+  }
+}
+
+/** The conventions behind the numbers, for an output's provenance. */
+function ensembleNotes(members: EnsembleMembers): string[] {
+  const c = members.config;
+  const { before, after } = RUNNING_MEAN_WINDOW;
+  const held = members.shard ? `shard ${members.shard.index}/${members.shard.count}: members ${members.memberStart}-${members.memberStart + members.memberCount - 1} of ${c.membersTotal}` : `${c.membersTotal} members`;
+  return [
+    `ensemble of ${held}, seed ${c.seed}; member i draws from ${MEMBER_STREAM_SCHEME} (pure-rand), so it depends only on the seed and i`,
+    `${members.redraws} unphysical parameter draws were redrawn (TCR not below ECS, non-positive forcing or sensitivity, or a TCR the two-box model cannot reach)`,
+    'warming_pXX_k: percentiles across members of each year\'s warming, by linear interpolation between order statistics (Hyndman & Fan 1996, definition 7)',
+    `prob_above_<t>: share of members whose 20-year mean warming (years y-${before} to y+${after}) exceeds t K, the IPCC AR6 convention for reaching a warming level; empty where the 20-year window leaves the run`,
+    'crossing year: the labelled year of the first 20-year mean above the level; median crossing year: the first year by which at least half of the members have crossed',
+    ...describeSampling(c.sampling).map((line) => `sampled ${line}`),
+  ];
+}
+
+function summarizeValues(values: Float64Array): ParameterSummary {
+  const q = new Float64Array(PERCENTILES.length);
+  quantilesInPlace(values.slice(), PERCENTILES, q);
+  let sum = 0;
+  for (const v of values) sum += v;
+  const summary = { mean: values.length > 0 ? sum / values.length : NaN } as ParameterSummary;
+  PERCENTILE_NAMES.forEach((name, j) => (summary[name] = q[j]));
+  return summary;
+}
+
+function pearson(x: Float64Array, y: Float64Array): number {
+  const n = x.length;
+  let mx = 0;
+  let my = 0;
+  for (let i = 0; i < n; i++) {
+    mx += x[i];
+    my += y[i];
+  }
+  mx /= n;
+  my /= n;
+  let sxy = 0;
+  let sxx = 0;
+  let syy = 0;
+  for (let i = 0; i < n; i++) {
+    const a = x[i] - mx;
+    const b = y[i] - my;
+    sxy += a * b;
+    sxx += a * a;
+    syy += b * b;
+  }
+  return sxx > 0 && syy > 0 ? sxy / Math.sqrt(sxx * syy) : NaN;
+}

@@ -1,0 +1,26 @@
+import { describe, expect, it } from 'vitest';
+import { ensembleTable, probAboveColumn, runEnsemble } from '../../src/ensemble/index.js';
+import { syntheticInput } from './synthetic-input.js';
+
+describe('ensembleTable', () => {
+  it('ensembleTable lists year, warming_p05_k .. warming_p95_k, then prob_above_<t> per threshold (DESIGN.md column order)', async () => {
+    const r = await runEnsemble(syntheticInput(1850, 2100), { members: 40, seed: 1, thresholds: [1.5, 2, 3, 0.25], baseline: [1850, 1900] });
+    const t = ensembleTable(r);
+    expect(t.columns).toEqual([
+      'year',
+      'warming_p05_k',
+      'warming_p17_k',
+      'warming_p50_k',
+      'warming_p83_k',
+      'warming_p95_k',
+      'prob_above_1.5',
+      'prob_above_2',
+      'prob_above_3',
+      'prob_above_0.25',
+    ]);
+    expect(t.values.year[0]).toBe(1850);
+    expect(t.values.warming_p50_k).toBe(r.percentiles.p50);
+    expect(t.values['prob_above_0.25']).toBe(r.probAbove[3]);
+    expect(probAboveColumn(1.5)).toBe('prob_above_1.5');
+  });
+});

@@ -1,0 +1,38 @@
+import { describe, expect, it } from 'vitest';
+import { MEMBER_PARAMETERS, runEnsemble, SHARD_FORMAT, shardFileBytes, shardFromJson, shardToJson } from '../../src/ensemble/index.js';
+import { InputError } from '../../src/errors.js';
+import { syntheticInput } from './synthetic-input.js';
+
+const input = syntheticInput(1750, 2100);
+const members = (await runEnsemble(input, { members: 120, seed: 3, thresholds: [1.5, 2], baseline: [1850, 1900], shard: { index: 2, count: 4 } })).members;
+
+describe('shardToJson / shardFromJson', () => {
+  it('shardFromJson(shardToJson(members)) restores every value bit for bit (Float64 bit patterns in base64)', () => {
+    const back = shardFromJson(shardToJson(members), 'shard.json');
+    expect(back.config).toEqual(members.config);
+    expect(back.shard).toEqual({ index: 2, count: 4 });
+    expect(back.memberStart).toBe(30);
+    expect(back.memberCount).toBe(30);
+    expect(back.redraws).toBe(members.redraws);
+    expect(Buffer.from(back.warmingK.buffer).equals(Buffer.from(members.warmingK.buffer))).toBe(true);
+    for (const p of MEMBER_PARAMETERS) expect(Array.from(back.parameters[p])).toEqual(Array.from(members.parameters[p]));
+  });
+
+  it('shardFileBytes predicts the size of the written text (4/3 of 8 bytes per stored value, plus under 2 kB)', () => {
+    const text = shardToJson(members);
+    const predicted = shardFileBytes(members.memberCount, members.config.yearCount);
+    expect(text.length).toBeLessThanOrEqual(predicted);
+    expect(text.length).toBeGreaterThan(predicted - 2000);
+  });
+
+  it('shardFromJson rejects what is not a shard file, with InputError naming the file and the field', () => {
+    expect(() => shardFromJson('{', 'a.json')).toThrow(InputError);
+    expect(() => shardFromJson('{"format":"other"}', 'a.json')).toThrow(/a\.json: must be a warmcast ensemble shard file/);
+    const doc = JSON.parse(shardToJson(members));
+    expect(() => shardFromJson(JSON.stringify({ ...doc, version: 9 }), 'b.json')).toThrow(/must be shard format version 1/);
+    expect(() => shardFromJson(JSON.stringify({ ...doc, warming_k: doc.warming_k.slice(0, 400) }), 'c.json')).toThrow(/column "warming_k": must hold 10530 Float64 values/);
+    expect(() => shardFromJson(JSON.stringify({ ...doc, member_count: -1 }), 'd.json')).toThrow(/column "member_count": must be a whole number/);
+    expect(() => shardFromJson(JSON.stringify({ ...doc, config: { ...doc.config, seed: 'x' } }), 'e.json')).toThrow(/config\.seed/);
+    expect(doc.format).toBe(SHARD_FORMAT);
+  });
+});
