@@ -3,14 +3,17 @@ import { resolve } from 'node:path';
 import { formatCsv } from '../io/index.js';
 import { readPathway } from '../io/load-pathway.js';
 import { comparePathways, milestoneYears, type PathwayWarming } from '../metrics/index.js';
-import { projectPathway } from '../projection/index.js';
+import { runEnsemble } from '../ensemble/index.js';
+import { ensembleInput, projectPathway } from '../projection/index.js';
 import { comparisonCharts, comparisonHtml, comparisonJson, comparisonLongTable, comparisonMarkdown, comparisonText } from '../report/index.js';
 import type { CliIo } from './cli-io.js';
-import { addModelOptions, numberListOption, resolveModelParams, yearRangeOption, type ModelOptions } from './options.js';
+import { addModelOptions, numberListOption, resolveModelParams, wholeNumberOption, yearRangeOption, type ModelOptions } from './options.js';
 import { writeOutput } from './output.js';
 import { paramsToJson } from '../climate/params.js';
 
 interface CompareOptions extends ModelOptions {
+  members?: number;
+  seed: number;
   out?: string;
   years?: number[];
   thresholds: number[];
@@ -31,13 +34,15 @@ export function compareCommand(io: CliIo): Command {
     .option('--baseline <years>', 'baseline period for warming', yearRangeOption, [1850, 1900])
     .option('--no-splice', 'do not splice pathways that start late onto the bundled history')
     .option('--no-carbon-feedback', 'emission-driven runs: switch off the carbon-climate feedback on uptake')
+    .option('--members <count>', 'also run a parameter ensemble of this many members per pathway: ranges in tables and shaded in charts, median as the line', wholeNumberOption('--members', 2))
+    .option('--seed <integer>', 'random seed of the ensembles (with --members)', wholeNumberOption('--seed', 0), 1)
     .option('--no-chart', 'omit the terminal chart');
   addModelOptions(cmd)
     .addHelpText(
       'after',
       '\nExamples:\n  warmcast compare steady delayed swift\n  warmcast compare steady swift --years 2030,2050,2100 --out table.md\n  warmcast compare steady delayed swift --out report.html\n',
     )
-    .action((args: string[], opts: CompareOptions) => {
+    .action(async (args: string[], opts: CompareOptions) => {
       const { params, paramsFile } = resolveModelParams(opts, io);
       const files: string[] = [];
       const notes: string[] = [];
@@ -46,17 +51,25 @@ export function compareCommand(io: CliIo): Command {
         files.push(read.parsed.file);
         const p = projectPathway(read.pathway, { params, baseline: opts.baseline, carbonFeedback: opts.carbonFeedback });
         notes.push(...[...p.provenance.notes, ...p.notes].map((n) => `${p.name}: ${n}`));
-        return p;
+        return { projection: p, pathway: read.pathway };
       });
-      const ref = runs[0];
+      const ref = runs[0].projection;
       const last = ref.years[ref.years.length - 1];
       const firstFuture = ref.provenance.spliceYear ?? ref.years[0];
-      const pathways: PathwayWarming[] = runs.map((p) => ({
-        label: p.name,
-        years: p.years,
-        warmingK: p.columns.warming_k,
-        ...(p.columns.co2_gtco2 ? { co2Gtco2: p.columns.co2_gtco2 } : {}),
-      }));
+      const pathways: PathwayWarming[] = [];
+      for (const { projection: p, pathway } of runs) {
+        const base: PathwayWarming = { label: p.name, years: p.years, warmingK: p.columns.warming_k, ...(p.columns.co2_gtco2 ? { co2Gtco2: p.columns.co2_gtco2 } : {}) };
+        if (opts.members === undefined) {
+          pathways.push(base);
+          continue;
+        }
+        // With an ensemble, the line is its median and the ranges its percentiles (same seed per pathway).
+        const { input, notes: inputNotes } = ensembleInput(pathway, params);
+        const e = await runEnsemble(input, { members: opts.members, seed: opts.seed, thresholds: opts.thresholds, baseline: opts.baseline });
+        notes.push(...[...inputNotes, ...e.notes].map((n) => `${p.name} ensemble: ${n}`));
+        const pc = e.percentiles;
+        pathways.push({ ...base, warmingK: pc.p50, range: { p05: pc.p05, p17: pc.p17, p83: pc.p83, p95: pc.p95 } });
+      }
       const c = comparePathways(pathways, {
         milestoneYears: opts.years ?? milestoneYears(firstFuture, last, 10),
         thresholdsK: opts.thresholds,
@@ -70,7 +83,10 @@ export function compareCommand(io: CliIo): Command {
           'Climate sensitivity': `ECS ${params.ecsK.toFixed(2)} K, TCR ${params.tcrK.toFixed(2)} K (two-box model calibrated to them)`,
           'CO2 forcing': params.co2Formula === 'log' ? 'Myhre et al. 1998, 5.35 ln(C/C0)' : 'Meinshausen et al. 2020 with IPCC AR6 adjustments',
           Baseline: `warming relative to the ${baseline} mean`,
-          'History splice': runs.map((p) => `${p.name}: ${p.provenance.spliceYear ? `bundled history before ${p.provenance.spliceYear}` : 'none'}`).join('; '),
+          ...(opts.members !== undefined
+            ? { Ensemble: `${opts.members} members per pathway, seed ${opts.seed}; lines are ensemble medians; ECS, TCR, 2xCO2 and aerosol forcing sampled to the IPCC AR6 ranges` }
+            : {}),
+          'History splice': runs.map(({ projection: p }) => `${p.name}: ${p.provenance.spliceYear ? `bundled history before ${p.provenance.spliceYear}` : 'none'}`).join('; '),
           Parameters: Object.entries(paramsToJson(params)).map(([k, v]) => `${k} ${typeof v === 'number' ? +v.toPrecision(5) : v}`).join(', '),
         };
         const written = writeOutput(
@@ -82,7 +98,7 @@ export function compareCommand(io: CliIo): Command {
             '.svg': () => comparisonCharts(c, { fromYear, baseline })[0],
             '.html': (p) => comparisonHtml(c, { provenance: p, assumptions, baseline, fromYear }),
           },
-          { inputs, params, baseline: opts.baseline, notes, io },
+          { inputs, params, baseline: opts.baseline, notes, io, ...(opts.members !== undefined ? { seed: opts.seed } : {}) },
         );
         for (const w of written) io.stderr(`wrote ${w}\n`);
       }

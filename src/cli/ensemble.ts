@@ -8,7 +8,7 @@ import { readPathway } from '../io/load-pathway.js';
 import { ensembleInput } from '../projection/index.js';
 import { standardCautions, terminalChart } from '../report/index.js';
 import type { CliIo } from './cli-io.js';
-import { addModelOptions, numberListOption, numberOption, resolveModelParams, yearRangeOption, type ModelOptions } from './options.js';
+import { addModelOptions, numberListOption, resolveModelParams, wholeNumberOption, yearRangeOption, type ModelOptions } from './options.js';
 import { tableRenderers, writeOutput } from './output.js';
 import { progressBar } from './progress.js';
 
@@ -32,14 +32,6 @@ function uncertaintyText(r: EnsembleResult): string {
   );
 }
 
-function wholeNumber(name: string, min: number) {
-  return (text: string): number => {
-    const v = Number(text);
-    if (!Number.isInteger(v) || v < min) throw new InvalidArgumentError(`${name} must be a whole number of at least ${min}, got "${text}"`);
-    return v;
-  };
-}
-
 function shardOption(text: string): { index: number; count: number } {
   const m = /^(\d+)\/(\d+)$/.exec(text.trim());
   if (!m || Number(m[1]) < 1 || Number(m[1]) > Number(m[2])) throw new InvalidArgumentError(`must be K/N with 1 <= K <= N, such as 3/100; got "${text}"`);
@@ -51,12 +43,12 @@ export function ensembleCommand(io: CliIo): Command {
   const cmd = new Command('ensemble')
     .description('run a seeded parameter ensemble (AR6-matched ECS, TCR, 2xCO2 and aerosol forcing): warming percentiles and threshold probabilities')
     .argument('<pathway>', 'pathway CSV file or bundled name')
-    .option('-n, --members <count>', 'ensemble members', wholeNumber('--members', 1), 1000)
-    .option('--seed <integer>', 'random seed (same seed, same output on any machine and any number of workers)', wholeNumber('--seed', 0), 1)
+    .option('-n, --members <count>', 'ensemble members', wholeNumberOption('--members', 1), 1000)
+    .option('--seed <integer>', 'random seed (same seed, same output on any machine and any number of workers)', wholeNumberOption('--seed', 0), 1)
     .option('--thresholds <list>', 'warming levels in K for exceedance probabilities', numberListOption('--thresholds'), [1.5, 2, 3])
     .option('--baseline <years>', 'baseline period for warming', yearRangeOption, [1850, 1900])
     .option('--shard <K/N>', 'run only the K-th of N equal slices of the members and write them as a shard file (.json) for `warmcast merge`', shardOption)
-    .option('--workers <count>', 'threads (default: chosen by run size; the output does not depend on it)', wholeNumber('--workers', 1))
+    .option('--workers <count>', 'threads (default: chosen by run size; the output does not depend on it)', wholeNumberOption('--workers', 1))
     .option('-o, --out <file>', 'write the yearly percentiles and probabilities: .csv (+ .meta.json), .json, .md; with --shard a .json shard file')
     .option('--no-splice', 'do not splice a pathway that starts late onto the bundled history')
     .option('--no-chart', 'omit the terminal chart');

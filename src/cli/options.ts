@@ -16,6 +16,15 @@ export function numberOption(name: string) {
   };
 }
 
+/** Coerces a whole number of at least `min`. */
+export function wholeNumberOption(name: string, min: number) {
+  return (text: string): number => {
+    const v = Number(text);
+    if (!Number.isInteger(v) || v < min) throw new InvalidArgumentError(`${name} must be a whole number of at least ${min}, got "${text}"`);
+    return v;
+  };
+}
+
 /** Coerces a whole-number year option. */
 export function yearOption(text: string): number {
   const v = Number(text);

@@ -49,4 +49,12 @@ describe('warmcast compare', () => {
     expect(await main(['compare', 'steady', 'swift', '--out', join(dir, 'c.xlsx')], io)).toBe(2);
     expect(io.err).toMatch(/extension must be one of/);
   });
+
+  it('with --members shows ensemble ranges in brackets and records the seed in the provenance', async () => {
+    const dir = tmp();
+    const io = captureIo();
+    expect(await main(['compare', 'steady', 'swift', '--members', '100', '--seed', '5', '--years', '2050,2100', '--out', join(dir, 'c.json')], io)).toBe(0);
+    expect(io.out).toMatch(/\d\.\d\d \[\d\.\d\d to \d\.\d\d\]/);
+    expect(JSON.parse(readFileSync(join(dir, 'c.json'), 'utf8')).provenance.seed).toBe(5);
+  });
 });
