@@ -135,7 +135,7 @@ describe('the built binary (black box)', () => {
   });
 
   it('every command has --help with an example', () => {
-    for (const cmd of ['run', 'calibrate', 'check', 'pathways']) {
+    for (const cmd of ['run', 'compare', 'ensemble', 'merge', 'calibrate', 'check', 'pathways']) {
       const r = spawnSync(process.execPath, [bin, cmd, '--help'], { encoding: 'utf8' });
       expect(r.status, cmd).toBe(0);
       expect(r.stdout, cmd).toMatch(/Example/);
