@@ -9,8 +9,9 @@ import { GASES, PATHWAY_COLUMNS, type Pathway, type PathwayColumn } from '../pat
  *   history's first year to the pathway's last year. A pathway that starts inside the history's span
  *   (say 1900) wins from its first year on.
  * - a column the pathway lacks continues from the history while the history covers it, and is then
- *   held at the mean of the history's last 11 years (one solar cycle, so that the phase of the solar
- *   cycle or a recent eruption at the end of the record is not carried forward; a note says so).
+ *   held at its year-H value; solar and volcanic forcing are held instead at the mean of the
+ *   history's last 11 years (one solar cycle), so that the phase of the solar cycle or a recent
+ *   eruption at the end of the record is not carried forward. Notes say which.
  * - a gas the pathway gives in the other form than the history does (the pathway gives `co2_gtco2`,
  *   the history `co2_ppm`): both series are kept. The history's form holds the history's values
  *   before F and NaN from F on; the pathway's form is NaN before F. The carbon cycle joins the two.
@@ -47,6 +48,7 @@ export function spliceOntoHistory(future: Pathway, history: Pathway): Pathway {
 
   const series: Partial<Record<PathwayColumn, Float64Array>> = {};
   const held: PathwayColumn[] = [];
+  const heldAtMean: PathwayColumn[] = [];
   const bridgedColumns: PathwayColumn[] = [];
   const unbridgeable: PathwayColumn[] = [];
   const notInHistory: PathwayColumn[] = [];
@@ -75,8 +77,9 @@ export function spliceOntoHistory(future: Pathway, history: Pathway): Pathway {
         out[i] = y < f0 && y <= hLast ? hs[y - h0] : NaN;
       }
     } else if (hs) {
-      held.push(column);
-      const level = tailMean(hs, HELD_MEAN_YEARS);
+      const cyclic = CYCLE_MEAN_COLUMNS.includes(column);
+      (cyclic ? heldAtMean : held).push(column);
+      const level = cyclic ? tailMean(hs, HELD_MEAN_YEARS) : hs[hLast - h0];
       for (let i = 0; i < count; i++) {
         const y = years[i];
         out[i] = y <= hLast ? hs[y - h0] : level;
@@ -106,10 +109,14 @@ export function spliceOntoHistory(future: Pathway, history: Pathway): Pathway {
     notes.push(`${hLast + 1}-${f0 - 1} bridged linearly from the history's ${hLast} value to the file's ${f0} value `
       + `(${bridgedColumns.join(', ')})`);
   }
-  if (held.length > 0) {
-    notes.push(fLast > hLast
-      ? `${held.join(', ')} not in file: taken from history to ${hLast}, then held at the mean of ${Math.max(h0, hLast - HELD_MEAN_YEARS + 1)}-${hLast}`
-      : `${held.join(', ')} not in file: taken from history`);
+  if (fLast <= hLast) {
+    const all = PATHWAY_COLUMNS.filter((c) => held.includes(c) || heldAtMean.includes(c));
+    if (all.length > 0) notes.push(`${all.join(', ')} not in file: taken from history`);
+  } else {
+    if (held.length > 0) notes.push(`${held.join(', ')} not in file: taken from history to ${hLast}, then held at the ${hLast} value`);
+    if (heldAtMean.length > 0) {
+      notes.push(`${heldAtMean.join(', ')} not in file: taken from history to ${hLast}, then held at the mean of ${Math.max(h0, hLast - HELD_MEAN_YEARS + 1)}-${hLast}`);
+    }
   }
   for (const [given, replaced] of switched) {
     notes.push(`${given} given instead of the history's ${replaced}: ${replaced} holds history values to `
@@ -137,6 +144,9 @@ function otherForm(column: PathwayColumn): PathwayColumn | undefined {
 
 /** Years averaged for a column held beyond the history: one 11-year solar cycle (Hathaway 2015, Living Rev. Sol. Phys. 12, 4: mean cycle length about 11 years; from memory). */
 const HELD_MEAN_YEARS = 11;
+
+/** Columns that vary in cycles or spikes and are continued at their recent mean, not their last value. */
+const CYCLE_MEAN_COLUMNS: readonly PathwayColumn[] = ['solar_wm2', 'volcanic_wm2'];
 
 function tailMean(values: Float64Array, years: number): number {
   const n = Math.min(years, values.length);

@@ -35,13 +35,14 @@ describe('spliceOntoHistory', () => {
     expect(s.name).toBe('plan.csv');
   });
 
-  it('spliceOntoHistory continues a column the future lacks from history, then holds the mean of its last 11 years (here all 5)', () => {
+  it('spliceOntoHistory continues a column the future lacks from history, then holds its last value, or for solar the mean of its last 11 years (here all 5)', () => {
     const future = pathway(2005, { co2_ppm: [380, 381, 382] }, 'plan.csv');
     const s = spliceOntoHistory(future, history);
     expect(values(s, 'solar_wm2').map((v) => +v.toFixed(12))).toEqual([0.1, 0.2, 0.3, 0.4, 0.5, 0.3, 0.3, 0.3]);
     expect(s.provenance.notes).toEqual([
       'spliced onto bundled history at 2005 (2000-2004 from history.csv)',
-      'aerosol_wm2, solar_wm2 not in file: taken from history to 2004, then held at the mean of 2000-2004',
+      'aerosol_wm2 not in file: taken from history to 2004, then held at the 2004 value',
+      'solar_wm2 not in file: taken from history to 2004, then held at the mean of 2000-2004',
     ]);
   });
 
