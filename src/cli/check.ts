@@ -2,6 +2,7 @@ import { Command } from 'commander';
 import { InputError, WarmcastError, type InputProblem } from '../errors.js';
 import { describePathway, readPathway } from '../io/index.js';
 import type { CliIo } from './cli-io.js';
+import { pathwayArg } from './options.js';
 
 /** `warmcast check FILE...`: report what each pathway file holds, or every problem in it. */
 export function checkCommand(io: CliIo): Command {
@@ -14,7 +15,7 @@ export function checkCommand(io: CliIo): Command {
       const problems: InputProblem[] = [];
       for (const arg of pathways) {
         try {
-          const { parsed, pathway } = readPathway(arg, { splice: opts.splice });
+          const { parsed, pathway } = readPathway(pathwayArg(arg, io), { splice: opts.splice });
           io.stdout(describePathway(parsed, pathway).join('\n') + '\n\n');
         } catch (e) {
           if (e instanceof InputError) problems.push(...e.problems);

@@ -7,7 +7,7 @@ import { runEnsemble } from '../ensemble/index.js';
 import { ensembleInput, projectPathway } from '../projection/index.js';
 import { comparisonCharts, comparisonHtml, comparisonJson, comparisonLongTable, comparisonMarkdown, comparisonText } from '../report/index.js';
 import type { CliIo } from './cli-io.js';
-import { addModelOptions, numberListOption, resolveModelParams, wholeNumberOption, yearRangeOption, type ModelOptions } from './options.js';
+import { addModelOptions, type ModelOptions, numberListOption, pathwayArg, resolveModelParams, wholeNumberOption, yearRangeOption } from './options.js';
 import { writeOutput } from './output.js';
 import { paramsToJson } from '../climate/params.js';
 
@@ -47,7 +47,7 @@ export function compareCommand(io: CliIo): Command {
       const files: string[] = [];
       const notes: string[] = [];
       const runs = args.map((arg) => {
-        const read = readPathway(arg, { splice: opts.splice });
+        const read = readPathway(pathwayArg(arg, io), { splice: opts.splice });
         files.push(read.parsed.file);
         const p = projectPathway(read.pathway, { params, baseline: opts.baseline, carbonFeedback: opts.carbonFeedback });
         notes.push(...[...p.provenance.notes, ...p.notes].map((n) => `${p.name}: ${n}`));

@@ -8,7 +8,7 @@ import { readPathway } from '../io/load-pathway.js';
 import { ensembleInput } from '../projection/index.js';
 import { standardCautions, terminalChart } from '../report/index.js';
 import type { CliIo } from './cli-io.js';
-import { addModelOptions, numberListOption, resolveModelParams, wholeNumberOption, yearRangeOption, type ModelOptions } from './options.js';
+import { addModelOptions, type ModelOptions, numberListOption, pathwayArg, resolveModelParams, wholeNumberOption, yearRangeOption } from './options.js';
 import { tableRenderers, writeOutput } from './output.js';
 import { progressBar } from './progress.js';
 
@@ -62,7 +62,7 @@ export function ensembleCommand(io: CliIo): Command {
     .action(async (arg: string, opts: EnsembleCliOptions) => {
       if (opts.seed >= 2 ** 32) throw new ConfigError('--seed must be below 2^32', 'seed');
       const { params, paramsFile } = resolveModelParams(opts, io);
-      const read = readPathway(arg, { splice: opts.splice });
+      const read = readPathway(pathwayArg(arg, io), { splice: opts.splice });
       const { input, notes } = ensembleInput(read.pathway, params);
       const inputs = [read.parsed.file, ...(paramsFile ? [paramsFile] : [])];
       const result = await runEnsemble(input, {

@@ -1,4 +1,4 @@
-import { readFileSync } from 'node:fs';
+import { existsSync, readFileSync } from 'node:fs';
 import { resolve } from 'node:path';
 import { InvalidArgumentError, Option, type Command } from 'commander';
 import { calibrate, type CalibrationTargets } from '../climate/calibrate.js';
@@ -101,4 +101,15 @@ export function resolveModelParams(
   if (opts.ecs !== undefined) delete targets.feedbackWm2K;
   if (opts.tcr !== undefined) delete targets.exchangeWm2K;
   return { params: calibrate(targets), paramsFile };
+}
+
+/**
+ * A pathway argument as the io layer should look it up: a path relative to the command's working
+ * directory when that differs from the process's (in-process callers), else as given, so messages
+ * name the file the way the user typed it. Bundled names pass through unchanged.
+ */
+export function pathwayArg(arg: string, io: CliIo): string {
+  if (io.cwd === process.cwd()) return arg;
+  const candidate = resolve(io.cwd, arg);
+  return existsSync(candidate) ? candidate : arg;
 }

@@ -4,7 +4,7 @@ import { ConfigError } from '../errors.js';
 import { readPathway } from '../io/load-pathway.js';
 import { projectPathway, type Projection } from '../projection/index.js';
 import type { CliIo } from './cli-io.js';
-import { addModelOptions, numberOption, resolveModelParams, yearOption, yearRangeOption, type ModelOptions } from './options.js';
+import { addModelOptions, type ModelOptions, numberOption, pathwayArg, resolveModelParams, yearOption, yearRangeOption } from './options.js';
 import { clipProjection, projectionTable, tableRenderers, writeOutput } from './output.js';
 import { printProjectionSummary } from './summary.js';
 
@@ -53,7 +53,7 @@ export function runCommand(io: CliIo): Command {
       const { params, paramsFile } = resolveModelParams(opts, io);
       const projections: { projection: Projection; file: string }[] = [];
       for (const arg of args) {
-        const read = readPathway(arg, { splice: opts.splice });
+        const read = readPathway(pathwayArg(arg, io), { splice: opts.splice });
         const full = projectPathway(read.pathway, {
           params,
           baseline: opts.baseline,

@@ -147,3 +147,13 @@ function rowsOf(json: { rows?: Record<string, number>[]; columns?: unknown }): R
   if (Array.isArray(json.rows)) return json.rows;
   throw new Error('unexpected JSON layout: ' + Object.keys(json).join(','));
 }
+
+describe('working directory', () => {
+  it('resolves a relative pathway path against the io working directory of an in-process caller', async () => {
+    const dir = tmp();
+    writeFileSync(join(dir, 'in.csv'), 'year,co2_ppm\n2030,440\n2040,460\n');
+    const io = captureIo(dir);
+    expect(await main(['run', 'in.csv', '--out', 'out.csv', '--no-chart'], io)).toBe(0);
+    expect(existsSync(join(dir, 'out.csv'))).toBe(true);
+  });
+});
