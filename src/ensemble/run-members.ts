@@ -1,4 +1,3 @@
-import { propagateTwoBoxInto } from '../climate/exact-propagator.js';
 import type { TwoBoxParams } from '../climate/two-box.js';
 import type { Co2Formula } from '../forcing/co2.js';
 import { drawMember, emptyDraw, memberSampler, storeDraw, type MemberParameter } from './sample-members.js';
@@ -56,9 +55,9 @@ const STAGE_MEMBERS = 64;
 /**
  * Runs members [from, to): draws each member's parameters from its own stream (so the result of
  * member i depends only on the seed and i), builds its exact one-year propagator (the closed-form
- * modal one, equal to `twoBoxPropagator` to rounding), assembles its forcing and steps the two-box
- * model from equilibrium with `propagateTwoBoxInto`, then stores the surface warming relative to the
- * member's own baseline mean.
+ * modal one, equal to `twoBoxPropagator` to rounding) and steps the two-box model from equilibrium
+ * exactly as `propagateTwoBoxInto` does, assembling the member's forcing year by year on the way,
+ * then stores the surface warming relative to the member's own baseline mean.
  *
  * @param task the shared inputs
  * @param from first member (global index)
@@ -74,14 +73,14 @@ export function runMembersInto(task: MemberTask, from: number, to: number, block
   const sampler = memberSampler(task.sampling, task.co2Formula);
   const next = memberGenerators(task.seed, from);
   const draw = emptyDraw();
-  const forcing = new Float64Array(n);
-  const deep = new Float64Array(n);
-  // Member-major staging rows, copied year by year into the block every STAGE_MEMBERS members, so
-  // that writes to the large year-major block are contiguous runs.
+  // Member-major staging rows (warming before rebasing), copied year by year into the block every
+  // STAGE_MEMBERS members, so that writes to the large year-major block are contiguous runs.
   const stage = new Float64Array(STAGE_MEMBERS * n);
+  const stageMeans = new Float64Array(STAGE_MEMBERS);
   const baselineYears = baselineTo - baselineFrom + 1;
   const params: TwoBoxParams = { upperHeatCapacity, deepHeatCapacity, feedbackWm2K: NaN, exchangeWm2K: NaN, deepEfficacy };
   const prop = emptyTwoBoxPropagator();
+  const { phi, g0, g1 } = prop;
   let redraws = 0;
   let staged = 0;
   for (let i = from; i < to; i++) {
@@ -92,17 +91,38 @@ export function runMembersInto(task: MemberTask, from: number, to: number, block
     modalTwoBoxPropagatorInto(params, prop);
     const co2Scale = draw.forcing2xScale;
     const aerosolScale = draw.aerosolScale;
-    for (let k = 0; k < n; k++) forcing[k] = co2Scale * co2Wm2[k] + aerosolScale * aerosolWm2[k] + otherWm2[k];
-    const surface = stage.subarray(staged * n, (staged + 1) * n);
-    propagateTwoBoxInto(prop, forcing, surface, deep);
-    // The baseline mean as `rebase` in src/projection computes it: summed in year order.
+    // propagateTwoBoxInto (src/climate/exact-propagator.ts) with the member's forcing assembled as it
+    // goes, operation for operation, so that no forcing or deep-ocean series is stored.
+    const p00 = phi[0];
+    const p01 = phi[1];
+    const p10 = phi[2];
+    const p11 = phi[3];
+    const g0t = g0[0];
+    const g0d = g0[1];
+    const g1t = g1[0];
+    const g1d = g1[1];
+    const row = staged * n;
+    let t = 0;
+    let d = 0;
+    let f0 = co2Scale * co2Wm2[0] + aerosolScale * aerosolWm2[0] + otherWm2[0];
+    stage[row] = 0;
+    for (let k = 0; k + 1 < n; k++) {
+      const f1 = co2Scale * co2Wm2[k + 1] + aerosolScale * aerosolWm2[k + 1] + otherWm2[k + 1];
+      const df = f1 - f0;
+      const tn = p00 * t + p01 * d + g0t * f0 + g1t * df;
+      d = p10 * t + p11 * d + g0d * f0 + g1d * df;
+      t = tn;
+      stage[row + k + 1] = t;
+      f0 = f1;
+    }
+    // The baseline mean as `rebase` in src/projection computes it: summed in year order (it is
+    // subtracted as the rows are copied into the block).
     let sum = 0;
-    for (let k = baselineFrom; k <= baselineTo; k++) sum += surface[k];
-    const mean = sum / baselineYears;
-    for (let k = 0; k < n; k++) surface[k] -= mean;
+    for (let k = baselineFrom; k <= baselineTo; k++) sum += stage[row + k];
+    stageMeans[staged] = sum / baselineYears;
     staged++;
     if (staged === STAGE_MEMBERS || i + 1 === to) {
-      flushStage(stage, staged, n, block, i + 1 - staged - block.blockStart);
+      flushStage(stage, stageMeans, staged, n, block, i + 1 - staged - block.blockStart);
       staged = 0;
     }
     if (onProgress && ((i - from + 1) % PROGRESS_EVERY === 0 || i + 1 === to)) onProgress(i - from + 1);
@@ -110,12 +130,15 @@ export function runMembersInto(task: MemberTask, from: number, to: number, block
   return redraws;
 }
 
-/** Copies `count` staged member rows into the block's year-major layout from member column `column`. */
-function flushStage(stage: Float64Array, count: number, n: number, block: MemberBlock, column: number): void {
+/**
+ * Copies `count` staged member rows, less each member's baseline mean, into the block's year-major
+ * layout from member column `column`.
+ */
+function flushStage(stage: Float64Array, means: Float64Array, count: number, n: number, block: MemberBlock, column: number): void {
   const w = block.warmingK;
   const stride = block.memberCount;
   for (let k = 0; k < n; k++) {
     const base = k * stride + column;
-    for (let j = 0; j < count; j++) w[base + j] = stage[j * n + k];
+    for (let j = 0; j < count; j++) w[base + j] = stage[j * n + k] - means[j];
   }
 }

@@ -44,4 +44,35 @@ describe('exchangeForTcr', () => {
     expect(() => calibrate({ ecsK: 3, tcrK: 0.05 })).toThrow(/out of reach/);
     expect(exchangeForTcr(solver, { ...fixed, feedbackWm2K: f2x / 3 }, f2x, 0.05)).toBeNaN();
   });
+
+  it('exchangeForTcr agrees with calibrate() on a grid of ECS 0.8-9 K, TCR 0.3-4 K and F2x 3-5 W m-2: the same gamma to 1e-9, its TCR by transientResponse within 1e-9 K, and NaN exactly where calibrate() finds the TCR out of reach', () => {
+    // calibrate (src/climate) solves with the matrix-exponential propagator and Brent's method: an
+    // independent path to the same root. The grid reaches the unreachable corners on both sides.
+    let solved = 0;
+    let unreachable = 0;
+    for (const ecsK of [0.8, 1.5, 2.2, 3, 4.5, 6, 9]) {
+      for (const tcrK of [0.3, 0.7, 1.1, 1.5, 1.8, 2.1, 2.5, 3, 4]) {
+        if (tcrK >= ecsK) continue;
+        for (const forcing2xWm2 of [3, 3.934, 5]) {
+          const lambda = forcing2xWm2 / ecsK;
+          const gamma = exchangeForTcr(solver, { ...fixed, feedbackWm2K: lambda }, forcing2xWm2, tcrK);
+          let reference: number;
+          try {
+            reference = calibrate({ ecsK, tcrK, forcing2xWm2 }).exchangeWm2K;
+          } catch (e) {
+            expect(String(e)).toMatch(/out of reach/);
+            expect(gamma, `ECS ${ecsK} TCR ${tcrK} F2x ${forcing2xWm2}`).toBeNaN();
+            unreachable++;
+            continue;
+          }
+          expectClose(gamma, reference, 1e-9, `ECS ${ecsK} TCR ${tcrK} F2x ${forcing2xWm2}`);
+          const tcr = transientResponse({ ...fixed, feedbackWm2K: lambda, exchangeWm2K: gamma, co2Formula: 'ar6', forcing2xWm2 });
+          expectClose(tcr, tcrK, 1e-9, `TCR at ECS ${ecsK} TCR ${tcrK} F2x ${forcing2xWm2}`);
+          solved++;
+        }
+      }
+    }
+    expect(solved).toBeGreaterThan(60);
+    expect(unreachable).toBeGreaterThan(5);
+  });
 });
