@@ -1,5 +1,4 @@
 import { Command } from 'commander';
-import { resolve } from 'node:path';
 import { formatCsv } from '../io/index.js';
 import { readPathway } from '../io/load-pathway.js';
 import { comparePathways, milestoneYears, type PathwayWarming } from '../metrics/index.js';
@@ -8,7 +7,7 @@ import { ensembleInput, projectPathway } from '../projection/index.js';
 import { comparisonCharts, comparisonHtml, comparisonJson, comparisonLongTable, comparisonMarkdown, comparisonText } from '../report/index.js';
 import type { CliIo } from './cli-io.js';
 import { addModelOptions, type ModelOptions, numberListOption, pathwayArg, resolveModelParams, wholeNumberOption, yearRangeOption } from './options.js';
-import { writeOutput } from './output.js';
+import { pathwayInputs, writeOutput } from './output.js';
 import { paramsToJson } from '../climate/params.js';
 
 interface CompareOptions extends ModelOptions {
@@ -48,7 +47,7 @@ export function compareCommand(io: CliIo): Command {
       const notes: string[] = [];
       const runs = args.map((arg) => {
         const read = readPathway(pathwayArg(arg, io), { splice: opts.splice });
-        files.push(read.parsed.file);
+        files.push(...pathwayInputs(read));
         const p = projectPathway(read.pathway, { params, baseline: opts.baseline, carbonFeedback: opts.carbonFeedback });
         notes.push(...[...p.provenance.notes, ...p.notes].map((n) => `${p.name}: ${n}`));
         return { projection: p, pathway: read.pathway };
@@ -90,7 +89,7 @@ export function compareCommand(io: CliIo): Command {
           Parameters: Object.entries(paramsToJson(params)).map(([k, v]) => `${k} ${typeof v === 'number' ? +v.toPrecision(5) : v}`).join(', '),
         };
         const written = writeOutput(
-          resolve(io.cwd, opts.out),
+          opts.out,
           {
             '.csv': () => formatCsv(comparisonLongTable(c)),
             '.json': (p) => comparisonJson(c, p),

@@ -3,13 +3,13 @@ import { readFileSync } from 'node:fs';
 import { resolve } from 'node:path';
 import { ConfigError, InputError } from '../errors.js';
 import { ensembleTable, mergeShards, runEnsemble, shardFromJson, shardToJson, summarizeEnsemble, type EnsembleResult } from '../ensemble/index.js';
-import { formatCsv, type Table } from '../io/index.js';
+import type { Table } from '../io/index.js';
 import { readPathway } from '../io/load-pathway.js';
 import { ensembleInput } from '../projection/index.js';
 import { standardCautions, terminalChart } from '../report/index.js';
 import type { CliIo } from './cli-io.js';
 import { addModelOptions, type ModelOptions, numberListOption, pathwayArg, resolveModelParams, wholeNumberOption, yearRangeOption } from './options.js';
-import { tableRenderers, writeOutput } from './output.js';
+import { pathwayInputs, tableRenderers, writeOutput } from './output.js';
 import { progressBar } from './progress.js';
 
 interface EnsembleCliOptions extends ModelOptions {
@@ -64,7 +64,7 @@ export function ensembleCommand(io: CliIo): Command {
       const { params, paramsFile } = resolveModelParams(opts, io);
       const read = readPathway(pathwayArg(arg, io), { splice: opts.splice });
       const { input, notes } = ensembleInput(read.pathway, params);
-      const inputs = [read.parsed.file, ...(paramsFile ? [paramsFile] : [])];
+      const inputs = [...pathwayInputs(read), ...(paramsFile ? [paramsFile] : [])];
       const result = await runEnsemble(input, {
         members: opts.members,
         seed: opts.seed,
@@ -77,7 +77,7 @@ export function ensembleCommand(io: CliIo): Command {
       const allNotes = [...read.pathway.provenance.notes, ...notes, ...result.notes];
       if (opts.shard) {
         if (!opts.out || !opts.out.toLowerCase().endsWith('.json')) throw new ConfigError('--shard writes a shard file: give --out NAME.json', 'out');
-        writeOutput(resolve(io.cwd, opts.out), { '.json': () => shardToJson(result.members) }, { inputs, params, baseline: opts.baseline, notes: allNotes, seed: opts.seed, io });
+        writeOutput(opts.out, { '.json': () => shardToJson(result.members) }, { inputs, params, baseline: opts.baseline, notes: allNotes, seed: opts.seed, io });
         io.stderr(`wrote shard ${opts.shard.index}/${opts.shard.count} (${result.memberCount} members) to ${opts.out}; combine all shards with \`warmcast merge\`\n`);
         return;
       }
@@ -130,7 +130,7 @@ function emitEnsemble(
   const table: Table = { columns: t.columns, data: t.columns.map((c) => t.values[c]) };
   const caution = [standardCautions()[0], uncertaintyText(result), standardCautions()[2]].join(' ');
   if (ctx.out !== undefined) {
-    const written = writeOutput(ctx.out === '-' ? '-' : resolve(io.cwd, ctx.out), { ...tableRenderers(table), '.csv': () => formatCsv(table) }, {
+    const written = writeOutput(ctx.out, tableRenderers(table), {
       inputs: ctx.inputs,
       params: ctx.params,
       baseline: result.config.baseline,

@@ -1,6 +1,6 @@
-import { extname } from 'node:path';
+import { extname, join, resolve } from 'node:path';
 import { ConfigError } from '../errors.js';
-import { formatCsv, formatJson, formatMarkdown, writeFileAtomic, type Table } from '../io/index.js';
+import { bundledPathwaysDir, formatCsv, formatJson, formatMarkdown, writeFileAtomic, type ReadPathwayResult, type Table } from '../io/index.js';
 import type { Projection } from '../projection/index.js';
 import type { CliIo } from './cli-io.js';
 import { buildProvenance, type Provenance, type ProvenanceInput } from './provenance.js';
@@ -37,13 +37,15 @@ export interface OutputContext extends ProvenanceInput {
 /**
  * Writes `path` in the format its extension names, atomically, with provenance: inside the file for
  * JSON, Markdown, SVG and HTML, in a `.meta.json` sidecar for CSV (so spreadsheets get a clean
- * table). `-` writes the CSV form to stdout.
+ * table). `out` is resolved against the command's working directory; `-` writes the CSV form to
+ * stdout.
  *
  * @returns the paths written
  * @throws ConfigError for an extension the command does not write
  */
-export function writeOutput(path: string, renderers: Renderers, ctx: OutputContext): string[] {
+export function writeOutput(out: string, renderers: Renderers, ctx: OutputContext): string[] {
   const provenance = buildProvenance(ctx);
+  const path = out === '-' ? out : resolve(ctx.io.cwd, out);
   if (path === '-') {
     ctx.io.stdout(renderers['.csv']!(provenance));
     return [];
@@ -83,4 +85,12 @@ function markdownWithProvenance(table: Table, provenance: Provenance): string {
     (provenance.notes.length ? `Notes: ${provenance.notes.join(' ')}\n` : '') +
     `\n${provenance.caution}\n`
   );
+}
+
+/**
+ * The files a read pathway came from, for provenance and overwrite protection: the pathway file and,
+ * when it was spliced, the bundled history.
+ */
+export function pathwayInputs(read: ReadPathwayResult): string[] {
+  return read.pathway.provenance.spliceYear !== undefined ? [read.parsed.file, join(bundledPathwaysDir(), 'history.csv')] : [read.parsed.file];
 }

@@ -1,11 +1,10 @@
 import { Command, Option } from 'commander';
-import { resolve } from 'node:path';
 import { ConfigError } from '../errors.js';
 import { readPathway } from '../io/load-pathway.js';
 import { projectPathway, type Projection } from '../projection/index.js';
 import type { CliIo } from './cli-io.js';
 import { addModelOptions, type ModelOptions, numberOption, pathwayArg, resolveModelParams, yearOption, yearRangeOption } from './options.js';
-import { clipProjection, projectionTable, tableRenderers, writeOutput } from './output.js';
+import { clipProjection, pathwayInputs, projectionTable, tableRenderers, writeOutput } from './output.js';
 import { printProjectionSummary } from './summary.js';
 
 /** The pathway `warmcast run` uses when none is given. */
@@ -51,7 +50,7 @@ export function runCommand(io: CliIo): Command {
       }
       if (!(opts.rtol > 0 && opts.atol > 0)) throw new ConfigError('--rtol and --atol must be positive', 'rtol');
       const { params, paramsFile } = resolveModelParams(opts, io);
-      const projections: { projection: Projection; file: string }[] = [];
+      const projections: { projection: Projection; files: string[] }[] = [];
       for (const arg of args) {
         const read = readPathway(pathwayArg(arg, io), { splice: opts.splice });
         const full = projectPathway(read.pathway, {
@@ -61,13 +60,13 @@ export function runCommand(io: CliIo): Command {
           carbonFeedback: opts.carbonFeedback,
           tolerances: { relativeTolerance: opts.rtol, absoluteTolerance: opts.atol, maxStepsPerUnit: 2000 },
         });
-        projections.push({ projection: clipProjection(full, opts.from, opts.to), file: read.parsed.file });
+        projections.push({ projection: clipProjection(full, opts.from, opts.to), files: pathwayInputs(read) });
       }
       const report = opts.out === '-' ? io.stderr : io.stdout;
       if (opts.out !== undefined) {
-        const { projection, file } = projections[0];
-        const inputs = [file, ...(paramsFile ? [paramsFile] : [])];
-        const written = writeOutput(resolveOut(opts.out, io), tableRenderers(projectionTable(projection)), {
+        const { projection, files } = projections[0];
+        const inputs = [...files, ...(paramsFile ? [paramsFile] : [])];
+        const written = writeOutput(opts.out, tableRenderers(projectionTable(projection)), {
           inputs,
           params,
           baseline: opts.baseline,
@@ -81,8 +80,4 @@ export function runCommand(io: CliIo): Command {
       }
     });
   return cmd;
-}
-
-function resolveOut(out: string, io: CliIo): string {
-  return out === '-' ? out : resolve(io.cwd, out);
 }

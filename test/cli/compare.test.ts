@@ -57,4 +57,15 @@ describe('warmcast compare', () => {
     expect(io.out).toMatch(/\d\.\d\d \[\d\.\d\d to \d\.\d\d\]/);
     expect(JSON.parse(readFileSync(join(dir, 'c.json'), 'utf8')).provenance.seed).toBe(5);
   });
+
+  it('--out - writes the long CSV alone on stdout, and provenance hashes the history a pathway was spliced onto', async () => {
+    const io = captureIo();
+    expect(await main(['compare', 'steady', 'swift', '--out', '-'], io)).toBe(0);
+    expect(io.out.split('\n')[0]).toBe('pathway,year,warming_k,difference_k');
+    expect(io.err).toMatch(/Warming at milestone years/);
+    const dir = tmp();
+    expect(await main(['compare', 'steady', 'swift', '--out', join(dir, 'c.json')], captureIo())).toBe(0);
+    const inputs = JSON.parse(readFileSync(join(dir, 'c.json'), 'utf8')).provenance.inputs.map((i: { path: string }) => i.path);
+    expect(inputs.some((p: string) => p.endsWith('history.csv'))).toBe(true);
+  });
 });
