@@ -1,6 +1,6 @@
 import { crossingPeriod, peak, valueAtYear } from '../metrics/index.js';
 import type { Projection } from '../projection/index.js';
-import { terminalChart } from '../report/index.js';
+import { plainTable, terminalChart } from '../report/index.js';
 import { standardCautions } from '../report/standard-cautions.js';
 
 /** Years whose warming the summary always states, where the run covers them. */
@@ -42,13 +42,13 @@ export function printProjectionSummary(p: Projection, out: { write: (s: string) 
   for (let y = Math.ceil(start / step) * step; y <= last; y += step) rows.push(y);
   if (rows[0] !== start) rows.unshift(start);
   if (rows[rows.length - 1] !== last) rows.push(last);
-  const header = ['year', ...TABLE_COLUMNS.map(([, label]) => label)];
-  const widths = header.map((h) => Math.max(h.length, 6));
-  lines.push('  ' + header.map((h, i) => h.padStart(widths[i])).join('  '));
-  for (const y of rows) {
-    const cells = [String(y), ...TABLE_COLUMNS.map(([col, , digits]) => valueAtYear(years, columns[col], y).toFixed(digits))];
-    lines.push('  ' + cells.map((c, i) => c.padStart(widths[i])).join('  '));
-  }
+  lines.push(
+    plainTable({
+      columns: ['year', ...TABLE_COLUMNS.map(([, label]) => label)],
+      rows: rows.map((y) => [String(y), ...TABLE_COLUMNS.map(([col, , digits]) => valueAtYear(years, columns[col], y).toFixed(digits))]),
+      numeric: [true, ...TABLE_COLUMNS.map(() => true)],
+    }).trimEnd(),
+  );
   lines.push('');
 
   const headline = HEADLINE_YEARS.filter((y) => y >= first && y <= last).map((y) => `${y}: ${valueAtYear(years, w, y).toFixed(2)} K`);
