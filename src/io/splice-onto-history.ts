@@ -18,7 +18,9 @@ import { GASES, PATHWAY_COLUMNS, type Pathway, type PathwayColumn } from '../pat
  * - a column in the pathway but not in the history (nor its other form) is NaN before F.
  * - a column in neither stays absent (physics holds it at pre-industrial and says so).
  * - when F is more than one year after H, the years in between are bridged linearly from the
- *   history's year-H value to the pathway's year-F value, column by column.
+ *   history's year-H value to the pathway's year-F value, column by column; an emission column
+ *   whose gas the history gives as a concentration is held at its year-F value over the gap instead
+ *   (the carbon cycle joins it to the history), and a note says so.
  *
  * A pathway starting at or before the history's first year is returned as it is.
  *
@@ -51,6 +53,7 @@ export function spliceOntoHistory(future: Pathway, history: Pathway): Pathway {
   const heldAtMean: PathwayColumn[] = [];
   const bridgedColumns: PathwayColumn[] = [];
   const unbridgeable: PathwayColumn[] = [];
+  const backfilled: PathwayColumn[] = [];
   const notInHistory: PathwayColumn[] = [];
   const switched: [given: PathwayColumn, replaced: PathwayColumn][] = [];
 
@@ -61,12 +64,13 @@ export function spliceOntoHistory(future: Pathway, history: Pathway): Pathway {
     const other = otherForm(column);
     const out = new Float64Array(count);
     if (fs) {
-      if (!hs && !(other && history.series[other])) notInHistory.push(column);
-      if (bridged) (hs ? bridgedColumns : unbridgeable).push(column);
+      const otherInHistory = Boolean(other && history.series[other]);
+      if (!hs && !otherInHistory) notInHistory.push(column);
+      if (bridged) (hs ? bridgedColumns : otherInHistory ? backfilled : unbridgeable).push(column);
       for (let i = 0; i < count; i++) {
         const y = years[i];
         if (y >= f0) out[i] = fs[y - f0];
-        else if (!hs) out[i] = NaN;
+        else if (!hs) out[i] = bridged && otherInHistory && y > hLast ? fs[0] : NaN;
         else if (y <= hLast) out[i] = hs[y - h0];
         else out[i] = hs[hLast - h0] + ((fs[0] - hs[hLast - h0]) * (y - hLast)) / (f0 - hLast);
       }
@@ -118,9 +122,15 @@ export function spliceOntoHistory(future: Pathway, history: Pathway): Pathway {
       notes.push(`${heldAtMean.join(', ')} not in file: taken from history to ${hLast}, then held at the mean of ${Math.max(h0, hLast - HELD_MEAN_YEARS + 1)}-${hLast}`);
     }
   }
+  if (backfilled.length > 0) {
+    const gap = f0 - 1 > hLast + 1 ? `${hLast + 1}-${f0 - 1}` : `${hLast + 1}`;
+    notes.push(`${backfilled.join(', ')} held at the file's ${f0} value over ${gap}: the history gives `
+      + `that gas as a concentration, which cannot be bridged linearly to an emission rate`);
+  }
   for (const [given, replaced] of switched) {
+    const from = backfilled.includes(given) ? hLast + 1 : f0;
     notes.push(`${given} given instead of the history's ${replaced}: ${replaced} holds history values to `
-      + `${Math.min(f0 - 1, hLast)} and is NaN from ${f0}; ${given} is NaN before ${f0}`);
+      + `${from - 1} and is NaN from ${from}; ${given} is NaN before ${from}`);
   }
   if (notInHistory.length > 0) notes.push(`${notInHistory.join(', ')} not in history: NaN before ${f0}`);
 

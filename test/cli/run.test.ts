@@ -157,3 +157,19 @@ describe('working directory', () => {
     expect(existsSync(join(dir, 'out.csv'))).toBe(true);
   });
 });
+
+describe('an emission file that starts a few years after the history', () => {
+  it('runs end to end with dates, holding the first emissions over the gap, and writes the carbon columns', async () => {
+    const dir = tmp();
+    const file = join(dir, 'plan.csv');
+    writeFileSync(file, '# name: My plan\ndate,co2_gtco2,ch4_mt\n2030-07-02,38,360\n2050-07-02,0,250\n2100-07-02,-5,200\n');
+    const io = captureIo();
+    expect(await main(['run', file, '--out', join(dir, 'out.csv'), '--no-chart'], io)).toBe(0);
+    expect(io.out).toMatch(/co2_gtco2, ch4_mt held at the file's 2030 value over 2025-2029/);
+    const rows = Papa.parse<Record<string, string>>(readFileSync(join(dir, 'out.csv'), 'utf8').trim(), { header: true }).data;
+    const at = (y: number) => rows.find((r) => Number(r.year) === y)!;
+    expect(Number(at(2027).co2_gtco2)).toBe(38);
+    expect(Number(at(2100).cumulative_co2_gtco2)).toBeGreaterThan(Number(at(2019).cumulative_co2_gtco2));
+    expect(Number.isFinite(Number(at(2100).airborne_fraction))).toBe(true);
+  });
+});

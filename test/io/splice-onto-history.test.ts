@@ -98,11 +98,26 @@ describe('spliceOntoHistory', () => {
     expect(s.provenance.notes).toContain("2005-2006 bridged linearly from the history's 2004 value to the file's 2007 value (co2_ppm)");
   });
 
-  it('spliceOntoHistory refuses a gap it cannot bridge (emissions after a concentration history)', () => {
+  it('spliceOntoHistory holds emissions at their first value over a gap after a concentration history (the carbon cycle joins them)', () => {
     const future = pathway(2007, { co2_gtco2: [40, 38] }, 'plan.csv');
-    expect(() => spliceOntoHistory(future, history)).toThrow(InputError);
-    expect(() => spliceOntoHistory(future, history)).toThrow(
-      'plan.csv: column "co2_gtco2": must start by 2005 to follow the history, which ends in 2004',
+    const s = spliceOntoHistory(future, history);
+    const nan = NaN;
+    expect(values(s, 'co2_gtco2')).toEqual([nan, nan, nan, nan, nan, 40, 40, 40, 38]);
+    expect(values(s, 'co2_ppm')).toEqual([370, 371, 372, 373, 374, nan, nan, nan, nan]);
+    expect(s.provenance.notes).toContain(
+      "co2_gtco2 held at the file's 2007 value over 2005-2006: the history gives that gas as a concentration, which cannot be bridged linearly to an emission rate",
+    );
+    expect(s.provenance.notes).toContain(
+      "co2_gtco2 given instead of the history's co2_ppm: co2_ppm holds history values to 2004 and is NaN from 2005; co2_gtco2 is NaN before 2005",
+    );
+  });
+
+  it('spliceOntoHistory refuses a gap it cannot bridge (a column the history has in neither form)', () => {
+    const noAerosol = { ...history, series: { co2_ppm: history.series.co2_ppm } };
+    const future = pathway(2007, { co2_ppm: [383, 384], aerosol_wm2: [-1, -1] }, 'plan.csv');
+    expect(() => spliceOntoHistory(future, noAerosol)).toThrow(InputError);
+    expect(() => spliceOntoHistory(future, noAerosol)).toThrow(
+      'plan.csv: column "aerosol_wm2": must start by 2005 to follow the history, which ends in 2004',
     );
   });
 });
