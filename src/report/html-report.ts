@@ -30,9 +30,9 @@ h2 { font-size: 1.2rem; margin-top: 2rem; border-bottom: 1px solid #d0d0d0; padd
 .summary { font-size: 1.02rem; }
 .cautions { border-left: 4px solid #b45309; background: #fff8eb; padding: 0.6rem 1rem; }
 .cautions h2 { margin-top: 0.2rem; border: none; }
-table { border-collapse: collapse; margin: 0.8rem 0; font-variant-numeric: tabular-nums; }
+table { border-collapse: collapse; margin: 0.8rem 0; width: 100%; font-size: 0.9rem; font-variant-numeric: tabular-nums; }
 caption { text-align: left; font-weight: 600; padding-bottom: 0.3rem; }
-th, td { border: 1px solid #cfcfcf; padding: 0.25rem 0.6rem; vertical-align: top; }
+th, td { border: 1px solid #cfcfcf; padding: 0.25rem 0.45rem; vertical-align: top; }
 th { background: #f2f2f2; text-align: left; }
 td.num, th.num { text-align: right; }
 td.num { white-space: nowrap; }
