@@ -94,7 +94,12 @@ function bucketSelect(values: Float64Array, from: number, to: number, ranks: num
   const scale = buckets / (max - min);
   const counts = new Int32Array(buckets + 1);
   // Monotone in v: subtracting, scaling by a positive number and flooring never reorder values.
-  for (let i = from; i < to; i++) counts[Math.min(buckets - 1, Math.floor((values[i] - min) * scale)) + 1]++;
+  // (v - min) * scale is >= 0, so truncation (`| 0`) is the floor; only v = max can reach `buckets`.
+  const last = buckets - 1;
+  for (let i = from; i < to; i++) {
+    const b = ((values[i] - min) * scale) | 0;
+    counts[(b > last ? last : b) + 1]++;
+  }
   for (let b = 1; b <= buckets; b++) counts[b] += counts[b - 1]; // counts[b]: values in buckets below b
   // The bucket of each wanted rank, and where its values go in the candidate buffer.
   const wanted = new Int32Array(buckets).fill(-1);
@@ -119,7 +124,8 @@ function bucketSelect(values: Float64Array, from: number, to: number, ranks: num
   const fill = starts.slice();
   for (let i = from; i < to; i++) {
     const v = values[i];
-    const slot = wanted[Math.min(buckets - 1, Math.floor((v - min) * scale))];
+    const b = ((v - min) * scale) | 0;
+    const slot = wanted[b > last ? last : b];
     if (slot >= 0) candidates[fill[slot]++] = v;
   }
   ranks.forEach((r, j) => {
