@@ -39,3 +39,5 @@ export {
   ppmToGtc,
 } from './units.js';
 export { irf100Target, MILLAR_2017, uptakeTimescaleScaling } from './uptake-feedback.js';
+export { annualCarbonState, annualCarbonStepForIncreaseInto, annualCarbonStepInto, annualTimescaleScaling, atmosphericGtc } from './annual-carbon-step.js';
+export type { AnnualCarbonState } from './annual-carbon-step.js';

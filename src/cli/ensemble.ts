@@ -26,9 +26,13 @@ interface EnsembleCliOptions extends ModelOptions {
 
 /** The uncertainty sentence of an ensemble's outputs. */
 function uncertaintyText(r: EnsembleResult): string {
+  const carbon = r.config.emissionDriven
+    ? ' Each member also runs its own CO2 cycle, responding to its own warming, with a sampled multiplier on the carbon-cycle response time (Joos et al. 2013 spread); CH4 and N2O follow one central run.'
+    : '';
   return (
     `Ranges are the 5-95 % and 17-83 % spread of ${r.memberCount} members whose ECS, TCR, 2xCO2 forcing and aerosol forcing ` +
-    'were drawn to match the IPCC AR6 assessed ranges; they do not include uncertainty in the pathway, in the model structure or, for emission pathways, in the carbon cycle.'
+    `were drawn to match the IPCC AR6 assessed ranges.${carbon} They do not include uncertainty in the pathway or in the model structure, ` +
+    'and they are not constrained by observed warming.'
   );
 }
 

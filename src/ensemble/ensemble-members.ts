@@ -27,6 +27,11 @@ export interface EnsembleConfig {
   co2Formula: Co2Formula;
   /** Sampling of the parameters. */
   sampling: EnsembleSampling;
+  /**
+   * True when members run the carbon cycle on the pathway's CO2 emissions (and draw the carbon-cycle
+   * multiplier); false for concentration-driven ensembles.
+   */
+  emissionDriven: boolean;
   /** Checksum of the input forcing series (FNV-1a over their bytes), to refuse merging different pathways. */
   inputChecksum: string;
 }

@@ -12,6 +12,8 @@ export type { ShardInput, ShardMerger } from './merge-shards.js';
 export { runEnsemble, shardRange } from './run-ensemble.js';
 export type { EnsembleInput, EnsembleOptions } from './run-ensemble.js';
 export { defaultWorkerCount, workerThreadsAvailable } from './run-members-parallel.js';
+export { emissionMemberWarmingInto, runEmissionMembersInto } from './run-emission-members.js';
+export type { MemberCarbonTask } from './run-emission-members.js';
 export { runMembersInto } from './run-members.js';
 export type { MemberBlock, MemberTask } from './run-members.js';
 export { RUNNING_MEAN_WINDOW } from './running-mean.js';

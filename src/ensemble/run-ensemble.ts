@@ -4,6 +4,7 @@ import type { Co2Formula } from '../forcing/co2.js';
 import type { EnsembleConfig, EnsembleMembers } from './ensemble-members.js';
 import { MEMBER_STREAM_SCHEME } from './member-generators.js';
 import { defaultWorkerCount, runMembersParallel } from './run-members-parallel.js';
+import type { MemberCarbonTask } from './run-emission-members.js';
 import type { MemberTask } from './run-members.js';
 import { AR6_SAMPLING, validateSampling, type EnsembleSampling } from './sampling.js';
 import { summarizeEnsemble, type EnsembleResult } from './summarize-ensemble.js';
@@ -19,6 +20,12 @@ export interface EnsembleInput {
   forcing: ForcingSeries;
   /** CO2 formula the CO2 agent was computed with (default ar6). */
   co2Formula?: Co2Formula;
+  /**
+   * Emission-driven pathways: the CO2 drivers of each member's own carbon cycle (history
+   * concentrations, emissions, central CH4 and N2O). Members then draw a carbon-cycle multiplier
+   * and compute their CO2, CH4 and N2O forcing themselves; `forcing`'s CO2 agent is not used.
+   */
+  carbon?: MemberCarbonTask;
 }
 
 /** Options of {@link runEnsemble}. */
@@ -45,6 +52,8 @@ export interface EnsembleOptions {
 
 /** Version of the draw layout (see drawMember). */
 const DRAW_LAYOUT = 'draws in turn: ECS, 2xCO2 ERF, aerosol, TCR given ECS, each redrawn alone until physical; v1';
+/** What emission-driven members draw after the climate quantities. */
+const CARBON_DRAW_LAYOUT = 'then the carbon-cycle iIRF100 multiplier, redrawn alone until positive; annual carbon step v1';
 
 /**
  * Runs a parameter ensemble for one pathway: samples each member's ECS, TCR, 2xCO2 forcing and
@@ -122,9 +131,16 @@ function ensembleConfig(input: EnsembleInput, options: EnsembleOptions, sampling
   if (!(Number.isInteger(from) && Number.isInteger(to) && from <= to && from >= years[0] && to <= years[n - 1])) {
     throw new ConfigError(`baseline ${from}-${to} must lie within the run's years ${years[0]}-${years[n - 1]}`, 'baseline');
   }
+  const c = input.carbon;
+  if (c) {
+    for (const [name, series] of Object.entries(c)) {
+      if (typeof series !== 'number' && series.length !== n) throw new ConfigError(`carbon input ${name} must have one value per year (${n}), got ${series.length}`, 'carbon');
+    }
+  }
   const a = input.forcing.byAgent;
+  const carbonSeries = c ? [c.co2Ppm, c.co2EmissionGtcPerYr, Float64Array.of(c.co2StartPpm), c.ch4Ppb, c.n2oPpb] : [];
   return {
-    scheme: `${MEMBER_STREAM_SCHEME}; ${DRAW_LAYOUT}`,
+    scheme: c ? `${MEMBER_STREAM_SCHEME}; ${DRAW_LAYOUT}; ${CARBON_DRAW_LAYOUT}` : `${MEMBER_STREAM_SCHEME}; ${DRAW_LAYOUT}`,
     seed,
     membersTotal: members,
     firstYear: years[0],
@@ -134,7 +150,8 @@ function ensembleConfig(input: EnsembleInput, options: EnsembleOptions, sampling
     milestones: [...milestones],
     co2Formula: input.co2Formula ?? 'ar6',
     sampling,
-    inputChecksum: checksum([a.co2, a.ch4, a.n2o, a.aerosol, a.other, a.solar, a.volcanic]),
+    emissionDriven: c !== undefined,
+    inputChecksum: checksum([a.co2, a.ch4, a.n2o, a.aerosol, a.other, a.solar, a.volcanic, ...carbonSeries]),
   };
 }
 
@@ -142,7 +159,9 @@ function memberTask(input: EnsembleInput, config: EnsembleConfig): MemberTask {
   const a = input.forcing.byAgent;
   const n = config.yearCount;
   const otherWm2 = new Float64Array(n);
-  for (let k = 0; k < n; k++) otherWm2[k] = a.ch4[k] + a.n2o[k] + a.other[k] + a.solar[k] + a.volcanic[k];
+  // Emission-driven members compute their own CO2, CH4 and N2O forcing.
+  if (input.carbon) for (let k = 0; k < n; k++) otherWm2[k] = a.other[k] + a.solar[k] + a.volcanic[k];
+  else for (let k = 0; k < n; k++) otherWm2[k] = a.ch4[k] + a.n2o[k] + a.other[k] + a.solar[k] + a.volcanic[k];
   return {
     seed: config.seed,
     sampling: config.sampling,
@@ -152,6 +171,7 @@ function memberTask(input: EnsembleInput, config: EnsembleConfig): MemberTask {
     otherWm2,
     baselineFrom: config.baseline[0] - config.firstYear,
     baselineTo: config.baseline[1] - config.firstYear,
+    ...(input.carbon ? { carbon: input.carbon } : {}),
   };
 }
 

@@ -3,6 +3,7 @@ import type { Co2Formula } from '../forcing/co2.js';
 import { drawMember, emptyDraw, memberSampler, storeDraw, type MemberParameter } from './sample-members.js';
 import { memberGenerators } from './member-generators.js';
 import { emptyTwoBoxPropagator, modalTwoBoxPropagatorInto } from './modal-propagator.js';
+import { runEmissionMembersInto, type MemberCarbonTask } from './run-emission-members.js';
 import type { EnsembleSampling } from './sampling.js';
 
 /**
@@ -10,10 +11,10 @@ import type { EnsembleSampling } from './sampling.js';
  *
  * Concentration-driven runs: a member's forcing is its CO2 multiplier times the CO2 agent, its
  * aerosol multiplier times the aerosol agent, plus the sum of the other agents, all precomputed once
- * per pathway. Emission-driven runs (the carbon cycle of src/carbon/) hook in here: the task would
- * carry the emissions and the carbon-cycle settings, {@link drawMember} would draw the member's
- * carbon-cycle parameters after its climate ones (so the climate draws of member i stay the same),
- * and {@link runMembersInto} would integrate the member's CO2 concentration before its forcing.
+ * per pathway. Emission-driven runs carry `carbon`: each member then steps its own CO2 concentration
+ * with the annual carbon-cycle step (run-emission-members.ts), driven by its own warming and its
+ * carbon-cycle multiplier (drawn after its climate parameters, so the climate draws of member i
+ * stay the same); `co2Wm2` is then unused and `otherWm2` holds the agents other than CO2.
  */
 export interface MemberTask {
   seed: number;
@@ -29,6 +30,8 @@ export interface MemberTask {
   /** Indices of the first and last baseline years (inclusive). */
   baselineFrom: number;
   baselineTo: number;
+  /** Emission-driven runs: the CO2 drivers of each member's carbon cycle (absent for concentration runs). */
+  carbon?: MemberCarbonTask;
 }
 
 /**
@@ -67,6 +70,7 @@ const STAGE_MEMBERS = 64;
  * @returns unphysical draws discarded in total
  */
 export function runMembersInto(task: MemberTask, from: number, to: number, block: MemberBlock, onProgress?: (done: number) => void): number {
+  if (task.carbon) return runEmissionMembersInto(task, task.carbon, from, to, block, onProgress);
   const n = task.co2Wm2.length;
   const { co2Wm2, aerosolWm2, otherWm2, baselineFrom, baselineTo } = task;
   const { upperHeatCapacity, deepHeatCapacity, deepEfficacy } = task.sampling;
@@ -134,7 +138,7 @@ export function runMembersInto(task: MemberTask, from: number, to: number, block
  * Copies `count` staged member rows, less each member's baseline mean, into the block's year-major
  * layout from member column `column`.
  */
-function flushStage(stage: Float64Array, means: Float64Array, count: number, n: number, block: MemberBlock, column: number): void {
+export function flushStage(stage: Float64Array, means: Float64Array, count: number, n: number, block: MemberBlock, column: number): void {
   const w = block.warmingK;
   const stride = block.memberCount;
   for (let k = 0; k < n; k++) {

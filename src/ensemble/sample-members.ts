@@ -9,7 +9,7 @@ import { normalQuantile } from './normal-quantile.js';
 import type { EnsembleSampling } from './sampling.js';
 
 /** The parameters each member carries, in storage order. */
-export const MEMBER_PARAMETERS = ['ecsK', 'tcrK', 'forcing2xWm2', 'aerosolScale', 'feedbackWm2K', 'exchangeWm2K'] as const;
+export const MEMBER_PARAMETERS = ['ecsK', 'tcrK', 'forcing2xWm2', 'aerosolScale', 'feedbackWm2K', 'exchangeWm2K', 'irf100Scale'] as const;
 export type MemberParameter = (typeof MEMBER_PARAMETERS)[number];
 
 /** JSON keys of the member parameters (DESIGN.md parameter names where they exist). */
@@ -20,6 +20,7 @@ export const MEMBER_PARAMETER_KEYS: Record<MemberParameter, string> = {
   aerosolScale: 'aerosol_scale',
   feedbackWm2K: 'feedback_wm2k',
   exchangeWm2K: 'exchange_wm2k',
+  irf100Scale: 'irf100_scale',
 };
 
 /** One member's sampled and derived parameters. */
@@ -38,6 +39,11 @@ export interface MemberDraw {
   feedbackWm2K: number;
   /** gamma giving the member's TCR, W m-2 K-1. */
   exchangeWm2K: number;
+  /**
+   * Multiplier on the pre-industrial iIRF100 of the carbon cycle (Millar et al. 2017's r0); drawn
+   * only for emission-driven ensembles, 1 (not sampled) otherwise.
+   */
+  irf100Scale: number;
 }
 
 /** Everything drawing a member needs, prepared once per ensemble. */
@@ -49,6 +55,8 @@ export interface MemberSampler {
   tcr: TcrSolver;
   /** sqrt(1 - rho^2) of the ECS-TCR copula. */
   independentWeight: number;
+  /** Whether members draw the carbon-cycle multiplier (emission-driven ensembles only). */
+  carbon: boolean;
 }
 
 /** Consecutive unphysical draws of one quantity after which a member gives up: the sampling is then at fault. */
@@ -61,10 +69,12 @@ const TCR_ATTEMPTS = 100;
 
 /**
  * Prepares the sampler for an ensemble (validated sampling assumed; see validateSampling).
+ * @param carbon true for an emission-driven ensemble: members also draw the carbon-cycle multiplier
  * @example drawMember(rng, memberSampler(AR6_SAMPLING, 'ar6'), draw)
  */
-export function memberSampler(sampling: EnsembleSampling, co2Formula: Co2Formula): MemberSampler {
+export function memberSampler(sampling: EnsembleSampling, co2Formula: Co2Formula, carbon = false): MemberSampler {
   return {
+    carbon,
     sampling,
     formulaForcing2xWm2: forcingOfDoubling(co2Formula),
     tcr: tcrSolver(co2Formula),
@@ -85,7 +95,8 @@ export function memberSampler(sampling: EnsembleSampling, co2Formula: Co2Formula
  * member's lambda. Redrawing only the TCR (rather than the whole member) keeps the ECS, forcing and
  * aerosol distributions exactly as assessed and truncates TCR given ECS at the model's physical
  * limit. Only when 100 TCR draws in a row fail (an ECS deep in its low tail) is the whole member
- * drawn anew.
+ * drawn anew. For emission-driven ensembles (`sampler.carbon`) the multiplier on the carbon cycle's
+ * pre-industrial iIRF100 is drawn after all of these (redrawn alone while not positive).
  *
  * @param rng the member's generator (advanced in place)
  * @param sampler from {@link memberSampler}
@@ -135,6 +146,13 @@ export function drawMember(rng: RandomGenerator, sampler: MemberSampler, out: Me
     out.aerosolScale = aerosolScale;
     out.feedbackWm2K = feedbackWm2K;
     out.exchangeWm2K = exchangeWm2K;
+    // Drawn last, and only for emission-driven ensembles, so that the climate draws of every member
+    // (and everything a concentration-driven ensemble computes) stay exactly as they were.
+    out.irf100Scale = 1;
+    if (sampler.carbon) {
+      out.irf100Scale = until(() => assessedQuantile(s.irf100Scale, score()), (v) => v > 0 && v < Infinity, MAX_ATTEMPTS);
+      if (Number.isNaN(out.irf100Scale)) break;
+    }
     return discarded;
   }
   throw new ConfigError(
@@ -159,10 +177,11 @@ export interface SampledMembers {
  * @param sampling validated sampling
  * @param co2Formula formula whose 2xCO2 forcing the multiplier scales (default ar6)
  * @param start first member index (default 0)
+ * @param carbon draw the carbon-cycle multiplier too, as emission-driven ensembles do (default false)
  * @example sampleMembers(7, 1000, AR6_SAMPLING).parameters.ecsK // 1000 ECS values, median near 3 K
  */
-export function sampleMembers(seed: number, count: number, sampling: EnsembleSampling, co2Formula: Co2Formula = 'ar6', start = 0): SampledMembers {
-  const sampler = memberSampler(sampling, co2Formula);
+export function sampleMembers(seed: number, count: number, sampling: EnsembleSampling, co2Formula: Co2Formula = 'ar6', start = 0, carbon = false): SampledMembers {
+  const sampler = memberSampler(sampling, co2Formula, carbon);
   const next = memberGenerators(seed, start);
   const parameters = emptyParameters(count);
   const draw = emptyDraw();
@@ -176,7 +195,7 @@ export function sampleMembers(seed: number, count: number, sampling: EnsembleSam
 
 /** A MemberDraw to be filled by drawMember. */
 export function emptyDraw(): MemberDraw {
-  return { ecsK: NaN, tcrK: NaN, forcing2xScale: NaN, forcing2xWm2: NaN, aerosolScale: NaN, feedbackWm2K: NaN, exchangeWm2K: NaN };
+  return { ecsK: NaN, tcrK: NaN, forcing2xScale: NaN, forcing2xWm2: NaN, aerosolScale: NaN, feedbackWm2K: NaN, exchangeWm2K: NaN, irf100Scale: NaN };
 }
 
 /** One Float64Array of `count` per member parameter. */

@@ -18,6 +18,11 @@ export interface EnsembleSampling {
   forcing2xScale: AssessedRange;
   /** Multiplier on the pathway's aerosol ERF series (1 = as given). */
   aerosolScale: AssessedRange;
+  /**
+   * Multiplier on the carbon cycle's pre-industrial iIRF100 r0 (Millar et al. 2017; 1 = 32.4 yr).
+   * Drawn only by emission-driven ensembles.
+   */
+  irf100Scale: AssessedRange;
   /** Correlation of the normal scores of ECS and TCR, in (-1, 1). */
   ecsTcrCorrelation: number;
   /** Upper heat capacity C, W yr m-2 K-1, held fixed. */
@@ -45,6 +50,15 @@ export interface EnsembleSampling {
  *   calibrated member by member, implies when neither is allowed to inform the other (treating them
  *   as independent is an assumption: common practice, no source). Found by bisection on 100,000
  *   draws (0.6397, standard error about 0.003); test/ensemble/sample-members.test.ts re-checks it.
+ * - Carbon cycle (emission-driven ensembles only): a multiplier on the pre-industrial iIRF100 r0 of
+ *   Millar et al. 2017 with median 1 and 5-95 % 1 ± 12.3 / 52.4 (0.765-1.235), the relative spread
+ *   across models of the 100-year time-integrated CO2 impulse response in Joos et al. 2013 (ACP 13,
+ *   2793, Table 4: 52.4 ± 12.3 yr for the present-day 100 Gt C pulse, the ± read as a 5-95 % range;
+ *   from memory). It is consistent with the same paper's AGWP100 range (92.7, 5-95 % 68-117 x 1e-15
+ *   yr W m-2 kg-1, about ±26 %, which also holds the radiative-efficiency uncertainty). Applying the
+ *   present-day relative spread to the pre-industrial r0 is an assumption (common practice, no
+ *   source). It is drawn after every climate quantity, so concentration-driven ensembles draw
+ *   exactly what they drew before it existed.
  * - Heat capacities and efficacy: the deterministic model's (CALIBRATION_DEFAULTS), held fixed;
  *   the spread of the ocean's response enters through gamma.
  */
@@ -53,13 +67,14 @@ export const AR6_SAMPLING: EnsembleSampling = {
   tcrK: { p05: 1.2, p17: 1.4, p50: 1.8, p83: 2.2, p95: 2.4 },
   forcing2xScale: normalRange(1, 0.47 / 3.93),
   aerosolScale: normalRange(1, 0.7 / 1.3),
+  irf100Scale: normalRange(1, 12.3 / 52.4),
   ecsTcrCorrelation: 0.64,
   upperHeatCapacity: CALIBRATION_DEFAULTS.upperHeatCapacity,
   deepHeatCapacity: CALIBRATION_DEFAULTS.deepHeatCapacity,
   deepEfficacy: CALIBRATION_DEFAULTS.deepEfficacy,
 };
 
-const RANGE_KEYS = ['ecsK', 'tcrK', 'forcing2xScale', 'aerosolScale'] as const;
+const RANGE_KEYS = ['ecsK', 'tcrK', 'forcing2xScale', 'aerosolScale', 'irf100Scale'] as const;
 const FIXED_KEYS = ['upperHeatCapacity', 'deepHeatCapacity', 'deepEfficacy'] as const;
 
 /**
@@ -89,16 +104,18 @@ export function validateSampling(s: EnsembleSampling): void {
 }
 
 /**
- * One line per sampled quantity, for the provenance of an output.
+ * One line per sampled quantity, for the provenance of an output; the carbon-cycle multiplier only
+ * when `carbon` (an emission-driven ensemble, the only kind that draws it).
  * @example describeSampling(AR6_SAMPLING)[0] // 'ECS: 2 / 2.5 / 3 / 4 / 5 K (5 / 17 / 50 / 83 / 95 %)'
  */
-export function describeSampling(s: EnsembleSampling): string[] {
+export function describeSampling(s: EnsembleSampling, carbon = false): string[] {
   const five = (r: AssessedRange, unit: string) => `${[r.p05, r.p17, r.p50, r.p83, r.p95].map((v) => +v.toPrecision(4)).join(' / ')}${unit} (5 / 17 / 50 / 83 / 95 %)`;
   return [
     `ECS: ${five(s.ecsK, ' K')}`,
     `TCR: ${five(s.tcrK, ' K')}`,
     `2xCO2 ERF multiplier: ${five(s.forcing2xScale, '')}`,
     `aerosol ERF multiplier: ${five(s.aerosolScale, '')}`,
+    ...(carbon ? [`carbon-cycle pre-industrial iIRF100 multiplier: ${five(s.irf100Scale, '')}`] : []),
     `ECS-TCR normal-score correlation: ${s.ecsTcrCorrelation}`,
     `fixed: upper heat capacity ${s.upperHeatCapacity}, deep heat capacity ${s.deepHeatCapacity} W yr m-2 K-1, deep efficacy ${s.deepEfficacy}; gamma solved per member from its TCR`,
   ];

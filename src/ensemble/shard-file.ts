@@ -7,7 +7,7 @@ import type { EnsembleSampling } from './sampling.js';
 /** The `format` field of a shard file. */
 export const SHARD_FORMAT = 'warmcast-ensemble-shard';
 /** Version of the shard layout. */
-export const SHARD_VERSION = 1;
+export const SHARD_VERSION = 2;
 
 /** JSON keys of the sampling description. */
 const SAMPLING_KEYS = {
@@ -15,16 +15,17 @@ const SAMPLING_KEYS = {
   tcrK: 'tcr_k',
   forcing2xScale: 'forcing_2x_scale',
   aerosolScale: 'aerosol_scale',
+  irf100Scale: 'irf100_scale',
   ecsTcrCorrelation: 'ecs_tcr_correlation',
   upperHeatCapacity: 'upper_heat_capacity',
   deepHeatCapacity: 'deep_heat_capacity',
   deepEfficacy: 'deep_efficacy',
 } as const satisfies Record<keyof EnsembleSampling, string>;
-const RANGE_FIELDS = ['ecsK', 'tcrK', 'forcing2xScale', 'aerosolScale'] as const;
+const RANGE_FIELDS = ['ecsK', 'tcrK', 'forcing2xScale', 'aerosolScale', 'irf100Scale'] as const;
 const PERCENTILE_FIELDS = ['p05', 'p17', 'p50', 'p83', 'p95'] as const;
 
 /**
- * Bytes of a shard file: every member's yearly warming and its six parameters as little-endian
+ * Bytes of a shard file: every member's yearly warming and its seven parameters as little-endian
  * Float64 in base64 (4/3 of 8 bytes per value), plus under 2 kB of description.
  * @example shardFileBytes(10_000, 551) // ≈ 59.4 MB
  */
@@ -59,6 +60,7 @@ export function shardToJson(members: EnsembleMembers): string {
       milestones: c.milestones,
       co2_formula: c.co2Formula,
       sampling,
+      emission_driven: c.emissionDriven,
       input_checksum: c.inputChecksum,
     },
     shard: members.shard ?? null,
@@ -117,6 +119,7 @@ export function shardFromJson(text: string, file: string): EnsembleMembers {
   const milestones = numbers(cfg.milestones, 'config.milestones');
   if (cfg.co2_formula !== 'ar6' && cfg.co2_formula !== 'log') problem('config.co2_formula', 'must be "ar6" or "log"');
   if (typeof cfg.scheme !== 'string') problem('config.scheme', 'must be a string');
+  if (typeof cfg.emission_driven !== 'boolean') problem('config.emission_driven', 'must be true or false');
   if (typeof cfg.input_checksum !== 'string') problem('config.input_checksum', 'must be a string');
   const sampling = readSampling(cfg.sampling, problem);
 
@@ -146,6 +149,7 @@ export function shardFromJson(text: string, file: string): EnsembleMembers {
     milestones,
     co2Formula: cfg.co2_formula as EnsembleConfig['co2Formula'],
     sampling: sampling!,
+    emissionDriven: cfg.emission_driven as boolean,
     inputChecksum: cfg.input_checksum as string,
   };
   return { config, shard, memberStart, memberCount, warmingK, parameters, redraws };

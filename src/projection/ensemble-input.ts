@@ -1,18 +1,22 @@
+import { gtco2ToGtc } from '../carbon/units.js';
 import type { EnsembleInput } from '../ensemble/run-ensemble.js';
 import type { ClimateParams } from '../climate/params.js';
 import { forcingByAgent } from '../forcing/agents.js';
-import { EMISSION_COLUMNS, type Pathway } from '../pathway.js';
+import { PREINDUSTRIAL } from '../forcing/constants.js';
+import { EMISSION_COLUMNS, GASES, type Pathway } from '../pathway.js';
 import { projectPathway } from './project-pathway.js';
 
 /**
  * The forcing an ensemble perturbs for a pathway: ERF by agent with the CO2 formula's own doubling
  * forcing and the aerosol series as given (members rescale both). A concentration pathway's gases
- * are used as given. An emission pathway is first run once with the central parameters (carbon
- * cycle with its feedback) and its projected concentrations are used for every member: the members
- * then sample climate parameters, not the carbon cycle, and a note says so.
+ * are used as given. For a pathway with CO2 emissions, every member runs its own carbon cycle
+ * (annual steps of the Joos et al. 2013 boxes with the Millar et al. 2017 feedback) driven by its
+ * own warming and a sampled multiplier on the pre-industrial iIRF100; the pathway's history
+ * concentrations, its emissions and the CH4 and N2O of one central run (gases without a climate
+ * feedback in the model) are passed to the members. The central run also checks the pathway.
  *
  * @param pathway annual pathway (spliced onto history as a run would be)
- * @param params central parameters (used for the carbon cycle of emission pathways and the formula)
+ * @param params central parameters (used for the CH4 and N2O of emission pathways and the formula)
  * @returns the ensemble input and the notes to carry into provenance
  */
 export function ensembleInput(pathway: Pathway, params: ClimateParams): { input: EnsembleInput; notes: string[] } {
@@ -20,14 +24,38 @@ export function ensembleInput(pathway: Pathway, params: ClimateParams): { input:
   const n = pathway.years.length;
   const notes: string[] = [];
   let gases = { co2Ppm: s.co2_ppm, ch4Ppb: s.ch4_ppb, n2oPpb: s.n2o_ppb };
+  let carbon: EnsembleInput['carbon'];
   if (EMISSION_COLUMNS.some((c) => s[c] !== undefined)) {
     const central = projectPathway(pathway, { params });
     gases = { co2Ppm: central.columns.co2_ppm, ch4Ppb: central.columns.ch4_ppb, n2oPpb: central.columns.n2o_ppb };
-    notes.push(
-      'emission-driven pathway: concentrations come from one carbon-cycle run with the central parameters ' +
-        `(ECS ${params.ecsK} K, TCR ${params.tcrK.toFixed(2)} K, uptake feedback on); the members sample the climate response, not the carbon cycle, so the ranges understate the total uncertainty`,
-    );
+    const emissions = s[GASES.co2.emission];
+    if (emissions) {
+      const given = s[GASES.co2.concentration];
+      const co2Ppm = new Float64Array(n).fill(NaN);
+      const co2EmissionGtcPerYr = new Float64Array(n).fill(NaN);
+      for (let k = 0; k < n; k++) {
+        if (given && Number.isFinite(given[k])) co2Ppm[k] = given[k];
+        else co2EmissionGtcPerYr[k] = gtco2ToGtc(emissions[k]);
+      }
+      carbon = {
+        co2Ppm,
+        co2EmissionGtcPerYr,
+        co2StartPpm: Number.isNaN(co2Ppm[0]) ? PREINDUSTRIAL.co2Ppm : co2Ppm[0],
+        ch4Ppb: Float64Array.from(central.columns.ch4_ppb),
+        n2oPpb: Float64Array.from(central.columns.n2o_ppb),
+      };
+      notes.push(
+        'emission-driven pathway: each member runs its own carbon cycle (Joos et al. 2013 boxes with the Millar et al. 2017 uptake feedback, stepped a year at a time with the feedback frozen over each year) ' +
+          'driven by its own warming and a sampled multiplier on the pre-industrial iIRF100 (median 1, 5-95 % 0.77-1.23, from the multi-model spread of Joos et al. 2013); ' +
+          `CH4 and N2O concentrations come from one run with the central parameters (ECS ${params.ecsK} K, TCR ${params.tcrK.toFixed(2)} K), as they have no climate feedback in the model`,
+      );
+    } else {
+      notes.push(
+        'CH4 and N2O emissions: concentrations come from one run with the central parameters ' +
+          `(ECS ${params.ecsK} K, TCR ${params.tcrK.toFixed(2)} K); they have no climate feedback in the model, so the members share them`,
+      );
+    }
   }
   const forcing = forcingByAgent(n, { ...gases, prescribed: s }, { co2Formula: params.co2Formula });
-  return { input: { years: pathway.years, forcing, co2Formula: params.co2Formula }, notes };
+  return { input: { years: pathway.years, forcing, co2Formula: params.co2Formula, ...(carbon ? { carbon } : {}) }, notes };
 }

@@ -15,7 +15,7 @@ function members(m: number, thresholds = [0.5, 1, 1.5]): EnsembleMembers {
     for (let k = 0; k < n; k++) warmingK[k * m + r] = v += drift + 0.1 * (random() - 0.5);
   }
   return {
-    config: { scheme: 'test', seed: 0, membersTotal: m, firstYear: 1900, yearCount: n, baseline: [1900, 1910], thresholds, milestones: [1950, 1990, 1995, 2000], co2Formula: 'ar6', sampling: AR6_SAMPLING, inputChecksum: '' },
+    config: { scheme: 'test', seed: 0, membersTotal: m, firstYear: 1900, yearCount: n, baseline: [1900, 1910], thresholds, milestones: [1950, 1990, 1995, 2000], co2Formula: 'ar6', sampling: AR6_SAMPLING, emissionDriven: false, inputChecksum: '' },
     memberStart: 0,
     memberCount: m,
     warmingK,
