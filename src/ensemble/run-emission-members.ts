@@ -6,7 +6,8 @@ import { ghgForcingFunction } from '../forcing/agents.js';
 import type { Co2Formula } from '../forcing/co2.js';
 import { memberGenerators } from './member-generators.js';
 import { emptyTwoBoxPropagator, modalTwoBoxPropagatorInto } from './modal-propagator.js';
-import { flushStage, PROGRESS_EVERY, type MemberBlock, type MemberTask } from './run-members.js';
+import { MemberStage } from './member-stage.js';
+import { PROGRESS_EVERY, type MemberBlock, type MemberTask } from './run-members.js';
 import { drawMember, emptyDraw, memberSampler, storeDraw } from './sample-members.js';
 
 /**
@@ -100,9 +101,6 @@ export function emissionMemberWarmingInto(
   }
 }
 
-/** Members staged before copying into the year-major block (as run-members.ts). */
-const STAGE_MEMBERS = 64;
-
 /**
  * runMembersInto for an emission-driven task: draws each member (with its carbon-cycle multiplier)
  * from its own stream, runs {@link emissionMemberWarmingInto} and stores the warming relative to the
@@ -123,30 +121,20 @@ export function runEmissionMembersInto(
   const sampler = memberSampler(task.sampling, task.co2Formula, true);
   const next = memberGenerators(task.seed, from);
   const draw = emptyDraw();
-  const stage = new Float64Array(STAGE_MEMBERS * n);
-  const stageMeans = new Float64Array(STAGE_MEMBERS);
-  const baselineYears = task.baselineTo - task.baselineFrom + 1;
+  const staging = new MemberStage(n, block, task.baselineFrom, task.baselineTo);
   const params: TwoBoxParams = { upperHeatCapacity, deepHeatCapacity, feedbackWm2K: NaN, exchangeWm2K: NaN, deepEfficacy };
   const prop = emptyTwoBoxPropagator();
   const state = annualCarbonState();
   let redraws = 0;
-  let staged = 0;
   for (let i = from; i < to; i++) {
     redraws += drawMember(next(), sampler, draw);
     storeDraw(block.parameters, i - block.blockStart, draw);
     params.feedbackWm2K = draw.feedbackWm2K;
     params.exchangeWm2K = draw.exchangeWm2K;
     modalTwoBoxPropagatorInto(params, prop);
-    const row = stage.subarray(staged * n, (staged + 1) * n);
+    const row = staging.rows.subarray(staging.offset, staging.offset + n);
     emissionMemberWarmingInto(carbon, task.co2Formula, task.otherWm2, task.aerosolWm2, prop, draw.forcing2xScale, draw.aerosolScale, draw.irf100Scale, state, row);
-    let sum = 0;
-    for (let k = task.baselineFrom; k <= task.baselineTo; k++) sum += row[k];
-    stageMeans[staged] = sum / baselineYears;
-    staged++;
-    if (staged === STAGE_MEMBERS || i + 1 === to) {
-      flushStage(stage, stageMeans, staged, n, block, i + 1 - staged - block.blockStart);
-      staged = 0;
-    }
+    staging.commit(i, to);
     if (onProgress && ((i - from + 1) % PROGRESS_EVERY === 0 || i + 1 === to)) onProgress(i - from + 1);
   }
   return redraws;

@@ -2,6 +2,7 @@ import type { TwoBoxParams } from '../climate/two-box.js';
 import type { Co2Formula } from '../forcing/co2.js';
 import { drawMember, emptyDraw, memberSampler, storeDraw, type MemberParameter } from './sample-members.js';
 import { memberGenerators } from './member-generators.js';
+import { MemberStage } from './member-stage.js';
 import { emptyTwoBoxPropagator, modalTwoBoxPropagatorInto } from './modal-propagator.js';
 import { runEmissionMembersInto, type MemberCarbonTask } from './run-emission-members.js';
 import type { EnsembleSampling } from './sampling.js';
@@ -52,9 +53,6 @@ export interface MemberBlock {
 /** How often (in members) a member run reports progress. */
 export const PROGRESS_EVERY = 250;
 
-/** Members run before their rows are copied into the year-major block together (282 kB for 551 years). */
-const STAGE_MEMBERS = 64;
-
 /**
  * Runs members [from, to): draws each member's parameters from its own stream (so the result of
  * member i depends only on the seed and i), builds its exact one-year propagator (the closed-form
@@ -77,16 +75,12 @@ export function runMembersInto(task: MemberTask, from: number, to: number, block
   const sampler = memberSampler(task.sampling, task.co2Formula);
   const next = memberGenerators(task.seed, from);
   const draw = emptyDraw();
-  // Member-major staging rows (warming before rebasing), copied year by year into the block every
-  // STAGE_MEMBERS members, so that writes to the large year-major block are contiguous runs.
-  const stage = new Float64Array(STAGE_MEMBERS * n);
-  const stageMeans = new Float64Array(STAGE_MEMBERS);
-  const baselineYears = baselineTo - baselineFrom + 1;
+  const staging = new MemberStage(n, block, baselineFrom, baselineTo);
+  const stage = staging.rows;
   const params: TwoBoxParams = { upperHeatCapacity, deepHeatCapacity, feedbackWm2K: NaN, exchangeWm2K: NaN, deepEfficacy };
   const prop = emptyTwoBoxPropagator();
   const { phi, g0, g1 } = prop;
   let redraws = 0;
-  let staged = 0;
   for (let i = from; i < to; i++) {
     redraws += drawMember(next(), sampler, draw);
     storeDraw(block.parameters, i - block.blockStart, draw);
@@ -105,7 +99,7 @@ export function runMembersInto(task: MemberTask, from: number, to: number, block
     const g0d = g0[1];
     const g1t = g1[0];
     const g1d = g1[1];
-    const row = staged * n;
+    const row = staging.offset;
     let t = 0;
     let d = 0;
     let f0 = co2Scale * co2Wm2[0] + aerosolScale * aerosolWm2[0] + otherWm2[0];
@@ -119,30 +113,9 @@ export function runMembersInto(task: MemberTask, from: number, to: number, block
       stage[row + k + 1] = t;
       f0 = f1;
     }
-    // The baseline mean as `rebase` in src/projection computes it: summed in year order (it is
-    // subtracted as the rows are copied into the block).
-    let sum = 0;
-    for (let k = baselineFrom; k <= baselineTo; k++) sum += stage[row + k];
-    stageMeans[staged] = sum / baselineYears;
-    staged++;
-    if (staged === STAGE_MEMBERS || i + 1 === to) {
-      flushStage(stage, stageMeans, staged, n, block, i + 1 - staged - block.blockStart);
-      staged = 0;
-    }
+    staging.commit(i, to);
     if (onProgress && ((i - from + 1) % PROGRESS_EVERY === 0 || i + 1 === to)) onProgress(i - from + 1);
   }
   return redraws;
 }
 
-/**
- * Copies `count` staged member rows, less each member's baseline mean, into the block's year-major
- * layout from member column `column`.
- */
-export function flushStage(stage: Float64Array, means: Float64Array, count: number, n: number, block: MemberBlock, column: number): void {
-  const w = block.warmingK;
-  const stride = block.memberCount;
-  for (let k = 0; k < n; k++) {
-    const base = k * stride + column;
-    for (let j = 0; j < count; j++) w[base + j] = stage[j * n + k] - means[j];
-  }
-}

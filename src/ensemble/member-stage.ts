@@ -1,0 +1,58 @@
+import type { MemberBlock } from './run-members.js';
+
+/** Members run before their rows are copied into the year-major block together (282 kB for 551 years). */
+const STAGE_MEMBERS = 64;
+
+/**
+ * Member-major staging rows for member runs: each member writes its warming (before rebasing) into
+ * `rows` at `offset`, then {@link MemberStage.commit} records its baseline mean and, every
+ * STAGE_MEMBERS members or at the end, copies the rows less their means into the block's year-major
+ * layout, so that writes to the large block are contiguous runs.
+ */
+export class MemberStage {
+  /** STAGE_MEMBERS rows of `n` years. */
+  readonly rows: Float64Array;
+  private readonly means = new Float64Array(STAGE_MEMBERS);
+  private staged = 0;
+
+  constructor(
+    private readonly n: number,
+    private readonly block: MemberBlock,
+    private readonly baselineFrom: number,
+    private readonly baselineTo: number,
+  ) {
+    this.rows = new Float64Array(STAGE_MEMBERS * n);
+  }
+
+  /** Index in `rows` where the next member's year 0 goes. */
+  get offset(): number {
+    return this.staged * this.n;
+  }
+
+  /**
+   * Ends member `i`'s row: its baseline mean as `rebase` in src/projection computes it (summed in year
+   * order), then a flush into the block when the stage is full or `i` is the last member (`to - 1`).
+   */
+  commit(i: number, to: number): void {
+    const row = this.offset;
+    let sum = 0;
+    for (let k = this.baselineFrom; k <= this.baselineTo; k++) sum += this.rows[row + k];
+    this.means[this.staged] = sum / (this.baselineTo - this.baselineFrom + 1);
+    this.staged++;
+    if (this.staged === STAGE_MEMBERS || i + 1 === to) {
+      this.flush(i + 1 - this.staged - this.block.blockStart);
+      this.staged = 0;
+    }
+  }
+
+  /** Copies the staged rows, less each member's baseline mean, into the block from member column `column`. */
+  private flush(column: number): void {
+    const { rows, means, n, staged } = this;
+    const w = this.block.warmingK;
+    const stride = this.block.memberCount;
+    for (let k = 0; k < n; k++) {
+      const base = k * stride + column;
+      for (let j = 0; j < staged; j++) w[base + j] = rows[j * n + k] - means[j];
+    }
+  }
+}
