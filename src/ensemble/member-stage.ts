@@ -1,4 +1,9 @@
-import type { MemberBlock } from './run-members.js';
+import type { TwoBoxParams } from '../climate/two-box.js';
+import type { TwoBoxPropagator } from '../climate/exact-propagator.js';
+import { memberGenerators } from './member-generators.js';
+import { emptyTwoBoxPropagator, modalTwoBoxPropagatorInto } from './modal-propagator.js';
+import { PROGRESS_EVERY, type MemberBlock, type MemberTask } from './run-members.js';
+import { drawMember, emptyDraw, memberSampler, storeDraw, type MemberDraw } from './sample-members.js';
 
 /** Members run before their rows are copied into the year-major block together (282 kB for 551 years). */
 const STAGE_MEMBERS = 64;
@@ -55,4 +60,44 @@ export class MemberStage {
       for (let j = 0; j < staged; j++) w[base + j] = rows[j * n + k] - means[j];
     }
   }
+}
+
+/**
+ * The loop every member run shares: for members [from, to), draw the member's parameters from its
+ * own stream (so member i depends only on the seed and i), store them, build its one-year
+ * propagator, let `runOne` write its warming (before rebasing) into `rows` from `offset`, then
+ * rebase and stage it into the block, reporting progress every PROGRESS_EVERY members.
+ *
+ * @param carbon whether members also draw the carbon-cycle multiplier (emission pathways)
+ * @returns unphysical draws discarded in total
+ */
+export function runMemberLoop(
+  task: MemberTask,
+  n: number,
+  from: number,
+  to: number,
+  block: MemberBlock,
+  carbon: boolean,
+  onProgress: ((done: number) => void) | undefined,
+  runOne: (draw: MemberDraw, prop: TwoBoxPropagator, rows: Float64Array, offset: number) => void,
+): number {
+  const { upperHeatCapacity, deepHeatCapacity, deepEfficacy } = task.sampling;
+  const sampler = memberSampler(task.sampling, task.co2Formula, carbon);
+  const next = memberGenerators(task.seed, from);
+  const draw = emptyDraw();
+  const staging = new MemberStage(n, block, task.baselineFrom, task.baselineTo);
+  const params: TwoBoxParams = { upperHeatCapacity, deepHeatCapacity, feedbackWm2K: NaN, exchangeWm2K: NaN, deepEfficacy };
+  const prop = emptyTwoBoxPropagator();
+  let redraws = 0;
+  for (let i = from; i < to; i++) {
+    redraws += drawMember(next(), sampler, draw);
+    storeDraw(block.parameters, i - block.blockStart, draw);
+    params.feedbackWm2K = draw.feedbackWm2K;
+    params.exchangeWm2K = draw.exchangeWm2K;
+    modalTwoBoxPropagatorInto(params, prop);
+    runOne(draw, prop, staging.rows, staging.offset);
+    staging.commit(i, to);
+    if (onProgress && ((i - from + 1) % PROGRESS_EVERY === 0 || i + 1 === to)) onProgress(i - from + 1);
+  }
+  return redraws;
 }

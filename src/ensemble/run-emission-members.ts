@@ -1,14 +1,10 @@
 import { annualCarbonState, annualCarbonStepForIncreaseInto, annualCarbonStepInto, atmosphericGtc, type AnnualCarbonState } from '../carbon/annual-carbon-step.js';
 import { GTC_PER_PPM } from '../carbon/units.js';
 import type { TwoBoxPropagator } from '../climate/exact-propagator.js';
-import type { TwoBoxParams } from '../climate/two-box.js';
 import { ghgForcingFunction } from '../forcing/agents.js';
 import type { Co2Formula } from '../forcing/co2.js';
-import { memberGenerators } from './member-generators.js';
-import { emptyTwoBoxPropagator, modalTwoBoxPropagatorInto } from './modal-propagator.js';
-import { MemberStage } from './member-stage.js';
-import { PROGRESS_EVERY, type MemberBlock, type MemberTask } from './run-members.js';
-import { drawMember, emptyDraw, memberSampler, storeDraw } from './sample-members.js';
+import { runMemberLoop } from './member-stage.js';
+import type { MemberBlock, MemberTask } from './run-members.js';
 
 /**
  * What each member of an emission-driven ensemble needs to run its own carbon cycle, as plain data
@@ -117,25 +113,9 @@ export function runEmissionMembersInto(
   onProgress?: (done: number) => void,
 ): number {
   const n = task.otherWm2.length;
-  const { upperHeatCapacity, deepHeatCapacity, deepEfficacy } = task.sampling;
-  const sampler = memberSampler(task.sampling, task.co2Formula, true);
-  const next = memberGenerators(task.seed, from);
-  const draw = emptyDraw();
-  const staging = new MemberStage(n, block, task.baselineFrom, task.baselineTo);
-  const params: TwoBoxParams = { upperHeatCapacity, deepHeatCapacity, feedbackWm2K: NaN, exchangeWm2K: NaN, deepEfficacy };
-  const prop = emptyTwoBoxPropagator();
   const state = annualCarbonState();
-  let redraws = 0;
-  for (let i = from; i < to; i++) {
-    redraws += drawMember(next(), sampler, draw);
-    storeDraw(block.parameters, i - block.blockStart, draw);
-    params.feedbackWm2K = draw.feedbackWm2K;
-    params.exchangeWm2K = draw.exchangeWm2K;
-    modalTwoBoxPropagatorInto(params, prop);
-    const row = staging.rows.subarray(staging.offset, staging.offset + n);
+  return runMemberLoop(task, n, from, to, block, true, onProgress, (draw, prop, rows, offset) => {
+    const row = rows.subarray(offset, offset + n);
     emissionMemberWarmingInto(carbon, task.co2Formula, task.otherWm2, task.aerosolWm2, prop, draw.forcing2xScale, draw.aerosolScale, draw.irf100Scale, state, row);
-    staging.commit(i, to);
-    if (onProgress && ((i - from + 1) % PROGRESS_EVERY === 0 || i + 1 === to)) onProgress(i - from + 1);
-  }
-  return redraws;
+  });
 }

@@ -1,9 +1,6 @@
-import type { TwoBoxParams } from '../climate/two-box.js';
 import type { Co2Formula } from '../forcing/co2.js';
-import { drawMember, emptyDraw, memberSampler, storeDraw, type MemberParameter } from './sample-members.js';
-import { memberGenerators } from './member-generators.js';
-import { MemberStage } from './member-stage.js';
-import { emptyTwoBoxPropagator, modalTwoBoxPropagatorInto } from './modal-propagator.js';
+import type { MemberParameter } from './sample-members.js';
+import { runMemberLoop } from './member-stage.js';
 import { runEmissionMembersInto, type MemberCarbonTask } from './run-emission-members.js';
 import type { EnsembleSampling } from './sampling.js';
 
@@ -70,23 +67,9 @@ export const PROGRESS_EVERY = 250;
 export function runMembersInto(task: MemberTask, from: number, to: number, block: MemberBlock, onProgress?: (done: number) => void): number {
   if (task.carbon) return runEmissionMembersInto(task, task.carbon, from, to, block, onProgress);
   const n = task.co2Wm2.length;
-  const { co2Wm2, aerosolWm2, otherWm2, baselineFrom, baselineTo } = task;
-  const { upperHeatCapacity, deepHeatCapacity, deepEfficacy } = task.sampling;
-  const sampler = memberSampler(task.sampling, task.co2Formula);
-  const next = memberGenerators(task.seed, from);
-  const draw = emptyDraw();
-  const staging = new MemberStage(n, block, baselineFrom, baselineTo);
-  const stage = staging.rows;
-  const params: TwoBoxParams = { upperHeatCapacity, deepHeatCapacity, feedbackWm2K: NaN, exchangeWm2K: NaN, deepEfficacy };
-  const prop = emptyTwoBoxPropagator();
-  const { phi, g0, g1 } = prop;
-  let redraws = 0;
-  for (let i = from; i < to; i++) {
-    redraws += drawMember(next(), sampler, draw);
-    storeDraw(block.parameters, i - block.blockStart, draw);
-    params.feedbackWm2K = draw.feedbackWm2K;
-    params.exchangeWm2K = draw.exchangeWm2K;
-    modalTwoBoxPropagatorInto(params, prop);
+  const { co2Wm2, aerosolWm2, otherWm2 } = task;
+  return runMemberLoop(task, n, from, to, block, false, onProgress, (draw, prop, stage, row) => {
+    const { phi, g0, g1 } = prop;
     const co2Scale = draw.forcing2xScale;
     const aerosolScale = draw.aerosolScale;
     // propagateTwoBoxInto (src/climate/exact-propagator.ts) with the member's forcing assembled as it
@@ -99,7 +82,6 @@ export function runMembersInto(task: MemberTask, from: number, to: number, block
     const g0d = g0[1];
     const g1t = g1[0];
     const g1d = g1[1];
-    const row = staging.offset;
     let t = 0;
     let d = 0;
     let f0 = co2Scale * co2Wm2[0] + aerosolScale * aerosolWm2[0] + otherWm2[0];
@@ -113,9 +95,6 @@ export function runMembersInto(task: MemberTask, from: number, to: number, block
       stage[row + k + 1] = t;
       f0 = f1;
     }
-    staging.commit(i, to);
-    if (onProgress && ((i - from + 1) % PROGRESS_EVERY === 0 || i + 1 === to)) onProgress(i - from + 1);
-  }
-  return redraws;
+  });
 }
 
