@@ -11,7 +11,9 @@ export { emptyTwoBoxPropagator, modalTwoBoxPropagatorInto } from './modal-propag
 export type { ShardInput, ShardMerger } from './merge-shards.js';
 export { runEnsemble, shardRange } from './run-ensemble.js';
 export type { EnsembleInput, EnsembleOptions } from './run-ensemble.js';
-export { defaultWorkerCount, workerThreadsAvailable } from './run-members-parallel.js';
+export { defaultWorkerCount, startEnsembleThreads, workerThreadsAvailable } from './run-members-parallel.js';
+export type { EnsembleThreads } from './run-members-parallel.js';
+export { ExceedanceCounter } from './exceedance-counter.js';
 export { emissionMemberWarmingInto, runEmissionMembersInto } from './run-emission-members.js';
 export type { MemberCarbonTask } from './run-emission-members.js';
 export { runMembersInto } from './run-members.js';

@@ -2,6 +2,7 @@ import type { TwoBoxParams } from '../climate/two-box.js';
 import type { TwoBoxPropagator } from '../climate/exact-propagator.js';
 import { memberGenerators } from './member-generators.js';
 import { emptyTwoBoxPropagator, modalTwoBoxPropagatorInto } from './modal-propagator.js';
+import type { ExceedanceCounter } from './exceedance-counter.js';
 import { PROGRESS_EVERY, type MemberBlock, type MemberTask } from './run-members.js';
 import { drawMember, emptyDraw, memberSampler, storeDraw, type MemberDraw } from './sample-members.js';
 
@@ -10,14 +11,14 @@ const STAGE_MEMBERS = 64;
 
 /**
  * Member-major staging rows for member runs: each member writes its warming (before rebasing) into
- * `rows` at `offset`, then {@link MemberStage.commit} records its baseline mean and, every
- * STAGE_MEMBERS members or at the end, copies the rows less their means into the block's year-major
- * layout, so that writes to the large block are contiguous runs.
+ * `rows` at `offset`, then {@link MemberStage.commit} rebases it on its baseline mean, counts its
+ * threshold exceedances while the row is still in cache and, every STAGE_MEMBERS members or at the
+ * end, copies the rows into the block's year-major layout, so that writes to the large block are
+ * contiguous runs.
  */
 export class MemberStage {
   /** STAGE_MEMBERS rows of `n` years. */
   readonly rows: Float64Array;
-  private readonly means = new Float64Array(STAGE_MEMBERS);
   private staged = 0;
 
   constructor(
@@ -25,6 +26,7 @@ export class MemberStage {
     private readonly block: MemberBlock,
     private readonly baselineFrom: number,
     private readonly baselineTo: number,
+    private readonly exceedance?: ExceedanceCounter,
   ) {
     this.rows = new Float64Array(STAGE_MEMBERS * n);
   }
@@ -35,14 +37,18 @@ export class MemberStage {
   }
 
   /**
-   * Ends member `i`'s row: its baseline mean as `rebase` in src/projection computes it (summed in year
-   * order), then a flush into the block when the stage is full or `i` is the last member (`to - 1`).
+   * Ends member `i`'s row: subtracts its baseline mean as `rebase` in src/projection computes it
+   * (summed in year order), adds the row to the exceedance counts, then flushes the stage into the
+   * block when it is full or `i` is the last member (`to - 1`).
    */
   commit(i: number, to: number): void {
+    const { rows, n } = this;
     const row = this.offset;
     let sum = 0;
-    for (let k = this.baselineFrom; k <= this.baselineTo; k++) sum += this.rows[row + k];
-    this.means[this.staged] = sum / (this.baselineTo - this.baselineFrom + 1);
+    for (let k = this.baselineFrom; k <= this.baselineTo; k++) sum += rows[row + k];
+    const mean = sum / (this.baselineTo - this.baselineFrom + 1);
+    for (let k = row; k < row + n; k++) rows[k] -= mean;
+    this.exceedance?.addMember(rows, row);
     this.staged++;
     if (this.staged === STAGE_MEMBERS || i + 1 === to) {
       this.flush(i + 1 - this.staged - this.block.blockStart);
@@ -50,14 +56,14 @@ export class MemberStage {
     }
   }
 
-  /** Copies the staged rows, less each member's baseline mean, into the block from member column `column`. */
+  /** Copies the staged rows into the block from member column `column`. */
   private flush(column: number): void {
-    const { rows, means, n, staged } = this;
+    const { rows, n, staged } = this;
     const w = this.block.warmingK;
     const stride = this.block.memberCount;
     for (let k = 0; k < n; k++) {
       const base = k * stride + column;
-      for (let j = 0; j < staged; j++) w[base + j] = rows[j * n + k] - means[j];
+      for (let j = 0; j < staged; j++) w[base + j] = rows[j * n + k];
     }
   }
 }
@@ -66,9 +72,11 @@ export class MemberStage {
  * The loop every member run shares: for members [from, to), draw the member's parameters from its
  * own stream (so member i depends only on the seed and i), store them, build its one-year
  * propagator, let `runOne` write its warming (before rebasing) into `rows` from `offset`, then
- * rebase and stage it into the block, reporting progress every PROGRESS_EVERY members.
+ * rebase it, count its exceedances (when `exceedance` is given) and stage it into the block, reporting
+ * progress every PROGRESS_EVERY members.
  *
  * @param carbon whether members also draw the carbon-cycle multiplier (emission pathways)
+ * @param exceedance receives every member's threshold exceedances (optional)
  * @returns unphysical draws discarded in total
  */
 export function runMemberLoop(
@@ -79,13 +87,14 @@ export function runMemberLoop(
   block: MemberBlock,
   carbon: boolean,
   onProgress: ((done: number) => void) | undefined,
+  exceedance: ExceedanceCounter | undefined,
   runOne: (draw: MemberDraw, prop: TwoBoxPropagator, rows: Float64Array, offset: number) => void,
 ): number {
   const { upperHeatCapacity, deepHeatCapacity, deepEfficacy } = task.sampling;
   const sampler = memberSampler(task.sampling, task.co2Formula, carbon);
   const next = memberGenerators(task.seed, from);
   const draw = emptyDraw();
-  const staging = new MemberStage(n, block, task.baselineFrom, task.baselineTo);
+  const staging = new MemberStage(n, block, task.baselineFrom, task.baselineTo, exceedance);
   const params: TwoBoxParams = { upperHeatCapacity, deepHeatCapacity, feedbackWm2K: NaN, exchangeWm2K: NaN, deepEfficacy };
   const prop = emptyTwoBoxPropagator();
   let redraws = 0;

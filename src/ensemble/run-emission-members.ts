@@ -3,6 +3,7 @@ import { GTC_PER_PPM } from '../carbon/units.js';
 import type { TwoBoxPropagator } from '../climate/exact-propagator.js';
 import { ghgForcingFunction } from '../forcing/agents.js';
 import type { Co2Formula } from '../forcing/co2.js';
+import type { ExceedanceCounter } from './exceedance-counter.js';
 import { runMemberLoop } from './member-stage.js';
 import type { MemberBlock, MemberTask } from './run-members.js';
 
@@ -111,10 +112,11 @@ export function runEmissionMembersInto(
   to: number,
   block: MemberBlock,
   onProgress?: (done: number) => void,
+  exceedance?: ExceedanceCounter,
 ): number {
   const n = task.otherWm2.length;
   const state = annualCarbonState();
-  return runMemberLoop(task, n, from, to, block, true, onProgress, (draw, prop, rows, offset) => {
+  return runMemberLoop(task, n, from, to, block, true, onProgress, exceedance, (draw, prop, rows, offset) => {
     const row = rows.subarray(offset, offset + n);
     emissionMemberWarmingInto(carbon, task.co2Formula, task.otherWm2, task.aerosolWm2, prop, draw.forcing2xScale, draw.aerosolScale, draw.irf100Scale, state, row);
   });

@@ -3,7 +3,7 @@ import type { ForcingSeries } from '../forcing/agents.js';
 import type { Co2Formula } from '../forcing/co2.js';
 import type { EnsembleConfig, EnsembleMembers } from './ensemble-members.js';
 import { MEMBER_STREAM_SCHEME } from './member-generators.js';
-import { defaultWorkerCount, runMembersParallel } from './run-members-parallel.js';
+import { defaultWorkerCount, runMembersParallel, type EnsembleThreads } from './run-members-parallel.js';
 import type { MemberCarbonTask } from './run-emission-members.js';
 import type { MemberTask } from './run-members.js';
 import { AR6_SAMPLING, validateSampling, type EnsembleSampling } from './sampling.js';
@@ -40,8 +40,13 @@ export interface EnsembleOptions {
   baseline: readonly [number, number];
   /** Run only the index-th (1-based) of `count` equal slices of the members. */
   shard?: { index: number; count: number };
-  /** Threads; default one per core for large runs, 1 for small ones. The output does not depend on it. */
+  /**
+   * Threads, this one included; default one per core for large runs, 1 for small ones (or every
+   * thread of `threads`). The output does not depend on it.
+   */
   workers?: number;
+  /** Threads started beforehand with startEnsembleThreads, shared by several runs (the run uses at most its size). */
+  threads?: EnsembleThreads;
   /** Called as members finish, with the number done and the number this call runs. */
   onProgress?: (done: number, total: number) => void;
   /** Parameter distributions (default AR6_SAMPLING). */
@@ -77,8 +82,8 @@ export async function runEnsemble(input: EnsembleInput, options: EnsembleOptions
   const { from, to } = shardRange(config.membersTotal, options.shard);
   const task = memberTask(input, config);
   const n = input.years.length;
-  const workers = options.workers ?? defaultWorkerCount((to - from) * n);
-  const run = await runMembersParallel(task, from, to, workers, config.thresholds, options.onProgress);
+  const workers = options.workers ?? options.threads?.size ?? defaultWorkerCount((to - from) * n);
+  const run = await runMembersParallel(task, from, to, workers, config.thresholds, options.onProgress, options.threads);
   const members: EnsembleMembers = {
     config,
     shard: options.shard ? { index: options.shard.index, count: options.shard.count } : undefined,

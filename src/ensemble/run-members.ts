@@ -1,4 +1,5 @@
 import type { Co2Formula } from '../forcing/co2.js';
+import type { ExceedanceCounter } from './exceedance-counter.js';
 import type { MemberParameter } from './sample-members.js';
 import { runMemberLoop } from './member-stage.js';
 import { runEmissionMembersInto, type MemberCarbonTask } from './run-emission-members.js';
@@ -62,13 +63,21 @@ export const PROGRESS_EVERY = 250;
  * @param to end member, exclusive
  * @param block receives members from..to-1 (which must lie within it)
  * @param onProgress called with the number of members done so far in this call
+ * @param exceedance receives each member's threshold exceedances, counted while its row is in cache (optional)
  * @returns unphysical draws discarded in total
  */
-export function runMembersInto(task: MemberTask, from: number, to: number, block: MemberBlock, onProgress?: (done: number) => void): number {
-  if (task.carbon) return runEmissionMembersInto(task, task.carbon, from, to, block, onProgress);
+export function runMembersInto(
+  task: MemberTask,
+  from: number,
+  to: number,
+  block: MemberBlock,
+  onProgress?: (done: number) => void,
+  exceedance?: ExceedanceCounter,
+): number {
+  if (task.carbon) return runEmissionMembersInto(task, task.carbon, from, to, block, onProgress, exceedance);
   const n = task.co2Wm2.length;
   const { co2Wm2, aerosolWm2, otherWm2 } = task;
-  return runMemberLoop(task, n, from, to, block, false, onProgress, (draw, prop, stage, row) => {
+  return runMemberLoop(task, n, from, to, block, false, onProgress, exceedance, (draw, prop, stage, row) => {
     const { phi, g0, g1 } = prop;
     const co2Scale = draw.forcing2xScale;
     const aerosolScale = draw.aerosolScale;

@@ -1,4 +1,5 @@
-import { quantilesInPlace } from '../numerics/quantiles.js';
+import { QuantileSelector, quantilesInPlace } from '../numerics/quantiles.js';
+import { ExceedanceCounter } from './exceedance-counter.js';
 import type { EnsembleConfig, EnsembleMembers } from './ensemble-members.js';
 import { RUNNING_MEAN_WINDOW } from './running-mean.js';
 import { MEMBER_PARAMETERS, type MemberParameter } from './sample-members.js';
@@ -146,8 +147,8 @@ export function summarizeEnsemble(members: EnsembleMembers, workersUsed = 1, sta
 }
 
 /**
- * Warming percentiles (PERCENTILES) of years [yearFrom, yearTo) across all m members, each year
- * by selection on a copy of its member values.
+ * Warming percentiles (PERCENTILES) of years [yearFrom, yearTo) across all m members, each year by
+ * bucket selection over its row of member values (read in place).
  *
  * @param warmingK year-major member values (year k of member r at k * m + r)
  * @param m members
@@ -156,11 +157,10 @@ export function summarizeEnsemble(members: EnsembleMembers, workersUsed = 1, sta
  * @param out one array per percentile, indexed by year
  */
 export function yearPercentilesInto(warmingK: Float64Array, m: number, yearFrom: number, yearTo: number, out: Float64Array[]): void {
-  const column = new Float64Array(m);
+  const selector = new QuantileSelector(PERCENTILES, m);
   const q = new Float64Array(PERCENTILES.length);
   for (let k = yearFrom; k < yearTo; k++) {
-    column.set(warmingK.subarray(k * m, (k + 1) * m));
-    quantilesInPlace(column, PERCENTILES, q);
+    selector.quantilesInto(warmingK, k * m, q);
     for (let j = 0; j < out.length; j++) out[j][k] = q[j];
   }
 }
@@ -170,15 +170,16 @@ export function exceedanceCountsLength(thresholds: number, n: number): number {
   return 2 * thresholds * n;
 }
 
-/** Members whose running sums are advanced together (their state stays in cache). */
-const MEMBER_CHUNK = 2048;
+/** Members copied out of the year-major layout together (their rows stay in cache). */
+const MEMBER_CHUNK = 64;
 
 /**
  * Adds, for members [memberFrom, memberTo), the count of members whose 20-year mean warming around
- * each year exceeds each threshold (counts[j * n + k]) and a histogram of the year index at which
- * each member's 20-year mean first exceeds it (counts[(T + j) * n + k]). The 20-year means are the
- * sliding sums of running-mean.ts, advanced for a chunk of members at once. Counts are whole numbers,
- * so partial counts from threads add up exactly in any order.
+ * each year exceeds each threshold (counts[j * n + c]) and a histogram of the year index at which
+ * each member's 20-year mean first exceeds it (counts[(T + j) * n + c]), by ExceedanceCounter on
+ * each member's row (the same arithmetic as member runs use while the row is fresh, so the counts of
+ * a run and of its merged shards are identical). Counts are whole numbers, so partial counts from
+ * threads add up exactly in any order.
  *
  * @param warmingK year-major member values
  * @param m members in the layout
@@ -197,49 +198,17 @@ export function exceedanceCountsInto(
   memberTo: number,
   counts: Float64Array,
 ): void {
-  const { before, after } = RUNNING_MEAN_WINDOW;
-  const width = before + after + 1;
-  const t = thresholds.length;
-  if (n < width || t === 0) return;
-  const sums = new Float64Array(MEMBER_CHUNK);
-  // crossed[r * t + j] = 1 once member r's 20-year mean has exceeded threshold j.
-  const crossed = new Uint8Array(MEMBER_CHUNK * t);
-  const above = new Float64Array(t);
-  const first = new Float64Array(t);
+  const counter = new ExceedanceCounter(thresholds, n);
+  const rows = new Float64Array(MEMBER_CHUNK * n);
   for (let r0 = memberFrom; r0 < memberTo; r0 += MEMBER_CHUNK) {
     const size = Math.min(MEMBER_CHUNK, memberTo - r0);
-    sums.fill(0);
-    crossed.fill(0);
-    for (let k = 0; k < width; k++) {
-      const row = k * m + r0;
-      for (let r = 0; r < size; r++) sums[r] += warmingK[row + r];
+    for (let k = 0; k < n; k++) {
+      const base = k * m + r0;
+      for (let j = 0; j < size; j++) rows[j * n + k] = warmingK[base + j];
     }
-    for (let c = before; c + after < n; c++) {
-      above.fill(0);
-      first.fill(0);
-      for (let r = 0; r < size; r++) {
-        const mean = sums[r] / width;
-        for (let j = 0; j < t; j++) {
-          if (mean > thresholds[j]) {
-            above[j]++;
-            if (crossed[r * t + j] === 0) {
-              crossed[r * t + j] = 1;
-              first[j]++;
-            }
-          }
-        }
-      }
-      for (let j = 0; j < t; j++) {
-        counts[j * n + c] += above[j];
-        counts[(t + j) * n + c] += first[j];
-      }
-      if (c + after + 1 < n) {
-        const enter = (c + after + 1) * m + r0;
-        const leave = (c - before) * m + r0;
-        for (let r = 0; r < size; r++) sums[r] += warmingK[enter + r] - warmingK[leave + r];
-      }
-    }
+    for (let j = 0; j < size; j++) counter.addMember(rows, j * n);
   }
+  counter.addCountsTo(counts);
 }
 
 /** The conventions behind the numbers, for an output's provenance. */

@@ -22,13 +22,7 @@ export function quantileSorted(sorted: ArrayLike<number>, p: number): number {
 
 /**
  * Several sample quantiles (Hyndman & Fan 1996, definition 7, as {@link quantileSorted}) of
- * `values[from..to)` without a full sort. The order statistics each quantile needs are found by
- * bucket selection: one pass for the range, one pass counting values into equal-width buckets
- * (the bucket index is a monotone function of the value, so the counts locate every wanted rank in
- * one bucket), one pass copying out the few buckets that hold wanted ranks, and exact selection
- * within those (Floyd & Rivest's SELECT, 1975, Communications of the ACM 18, 173, Algorithm 489).
- * The results equal those of sorting, bit for bit: an order statistic does not depend on how it was
- * found. Small samples, and samples whose range is not finite, go straight to SELECT.
+ * `values[from..to)` without a full sort (see {@link QuantileSelector}).
  *
  * @param values the sample; may be reordered within [from, to)
  * @param probabilities ascending probabilities in [0, 1]
@@ -46,100 +40,177 @@ export function quantilesInPlace(
   from = 0,
   to = values.length,
 ): void {
-  const n = to - from;
-  if (n <= 0) {
-    out.fill(NaN, 0, probabilities.length);
-    return;
-  }
-  // The ranks (relative to `from`) that definition 7 reads, ascending and distinct.
-  const ranks: number[] = [];
-  for (const p of probabilities) {
-    const h = (n - 1) * Math.min(1, Math.max(0, p));
-    const lo = Math.floor(h);
-    if (ranks[ranks.length - 1] !== lo) ranks.push(lo);
-    if (lo + 1 < n && h > lo && ranks[ranks.length - 1] !== lo + 1) ranks.push(lo + 1);
-  }
-  const orderStatistics = new Map<number, number>();
-  if (n < BUCKET_SELECT_MIN || !bucketSelect(values, from, to, ranks, orderStatistics)) {
-    selectRanks(values, ranks, 0, ranks.length - 1, from, to - 1, from);
-    for (const r of ranks) orderStatistics.set(r, values[from + r]);
-  }
-  for (let i = 0; i < probabilities.length; i++) {
-    const p = Math.min(1, Math.max(0, probabilities[i]));
-    const h = (n - 1) * p;
-    const lo = Math.floor(h);
-    const x0 = orderStatistics.get(lo)!;
-    out[i] = h > lo && lo + 1 < n ? x0 + (orderStatistics.get(lo + 1)! - x0) * (h - lo) : x0;
-  }
+  new QuantileSelector(probabilities, to - from).quantilesInto(values, from, out);
 }
 
 /** Samples smaller than this go straight to SELECT. */
 const BUCKET_SELECT_MIN = 1024;
+/** Buckets of the counting pass (at most; at least two values per bucket on average). */
+const MAX_BUCKETS = 2048;
 
 /**
- * Finds the order statistics `ranks` of values[from..to) by bucketing (see quantilesInPlace) into
- * `found`. Returns false, having changed nothing, when the range is not finite and positive.
+ * The same quantiles of many samples of one size, with all scratch memory allocated once (an
+ * ensemble asks for five percentiles of every year's members). The order statistics each quantile
+ * needs are found by bucket selection: one pass for the range, one pass counting values into
+ * equal-width buckets (the bucket index is a monotone function of the value, so the counts locate
+ * every wanted rank in one bucket), one pass copying out the few buckets that hold wanted ranks,
+ * and exact selection within those (Floyd & Rivest's SELECT, 1975, Communications of the ACM 18,
+ * 173, Algorithm 489). The results equal those of sorting, bit for bit: an order statistic does not
+ * depend on how it was found. The sample is only read, except that small samples, and samples whose
+ * range is not finite, are copied and go straight to SELECT.
+ *
+ * @example
+ * const selector = new QuantileSelector([0.05, 0.5, 0.95], 10_000);
+ * selector.quantilesInto(warming, k * 10_000, out); // out[0..2]: the quantiles of warming[k * 10000 ..]
  */
-function bucketSelect(values: Float64Array, from: number, to: number, ranks: number[], found: Map<number, number>): boolean {
-  let min = Infinity;
-  let max = -Infinity;
-  for (let i = from; i < to; i++) {
-    const v = values[i];
-    if (v < min) min = v;
-    if (v > max) max = v;
-  }
-  if (!(max > min && max - min < Infinity)) return false;
-  const n = to - from;
-  const buckets = Math.min(4096, n >> 1);
-  const scale = buckets / (max - min);
-  const counts = new Int32Array(buckets + 1);
-  // Monotone in v: subtracting, scaling by a positive number and flooring never reorder values.
-  // (v - min) * scale is >= 0, so truncation (`| 0`) is the floor; only v = max can reach `buckets`.
-  const last = buckets - 1;
-  for (let i = from; i < to; i++) {
-    const b = ((values[i] - min) * scale) | 0;
-    counts[(b > last ? last : b) + 1]++;
-  }
-  for (let b = 1; b <= buckets; b++) counts[b] += counts[b - 1]; // counts[b]: values in buckets below b
-  // The bucket of each wanted rank, and where its values go in the candidate buffer.
-  const wanted = new Int32Array(buckets).fill(-1);
-  const starts: number[] = [];
-  let size = 0;
-  const bucketOf = ranks.map((r) => {
-    let lo = 0;
-    let hi = buckets - 1;
-    while (lo < hi) {
-      const mid = (lo + hi + 1) >> 1;
-      if (counts[mid] <= r) lo = mid;
-      else hi = mid - 1;
+export class QuantileSelector {
+  /** Distinct order statistics (0-based ranks) the quantiles read, ascending. */
+  private readonly ranks: Int32Array;
+  /** Per probability: index in `ranks` of its lower order statistic, and of its upper one (or -1). */
+  private readonly lower: Int32Array;
+  private readonly upper: Int32Array;
+  /** Per probability: h - floor(h). */
+  private readonly fraction: Float64Array;
+  private readonly orderStatistics: Float64Array;
+  private readonly buckets: number;
+  private readonly counts: Int32Array;
+  /** wanted[b]: slot of bucket b in the candidate buffer, or -1. */
+  private readonly wanted: Int32Array;
+  private readonly rankBucket: Int32Array;
+  private readonly rankBase: Int32Array;
+  private readonly slotStart: Int32Array;
+  private readonly slotFill: Int32Array;
+  private readonly candidates: Float64Array;
+
+  /**
+   * @param probabilities ascending probabilities in [0, 1]
+   * @param n size of every sample
+   */
+  constructor(
+    private readonly probabilities: readonly number[],
+    private readonly n: number,
+  ) {
+    const ranks: number[] = [];
+    const lower: number[] = [];
+    const upper: number[] = [];
+    const fraction: number[] = [];
+    for (const q of probabilities) {
+      const p = Math.min(1, Math.max(0, q));
+      const h = (n - 1) * p;
+      const lo = Math.floor(h);
+      if (ranks[ranks.length - 1] !== lo) ranks.push(lo);
+      lower.push(ranks.length - 1);
+      if (lo + 1 < n && h > lo) {
+        if (ranks[ranks.length - 1] !== lo + 1) ranks.push(lo + 1);
+        upper.push(ranks.length - 1);
+      } else upper.push(-1);
+      fraction.push(h - lo);
     }
-    if (wanted[lo] < 0) {
-      wanted[lo] = starts.length;
-      starts.push(size);
-      size += counts[lo + 1] - counts[lo];
-    }
-    return lo;
-  });
-  const candidates = new Float64Array(size);
-  const fill = starts.slice();
-  for (let i = from; i < to; i++) {
-    const v = values[i];
-    const b = ((v - min) * scale) | 0;
-    const slot = wanted[b > last ? last : b];
-    if (slot >= 0) candidates[fill[slot]++] = v;
+    this.ranks = Int32Array.from(ranks);
+    this.lower = Int32Array.from(lower);
+    this.upper = Int32Array.from(upper);
+    this.fraction = Float64Array.from(fraction);
+    this.orderStatistics = new Float64Array(ranks.length);
+    this.buckets = n >= BUCKET_SELECT_MIN ? Math.min(MAX_BUCKETS, n >> 1) : 0;
+    this.counts = new Int32Array(this.buckets);
+    this.wanted = new Int32Array(this.buckets).fill(-1);
+    this.rankBucket = new Int32Array(ranks.length);
+    this.rankBase = new Int32Array(ranks.length);
+    this.slotStart = new Int32Array(ranks.length);
+    this.slotFill = new Int32Array(ranks.length);
+    this.candidates = new Float64Array(Math.max(1, n));
   }
-  ranks.forEach((r, j) => {
-    const b = bucketOf[j];
-    const start = starts[wanted[b]];
-    const k = start + (r - counts[b]);
-    selectInPlace(candidates, k, start, start + counts[b + 1] - counts[b] - 1);
-    found.set(r, candidates[k]);
-  });
-  return true;
+
+  /**
+   * The quantiles of values[from .. from + n), into out[0 .. probabilities.length); NaN when n is 0.
+   * `values` is not changed.
+   */
+  quantilesInto(values: Float64Array, from: number, out: Float64Array): void {
+    const { n, ranks, orderStatistics } = this;
+    if (n <= 0) {
+      out.fill(NaN, 0, this.probabilities.length);
+      return;
+    }
+    if (!(this.buckets > 0 && this.bucketSelect(values, from))) {
+      const copy = this.candidates;
+      copy.set(values.subarray(from, from + n));
+      selectRanks(copy, ranks, 0, ranks.length - 1, 0, n - 1, 0);
+      for (let r = 0; r < ranks.length; r++) orderStatistics[r] = copy[ranks[r]];
+    }
+    for (let i = 0; i < this.probabilities.length; i++) {
+      const x0 = orderStatistics[this.lower[i]];
+      const hi = this.upper[i];
+      out[i] = hi >= 0 ? x0 + (orderStatistics[hi] - x0) * this.fraction[i] : x0;
+    }
+  }
+
+  /**
+   * Finds the wanted order statistics of values[from .. from + n) by bucketing into
+   * `orderStatistics`. Returns false, having found nothing, when the range is not finite and positive.
+   */
+  private bucketSelect(values: Float64Array, from: number): boolean {
+    const { n, ranks, counts, wanted, rankBucket, rankBase, slotStart, slotFill, candidates } = this;
+    const to = from + n;
+    let min = Infinity;
+    let max = -Infinity;
+    for (let i = from; i < to; i++) {
+      const v = values[i];
+      if (v < min) min = v;
+      if (v > max) max = v;
+    }
+    if (!(max > min && max - min < Infinity)) return false;
+    const buckets = this.buckets;
+    const scale = buckets / (max - min);
+    const last = buckets - 1;
+    counts.fill(0);
+    // Monotone in v: subtracting, scaling by a positive number and flooring never reorder values.
+    // (v - min) * scale is >= 0, so truncation (`| 0`) is the floor; only values near max reach `buckets`.
+    for (let i = from; i < to; i++) {
+      const b = ((values[i] - min) * scale) | 0;
+      counts[b > last ? last : b]++;
+    }
+    // The bucket of each wanted rank (ranks ascend, so one walk finds them all), and its slot.
+    let below = 0;
+    let b = 0;
+    let slots = 0;
+    let size = 0;
+    for (let r = 0; r < ranks.length; ) {
+      if (ranks[r] < below + counts[b]) {
+        rankBucket[r] = b;
+        rankBase[r] = below;
+        if (wanted[b] < 0) {
+          wanted[b] = slots;
+          slotStart[slots] = size;
+          slotFill[slots] = size;
+          size += counts[b];
+          slots++;
+        }
+        r++;
+      } else {
+        below += counts[b];
+        b++;
+      }
+    }
+    for (let i = from; i < to; i++) {
+      const v = values[i];
+      const c = ((v - min) * scale) | 0;
+      const slot = wanted[c > last ? last : c];
+      if (slot >= 0) candidates[slotFill[slot]++] = v;
+    }
+    for (let r = 0; r < ranks.length; r++) {
+      const bucket = rankBucket[r];
+      const start = slotStart[wanted[bucket]];
+      const k = start + (ranks[r] - rankBase[r]);
+      selectInPlace(candidates, k, start, start + counts[bucket] - 1);
+      this.orderStatistics[r] = candidates[k];
+    }
+    for (let r = 0; r < ranks.length; r++) wanted[rankBucket[r]] = -1;
+    return true;
+  }
 }
 
 /** Places each order statistic ranks[rFrom..rTo] (offset by `base`) within a[left..right]. */
-function selectRanks(a: Float64Array, ranks: number[], rFrom: number, rTo: number, left: number, right: number, base: number): void {
+function selectRanks(a: Float64Array, ranks: ArrayLike<number>, rFrom: number, rTo: number, left: number, right: number, base: number): void {
   if (rFrom > rTo) return;
   // Middle rank first, so each side is searched only within its own part of the array.
   const mid = (rFrom + rTo) >> 1;

@@ -1,0 +1,96 @@
+import { RUNNING_MEAN_WINDOW } from './running-mean.js';
+
+/**
+ * Counts, member by member, how many members' 20-year mean warming exceeds each threshold in each
+ * year, and in which year each member's 20-year mean first exceeds it (IPCC AR6 WG1 convention for
+ * reaching a warming level: the mean of years y-9 .. y+10 stands for year y).
+ *
+ * One pass over a member's rebased warming row: the 20-year sum slides along the row (the same
+ * additions, in the same order, as runningMeanInto), and with the thresholds sorted the member's
+ * state in each year is one number, the level L of thresholds its mean exceeds (mean > t_j exactly
+ * for j < L). Only changes of L are recorded: +1 at the year a member rises above a threshold and -1
+ * where it falls back, so a year costs two comparisons whatever the number of thresholds, and the
+ * per-year counts are the running totals of those changes. Counts are whole numbers, so partial
+ * counts from threads or shards add up exactly in any order.
+ */
+export class ExceedanceCounter {
+  /** Thresholds ascending, then +Infinity (so a rise always stops). */
+  private readonly sorted: Float64Array;
+  /** order[s] = index in the caller's threshold list of the s-th smallest threshold. */
+  private readonly order: Int32Array;
+  /** Changes of the count above each sorted threshold, per year: [s * n + c]. */
+  private readonly changes: Int32Array;
+  /** Members whose 20-year mean first exceeds each sorted threshold in year c: [s * n + c]. */
+  private readonly firsts: Int32Array;
+
+  /**
+   * @param thresholds warming levels, K (any order, no repeats)
+   * @param n years of every row
+   */
+  constructor(
+    thresholds: readonly number[],
+    private readonly n: number,
+  ) {
+    const order = thresholds.map((_, j) => j).sort((a, b) => thresholds[a] - thresholds[b]);
+    this.order = Int32Array.from(order);
+    this.sorted = Float64Array.from([...order.map((j) => thresholds[j]), Infinity]);
+    this.changes = new Int32Array(thresholds.length * n);
+    this.firsts = new Int32Array(thresholds.length * n);
+  }
+
+  /**
+   * Adds one member: its warming relative to the baseline at years 0..n-1 in `row` from `offset`.
+   * @param row the member's values (read only)
+   * @param offset index of its year 0
+   */
+  addMember(row: Float64Array, offset: number): void {
+    const { before, after } = RUNNING_MEAN_WINDOW;
+    const width = before + after + 1;
+    const n = this.n;
+    const t = this.order.length;
+    if (n < width || t === 0) return;
+    const { sorted, changes, firsts } = this;
+    let sum = 0;
+    for (let k = 0; k < width; k++) sum += row[offset + k];
+    let level = 0;
+    let reached = 0;
+    for (let c = before; c + after < n; c++) {
+      const mean = sum / width;
+      if (mean > sorted[level]) {
+        let up = level + 1;
+        while (mean > sorted[up]) up++;
+        for (let s = level; s < up; s++) changes[s * n + c]++;
+        for (let s = reached; s < up; s++) firsts[s * n + c]++;
+        if (up > reached) reached = up;
+        level = up;
+      } else if (level > 0 && !(mean > sorted[level - 1])) {
+        let down = level - 1;
+        while (down > 0 && !(mean > sorted[down - 1])) down--;
+        for (let s = down; s < level; s++) changes[s * n + c]--;
+        level = down;
+      }
+      if (c + after + 1 < n) sum += row[offset + c + after + 1] - row[offset + c - before];
+    }
+  }
+
+  /**
+   * Adds the counts so far to `counts` in the layout of exceedanceCountsInto: counts[j * n + c] the
+   * members whose 20-year mean around year c exceeds threshold j, counts[(T + j) * n + c] the members
+   * whose mean first exceeds it at c (j in the caller's threshold order, T thresholds). Years whose
+   * window leaves the run get nothing.
+   */
+  addCountsTo(counts: Float64Array): void {
+    const { before, after } = RUNNING_MEAN_WINDOW;
+    const n = this.n;
+    const t = this.order.length;
+    for (let s = 0; s < t; s++) {
+      const j = this.order[s];
+      let above = 0;
+      for (let c = before; c + after < n; c++) {
+        above += this.changes[s * n + c];
+        counts[j * n + c] += above;
+        counts[(t + j) * n + c] += this.firsts[s * n + c];
+      }
+    }
+  }
+}
