@@ -80,7 +80,7 @@ for (const workers of [1, 2]) {
 }
 
 // (b) the bare kernel on the same members' parameters and one shared forcing series.
-const p = cold.value.members.parameters;
+const p = cold.value.memberParameters.parameters;
 const params = (i: number): TwoBoxParams => ({ upperHeatCapacity: 8, deepHeatCapacity: 100, deepEfficacy: 1, feedbackWm2K: p.feedbackWm2K[i], exchangeWm2K: p.exchangeWm2K[i] });
 const props = Array.from({ length: MEMBERS }, (_, i) => modalTwoBoxPropagatorInto(params(i), emptyTwoBoxPropagator()));
 const total = forcing.total;
@@ -145,7 +145,7 @@ const membersMs = await bestOf3(() => {
   };
   runMembersInto(task, 0, MEMBERS, block);
 });
-const summaryMs = await bestOf3(() => summarizeEnsemble(cold.value.members));
+const summaryMs = await bestOf3(() => summarizeEnsemble(cold.value.memberParameters, 1, undefined));
 console.log(
   `    (a) on 1 thread in parts: gamma solves ${gammaMs.toFixed(0)} ms, sampling with them ${samplingMs.toFixed(0)} ms, member runs with sampling ${membersMs.toFixed(0)} ms, summary statistics ${summaryMs.toFixed(0)} ms`,
 );

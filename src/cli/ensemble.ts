@@ -81,7 +81,7 @@ export function ensembleCommand(io: CliIo): Command {
       const allNotes = [...read.pathway.provenance.notes, ...notes, ...result.notes];
       if (opts.shard) {
         if (!opts.out || !opts.out.toLowerCase().endsWith('.json')) throw new ConfigError('--shard writes a shard file: give --out NAME.json', 'out');
-        writeOutput(opts.out, { '.json': () => shardToJson(result.members) }, { inputs, params, baseline: opts.baseline, notes: allNotes, seed: opts.seed, io });
+        writeOutput(opts.out, { '.json': () => shardToJson(result.members!) }, { inputs, params, baseline: opts.baseline, notes: allNotes, seed: opts.seed, io });
         io.stderr(`wrote shard ${opts.shard.index}/${opts.shard.count} (${result.memberCount} members) to ${opts.out}; combine all shards with \`warmcast merge\`\n`);
         return;
       }

@@ -56,3 +56,9 @@ export interface EnsembleMembers {
   /** Unphysical draws discarded while drawing these members. */
   redraws: number;
 }
+
+/**
+ * An ensemble's members without their yearly warming: what a run that streamed its members (without
+ * keepMembers) holds, its statistics having been computed on the way.
+ */
+export type EnsembleMemberParameters = Omit<EnsembleMembers, 'warmingK'>;

@@ -14,8 +14,11 @@ import { RUNNING_MEAN_WINDOW } from './running-mean.js';
  * counts from threads or shards add up exactly in any order.
  */
 export class ExceedanceCounter {
-  /** Thresholds ascending, then +Infinity (so a rise always stops). */
-  private readonly sorted: Float64Array;
+  /**
+   * -Infinity, the thresholds ascending, +Infinity: a member at level L has bounds[L] < mean and
+   * !(mean > bounds[L + 1]) (it exceeds exactly the L lowest thresholds).
+   */
+  readonly bounds: Float64Array;
   /** order[s] = index in the caller's threshold list of the s-th smallest threshold. */
   private readonly order: Int32Array;
   /** Changes of the count above each sorted threshold, per year: [s * n + c]. */
@@ -33,7 +36,7 @@ export class ExceedanceCounter {
   ) {
     const order = thresholds.map((_, j) => j).sort((a, b) => thresholds[a] - thresholds[b]);
     this.order = Int32Array.from(order);
-    this.sorted = Float64Array.from([...order.map((j) => thresholds[j]), Infinity]);
+    this.bounds = Float64Array.from([-Infinity, ...order.map((j) => thresholds[j]), Infinity]);
     this.changes = new Int32Array(thresholds.length * n);
     this.firsts = new Int32Array(thresholds.length * n);
   }
@@ -47,30 +50,41 @@ export class ExceedanceCounter {
     const { before, after } = RUNNING_MEAN_WINDOW;
     const width = before + after + 1;
     const n = this.n;
-    const t = this.order.length;
-    if (n < width || t === 0) return;
-    const { sorted, changes, firsts } = this;
+    if (n < width || this.order.length === 0) return;
+    const bounds = this.bounds;
     let sum = 0;
     for (let k = 0; k < width; k++) sum += row[offset + k];
     let level = 0;
     let reached = 0;
     for (let c = before; c + after < n; c++) {
       const mean = sum / width;
-      if (mean > sorted[level]) {
-        let up = level + 1;
-        while (mean > sorted[up]) up++;
-        for (let s = level; s < up; s++) changes[s * n + c]++;
-        for (let s = reached; s < up; s++) firsts[s * n + c]++;
-        if (up > reached) reached = up;
-        level = up;
-      } else if (level > 0 && !(mean > sorted[level - 1])) {
-        let down = level - 1;
-        while (down > 0 && !(mean > sorted[down - 1])) down--;
-        for (let s = down; s < level; s++) changes[s * n + c]--;
-        level = down;
+      if (!(mean > bounds[level]) || mean > bounds[level + 1]) {
+        level = this.move(mean, level, reached, c);
+        if (level > reached) reached = level;
       }
       if (c + after + 1 < n) sum += row[offset + c + after + 1] - row[offset + c - before];
     }
+  }
+
+  /**
+   * Moves a member whose 20-year mean around year c is `mean` from `level` to the level of that
+   * mean, recording the change (and first crossings of levels above `reached`, the highest level the
+   * member has had). Callers check first that the level changes, which it rarely does.
+   * @returns the new level
+   */
+  move(mean: number, level: number, reached: number, c: number): number {
+    const { bounds, changes, firsts, n } = this;
+    if (mean > bounds[level + 1]) {
+      let up = level + 1;
+      while (mean > bounds[up + 1]) up++;
+      for (let s = level; s < up; s++) changes[s * n + c]++;
+      for (let s = reached; s < up; s++) firsts[s * n + c]++;
+      return up;
+    }
+    let down = level;
+    while (down > 0 && !(mean > bounds[down])) down--;
+    for (let s = down; s < level; s++) changes[s * n + c]--;
+    return down;
   }
 
   /**

@@ -1,7 +1,7 @@
 import { ConfigError } from '../errors.js';
 import type { ForcingSeries } from '../forcing/agents.js';
 import type { Co2Formula } from '../forcing/co2.js';
-import type { EnsembleConfig, EnsembleMembers } from './ensemble-members.js';
+import type { EnsembleConfig, EnsembleMemberParameters } from './ensemble-members.js';
 import { MEMBER_STREAM_SCHEME } from './member-generators.js';
 import { defaultWorkerCount, runMembersParallel, type EnsembleThreads } from './run-members-parallel.js';
 import type { MemberCarbonTask } from './run-emission-members.js';
@@ -53,6 +53,12 @@ export interface EnsembleOptions {
   sampling?: EnsembleSampling;
   /** Years at which to report crossing probabilities (default 2050 and 2100). */
   milestones?: number[];
+  /**
+   * Keep every member's yearly warming in the result's `members` (8 bytes per member-year; always
+   * kept for a shard). Without it the members run as a stream of year blocks and only their
+   * statistics and parameters are returned.
+   */
+  keepMembers?: boolean;
 }
 
 /** Version of the draw layout (see drawMember). */
@@ -83,14 +89,15 @@ export async function runEnsemble(input: EnsembleInput, options: EnsembleOptions
   const task = memberTask(input, config);
   const n = input.years.length;
   const workers = options.workers ?? options.threads?.size ?? defaultWorkerCount((to - from) * n);
-  const run = await runMembersParallel(task, from, to, workers, config.thresholds, options.onProgress, options.threads);
-  const members: EnsembleMembers = {
+  const keep = options.keepMembers === true || options.shard !== undefined;
+  const run = await runMembersParallel(task, from, to, workers, config.thresholds, options.onProgress, options.threads, keep);
+  const members: EnsembleMemberParameters = {
     config,
     shard: options.shard ? { index: options.shard.index, count: options.shard.count } : undefined,
     memberStart: from,
     memberCount: to - from,
-    warmingK: run.block.warmingK,
-    parameters: run.block.parameters,
+    ...(run.warmingK ? { warmingK: run.warmingK } : {}),
+    parameters: run.parameters,
     redraws: run.redraws,
   };
   return summarizeEnsemble(members, run.workersUsed, run.statistics);

@@ -1,37 +1,35 @@
 /**
  * The one process-level part of ensembles: spreading the work over threads. The physics and
- * statistics stay in pure functions (run-members.ts, exceedance-counter.ts, summarize-ensemble.ts);
- * this file splits the work, keeps worker threads (member-worker.ts) that share memory with this
- * one, relays progress and errors, and runs everything in this thread when no compiled worker file
- * is at hand (running from TypeScript sources, as under vitest). Results are identical either way:
- * each member is computed by the same code from (seed, index) alone into its own column, each year's
- * percentiles from all members, and exceedance counts are whole numbers whose partial sums add up
- * exactly.
- *
- * The calling thread works too: with T threads it runs the first of T slices itself and T - 1 workers
- * run the others. Two phases: (1) every thread runs its slice of members into the shared year-major
- * block, counting threshold exceedances as each member's row is written; (2) once every thread is
- * done, each computes the percentiles of its slice of years.
+ * statistics stay in pure functions (member-stream.ts, run-thread-share.ts, summarize-ensemble.ts);
+ * this file allocates the shared memory, keeps worker threads (member-worker.ts), hands each its
+ * share, relays progress and errors, and runs everything in this thread when one thread is asked for
+ * or no compiled worker file is at hand (running from TypeScript sources, as under vitest). Results
+ * are identical either way: each member is computed by the same code from (seed, index) alone into
+ * its own column, each year's percentiles from all members, and exceedance counts are whole numbers
+ * whose partial sums add up exactly.
  */
 import { availableParallelism } from 'node:os';
 import { Worker } from 'node:worker_threads';
 import { ConfigError, NumericalError, WarmcastError } from '../errors.js';
-import { ExceedanceCounter } from './exceedance-counter.js';
-import { runMembersInto, type MemberBlock, type MemberTask } from './run-members.js';
-import { emptyParameters, MEMBER_PARAMETERS, type MemberParameter } from './sample-members.js';
-import { exceedanceCountsLength, PERCENTILES, yearPercentilesInto, type MemberStatistics } from './summarize-ensemble.js';
+import { streamRows } from './member-stream.js';
+import type { MemberTask } from './run-members.js';
+import { abandonRun, RunAbandoned, runThreadShare, type ThreadJob } from './run-thread-share.js';
+import { MEMBER_PARAMETERS, type MemberParameter } from './sample-members.js';
+import { exceedanceCountsLength, PERCENTILES, type MemberStatistics } from './summarize-ensemble.js';
 
 /**
- * Member-years a run should have per thread before it uses another. A worker starts in about 30 ms
- * on the 2-core development machine (module loading) while this thread already works, and then
- * compiles the hot loops afresh; from about 2,000 members over 1750-2300 two threads beat one
- * (measured with scripts/bench-ensemble.ts).
+ * Member-years a run should have per thread before it uses another. Workers start in about 30 ms on
+ * the 2-core development machine (module loading) and then compile the hot loops afresh; from about
+ * 2,000 members over 1750-2300 two threads beat one (measured with scripts/bench-ensemble.ts).
  */
 const MEMBER_YEARS_PER_THREAD = 1_000_000;
 
 /** What a member run produced. */
 export interface MemberRun {
-  block: MemberBlock;
+  /** Every member's yearly warming, year-major (year k of member r at k * members + r), when kept. */
+  warmingK?: Float64Array;
+  /** Each member's parameters. */
+  parameters: Record<MemberParameter, Float64Array>;
   /** Unphysical draws discarded. */
   redraws: number;
   /** Threads that did the work (1 = this thread only). */
@@ -42,31 +40,14 @@ export interface MemberRun {
 
 /** Messages from member-worker.ts. */
 export type WorkerMessage =
-  | { kind: 'progress'; done: number }
-  | { kind: 'members-done'; redraws: number; counts: Float64Array }
-  | { kind: 'summary-done' }
+  | { kind: 'progress' }
+  | { kind: 'done'; redraws: number; counts: Float64Array }
   | { kind: 'error'; name: string; message: string; code?: string; parameter?: string };
 
-/** Requests to member-worker.ts. */
-export type WorkerRequest = { kind: 'run'; input: WorkerInput } | { kind: 'summarize'; yearFrom: number; yearTo: number };
-
-/** What member-worker.ts receives with a run request. */
-export interface WorkerInput {
-  task: MemberTask;
-  /** Members this worker runs (global indices). */
-  from: number;
-  to: number;
-  /** The shared block. */
-  blockStart: number;
-  memberCount: number;
-  warming: SharedArrayBuffer;
-  parameters: Record<MemberParameter, SharedArrayBuffer>;
-  /** Shared percentile output, PERCENTILES.length x years. */
-  percentiles: SharedArrayBuffer;
-  thresholds: number[];
-  /** Shared Int32 progress counters, one per thread; this worker writes slot `slot`. */
-  progress: SharedArrayBuffer;
-  slot: number;
+/** A request to member-worker.ts: run one thread's share. */
+export interface WorkerRequest {
+  kind: 'run';
+  job: ThreadJob;
 }
 
 /**
@@ -75,7 +56,7 @@ export interface WorkerInput {
  * an open pool still exits (its workers do not keep it alive).
  */
 export interface EnsembleThreads {
-  /** Threads available to a run: the calling thread plus the pool's workers. */
+  /** Threads available to a run. */
   readonly size: number;
   /** Stops the workers. */
   close(): Promise<void>;
@@ -100,31 +81,33 @@ export function defaultWorkerCount(memberYears: number): number {
 }
 
 /**
- * Starts threads for ensemble runs: `size - 1` workers beside the calling thread (none when worker
- * threads are not available, see {@link workerThreadsAvailable}; `size` is then 1).
+ * Starts `size` worker threads for ensemble runs (none when worker threads are not available, see
+ * {@link workerThreadsAvailable}; runs then use the calling thread).
  *
- * @param size threads in all, at least 1
+ * @param size threads, at least 1
  * @example
  * const threads = startEnsembleThreads(2);
  * try { for (const input of inputs) results.push(await runEnsemble(input, { ...options, threads })); } finally { await threads.close(); }
  */
 export function startEnsembleThreads(size: number): EnsembleThreads {
   if (!(Number.isInteger(size) && size >= 1)) throw new ConfigError(`threads must be a whole number of at least 1, got ${size}`, 'workers');
-  return new WorkerPool(workerThreadsAvailable() ? size - 1 : 0);
+  return new WorkerPool(workerThreadsAvailable() ? size : 0);
 }
 
 /**
- * Runs members [from, to) on up to `threads` threads (this one included) into one year-major block
- * of shared memory, and computes the member-year statistics for `thresholds`: percentiles per year
- * and exceedance counts.
+ * Runs members [from, to) on up to `threads` threads and computes the member-year statistics for
+ * `thresholds`: percentiles per year and exceedance counts. Concentration-driven members stream
+ * through blocks of years and only a few years of all members are held at a time, unless `keep`
+ * asks for every member's yearly warming (emission-driven members are always kept).
  *
  * @param task shared inputs
  * @param from first member
  * @param to end member, exclusive
- * @param threads threads to use, this one included (at least 1)
+ * @param threads threads to use (at least 1; 1 runs in this thread)
  * @param thresholds warming levels of the summary, K
  * @param onProgress called with the members done so far and the total of this call
  * @param pool started threads to use (at most its size); without it, workers are started and stopped here
+ * @param keep return every member's yearly warming
  * @throws ConfigError or NumericalError as the member runs raise them
  */
 export async function runMembersParallel(
@@ -135,96 +118,74 @@ export async function runMembersParallel(
   thresholds: readonly number[],
   onProgress?: (done: number, total: number) => void,
   pool?: EnsembleThreads,
+  keep = false,
 ): Promise<MemberRun> {
   const count = to - from;
   const n = task.otherWm2.length;
-  const size = Math.max(1, Math.min(threads, pool ? pool.size : Infinity, count, n));
-  if (size === 1 || !workerThreadsAvailable()) return runInThisThread(task, from, to, thresholds, onProgress);
-  const workers = pool ? (pool as WorkerPool) : new WorkerPool(size - 1);
-  try {
-    return await runOnPool(workers, size, task, from, to, thresholds, onProgress);
-  } finally {
-    if (!pool) await workers.close();
-  }
-}
+  const kept = keep || task.carbon !== undefined;
+  const rowCount = streamRows(n, kept);
+  let size = Math.max(1, Math.min(threads, count));
+  if (pool) size = Math.min(size, pool.size);
+  if (!workerThreadsAvailable() || (pool && pool.size === 0)) size = 1;
+  const shared = size > 1;
+  const buffer = (bytes: number) => (shared ? new SharedArrayBuffer(bytes) : new ArrayBuffer(bytes));
+  const rows = new Float64Array(buffer(rowCount * count * 8));
+  const parameters = Object.fromEntries(MEMBER_PARAMETERS.map((name) => [name, new Float64Array(buffer(count * 8))])) as Record<MemberParameter, Float64Array>;
+  const percentiles = new Float64Array(buffer(PERCENTILES.length * n * 8));
+  const sync = new Int32Array(buffer(4 * (2 + size)));
+  const jobs = Array.from({ length: size }, (_, w): ThreadJob => ({
+    task,
+    from: from + Math.floor((w * count) / size),
+    to: from + Math.floor(((w + 1) * count) / size),
+    blockStart: from,
+    memberCount: count,
+    thread: w,
+    threads: size,
+    thresholds: [...thresholds],
+    rows,
+    rowCount,
+    parameters,
+    percentiles,
+    sync,
+  }));
+  let last = -1;
+  const report = onProgress && (() => {
+    let done = 0;
+    for (let w = 0; w < size; w++) done += Atomics.load(sync, 2 + w);
+    if (done > last) onProgress((last = done), count);
+  });
 
-function runInThisThread(task: MemberTask, from: number, to: number, thresholds: readonly number[], onProgress?: (done: number, total: number) => void): MemberRun {
-  const count = to - from;
-  const n = task.otherWm2.length;
-  const block: MemberBlock = { blockStart: from, memberCount: count, warmingK: new Float64Array(count * n), parameters: emptyParameters(count) };
-  const exceedance = new ExceedanceCounter(thresholds, n);
-  const redraws = runMembersInto(task, from, to, block, onProgress && ((done) => onProgress(done, count)), exceedance);
   const counts = new Float64Array(exceedanceCountsLength(thresholds.length, n));
-  exceedance.addCountsTo(counts);
-  const percentiles = PERCENTILES.map(() => new Float64Array(n));
-  yearPercentilesInto(block.warmingK, count, 0, n, percentiles);
-  return { block, redraws, workersUsed: 1, statistics: { percentiles, counts } };
-}
-
-async function runOnPool(
-  pool: WorkerPool,
-  size: number,
-  task: MemberTask,
-  from: number,
-  to: number,
-  thresholds: readonly number[],
-  onProgress?: (done: number, total: number) => void,
-): Promise<MemberRun> {
-  const count = to - from;
-  const n = task.otherWm2.length;
-  const warming = new SharedArrayBuffer(count * n * 8);
-  const named = Object.fromEntries(MEMBER_PARAMETERS.map((name) => [name, new SharedArrayBuffer(count * 8)])) as Record<MemberParameter, SharedArrayBuffer>;
-  const parameters = Object.fromEntries(MEMBER_PARAMETERS.map((name) => [name, new Float64Array(named[name])])) as Record<MemberParameter, Float64Array>;
-  const block: MemberBlock = { blockStart: from, memberCount: count, warmingK: new Float64Array(warming), parameters };
-  const percentileBuffer = new SharedArrayBuffer(PERCENTILES.length * n * 8);
-  const percentiles = PERCENTILES.map((_, j) => new Float64Array(percentileBuffer, j * n * 8, n));
-  const progressBuffer = new SharedArrayBuffer(4 * size);
-  const progress = new Int32Array(progressBuffer);
-  const split = (total: number, w: number, offset = 0) => [offset + Math.floor((w * total) / size), offset + Math.floor(((w + 1) * total) / size)];
-  const report = onProgress && ((own: number) => {
-    let done = own;
-    for (let w = 1; w < size; w++) done += Atomics.load(progress, w);
-    onProgress(done, count);
-  });
-  let ownDone = 0;
-
-  // Phase 1: members. Workers take slices 1..size-1; this thread takes slice 0.
-  const workers = pool.take(size - 1);
-  const phase1 = workers.map((worker, i) => {
-    const w = i + 1;
-    const [a, b] = split(count, w, from);
-    const input: WorkerInput = { task, from: a, to: b, blockStart: from, memberCount: count, warming, parameters: named, percentiles: percentileBuffer, thresholds: [...thresholds], progress: progressBuffer, slot: w };
-    worker.onProgress = report && (() => report(ownDone));
-    worker.post({ kind: 'run', input });
-    return worker.next((m) => (m.kind === 'members-done' ? m : undefined));
-  });
-  // Every worker's failure is awaited below; until then a rejection must not count as unhandled.
-  phase1.forEach((p) => p.catch(() => undefined));
-  const [a0, b0] = split(count, 0, from);
-  const exceedance = new ExceedanceCounter(thresholds, n);
-  let redraws = runMembersInto(task, a0, b0, block, report && ((done) => report((ownDone = done))), exceedance);
-  const counts = new Float64Array(exceedanceCountsLength(thresholds.length, n));
-  exceedance.addCountsTo(counts);
-  for (const done of await Promise.all(phase1)) {
-    redraws += done.redraws;
-    for (let i = 0; i < counts.length; i++) counts[i] += done.counts[i];
+  let redraws = 0;
+  if (!shared) {
+    const share = runThreadShare(jobs[0], report);
+    redraws = share.redraws;
+    counts.set(share.counts);
+  } else {
+    const workers = pool ? (pool as WorkerPool) : new WorkerPool(size);
+    try {
+      const shares = await workers.run(jobs, report);
+      for (const share of shares) {
+        redraws += share.redraws;
+        for (let i = 0; i < counts.length; i++) counts[i] += share.counts[i];
+      }
+    } finally {
+      if (!pool) await workers.close();
+    }
   }
-
-  // Phase 2: percentiles, once every member is in the block.
-  const phase2 = workers.map((worker, i) => {
-    const [yearFrom, yearTo] = split(n, i + 1);
-    worker.post({ kind: 'summarize', yearFrom, yearTo });
-    return worker.next((m) => (m.kind === 'summary-done' ? true : undefined));
-  });
-  phase2.forEach((p) => p.catch(() => undefined));
-  const [y0, y1] = split(n, 0);
-  yearPercentilesInto(block.warmingK, count, y0, y1, percentiles);
-  await Promise.all(phase2);
-  for (const worker of workers) worker.onProgress = undefined;
-  return { block, redraws, workersUsed: size, statistics: { percentiles, counts } };
+  return {
+    ...(kept ? { warmingK: rows } : {}),
+    parameters,
+    redraws,
+    workersUsed: size,
+    statistics: { percentiles: PERCENTILES.map((_, j) => percentiles.subarray(j * n, (j + 1) * n)), counts },
+  };
 }
 
-/** A started worker and the replies it sends, awaited one kind at a time. */
+/**
+ * A started worker and the replies it sends, awaited one at a time. An error reply fails only the
+ * run in progress; the worker's own death (an exit or an uncaught error) fails it for good.
+ */
 class PooledWorker {
   onProgress?: () => void;
   private waiting?: { pick: (m: WorkerMessage) => unknown; resolve: (v: unknown) => void; reject: (e: Error) => void };
@@ -233,14 +194,10 @@ class PooledWorker {
   constructor(readonly worker: Worker) {
     worker.unref();
     worker.on('message', (m: WorkerMessage) => {
-      if (m.kind === 'error') return this.fail(rebuildError(m));
       if (m.kind === 'progress') return this.onProgress?.();
+      if (m.kind === 'error') return this.settle((w) => w.reject(rebuildError(m)));
       const value = this.waiting?.pick(m);
-      if (value !== undefined && this.waiting) {
-        const { resolve } = this.waiting;
-        this.waiting = undefined;
-        resolve(value);
-      }
+      if (value !== undefined) this.settle((w) => w.resolve(value));
     });
     worker.on('error', (e) => this.fail(e));
     worker.on('exit', (code) => this.fail(new Error(`an ensemble worker stopped (exit code ${code}) before finishing its work`)));
@@ -250,7 +207,7 @@ class PooledWorker {
     if (!this.failure) this.worker.postMessage(request);
   }
 
-  /** Resolves with the first message that `pick` maps to a value; rejects on an error or an exit. */
+  /** Resolves with the first message that `pick` maps to a value; rejects on an error reply or the worker's death. */
   next<T>(pick: (m: WorkerMessage) => T | undefined): Promise<T> {
     return new Promise<T>((resolve, reject) => {
       if (this.failure) return reject(this.failure);
@@ -258,10 +215,15 @@ class PooledWorker {
     });
   }
 
+  private settle(how: (w: NonNullable<PooledWorker['waiting']>) => void): void {
+    const w = this.waiting;
+    this.waiting = undefined;
+    if (w) how(w);
+  }
+
   private fail(e: Error): void {
     this.failure ??= e;
-    this.waiting?.reject(this.failure);
-    this.waiting = undefined;
+    this.settle((w) => w.reject(this.failure!));
   }
 }
 
@@ -275,12 +237,36 @@ class WorkerPool implements EnsembleThreads {
   }
 
   get size(): number {
-    return this.workers.length + 1;
+    return this.workers.length;
   }
 
-  take(count: number): PooledWorker[] {
+  /**
+   * Hands job w to worker w and waits for all of them; on the first failure the run is abandoned
+   * (every other worker stops at its next barrier) and that failure is thrown.
+   */
+  async run(jobs: ThreadJob[], onProgress?: () => void): Promise<{ redraws: number; counts: Float64Array }[]> {
     if (this.closed) throw new ConfigError('the ensemble threads were closed before this run', 'workers');
-    return this.workers.slice(0, count);
+    const workers = this.workers.slice(0, jobs.length);
+    const sync = jobs[0].sync;
+    const replies = workers.map((worker, w) => {
+      worker.onProgress = onProgress;
+      worker.post({ kind: 'run', job: jobs[w] });
+      return worker.next((m) => (m.kind === 'done' ? m : undefined));
+    });
+    try {
+      return await Promise.all(
+        replies.map((reply) =>
+          reply.catch((e: unknown) => {
+            abandonRun(sync);
+            throw e;
+          }),
+        ),
+      );
+    } finally {
+      // Every worker has replied or failed before the next run uses the pool.
+      await Promise.allSettled(replies);
+      for (const worker of workers) worker.onProgress = undefined;
+    }
   }
 
   async close(): Promise<void> {
@@ -292,6 +278,7 @@ class WorkerPool implements EnsembleThreads {
 
 /** Errors cross threads as plain data; this gives them their warmcast class (and exit code) back. */
 function rebuildError(m: Extract<WorkerMessage, { kind: 'error' }>): Error {
+  if (m.name === 'RunAbandoned') return new RunAbandoned();
   if (m.name === 'ConfigError') return new ConfigError(m.message, m.parameter, m.code);
   if (m.name === 'NumericalError') return new NumericalError(m.message, m.code);
   if (m.code !== undefined) return new WarmcastError(m.message, m.code, 1);

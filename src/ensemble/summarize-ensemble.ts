@@ -1,6 +1,7 @@
+import { ConfigError } from '../errors.js';
 import { QuantileSelector, quantilesInPlace } from '../numerics/quantiles.js';
 import { ExceedanceCounter } from './exceedance-counter.js';
-import type { EnsembleConfig, EnsembleMembers } from './ensemble-members.js';
+import type { EnsembleConfig, EnsembleMemberParameters, EnsembleMembers } from './ensemble-members.js';
 import { RUNNING_MEAN_WINDOW } from './running-mean.js';
 import { MEMBER_PARAMETERS, type MemberParameter } from './sample-members.js';
 import { describeSampling } from './sampling.js';
@@ -56,8 +57,13 @@ export interface EnsembleResult {
   ecsTcrCorrelation: number;
   /** How the numbers were made, one sentence each, for the provenance of an output. */
   notes: string[];
-  /** The raw members (to write a shard file, or for further statistics). */
-  members: EnsembleMembers;
+  /**
+   * The raw members with every member's yearly warming (to write a shard file, or for further
+   * statistics); only when they were kept (runEnsemble with keepMembers or a shard, or merged shards).
+   */
+  members?: EnsembleMembers;
+  /** Each member's parameters (and which members these are). */
+  memberParameters: EnsembleMemberParameters;
   /** Threads that ran the members (1 when run in the calling thread, or for merged shards). */
   workersUsed: number;
 }
@@ -85,16 +91,18 @@ export interface MemberStatistics {
  * @param statistics the member-year scans if already done (by worker threads); computed here otherwise
  * @example summarizeEnsemble(members).percentiles.p50 // median warming per year, K
  */
-export function summarizeEnsemble(members: EnsembleMembers, workersUsed = 1, statistics?: MemberStatistics): EnsembleResult {
+export function summarizeEnsemble(members: EnsembleMembers | EnsembleMemberParameters, workersUsed = 1, statistics?: MemberStatistics): EnsembleResult {
+  const warmingK = 'warmingK' in members ? members.warmingK : undefined;
   const { config, memberCount: m } = members;
   const n = config.yearCount;
   const thresholds = config.thresholds;
   const years = Float64Array.from({ length: n }, (_, k) => config.firstYear + k);
   let stats = statistics;
   if (!stats) {
+    if (!warmingK) throw new ConfigError('summarizeEnsemble needs the members\' yearly warming (run with keepMembers) or their statistics', 'members');
     stats = { percentiles: PERCENTILES.map(() => new Float64Array(n)), counts: new Float64Array(exceedanceCountsLength(thresholds.length, n)) };
-    yearPercentilesInto(members.warmingK, m, 0, n, stats.percentiles);
-    exceedanceCountsInto(members.warmingK, m, n, thresholds, 0, m, stats.counts);
+    yearPercentilesInto(warmingK, m, 0, n, stats.percentiles);
+    exceedanceCountsInto(warmingK, m, n, thresholds, 0, m, stats.counts);
   }
   const percentiles = Object.fromEntries(PERCENTILE_NAMES.map((name, j) => [name, stats.percentiles[j]])) as Record<PercentileName, Float64Array>;
 
@@ -141,7 +149,8 @@ export function summarizeEnsemble(members: EnsembleMembers, workersUsed = 1, sta
     parameters,
     ecsTcrCorrelation: pearson(members.parameters.ecsK, members.parameters.tcrK),
     notes: ensembleNotes(members),
-    members,
+    ...(warmingK ? { members: { ...members, warmingK } } : {}),
+    memberParameters: members,
     workersUsed,
   };
 }
@@ -212,7 +221,7 @@ export function exceedanceCountsInto(
 }
 
 /** The conventions behind the numbers, for an output's provenance. */
-function ensembleNotes(members: EnsembleMembers): string[] {
+function ensembleNotes(members: EnsembleMemberParameters): string[] {
   const c = members.config;
   const { before, after } = RUNNING_MEAN_WINDOW;
   const held = members.shard ? `shard ${members.shard.index}/${members.shard.count}: members ${members.memberStart}-${members.memberStart + members.memberCount - 1} of ${c.membersTotal}` : `${c.membersTotal} members`;

@@ -4,13 +4,13 @@ import { InputError } from '../../src/errors.js';
 import { syntheticInput } from './synthetic-input.js';
 
 const input = syntheticInput(1800, 2100);
-const options: EnsembleOptions = { members: 50, seed: 5, thresholds: [1.5], baseline: [1850, 1900] };
+const options: EnsembleOptions = { members: 50, seed: 5, thresholds: [1.5], baseline: [1850, 1900], keepMembers: true };
 const shard = async (index: number, count = 3, extra: Partial<EnsembleOptions> = {}) =>
-  ({ file: `s${index}.json`, members: (await runEnsemble(input, { ...options, ...extra, shard: { index, count } })).members });
+  ({ file: `s${index}.json`, members: (await runEnsemble(input, { ...options, ...extra, shard: { index, count } })).members! });
 
 describe('mergeShards', () => {
   it('mergeShards puts every shard\'s members in their places, in any order, and adds their redraws', async () => {
-    const whole = (await runEnsemble(input, options)).members;
+    const whole = (await runEnsemble(input, options)).members!;
     const merged = mergeShards([await shard(3), await shard(1), await shard(2)]);
     expect(Array.from(merged.warmingK)).toEqual(Array.from(whole.warmingK));
     expect(Array.from(merged.parameters.tcrK)).toEqual(Array.from(whole.parameters.tcrK));
@@ -28,7 +28,7 @@ describe('mergeShards', () => {
     expect(() => mergeShards([one, two, seed6])).toThrow(/seed6\.json: must come from the same ensemble as s1\.json; it differs in seed/);
     expect(() => mergeShards([one, two, otherThresholds])).toThrow(/differs in thresholds/);
     expect(() => mergeShards([one, two, three, ofFour])).toThrow(/must be one of 3 shards like s1\.json, but is shard 4\/4/);
-    const whole = { file: 'whole.json', members: (await runEnsemble(input, options)).members };
+    const whole = { file: 'whole.json', members: (await runEnsemble(input, options)).members! };
     expect(() => mergeShards([whole])).toThrow(/whole\.json: must be a shard/);
     expect(() => mergeShards([])).toThrow(InputError);
     const error = (() => {

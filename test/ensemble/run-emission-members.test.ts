@@ -13,7 +13,7 @@ const { input } = ensembleInput(pathway, params);
 const years = pathway.years;
 const n = years.length;
 const at = (y: number) => y - years[0];
-const options = { seed: 11, thresholds: [1.5, 2], baseline: [1850, 1900] as const };
+const options = { seed: 11, thresholds: [1.5, 2], baseline: [1850, 1900] as const, keepMembers: true };
 
 /** Deterministic run written out from the parts: annual carbon step, AR6 forcing, exact propagator. */
 function deterministicWarming(): Float64Array {
@@ -65,7 +65,7 @@ describe('runEnsemble on an emission pathway', () => {
   it('a member with the central climate and carbon multiplier 1 equals the annual-step deterministic run (to 1e-9 K)', async () => {
     const r = await runEnsemble(input, { ...options, members: 2, sampling: central(pointRange(1)) });
     const ref = deterministicWarming();
-    for (let k = 0; k < n; k++) expect(Math.abs(r.members.warmingK[k * 2] - ref[k])).toBeLessThan(1e-9);
+    for (let k = 0; k < n; k++) expect(Math.abs(r.members!.warmingK[k * 2] - ref[k])).toBeLessThan(1e-9);
   });
 
   it('a wider carbon-cycle spread widens the 2100 warming range (more uptake uncertainty, more warming uncertainty)', async () => {
@@ -76,16 +76,16 @@ describe('runEnsemble on an emission pathway', () => {
     expect(spread(narrow)).toBeLessThan(1e-9);
     expect(spread(wide)).toBeGreaterThan(0.05);
     // A larger iIRF100 keeps more CO2 airborne: warming rises with the multiplier (Millar et al. 2017, eq. 7).
-    const p = wide.members.parameters.irf100Scale;
+    const p = wide.members!.parameters.irf100Scale;
     const hi = p.indexOf(Math.max(...p));
     const lo = p.indexOf(Math.min(...p));
-    expect(wide.members.warmingK[k * 400 + hi]).toBeGreaterThan(wide.members.warmingK[k * 400 + lo]);
+    expect(wide.members!.warmingK[k * 400 + hi]).toBeGreaterThan(wide.members!.warmingK[k * 400 + lo]);
   });
 
   it('the same seed gives the same bytes (shard file of the whole ensemble)', async () => {
     const a = await runEnsemble(input, { ...options, members: 50 });
     const b = await runEnsemble(input, { ...options, members: 50 });
-    expect(shardToJson(a.members)).toBe(shardToJson(b.members));
+    expect(shardToJson(a.members!)).toBe(shardToJson(b.members!));
     expect(a.config.emissionDriven).toBe(true);
     expect(a.parameters.irf100Scale.p95).toBeGreaterThan(a.parameters.irf100Scale.p05);
   });
@@ -94,8 +94,8 @@ describe('runEnsemble on an emission pathway', () => {
     const { mergeShards, shardFromJson, summarizeEnsemble } = await import('../../src/ensemble/index.js');
     const whole = await runEnsemble(input, { ...options, members: 30 });
     const parts = await Promise.all([1, 2, 3].map((index) => runEnsemble(input, { ...options, members: 30, shard: { index, count: 3 } })));
-    const merged = summarizeEnsemble(mergeShards(parts.map((p, i) => ({ file: `s${i}.json`, members: shardFromJson(shardToJson(p.members), `s${i}.json`) }))));
-    expect(merged.members.warmingK).toEqual(whole.members.warmingK);
+    const merged = summarizeEnsemble(mergeShards(parts.map((p, i) => ({ file: `s${i}.json`, members: shardFromJson(shardToJson(p.members!), `s${i}.json`) }))));
+    expect(merged.members!.warmingK).toEqual(whole.members!.warmingK);
     expect(merged.percentiles.p50).toEqual(whole.percentiles.p50);
   });
 });

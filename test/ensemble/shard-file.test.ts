@@ -4,7 +4,7 @@ import { InputError } from '../../src/errors.js';
 import { syntheticInput } from './synthetic-input.js';
 
 const input = syntheticInput(1750, 2100);
-const members = (await runEnsemble(input, { members: 120, seed: 3, thresholds: [1.5, 2], baseline: [1850, 1900], shard: { index: 2, count: 4 } })).members;
+const members = (await runEnsemble(input, { members: 120, seed: 3, thresholds: [1.5, 2], baseline: [1850, 1900], shard: { index: 2, count: 4 } })).members!;
 
 describe('shardToJson / shardFromJson', () => {
   it('shardFromJson(shardToJson(members)) restores every value bit for bit (Float64 bit patterns in base64)', () => {

@@ -64,13 +64,13 @@ describe('historical ensemble against observed warming (IPCC AR6 WG1 SPM A.1.2)'
     const sv = history.series;
     const n = history.years.length;
     const forcing = forcingByAgent(n, { co2Ppm: sv.co2_ppm, ch4Ppb: sv.ch4_ppb, n2oPpb: sv.n2o_ppb, prescribed: sv }, { co2Formula: 'ar6' });
-    const result = await runEnsemble({ years: history.years, forcing }, { members: 5000, seed: 7, thresholds: [1.5], baseline: [1850, 1900] });
+    const result = await runEnsemble({ years: history.years, forcing }, { members: 5000, seed: 7, thresholds: [1.5], baseline: [1850, 1900], keepMembers: true });
     const m = result.memberCount;
     const first = 2011 - history.years[0];
     const decade = new Float64Array(m);
     for (let r = 0; r < m; r++) {
       let sum = 0;
-      for (let k = first; k < first + 10; k++) sum += result.members.warmingK[k * m + r];
+      for (let k = first; k < first + 10; k++) sum += result.members!.warmingK[k * m + r];
       decade[r] = sum / 10;
     }
     const d = sorted(decade);
