@@ -5,7 +5,7 @@ export { ensembleTable, probAboveColumn } from './ensemble-table.js';
 export type { EnsembleTable } from './ensemble-table.js';
 export { EXCHANGE_RANGE, exchangeForTcr, solverTransientResponse, tcrSolver } from './exchange-for-tcr.js';
 export type { TcrSolver } from './exchange-for-tcr.js';
-export { MEMBER_STREAM_SCHEME, memberGenerators } from './member-generators.js';
+export { MEMBER_STREAM_SCHEME, memberGenerators, memberState } from './member-generators.js';
 export { mergeShards, shardMerger } from './merge-shards.js';
 export { emptyTwoBoxPropagator, modalTwoBoxPropagatorInto } from './modal-propagator.js';
 export type { ShardInput, ShardMerger } from './merge-shards.js';

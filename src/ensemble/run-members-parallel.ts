@@ -18,11 +18,13 @@ import { MEMBER_PARAMETERS, type MemberParameter } from './sample-members.js';
 import { exceedanceCountsLength, PERCENTILES, type MemberStatistics } from './summarize-ensemble.js';
 
 /**
- * Member-years a run should have per thread before it uses another. Workers start in about 30 ms on
- * the 2-core development machine (module loading) and then compile the hot loops afresh; from about
- * 2,000 members over 1750-2300 two threads beat one (measured with scripts/bench-ensemble.ts).
+ * Member-years a run should have per thread before it uses another. A command runs once, so its
+ * workers start cold: loading the modules and compiling the hot loops afresh in each thread costs
+ * about 0.15 s on the 2-core development machine, and two threads only beat one from about 50,000
+ * members over 1750-2100 (measured with `warmcast ensemble --workers 1|2`). A pool started once and
+ * reused (startEnsembleThreads) pays that only once.
  */
-const MEMBER_YEARS_PER_THREAD = 1_000_000;
+const MEMBER_YEARS_PER_THREAD = 10_000_000;
 
 /** What a member run produced. */
 export interface MemberRun {
@@ -73,8 +75,8 @@ export function workerThreadsAvailable(): boolean {
 
 /**
  * The number of threads a run of this size should use when the caller does not say: one per core,
- * but only as many as have at least a million member-years each.
- * @example defaultWorkerCount(10_000 * 551) // 2 on a 2-core machine
+ * but only as many as have at least ten million member-years each.
+ * @example defaultWorkerCount(100_000 * 351) // 2 on a 2-core machine
  */
 export function defaultWorkerCount(memberYears: number): number {
   return Math.max(1, Math.min(availableParallelism(), Math.floor(memberYears / MEMBER_YEARS_PER_THREAD)));

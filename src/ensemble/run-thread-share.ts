@@ -4,7 +4,7 @@ import { ExceedanceCounter } from './exceedance-counter.js';
 import { MemberStream, STREAM_BLOCK_YEARS } from './member-stream.js';
 import { runMembersInto, type MemberTask } from './run-members.js';
 import type { MemberParameter } from './sample-members.js';
-import { exceedanceCountsLength, PERCENTILES } from './summarize-ensemble.js';
+import { exceedanceCountsLength, expectedRange, PERCENTILES } from './summarize-ensemble.js';
 
 /**
  * One thread's part of an ensemble run, as plain data (sent to a worker thread as is; the typed
@@ -67,7 +67,7 @@ export function runThreadShare(job: ThreadJob, onProgress?: () => void): { redra
   const q = new Float64Array(PERCENTILES.length);
   const percentilesOf = (k0: number, k1: number) => {
     for (let k = k0; k < k1; k++) {
-      selector.quantilesInto(rows, (k % rowCount) * m, q);
+      selector.quantilesInto(rows, (k % rowCount) * m, q, ...expectedRange(q));
       for (let j = 0; j < q.length; j++) job.percentiles[j * n + k] = q[j];
     }
   };

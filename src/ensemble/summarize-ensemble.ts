@@ -169,9 +169,20 @@ export function yearPercentilesInto(warmingK: Float64Array, m: number, yearFrom:
   const selector = new QuantileSelector(PERCENTILES, m);
   const q = new Float64Array(PERCENTILES.length);
   for (let k = yearFrom; k < yearTo; k++) {
-    selector.quantilesInto(warmingK, k * m, q);
+    selector.quantilesInto(warmingK, k * m, q, ...expectedRange(q));
     for (let j = 0; j < out.length; j++) out[j][k] = q[j];
   }
+}
+
+/**
+ * The range a year's member values probably span, from the percentiles of the year computed just
+ * before it (PERCENTILES order, so q[0] is the 5th and q[4] the 95th): the 5-95 % range widened by
+ * twice its width on each side. Only a guide for the buckets of QuantileSelector (the result does
+ * not depend on it); none before the first year.
+ */
+export function expectedRange(q: Float64Array): [number, number] | [] {
+  const spread = q[4] - q[0];
+  return spread > 0 ? [q[0] - 2 * spread, q[4] + 2 * spread] : [];
 }
 
 /** Length of the counts array of {@link exceedanceCountsInto}. */

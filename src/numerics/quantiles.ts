@@ -124,14 +124,20 @@ export class QuantileSelector {
   /**
    * The quantiles of values[from .. from + n), into out[0 .. probabilities.length); NaN when n is 0.
    * `values` is not changed.
+   *
+   * @param rangeLow with `rangeHigh`, an expected range of the bulk of the values (for example from
+   *   a similar sample): the buckets then span it, values outside it fall into the end buckets, and
+   *   the pass that finds the sample's own range is skipped. The result is the same with or without
+   *   it (bucketing stays monotone); a poor guess only makes the final selections longer.
+   * @param rangeHigh upper end of the expected range
    */
-  quantilesInto(values: Float64Array, from: number, out: Float64Array): void {
+  quantilesInto(values: Float64Array, from: number, out: Float64Array, rangeLow?: number, rangeHigh?: number): void {
     const { n, ranks, orderStatistics } = this;
     if (n <= 0) {
       out.fill(NaN, 0, this.probabilities.length);
       return;
     }
-    if (!(this.buckets > 0 && this.bucketSelect(values, from))) {
+    if (!(this.buckets > 0 && this.bucketSelect(values, from, rangeLow, rangeHigh))) {
       const copy = this.candidates;
       copy.set(values.subarray(from, from + n));
       selectRanks(copy, ranks, 0, ranks.length - 1, 0, n - 1, 0);
@@ -148,26 +154,31 @@ export class QuantileSelector {
    * Finds the wanted order statistics of values[from .. from + n) by bucketing into
    * `orderStatistics`. Returns false, having found nothing, when the range is not finite and positive.
    */
-  private bucketSelect(values: Float64Array, from: number): boolean {
+  private bucketSelect(values: Float64Array, from: number, rangeLow?: number, rangeHigh?: number): boolean {
     const { n, ranks, counts, wanted, rankBucket, rankBase, slotStart, slotFill, candidates } = this;
     const to = from + n;
-    let min = Infinity;
-    let max = -Infinity;
-    for (let i = from; i < to; i++) {
-      const v = values[i];
-      if (v < min) min = v;
-      if (v > max) max = v;
+    let min = rangeLow ?? NaN;
+    let max = rangeHigh ?? NaN;
+    if (!(max > min && max - min < Infinity)) {
+      min = Infinity;
+      max = -Infinity;
+      for (let i = from; i < to; i++) {
+        const v = values[i];
+        if (v < min) min = v;
+        if (v > max) max = v;
+      }
+      if (!(max > min && max - min < Infinity)) return false;
     }
-    if (!(max > min && max - min < Infinity)) return false;
     const buckets = this.buckets;
     const scale = buckets / (max - min);
     const last = buckets - 1;
     counts.fill(0);
-    // Monotone in v: subtracting, scaling by a positive number and flooring never reorder values.
-    // (v - min) * scale is >= 0, so truncation (`| 0`) is the floor; only values near max reach `buckets`.
+    // Monotone in v: subtracting, scaling by a positive number, clamping to [0, last] and truncating
+    // never reorder values (the clamp comes first, so values far outside a guessed range cannot
+    // overflow the integer conversion).
     for (let i = from; i < to; i++) {
-      const b = ((values[i] - min) * scale) | 0;
-      counts[b > last ? last : b]++;
+      const x = (values[i] - min) * scale;
+      counts[x >= last ? last : x > 0 ? x | 0 : 0]++;
     }
     // The bucket of each wanted rank (ranks ascend, so one walk finds them all), and its slot.
     let below = 0;
@@ -193,8 +204,8 @@ export class QuantileSelector {
     }
     for (let i = from; i < to; i++) {
       const v = values[i];
-      const c = ((v - min) * scale) | 0;
-      const slot = wanted[c > last ? last : c];
+      const x = (v - min) * scale;
+      const slot = wanted[x >= last ? last : x > 0 ? x | 0 : 0];
       if (slot >= 0) candidates[slotFill[slot]++] = v;
     }
     for (let r = 0; r < ranks.length; r++) {

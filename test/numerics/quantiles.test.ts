@@ -1,7 +1,7 @@
 import fc from 'fast-check';
 import { quantileSeq } from 'mathjs';
 import { describe, expect, it } from 'vitest';
-import { quantileSorted, quantilesInPlace } from '../../src/numerics/quantiles.js';
+import { QuantileSelector, quantileSorted, quantilesInPlace } from '../../src/numerics/quantiles.js';
 import { expectClose } from '../asserts.js';
 
 const P = [0, 0.05, 0.17, 0.5, 0.83, 0.95, 1];
@@ -65,5 +65,24 @@ describe('quantilesInPlace', () => {
     expect(out[0]).toBe(2);
     quantilesInPlace(values, [0.5], out, 2, 2);
     expect(out[0]).toBeNaN();
+  });
+
+  it('QuantileSelector.quantilesInto with a guessed range (right, too narrow, shifted away, or absurdly wide) equals the sorted quantiles, bit for bit, and leaves the sample unchanged', () => {
+    fc.assert(
+      fc.property(
+        fc.array(fc.double({ min: -50, max: 50, noNaN: true }), { minLength: 1024, maxLength: 4000 }),
+        fc.constantFrom<[number, number]>([-50, 50], [-1, 1], [1e3, 2e3], [-1e300, 1e300], [0, 1e-9]),
+        (xs, [lo, hi]) => {
+          const values = Float64Array.from(xs);
+          const copy = values.slice();
+          const sorted = values.slice().sort();
+          const out = new Float64Array(P.length);
+          new QuantileSelector(P, values.length).quantilesInto(values, 0, out, lo, hi);
+          P.forEach((p, i) => expect(out[i] === quantileSorted(sorted, p), `p = ${p}, range ${lo}..${hi}`).toBe(true));
+          expect(values).toEqual(copy);
+        },
+      ),
+      { numRuns: 60 },
+    );
   });
 });
