@@ -51,6 +51,56 @@ describe('runMembersParallel', () => {
   }, 120_000);
   afterAll(() => rmSync(buildDir, { recursive: true, force: true }));
 
+  it('a started pool of two threads (startEnsembleThreads) gives the one-thread output on every run, and a run that fails in the workers (ConfigError) leaves the pool usable', () => {
+    const inputFile = join(buildDir, 'input.json');
+    const script = `
+      import { readFileSync } from 'node:fs';
+      const { runEnsemble, ensembleTable, startEnsembleThreads, AR6_SAMPLING } = await import(${JSON.stringify(pathToFileURL(join(buildDir, 'src/ensemble/index.js')).href)});
+      const raw = JSON.parse(readFileSync(${JSON.stringify(inputFile)}, 'utf8'));
+      const byAgent = Object.fromEntries(Object.entries(raw.byAgent).map(([k, v]) => [k, Float64Array.from(v)]));
+      const input = { years: Float64Array.from(raw.years), forcing: { total: Float64Array.from(raw.total), byAgent }, co2Formula: 'ar6' };
+      const text = (r) => { const t = ensembleTable(r); return JSON.stringify({ values: t.columns.map((c) => Array.from(t.values[c])), crossings: r.crossings, redraws: r.redraws }); };
+      const threads = startEnsembleThreads(2);
+      const one = text(await runEnsemble(input, { ...raw.options, workers: 1 }));
+      const first = await runEnsemble(input, { ...raw.options, threads });
+      const second = await runEnsemble(input, { ...raw.options, threads });
+      // No TCR below any ECS: every worker's draws fail.
+      let error = '';
+      try {
+        await runEnsemble(input, { ...raw.options, threads, sampling: { ...AR6_SAMPLING, tcrK: { p05: 10, p17: 11, p50: 12, p83: 13, p95: 14 } } });
+      } catch (e) {
+        error = e.name + ': ' + e.message;
+      }
+      const after = await runEnsemble(input, { ...raw.options, threads });
+      await threads.close();
+      process.stdout.write(JSON.stringify({ same: [first, second, after].map((r) => text(r) === one), used: [first, second, after].map((r) => r.workersUsed), error }));`;
+    const scriptFile = join(buildDir, 'pool.mjs');
+    writeFileSync(scriptFile, script);
+    const result = JSON.parse(execFileSync(process.execPath, [scriptFile], { cwd: root, encoding: 'utf8', maxBuffer: 1 << 28 }));
+    expect(result.same).toEqual([true, true, true]);
+    expect(result.used).toEqual([2, 2, 2]);
+    expect(result.error).toMatch(/^ConfigError: the ensemble sampling gave 1000 unphysical draws in a row/);
+  }, 120_000);
+
+  it('an emission-driven ensemble (members kept whole, then percentiles split by years) gives byte-identical output on one and two threads', () => {
+    const script = `
+      const url = (p) => ${JSON.stringify(pathToFileURL(buildDir).href)} + '/src/' + p;
+      const { runEnsemble, ensembleTable, shardToJson } = await import(url('ensemble/index.js'));
+      const { loadPathway } = await import(url('io/index.js'));
+      const { calibrate } = await import(url('climate/calibrate.js'));
+      const { ensembleInput } = await import(url('projection/ensemble-input.js'));
+      const { input } = ensembleInput(loadPathway('swift-emissions'), calibrate());
+      const options = { members: 301, seed: 4, thresholds: [1.5, 2], baseline: [1850, 1900], keepMembers: true };
+      const text = (r) => { const t = ensembleTable(r); return JSON.stringify({ values: t.columns.map((c) => Array.from(t.values[c])), crossings: r.crossings, members: shardToJson(r.members) }); };
+      const one = await runEnsemble(input, { ...options, workers: 1 });
+      const two = await runEnsemble(input, { ...options, workers: 2 });
+      process.stdout.write(JSON.stringify({ same: text(one) === text(two), used: [one.workersUsed, two.workersUsed] }));`;
+    const scriptFile = join(buildDir, 'emissions.mjs');
+    writeFileSync(scriptFile, script);
+    const result = JSON.parse(execFileSync(process.execPath, [scriptFile], { cwd: root, encoding: 'utf8', maxBuffer: 1 << 28 }));
+    expect(result).toEqual({ same: true, used: [1, 2] });
+  }, 120_000);
+
   it('the built runEnsemble gives byte-identical output on one and on two worker threads, and the same as the in-process run from sources', async () => {
     const one = runBuilt(1);
     const two = runBuilt(2);
