@@ -2,7 +2,7 @@ import { Command } from 'commander';
 import { formatCsv } from '../io/index.js';
 import { readPathway } from '../io/load-pathway.js';
 import { comparePathways, milestoneYears, type PathwayWarming } from '../metrics/index.js';
-import { runEnsemble } from '../ensemble/index.js';
+import { defaultWorkerCount, runEnsemble, startEnsembleThreads, type EnsembleThreads } from '../ensemble/index.js';
 import { ensembleInput, projectPathway } from '../projection/index.js';
 import { comparisonCharts, comparisonHtml, comparisonJson, comparisonLongTable, comparisonMarkdown, comparisonText } from '../report/index.js';
 import type { CliIo } from './cli-io.js';
@@ -56,18 +56,24 @@ export function compareCommand(io: CliIo): Command {
       const last = ref.years[ref.years.length - 1];
       const firstFuture = ref.provenance.spliceYear ?? ref.years[0];
       const pathways: PathwayWarming[] = [];
-      for (const { projection: p, pathway } of runs) {
-        const base: PathwayWarming = { label: p.name, years: p.years, warmingK: p.columns.warming_k, ...(p.columns.co2_gtco2 ? { co2Gtco2: p.columns.co2_gtco2 } : {}) };
-        if (opts.members === undefined) {
-          pathways.push(base);
-          continue;
+      // One set of worker threads for every pathway's ensemble, when their total size pays for it.
+      const threads = opts.members !== undefined ? ensembleThreadsFor(opts.members * ref.years.length * runs.length) : undefined;
+      try {
+        for (const { projection: p, pathway } of runs) {
+          const base: PathwayWarming = { label: p.name, years: p.years, warmingK: p.columns.warming_k, ...(p.columns.co2_gtco2 ? { co2Gtco2: p.columns.co2_gtco2 } : {}) };
+          if (opts.members === undefined) {
+            pathways.push(base);
+            continue;
+          }
+          // With an ensemble, the line is its median and the ranges its percentiles (same seed per pathway).
+          const { input, notes: inputNotes } = ensembleInput(pathway, params);
+          const e = await runEnsemble(input, { members: opts.members, seed: opts.seed, thresholds: opts.thresholds, baseline: opts.baseline, ...(threads ? { threads } : {}) });
+          notes.push(...[...inputNotes, ...e.notes].map((n) => `${p.name} ensemble: ${n}`));
+          const pc = e.percentiles;
+          pathways.push({ ...base, warmingK: pc.p50, range: { p05: pc.p05, p17: pc.p17, p83: pc.p83, p95: pc.p95 } });
         }
-        // With an ensemble, the line is its median and the ranges its percentiles (same seed per pathway).
-        const { input, notes: inputNotes } = ensembleInput(pathway, params);
-        const e = await runEnsemble(input, { members: opts.members, seed: opts.seed, thresholds: opts.thresholds, baseline: opts.baseline });
-        notes.push(...[...inputNotes, ...e.notes].map((n) => `${p.name} ensemble: ${n}`));
-        const pc = e.percentiles;
-        pathways.push({ ...base, warmingK: pc.p50, range: { p05: pc.p05, p17: pc.p17, p83: pc.p83, p95: pc.p95 } });
+      } finally {
+        await threads?.close();
       }
       const c = comparePathways(pathways, {
         milestoneYears: opts.years ?? milestoneYears(firstFuture, last, 10),
@@ -105,4 +111,10 @@ export function compareCommand(io: CliIo): Command {
       write(comparisonText(c, { color: opts.out === '-' ? io.stderrIsTTY : io.stdoutIsTTY, fromYear, baseline, noChart: !opts.chart }));
     });
   return cmd;
+}
+
+/** Worker threads shared by several ensembles of `memberYears` in all, or none when one thread is enough. */
+function ensembleThreadsFor(memberYears: number): EnsembleThreads | undefined {
+  const count = defaultWorkerCount(memberYears);
+  return count > 1 ? startEnsembleThreads(count) : undefined;
 }
