@@ -152,6 +152,8 @@ export class MemberStream {
    * The mean warming over the baseline years (relative to the start) of members a and b, summed in
    * year order as `rebase` does, into `mean`. Two members step side by side: each step waits on the
    * one before it, so a second independent chain costs little (b may equal a, for an odd member).
+   * The paired step is written out here and in advance() alike: a function call per step would cost
+   * more than the step itself.
    */
   private baselineMeans(a: number, b: number): void {
     const { co2Wm2, aerosolWm2, otherWm2, baselineFrom, baselineTo } = this.task;
