@@ -194,7 +194,6 @@ class PooledWorker {
   private failure?: Error;
 
   constructor(readonly worker: Worker) {
-    worker.unref();
     worker.on('message', (m: WorkerMessage) => {
       if (m.kind === 'progress') return this.onProgress?.();
       if (m.kind === 'error') return this.settle((w) => w.reject(rebuildError(m)));
@@ -203,6 +202,9 @@ class PooledWorker {
     });
     worker.on('error', (e) => this.fail(e));
     worker.on('exit', (code) => this.fail(new Error(`an ensemble worker stopped (exit code ${code}) before finishing its work`)));
+    // After the listeners (attaching a message listener refs the worker's port again): an idle worker
+    // does not keep the process alive.
+    worker.unref();
   }
 
   post(request: WorkerRequest): void {
@@ -251,6 +253,8 @@ class WorkerPool implements EnsembleThreads {
     const workers = this.workers.slice(0, jobs.length);
     const sync = jobs[0].sync;
     const replies = workers.map((worker, w) => {
+      // Busy workers keep the process alive until they reply; idle ones do not (see PooledWorker).
+      worker.worker.ref();
       worker.onProgress = onProgress;
       worker.post({ kind: 'run', job: jobs[w] });
       return worker.next((m) => (m.kind === 'done' ? m : undefined));
@@ -267,7 +271,10 @@ class WorkerPool implements EnsembleThreads {
     } finally {
       // Every worker has replied or failed before the next run uses the pool.
       await Promise.allSettled(replies);
-      for (const worker of workers) worker.onProgress = undefined;
+      for (const worker of workers) {
+        worker.onProgress = undefined;
+        worker.worker.unref();
+      }
     }
   }
 

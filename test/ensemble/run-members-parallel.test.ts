@@ -82,6 +82,16 @@ describe('runMembersParallel', () => {
     expect(result.error).toMatch(/^ConfigError: the ensemble sampling gave 1000 unphysical draws in a row/);
   }, 120_000);
 
+  it('a process that leaves its pool open still exits once its work is done (idle workers do not keep it alive)', () => {
+    const script = `
+      const { startEnsembleThreads } = await import(${JSON.stringify(pathToFileURL(join(buildDir, 'src/ensemble/index.js')).href)});
+      startEnsembleThreads(2);
+      process.stdout.write('started');`;
+    const scriptFile = join(buildDir, 'open-pool.mjs');
+    writeFileSync(scriptFile, script);
+    expect(execFileSync(process.execPath, [scriptFile], { cwd: root, encoding: 'utf8', timeout: 30_000 })).toBe('started');
+  }, 60_000);
+
   it('an emission-driven ensemble (members kept whole, then percentiles split by years) gives byte-identical output on one and two threads', () => {
     const script = `
       const url = (p) => ${JSON.stringify(pathToFileURL(buildDir).href)} + '/src/' + p;
