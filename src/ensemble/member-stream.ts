@@ -21,8 +21,7 @@ export const STREAM_BLOCK_YEARS = 16;
  * @example streamRows(551, false) // 36
  */
 export function streamRows(n: number, keep: boolean): number {
-  const { before, after } = RUNNING_MEAN_WINDOW;
-  return keep ? n : Math.min(n, Math.max(2 * STREAM_BLOCK_YEARS, STREAM_BLOCK_YEARS + before + after + 1));
+  return keep ? n : Math.min(n, Math.max(2 * STREAM_BLOCK_YEARS, STREAM_BLOCK_YEARS + WINDOW));
 }
 
 /**
@@ -109,8 +108,7 @@ export class MemberStream {
     this.sum = array();
     this.level = new Int32Array(count);
     this.reached = new Int32Array(count);
-    const { before, after } = RUNNING_MEAN_WINDOW;
-    this.offsets = new Int32Array(STREAM_BLOCK_YEARS + before + after + 1);
+    this.offsets = new Int32Array(STREAM_BLOCK_YEARS + WINDOW);
   }
 
   /**
@@ -220,12 +218,10 @@ export class MemberStream {
    * year k - 10 (as ExceedanceCounter.addMember has it).
    */
   advance(y0: number, y1: number): void {
-    const { before, after } = RUNNING_MEAN_WINDOW;
-    const width = before + after + 1;
     const { rowCount, offsets, count, column } = this;
-    // offsets[j]: where year y0 - width + j of member 0 of this share goes (-1 before year 0).
-    for (let j = 0; j < width + y1 - y0; j++) {
-      const k = y0 - width + j;
+    // offsets[j]: where year y0 - WINDOW + j of member 0 of this share goes (-1 before year 0).
+    for (let j = 0; j < WINDOW + y1 - y0; j++) {
+      const k = y0 - WINDOW + j;
       offsets[j] = k >= 0 ? (k % rowCount) * this.width + column : -1;
     }
     const { n, rows, counter, spare } = this;
