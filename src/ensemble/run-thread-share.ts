@@ -91,6 +91,8 @@ export function runThreadShare(job: ThreadJob, onProgress?: () => void): { redra
     return { redraws, counts };
   }
 
+  QuantileSelector.prime();
+  MemberStream.prime(task);
   const stream = new MemberStream(task, from, to, from - job.blockStart, m, rows, rowCount, job.parameters, job.thresholds);
   redraws = stream.draw();
   for (let y0 = 0; y0 < n; y0 += STREAM_BLOCK_YEARS) {

@@ -2,7 +2,8 @@ import { uniformFloat64 } from 'pure-rand/distribution/uniformFloat64';
 import type { RandomGenerator } from 'pure-rand/types/RandomGenerator';
 import { ConfigError } from '../errors.js';
 import { forcingOfDoubling, type Co2Formula } from '../forcing/co2.js';
-import { assessedQuantile } from './assessed-range.js';
+import { assessedQuantile, type AssessedRange } from './assessed-range.js';
+import type { TwoBoxParams } from '../climate/two-box.js';
 import { exchangeForTcr, tcrSolver, type TcrSolver } from './exchange-for-tcr.js';
 import { memberGenerators } from './member-generators.js';
 import { normalQuantile } from './normal-quantile.js';
@@ -57,6 +58,9 @@ export interface MemberSampler {
   independentWeight: number;
   /** Whether members draw the carbon-cycle multiplier (emission-driven ensembles only). */
   carbon: boolean;
+  /** Scratch of drawMember: the member's ocean parameters, and a drawn value with its normal score. */
+  ocean: Omit<TwoBoxParams, 'exchangeWm2K'>;
+  drawn: Float64Array;
 }
 
 /** Consecutive unphysical draws of one quantity after which a member gives up: the sampling is then at fault. */
@@ -79,6 +83,8 @@ export function memberSampler(sampling: EnsembleSampling, co2Formula: Co2Formula
     formulaForcing2xWm2: forcingOfDoubling(co2Formula),
     tcr: tcrSolver(co2Formula),
     independentWeight: Math.sqrt(1 - sampling.ecsTcrCorrelation ** 2),
+    ocean: { upperHeatCapacity: sampling.upperHeatCapacity, deepHeatCapacity: sampling.deepHeatCapacity, deepEfficacy: sampling.deepEfficacy, feedbackWm2K: NaN },
+    drawn: new Float64Array(2),
   };
 }
 
@@ -107,32 +113,33 @@ export function memberSampler(sampling: EnsembleSampling, co2Formula: Co2Formula
  */
 export function drawMember(rng: RandomGenerator, sampler: MemberSampler, out: MemberDraw): number {
   const s = sampler.sampling;
-  const score = () => normalQuantile(uniformFloat64(rng));
+  const ocean = sampler.ocean;
+  const drawn = sampler.drawn;
   let discarded = 0;
-  const until = (draw: () => number, physical: (v: number) => boolean, attempts: number): number => {
-    for (let attempt = 0; attempt < attempts; attempt++) {
-      const v = draw();
-      if (physical(v)) return v;
-      discarded++;
-    }
-    return NaN;
-  };
   for (let restart = 0; restart < MAX_ATTEMPTS; restart++) {
-    let zEcs = NaN;
-    // Written so that NaN and infinities fail every test.
-    const ecsK = until(() => assessedQuantile(s.ecsK, (zEcs = score())), (v) => v > 0 && v < Infinity, MAX_ATTEMPTS);
-    const forcing2xScale = until(() => assessedQuantile(s.forcing2xScale, score()), (v) => v > 0 && v < Infinity, MAX_ATTEMPTS);
-    const aerosolScale = until(() => assessedQuantile(s.aerosolScale, score()), (v) => v >= 0 && v < Infinity, MAX_ATTEMPTS);
+    // Each quantity is drawn until physical; the comparisons are written so that NaN and
+    // infinities fail every test.
+    discarded += drawUntil(rng, s.ecsK, POSITIVE, drawn);
+    const ecsK = drawn[0];
+    const zEcs = drawn[1];
+    discarded += drawUntil(rng, s.forcing2xScale, POSITIVE, drawn);
+    const forcing2xScale = drawn[0];
+    discarded += drawUntil(rng, s.aerosolScale, NON_NEGATIVE, drawn);
+    const aerosolScale = drawn[0];
     if (Number.isNaN(ecsK) || Number.isNaN(forcing2xScale) || Number.isNaN(aerosolScale)) break;
     const forcing2xWm2 = sampler.formulaForcing2xWm2 * forcing2xScale;
     const feedbackWm2K = forcing2xWm2 / ecsK;
-    const ocean = { upperHeatCapacity: s.upperHeatCapacity, deepHeatCapacity: s.deepHeatCapacity, deepEfficacy: s.deepEfficacy, feedbackWm2K };
+    ocean.feedbackWm2K = feedbackWm2K;
+    let tcrK = NaN;
     let exchangeWm2K = NaN;
-    const tcrK = until(
-      () => assessedQuantile(s.tcrK, s.ecsTcrCorrelation * zEcs + sampler.independentWeight * score()),
-      (v) => v > 0 && v < ecsK && (exchangeWm2K = exchangeForTcr(sampler.tcr, ocean, forcing2xWm2, v)) > 0,
-      TCR_ATTEMPTS,
-    );
+    for (let attempt = 0; attempt < TCR_ATTEMPTS; attempt++) {
+      const v = assessedQuantile(s.tcrK, s.ecsTcrCorrelation * zEcs + sampler.independentWeight * normalQuantile(uniformFloat64(rng)));
+      if (v > 0 && v < ecsK && (exchangeWm2K = exchangeForTcr(sampler.tcr, ocean, forcing2xWm2, v)) > 0) {
+        tcrK = v;
+        break;
+      }
+      discarded++;
+    }
     if (Number.isNaN(tcrK)) {
       // An ECS so far in its low tail that almost no TCR below it is reachable: draw the member
       // anew, discarding its ECS, forcing and aerosol draws too.
@@ -150,7 +157,8 @@ export function drawMember(rng: RandomGenerator, sampler: MemberSampler, out: Me
     // (and everything a concentration-driven ensemble computes) stay exactly as they were.
     out.irf100Scale = 1;
     if (sampler.carbon) {
-      out.irf100Scale = until(() => assessedQuantile(s.irf100Scale, score()), (v) => v > 0 && v < Infinity, MAX_ATTEMPTS);
+      discarded += drawUntil(rng, s.irf100Scale, POSITIVE, drawn);
+      out.irf100Scale = drawn[0];
       if (Number.isNaN(out.irf100Scale)) break;
     }
     return discarded;
@@ -159,6 +167,30 @@ export function drawMember(rng: RandomGenerator, sampler: MemberSampler, out: Me
     `the ensemble sampling gave ${MAX_ATTEMPTS} unphysical draws in a row; its ranges must leave room for a positive ECS and forcing and a TCR below ECS`,
     'sampling',
   );
+}
+
+/** What drawUntil accepts: values above zero, or from zero on (both finite). */
+const POSITIVE = 0;
+const NON_NEGATIVE = 1;
+
+/**
+ * Draws a quantity of `range` (a 53-bit uniform, its normal score, the assessed quantile) until it
+ * is physical, at most MAX_ATTEMPTS times, into out[0] (NaN if never), with its normal score in
+ * out[1].
+ * @returns the draws discarded
+ */
+function drawUntil(rng: RandomGenerator, range: AssessedRange, accept: typeof POSITIVE | typeof NON_NEGATIVE, out: Float64Array): number {
+  for (let attempt = 0; attempt < MAX_ATTEMPTS; attempt++) {
+    const z = normalQuantile(uniformFloat64(rng));
+    const v = assessedQuantile(range, z);
+    if ((accept === POSITIVE ? v > 0 : v >= 0) && v < Infinity) {
+      out[0] = v;
+      out[1] = z;
+      return attempt;
+    }
+  }
+  out[0] = NaN;
+  return MAX_ATTEMPTS;
 }
 
 /** Sampled parameters of consecutive members, one Float64Array per parameter. */
