@@ -13,7 +13,8 @@ describe('differences', () => {
         const ab = differences(a, b);
         const ba = differences(b, a);
         expect(Array.from(ab.years)).toEqual(Array.from(ba.years));
-        for (let i = 0; i < ab.values.length; i++) expect(ab.values[i]).toBe(-ba.values[i]);
+        // Equal as numbers: where a and b agree, a - b is +0 and -(b - a) is -0, which compare equal.
+        for (let i = 0; i < ab.values.length; i++) expect(ab.values[i] === -ba.values[i], `year ${ab.years[i]}`).toBe(true);
       }),
     );
   });
