@@ -57,7 +57,8 @@ export function compareCommand(io: CliIo): Command {
       const firstFuture = ref.provenance.spliceYear ?? ref.years[0];
       const pathways: PathwayWarming[] = [];
       // One set of worker threads for every pathway's ensemble, when their total size pays for it.
-      const threads = opts.members !== undefined ? ensembleThreadsFor(opts.members * ref.years.length * runs.length) : undefined;
+      const anyEmissions = runs.some((r) => r.projection.columns.co2_gtco2 !== undefined);
+      const threads = opts.members !== undefined ? ensembleThreadsFor(opts.members * ref.years.length * runs.length, anyEmissions) : undefined;
       try {
         for (const { projection: p, pathway } of runs) {
           const base: PathwayWarming = { label: p.name, years: p.years, warmingK: p.columns.warming_k, ...(p.columns.co2_gtco2 ? { co2Gtco2: p.columns.co2_gtco2 } : {}) };
@@ -113,8 +114,11 @@ export function compareCommand(io: CliIo): Command {
   return cmd;
 }
 
-/** Worker threads shared by several ensembles of `memberYears` in all, or none when one thread is enough. */
-function ensembleThreadsFor(memberYears: number): EnsembleThreads | undefined {
-  const count = defaultWorkerCount(memberYears);
+/**
+ * Worker threads shared by several ensembles of `memberYears` in all (weighted as emission-driven
+ * when any is), or none when one thread is enough.
+ */
+function ensembleThreadsFor(memberYears: number, emissionDriven: boolean): EnsembleThreads | undefined {
+  const count = defaultWorkerCount(memberYears, emissionDriven);
   return count > 1 ? startEnsembleThreads(count) : undefined;
 }

@@ -88,7 +88,7 @@ export async function runEnsemble(input: EnsembleInput, options: EnsembleOptions
   const { from, to } = shardRange(config.membersTotal, options.shard);
   const task = memberTask(input, config);
   const n = input.years.length;
-  const workers = options.workers ?? options.threads?.size ?? defaultWorkerCount((to - from) * n);
+  const workers = options.workers ?? options.threads?.size ?? defaultWorkerCount((to - from) * n, input.carbon !== undefined);
   const keep = options.keepMembers === true || options.shard !== undefined;
   const run = await runMembersParallel(task, from, to, workers, config.thresholds, options.onProgress, options.threads, keep);
   const members: EnsembleMemberParameters = {

@@ -74,12 +74,24 @@ export function workerThreadsAvailable(): boolean {
 }
 
 /**
- * The number of threads a run of this size should use when the caller does not say: one per core,
- * but only as many as have at least ten million member-years each.
- * @example defaultWorkerCount(100_000 * 351) // 2 on a 2-core machine
+ * How much more an emission-driven member-year costs than a concentration-driven one (its own
+ * carbon cycle, CO2 forcing formula and feedback solve each year): about 8 times on the 2-core
+ * development machine for the run itself, and the cold start of a second thread pays from about
+ * 1,500 members over 1750-2100 (`warmcast ensemble swift-emissions --workers 1|2`: 0.57 / 0.58 s at
+ * 1,000 members, 0.81 / 0.71 s at 2,000, 1.20 / 0.97 s at 4,000), hence the weight.
  */
-export function defaultWorkerCount(memberYears: number): number {
-  return Math.max(1, Math.min(availableParallelism(), Math.floor(memberYears / MEMBER_YEARS_PER_THREAD)));
+const EMISSION_MEMBER_YEAR_WEIGHT = 20;
+
+/**
+ * The number of threads a run of this size should use when the caller does not say: one per core,
+ * but only as many as have at least ten million member-years each (an emission-driven member-year
+ * counting as EMISSION_MEMBER_YEAR_WEIGHT).
+ * @example defaultWorkerCount(100_000 * 351) // 2 on a 2-core machine
+ * @example defaultWorkerCount(4_000 * 351, true) // 2 on a 2-core machine
+ */
+export function defaultWorkerCount(memberYears: number, emissionDriven = false): number {
+  const work = memberYears * (emissionDriven ? EMISSION_MEMBER_YEAR_WEIGHT : 1);
+  return Math.max(1, Math.min(availableParallelism(), Math.floor(work / MEMBER_YEARS_PER_THREAD)));
 }
 
 /**
