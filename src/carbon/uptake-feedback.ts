@@ -1,4 +1,4 @@
-import { integratedImpulseResponse, integratedImpulseResponseSlope } from './co2-impulse-response.js';
+import { JOOS_2013 } from './co2-impulse-response.js';
 
 /**
  * The carbon-climate feedback on uptake of Millar et al. 2017 (ACP 17, 7213, eqs. 7-8 and Table 1):
@@ -59,10 +59,27 @@ export function irf100Target(uptakeGtc: number, surfaceK: number): number {
  */
 export function uptakeTimescaleScaling(targetYr: number, guess = 0.5): number {
   const h = MILLAR_2017.horizonYr;
+  const { fractions, timescalesYr } = JOOS_2013;
   let alpha = guess > 0 ? guess : 0.5;
   for (let i = 0; i < 100; i++) {
-    const residual = integratedImpulseResponse(alpha, h) - targetYr;
-    let next = alpha - residual / integratedImpulseResponseSlope(alpha, h);
+    // integratedImpulseResponse and integratedImpulseResponseSlope together, from one expm1 per box
+    // (each is called every year of every member of an emission-driven ensemble): with x = h / tau,
+    // a box gives a tau (1 - e^-x), and its slope in alpha a tau_published (1 - e^-x - x e^-x).
+    let value = 0;
+    let slope = 0;
+    for (let j = 0; j < fractions.length; j++) {
+      const tau = alpha * timescalesYr[j];
+      if (tau === Infinity) {
+        value += fractions[j] * h;
+        continue;
+      }
+      const x = h / tau;
+      const m = Math.expm1(-x);
+      value += fractions[j] * tau * -m;
+      slope += fractions[j] * timescalesYr[j] * (-m - x * (1 + m));
+    }
+    const residual = value - targetYr;
+    let next = alpha - residual / slope;
     if (!(next > 0)) next = alpha / 2;
     if (Math.abs(next - alpha) <= 1e-14 * alpha) return next;
     alpha = next;
