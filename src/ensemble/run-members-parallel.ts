@@ -77,9 +77,8 @@ export function workerThreadsAvailable(): boolean {
  * How much more an emission-driven member-year counts than a concentration-driven one when choosing
  * threads (its own carbon cycle, CO2 forcing formula and feedback solve each year cost several times
  * as much): on the 2-core development machine the cold start of a second thread pays from about
- * 1,500 members over 1750-2100 (`warmcast ensemble swift-emissions --workers 1|2`: 0.57 / 0.58 s at
- * 1,000 members, 0.81 / 0.71 s at 2,000, 1.20 / 0.97 s at 4,000, measured before the feedback solve
- * was made about twice as fast), hence the weight.
+ * 2,500 members over 1750-2100 (`warmcast ensemble swift-emissions --workers 1|2`: 0.45 / 0.48 s at
+ * 1,000 members, 0.56 / 0.57 s at 2,000, 0.87 / 0.77 s at 4,000), hence the weight.
  */
 const EMISSION_MEMBER_YEAR_WEIGHT = 20;
 
