@@ -58,8 +58,11 @@ function stepFactors(state: AnnualCarbonState, alpha: number): void {
       decay[i] = 1;
       growth[i] = 1;
     } else {
-      decay[i] = Math.exp(-1 / tau);
-      growth[i] = -tau * Math.expm1(-1 / tau);
+      // One transcendental call a box: e^(-1/tau) = 1 + expm1(-1/tau) (each step of every member of
+      // an emission-driven ensemble comes here).
+      const m = Math.expm1(-1 / tau);
+      decay[i] = 1 + m;
+      growth[i] = -tau * m;
     }
   }
 }

@@ -81,7 +81,10 @@ export function uptakeTimescaleScaling(targetYr: number, guess = 0.5): number {
     const residual = value - targetYr;
     let next = alpha - residual / slope;
     if (!(next > 0)) next = alpha / 2;
-    if (Math.abs(next - alpha) <= 1e-14 * alpha) return next;
+    // Newton's error squares at each step, so once a step is below 1e-9 alpha the next iterate is
+    // within about 1e-18 alpha of the root (rounding dominates): one evaluation fewer than waiting
+    // for a step of 1e-14.
+    if (Math.abs(next - alpha) <= 1e-9 * alpha) return next;
     alpha = next;
   }
   return alpha;
