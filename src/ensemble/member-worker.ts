@@ -16,10 +16,20 @@ function post(m: WorkerMessage, transfer?: ArrayBuffer[]): void {
   port.postMessage(m, transfer);
 }
 
+/** Least time between two progress messages, ms: each wakes the calling thread, which on a busy machine takes a core from the workers. */
+const PROGRESS_INTERVAL_MS = 100;
+
 port.on('message', (request: WorkerRequest) => {
   const job = request.job;
+  let last = performance.now();
+  const progress = () => {
+    const now = performance.now();
+    if (now - last < PROGRESS_INTERVAL_MS) return;
+    last = now;
+    post({ kind: 'progress' });
+  };
   try {
-    const { redraws, counts } = runThreadShare(job, () => post({ kind: 'progress' }));
+    const { redraws, counts } = runThreadShare(job, job.progress ? progress : undefined);
     post({ kind: 'done', redraws, counts }, [counts.buffer as ArrayBuffer]);
   } catch (e) {
     abandonRun(job.sync);

@@ -156,6 +156,7 @@ export async function runMembersParallel(
     thread: w,
     threads: size,
     thresholds: [...thresholds],
+    progress: onProgress !== undefined,
     rows,
     rowCount,
     parameters,
@@ -183,6 +184,8 @@ export async function runMembersParallel(
         redraws += share.redraws;
         for (let i = 0; i < counts.length; i++) counts[i] += share.counts[i];
       }
+      // Workers tell of progress at most every 100 ms; the end is told here.
+      report?.();
     } finally {
       if (!pool) await workers.close();
     }

@@ -22,6 +22,8 @@ export interface ThreadJob {
   thread: number;
   threads: number;
   thresholds: number[];
+  /** Whether the caller follows progress (a worker then tells it, now and then). */
+  progress: boolean;
   /** Year-major member values: `rowCount` rows of `memberCount`, year k in row k mod rowCount. */
   rows: Float64Array;
   rowCount: number;
