@@ -72,14 +72,19 @@ describe('runMembersParallel', () => {
         error = e.name + ': ' + e.message;
       }
       const after = await runEnsemble(input, { ...raw.options, threads });
+      // Kept members (as a shard keeps them): every year of every member, the same from both paths.
+      const keptTwo = await runEnsemble(input, { ...raw.options, threads, keepMembers: true });
+      const keptOne = await runEnsemble(input, { ...raw.options, workers: 1, keepMembers: true });
+      const keptSame = text(keptTwo) === one && Buffer.from(keptTwo.members.warmingK.buffer).equals(Buffer.from(keptOne.members.warmingK.buffer));
       await threads.close();
-      process.stdout.write(JSON.stringify({ same: [first, second, after].map((r) => text(r) === one), used: [first, second, after].map((r) => r.workersUsed), error }));`;
+      process.stdout.write(JSON.stringify({ same: [first, second, after].map((r) => text(r) === one), used: [first, second, after].map((r) => r.workersUsed), error, keptSame }));`;
     const scriptFile = join(buildDir, 'pool.mjs');
     writeFileSync(scriptFile, script);
     const result = JSON.parse(execFileSync(process.execPath, [scriptFile], { cwd: root, encoding: 'utf8', maxBuffer: 1 << 28 }));
     expect(result.same).toEqual([true, true, true]);
     expect(result.used).toEqual([2, 2, 2]);
     expect(result.error).toMatch(/^ConfigError: the ensemble sampling gave 1000 unphysical draws in a row/);
+    expect(result.keptSame).toBe(true);
   }, 120_000);
 
   it('a process that leaves its pool open still exits once its work is done (idle workers do not keep it alive)', () => {
