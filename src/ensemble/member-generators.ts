@@ -2,7 +2,7 @@ import type { RandomGenerator } from 'pure-rand/types/RandomGenerator';
 import { xoroshiro128plusFromState } from 'pure-rand/generator/xoroshiro128plus';
 
 /** Name of the scheme below, recorded in shard files so that only compatible shards merge. */
-export const MEMBER_STREAM_SCHEME = 'xoroshiro128plus, member i from state words fmix32 chains of (seed, i, word); v2';
+export const MEMBER_STREAM_SCHEME = 'xoroshiro128plus started from fmix32 hashes of (seed, i), scheme v2';
 
 /**
  * The 128-bit starting state of member `i`'s generator: four 32-bit words, word w =
