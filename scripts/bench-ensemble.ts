@@ -30,11 +30,10 @@ import {
 } from '../src/ensemble/index.js';
 import { MemberStream, STREAM_BLOCK_YEARS, streamRows } from '../src/ensemble/member-stream.js';
 import { emptyParameters } from '../src/ensemble/sample-members.js';
-import { expectedRange } from '../src/ensemble/summarize-ensemble.js';
+import { YearPercentiles } from '../src/ensemble/summarize-ensemble.js';
 import { forcingByAgent } from '../src/forcing/agents.js';
 import { forcingOfDoubling } from '../src/forcing/co2.js';
 import { loadPathway } from '../src/io/load-pathway.js';
-import { QuantileSelector } from '../src/numerics/quantiles.js';
 import { PATHWAY_COLUMNS, type Pathway } from '../src/pathway.js';
 
 const MEMBERS = 10_000;
@@ -132,8 +131,8 @@ const rows = new Float64Array(rowCount * MEMBERS);
 const parts = { draw: Infinity, advance: Infinity, percentiles: Infinity };
 for (let rep = 0; rep < 3; rep++) {
   const stream = new MemberStream(task, 0, MEMBERS, 0, MEMBERS, rows, rowCount, emptyParameters(MEMBERS), options.thresholds);
-  const selector = new QuantileSelector(PERCENTILES, MEMBERS);
-  const q = new Float64Array(PERCENTILES.length);
+  const years = new YearPercentiles(MEMBERS);
+  const out = PERCENTILES.map(() => new Float64Array(n));
   parts.draw = Math.min(parts.draw, (await timed(() => stream.draw())).ms);
   let advance = 0;
   let percentiles = 0;
@@ -142,7 +141,7 @@ for (let rep = 0; rep < 3; rep++) {
     advance += (await timed(() => stream.advance(y0, y1))).ms;
     percentiles += (
       await timed(() => {
-        for (let k = y0; k < y1; k++) selector.quantilesInto(rows, (k % rowCount) * MEMBERS, q, ...expectedRange(q));
+        years.into(rows, y0, y1, out, rowCount);
       })
     ).ms;
   }

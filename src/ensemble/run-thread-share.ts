@@ -4,7 +4,7 @@ import { ExceedanceCounter } from './exceedance-counter.js';
 import { MemberStream, STREAM_BLOCK_YEARS } from './member-stream.js';
 import { runMembersInto, type MemberTask } from './run-members.js';
 import type { MemberParameter } from './sample-members.js';
-import { exceedanceCountsLength, expectedRange, PERCENTILES } from './summarize-ensemble.js';
+import { exceedanceCountsLength, PERCENTILES, YearPercentiles } from './summarize-ensemble.js';
 
 /**
  * One thread's part of an ensemble run, as plain data (sent to a worker thread as is; the typed
@@ -65,14 +65,9 @@ export function runThreadShare(job: ThreadJob, onProgress?: () => void): { redra
   const { task, from, to, memberCount: m, rows, rowCount, thread, threads, sync } = job;
   const n = task.otherWm2.length;
   const own = to - from;
-  const selector = new QuantileSelector(PERCENTILES, m);
-  const q = new Float64Array(PERCENTILES.length);
-  const percentilesOf = (k0: number, k1: number) => {
-    for (let k = k0; k < k1; k++) {
-      selector.quantilesInto(rows, (k % rowCount) * m, q, ...expectedRange(q));
-      for (let j = 0; j < q.length; j++) job.percentiles[j * n + k] = q[j];
-    }
-  };
+  const years = new YearPercentiles(m);
+  const out = PERCENTILES.map((_, j) => job.percentiles.subarray(j * n, (j + 1) * n));
+  const percentilesOf = (k0: number, k1: number) => years.into(rows, k0, k1, out, rowCount);
   const slice = (k0: number, k1: number): [number, number] => [k0 + Math.floor((thread * (k1 - k0)) / threads), k0 + Math.floor(((thread + 1) * (k1 - k0)) / threads)];
   const report = (done: number) => {
     Atomics.store(sync, 2 + thread, done);

@@ -166,11 +166,34 @@ export function summarizeEnsemble(members: EnsembleMembers | EnsembleMemberParam
  * @param out one array per percentile, indexed by year
  */
 export function yearPercentilesInto(warmingK: Float64Array, m: number, yearFrom: number, yearTo: number, out: Float64Array[]): void {
-  const selector = new QuantileSelector(PERCENTILES, m);
-  const q = new Float64Array(PERCENTILES.length);
-  for (let k = yearFrom; k < yearTo; k++) {
-    selector.quantilesInto(warmingK, k * m, q, ...expectedRange(q));
-    for (let j = 0; j < out.length; j++) out[j][k] = q[j];
+  new YearPercentiles(m).into(warmingK, yearFrom, yearTo, out);
+}
+
+/**
+ * The warming percentiles (PERCENTILES) of year after year of members' values, one bucket selection
+ * per year whose buckets the year computed just before it guides (see {@link expectedRange}), with
+ * its scratch memory allocated once.
+ */
+export class YearPercentiles {
+  private readonly selector: QuantileSelector;
+  /** The percentiles of the year computed last (zero before the first). */
+  private readonly q = new Float64Array(PERCENTILES.length);
+
+  /** @param members values per year */
+  constructor(private readonly members: number) {
+    this.selector = new QuantileSelector(PERCENTILES, members);
+  }
+
+  /**
+   * The percentiles of years [yearFrom, yearTo) of year-major `rows` (year k's members in row k,
+   * or in row k mod rowCount when the rows are a ring of rowCount years), into out[j][k].
+   */
+  into(rows: Float64Array, yearFrom: number, yearTo: number, out: Float64Array[], rowCount?: number): void {
+    const { selector, q, members } = this;
+    for (let k = yearFrom; k < yearTo; k++) {
+      selector.quantilesInto(rows, (rowCount === undefined ? k : k % rowCount) * members, q, ...expectedRange(q));
+      for (let j = 0; j < out.length; j++) out[j][k] = q[j];
+    }
   }
 }
 
@@ -180,7 +203,7 @@ export function yearPercentilesInto(warmingK: Float64Array, m: number, yearFrom:
  * twice its width on each side. Only a guide for the buckets of QuantileSelector (the result does
  * not depend on it); none before the first year.
  */
-export function expectedRange(q: Float64Array): [number, number] | [] {
+function expectedRange(q: Float64Array): [number, number] | [] {
   const spread = q[4] - q[0];
   return spread > 0 ? [q[0] - 2 * spread, q[4] + 2 * spread] : [];
 }
@@ -248,7 +271,7 @@ function ensembleNotes(members: EnsembleMemberParameters): string[] {
 
 function summarizeValues(values: Float64Array): ParameterSummary {
   const q = new Float64Array(PERCENTILES.length);
-  quantilesInPlace(values.slice(), PERCENTILES, q);
+  quantilesInPlace(values, PERCENTILES, q);
   let sum = 0;
   for (const v of values) sum += v;
   const summary = { mean: values.length > 0 ? sum / values.length : NaN } as ParameterSummary;

@@ -24,7 +24,7 @@ export function quantileSorted(sorted: ArrayLike<number>, p: number): number {
  * Several sample quantiles (Hyndman & Fan 1996, definition 7, as {@link quantileSorted}) of
  * `values[from..to)` without a full sort (see {@link QuantileSelector}).
  *
- * @param values the sample; may be reordered within [from, to)
+ * @param values the sample (only read: the name is older than the selector that made copying unneeded)
  * @param probabilities ascending probabilities in [0, 1]
  * @param out receives one quantile per probability
  * @param from first index of the sample (default 0)
