@@ -4,7 +4,7 @@ import { memberGenerators } from './member-generators.js';
 import { emptyTwoBoxPropagator, modalTwoBoxPropagatorInto } from './modal-propagator.js';
 import type { ExceedanceCounter } from './exceedance-counter.js';
 import { PROGRESS_EVERY, type MemberBlock, type MemberTask } from './run-members.js';
-import { drawMember, emptyDraw, memberSampler, storeDraw, type MemberDraw } from './sample-members.js';
+import { drawMember, emptyDraw, memberSampler, storeDraw, type MemberDraw, type MemberParameter } from './sample-members.js';
 
 /** Members run before their rows are copied into the year-major block together (282 kB for 551 years). */
 const STAGE_MEMBERS = 64;
@@ -69,9 +69,44 @@ export class MemberStage {
 }
 
 /**
- * The loop every member run shares: for members [from, to), draw the member's parameters from its
- * own stream (so member i depends only on the seed and i), store them, build its one-year
- * propagator, let `runOne` write its warming (before rebasing) into `rows` from `offset`, then
+ * Draws members [from, to) from their own streams (so member i depends only on the seed and i),
+ * stores each one's parameters at index `first + (i - from)` of `parameters`, builds its one-year
+ * propagator (the closed-form modal one) and hands the member to `each`. The start every member
+ * run shares, whole-member (runMemberLoop) or streamed (MemberStream).
+ *
+ * @param carbon whether members also draw the carbon-cycle multiplier (emission pathways)
+ * @param each receives the member's global index, its draw and its propagator (both reused)
+ * @returns unphysical draws discarded in total
+ */
+export function drawMembers(
+  task: MemberTask,
+  from: number,
+  to: number,
+  parameters: Record<MemberParameter, Float64Array>,
+  first: number,
+  carbon: boolean,
+  each: (i: number, draw: MemberDraw, prop: TwoBoxPropagator) => void,
+): number {
+  const { upperHeatCapacity, deepHeatCapacity, deepEfficacy } = task.sampling;
+  const sampler = memberSampler(task.sampling, task.co2Formula, carbon);
+  const next = memberGenerators(task.seed, from);
+  const draw = emptyDraw();
+  const params: TwoBoxParams = { upperHeatCapacity, deepHeatCapacity, feedbackWm2K: NaN, exchangeWm2K: NaN, deepEfficacy };
+  const prop = emptyTwoBoxPropagator();
+  let redraws = 0;
+  for (let i = from; i < to; i++) {
+    redraws += drawMember(next(), sampler, draw);
+    storeDraw(parameters, first + (i - from), draw);
+    params.feedbackWm2K = draw.feedbackWm2K;
+    params.exchangeWm2K = draw.exchangeWm2K;
+    each(i, draw, modalTwoBoxPropagatorInto(params, prop));
+  }
+  return redraws;
+}
+
+/**
+ * The loop every whole-member run shares: for members [from, to), draw and store the member
+ * (drawMembers), let `runOne` write its warming (before rebasing) into `rows` from `offset`, then
  * rebase it, count its exceedances (when `exceedance` is given) and stage it into the block, reporting
  * progress every PROGRESS_EVERY members.
  *
@@ -90,23 +125,10 @@ export function runMemberLoop(
   exceedance: ExceedanceCounter | undefined,
   runOne: (draw: MemberDraw, prop: TwoBoxPropagator, rows: Float64Array, offset: number) => void,
 ): number {
-  const { upperHeatCapacity, deepHeatCapacity, deepEfficacy } = task.sampling;
-  const sampler = memberSampler(task.sampling, task.co2Formula, carbon);
-  const next = memberGenerators(task.seed, from);
-  const draw = emptyDraw();
   const staging = new MemberStage(n, block, task.baselineFrom, task.baselineTo, exceedance);
-  const params: TwoBoxParams = { upperHeatCapacity, deepHeatCapacity, feedbackWm2K: NaN, exchangeWm2K: NaN, deepEfficacy };
-  const prop = emptyTwoBoxPropagator();
-  let redraws = 0;
-  for (let i = from; i < to; i++) {
-    redraws += drawMember(next(), sampler, draw);
-    storeDraw(block.parameters, i - block.blockStart, draw);
-    params.feedbackWm2K = draw.feedbackWm2K;
-    params.exchangeWm2K = draw.exchangeWm2K;
-    modalTwoBoxPropagatorInto(params, prop);
+  return drawMembers(task, from, to, block.parameters, from - block.blockStart, carbon, (i, draw, prop) => {
     runOne(draw, prop, staging.rows, staging.offset);
     staging.commit(i, to);
     if (onProgress && ((i - from + 1) % PROGRESS_EVERY === 0 || i + 1 === to)) onProgress(i - from + 1);
-  }
-  return redraws;
+  });
 }

@@ -1,11 +1,8 @@
-import type { TwoBoxPropagator } from '../climate/exact-propagator.js';
-import type { TwoBoxParams } from '../climate/two-box.js';
 import { ExceedanceCounter } from './exceedance-counter.js';
-import { memberGenerators } from './member-generators.js';
-import { emptyTwoBoxPropagator, modalTwoBoxPropagatorInto } from './modal-propagator.js';
+import { drawMembers } from './member-stage.js';
 import type { MemberTask } from './run-members.js';
 import { RUNNING_MEAN_WINDOW } from './running-mean.js';
-import { drawMember, emptyDraw, emptyParameters, memberSampler, storeDraw, type MemberParameter } from './sample-members.js';
+import { emptyParameters, type MemberParameter } from './sample-members.js';
 
 /** Years in a running mean, and years after the labelled one (module constants, so loops fold them in). */
 const WINDOW = RUNNING_MEAN_WINDOW.before + RUNNING_MEAN_WINDOW.after + 1;
@@ -112,25 +109,14 @@ export class MemberStream {
   }
 
   /**
-   * Draws every member's parameters (from its own stream, as runMemberLoop does), stores them,
+   * Draws every member's parameters (drawMembers, as whole-member runs draw them), stores them,
    * builds its propagator and computes its baseline mean.
    * @returns unphysical draws discarded
    */
   draw(): number {
-    const { task, count } = this;
-    const { upperHeatCapacity, deepHeatCapacity, deepEfficacy } = task.sampling;
-    const sampler = memberSampler(task.sampling, task.co2Formula, false);
-    const next = memberGenerators(task.seed, this.from);
-    const draw = emptyDraw();
-    const params: TwoBoxParams = { upperHeatCapacity, deepHeatCapacity, feedbackWm2K: NaN, exchangeWm2K: NaN, deepEfficacy };
-    const prop: TwoBoxPropagator = emptyTwoBoxPropagator();
-    let redraws = 0;
-    for (let i = 0; i < count; i++) {
-      redraws += drawMember(next(), sampler, draw);
-      storeDraw(this.parameters, this.column + i, draw);
-      params.feedbackWm2K = draw.feedbackWm2K;
-      params.exchangeWm2K = draw.exchangeWm2K;
-      modalTwoBoxPropagatorInto(params, prop);
+    const count = this.count;
+    const redraws = drawMembers(this.task, this.from, this.from + count, this.parameters, this.column, false, (member, draw, prop) => {
+      const i = member - this.from;
       this.p00[i] = prop.phi[0];
       this.p01[i] = prop.phi[1];
       this.p10[i] = prop.phi[2];
@@ -141,7 +127,7 @@ export class MemberStream {
       this.g1d[i] = prop.g1[1];
       this.co2Scale[i] = draw.forcing2xScale;
       this.aerosolScale[i] = draw.aerosolScale;
-    }
+    });
     for (let i = 0; i < count; i += 2) this.baselineMeans(i, i + 1 < count ? i + 1 : i);
     return redraws;
   }
