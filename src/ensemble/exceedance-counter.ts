@@ -19,6 +19,13 @@ export class ExceedanceCounter {
    * !(mean > bounds[L + 1]) (it exceeds exactly the L lowest thresholds).
    */
   readonly bounds: Float64Array;
+  /**
+   * The same bounds on the 20-year sum: sumBounds[L] is the largest double s whose mean s / 20 (as
+   * the counters compute it, correctly rounded) is not above bounds[L], so that s / 20 > bounds[L]
+   * exactly when s > sumBounds[L]. Stream runs compare sums with these and divide only when a level
+   * changes.
+   */
+  readonly sumBounds: Float64Array;
   /** order[s] = index in the caller's threshold list of the s-th smallest threshold. */
   private readonly order: Int32Array;
   /** Changes of the count above each sorted threshold, per year: [s * n + c]. */
@@ -37,6 +44,8 @@ export class ExceedanceCounter {
     const order = thresholds.map((_, j) => j).sort((a, b) => thresholds[a] - thresholds[b]);
     this.order = Int32Array.from(order);
     this.bounds = Float64Array.from([-Infinity, ...order.map((j) => thresholds[j]), Infinity]);
+    const width = RUNNING_MEAN_WINDOW.before + RUNNING_MEAN_WINDOW.after + 1;
+    this.sumBounds = this.bounds.map((t) => largestSumNotAbove(t, width));
     this.changes = new Int32Array(thresholds.length * n);
     this.firsts = new Int32Array(thresholds.length * n);
   }
@@ -107,4 +116,28 @@ export class ExceedanceCounter {
       }
     }
   }
+}
+
+/**
+ * The largest double s with s / width (correctly rounded, as IEEE 754 division is) not above t;
+ * -Infinity and +Infinity map to themselves. Rounded division is monotone in s, so the doubles whose
+ * quotient exceeds t are exactly those above the result.
+ * @example largestSumNotAbove(1.5, 20) // 30, or within a few ulps of it
+ */
+export function largestSumNotAbove(t: number, width: number): number {
+  if (!Number.isFinite(t)) return t;
+  let s = t * width;
+  while (s / width > t) s = nextDouble(s, -1);
+  for (let up = nextDouble(s, 1); up / width <= t; up = nextDouble(s, 1)) s = up;
+  return s;
+}
+
+/** The neighbouring double of finite x towards +Infinity (direction 1) or -Infinity (-1). */
+function nextDouble(x: number, direction: 1 | -1): number {
+  if (x === 0) return direction * Number.MIN_VALUE;
+  const bits = new DataView(new ArrayBuffer(8));
+  bits.setFloat64(0, x);
+  const away = (x > 0) === (direction > 0);
+  bits.setBigInt64(0, bits.getBigInt64(0) + (away ? 1n : -1n));
+  return bits.getFloat64(0);
 }

@@ -201,7 +201,8 @@ export class MemberStream {
    * Steps every member from year `y0` (where the previous block ended, or 0) through year y1 - 1,
    * writing its rebased warming into the rows and, on the way, advancing its 20-year sum and
    * recording changes of its level: the sum of years k-19..k is the 20-year mean that stands for
-   * year k - 10 (as ExceedanceCounter.addMember has it).
+   * year k - 10 (as ExceedanceCounter.addMember has it). The level test compares the sum with
+   * ExceedanceCounter.sumBounds, which is the same as comparing the mean with the thresholds.
    */
   advance(y0: number, y1: number): void {
     const { rowCount, offsets, count, column } = this;
@@ -211,7 +212,7 @@ export class MemberStream {
       offsets[j] = k >= 0 ? (k % rowCount) * this.width + column : -1;
     }
     const { n, rows, counter, spare } = this;
-    const bounds = counter.bounds;
+    const sumBounds = counter.sumBounds;
     const { co2Wm2, aerosolWm2, otherWm2 } = this.task;
     const { p00, p01, p10, p11, g0t, g0d, g1t, g1d, co2Scale, aerosolScale, mean, surface, deep, sum, level, reached } = this;
     // Members go two at a time, side by side: the two-box step is a chain of dependent
@@ -247,10 +248,14 @@ export class MemberStream {
       let da = deep[a];
       let sa = sum[a];
       let la = level[a];
+      let aBelow = sumBounds[la];
+      let aAbove = sumBounds[la + 1];
       let tb = surface[b];
       let db = deep[b];
       let sb = sum[b];
       let lb = level[b];
+      let bBelow = sumBounds[lb];
+      let bAbove = sumBounds[lb + 1];
       let fa = aCo2 * co2Wm2[y0] + aAer * aerosolWm2[y0] + otherWm2[y0];
       let fb = bCo2 * co2Wm2[y0] + bAer * aerosolWm2[y0] + otherWm2[y0];
       for (let k = y0; k < y1; k++) {
@@ -268,17 +273,20 @@ export class MemberStream {
           sb += wb - rows[back + b];
         }
         if (k >= WINDOW - 1) {
-          const ma = sa / WINDOW;
-          if (!(ma > bounds[la]) || ma > bounds[la + 1]) {
+          // The level bounds on the sum, held in registers: a mean is computed only when the level changes.
+          if (!(sa > aBelow) || sa > aAbove) {
             const r = reached[a];
-            la = counter.move(ma, la, r, k - AFTER);
+            la = counter.move(sa / WINDOW, la, r, k - AFTER);
             if (la > r) reached[a] = la;
+            aBelow = sumBounds[la];
+            aAbove = sumBounds[la + 1];
           }
-          const mb = sb / WINDOW;
-          if (!(mb > bounds[lb]) || mb > bounds[lb + 1]) {
+          if (!(sb > bBelow) || sb > bAbove) {
             const r = reached[b];
-            lb = counterB.move(mb, lb, r, k - AFTER);
+            lb = counterB.move(sb / WINDOW, lb, r, k - AFTER);
             if (lb > r) reached[b] = lb;
+            bBelow = sumBounds[lb];
+            bAbove = sumBounds[lb + 1];
           }
         }
         if (k + 1 < n) {

@@ -1,5 +1,7 @@
+import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { ExceedanceCounter, exceedanceCountsLength } from '../../src/ensemble/index.js';
+import { largestSumNotAbove } from '../../src/ensemble/exceedance-counter.js';
 import { runningMeanInto } from '../../src/ensemble/running-mean.js';
 
 describe('ExceedanceCounter', () => {
@@ -34,5 +36,21 @@ describe('ExceedanceCounter', () => {
       // Years whose window leaves the run get nothing.
       for (const c of [0, 8, n - 10, n - 1]) expect(counts[j * n + c]).toBe(0);
     });
+  });
+
+  it('largestSumNotAbove(t, 20) splits the doubles exactly: s / 20 > t whenever s is above it and never otherwise (IEEE 754 division is correctly rounded, hence monotone)', () => {
+    fc.assert(
+      fc.property(fc.double({ min: -1e6, max: 1e6, noNaN: true }), fc.integer({ min: -40, max: 40 }), (t, ulps) => {
+        const s = largestSumNotAbove(t, 20);
+        expect(s / 20 > t).toBe(false);
+        // Doubles a few ulps around the split, and the split's neighbour above.
+        const above = s + Math.abs(s) * Number.EPSILON * 0.5 + Number.MIN_VALUE;
+        expect(above > s && above / 20 > t).toBe(true);
+        const probe = t * 20 * (1 + ulps * Number.EPSILON);
+        expect(probe / 20 > t).toBe(probe > s);
+      }),
+    );
+    expect(largestSumNotAbove(Infinity, 20)).toBe(Infinity);
+    expect(largestSumNotAbove(-Infinity, 20)).toBe(-Infinity);
   });
 });
