@@ -14,7 +14,7 @@ import { ConfigError, NumericalError, WarmcastError } from '../errors.js';
 import { streamRows } from './member-stream.js';
 import type { MemberTask } from './run-members.js';
 import { abandonRun, RunAbandoned, runThreadShare, type ThreadJob } from './run-thread-share.js';
-import { MEMBER_PARAMETERS, type MemberParameter } from './sample-members.js';
+import { emptyParameters, type MemberParameter } from './sample-members.js';
 import { exceedanceCountsLength, PERCENTILES, type MemberStatistics } from './summarize-ensemble.js';
 
 /**
@@ -144,7 +144,7 @@ export async function runMembersParallel(
   const shared = size > 1;
   const buffer = (bytes: number) => (shared ? new SharedArrayBuffer(bytes) : new ArrayBuffer(bytes));
   const rows = new Float64Array(buffer(rowCount * count * 8));
-  const parameters = Object.fromEntries(MEMBER_PARAMETERS.map((name) => [name, new Float64Array(buffer(count * 8))])) as Record<MemberParameter, Float64Array>;
+  const parameters = emptyParameters(count, buffer);
   const percentiles = new Float64Array(buffer(PERCENTILES.length * n * 8));
   const sync = new Int32Array(buffer(4 * (2 + size)));
   const jobs = Array.from({ length: size }, (_, w): ThreadJob => ({

@@ -230,9 +230,12 @@ export function emptyDraw(): MemberDraw {
   return { ecsK: NaN, tcrK: NaN, forcing2xScale: NaN, forcing2xWm2: NaN, aerosolScale: NaN, feedbackWm2K: NaN, exchangeWm2K: NaN, irf100Scale: NaN };
 }
 
-/** One Float64Array of `count` per member parameter. */
-export function emptyParameters(count: number): Record<MemberParameter, Float64Array> {
-  return Object.fromEntries(MEMBER_PARAMETERS.map((name) => [name, new Float64Array(count)])) as Record<MemberParameter, Float64Array>;
+/**
+ * One Float64Array of `count` per member parameter.
+ * @param buffer allocates the bytes of each (default a plain ArrayBuffer; a SharedArrayBuffer for threads)
+ */
+export function emptyParameters(count: number, buffer: (bytes: number) => ArrayBufferLike = (bytes) => new ArrayBuffer(bytes)): Record<MemberParameter, Float64Array> {
+  return Object.fromEntries(MEMBER_PARAMETERS.map((name) => [name, new Float64Array(buffer(count * 8))])) as Record<MemberParameter, Float64Array>;
 }
 
 /** Writes a draw into row `i` of the parameter arrays. */
