@@ -1,24 +1,13 @@
 import { describe, expect, it } from 'vitest';
-import { AR6_SAMPLING, ExceedanceCounter, exceedanceCountsLength, runMembersInto, type MemberBlock, type MemberTask } from '../../src/ensemble/index.js';
+import { ExceedanceCounter, exceedanceCountsLength, runMembersInto, type MemberBlock } from '../../src/ensemble/index.js';
 import { MemberStream, STREAM_BLOCK_YEARS, streamRows } from '../../src/ensemble/member-stream.js';
 import { emptyParameters, MEMBER_PARAMETERS } from '../../src/ensemble/sample-members.js';
-import { syntheticInput } from './synthetic-input.js';
+import { syntheticTask } from './synthetic-input.js';
 
 // The synthetic pathway with a strong 60-year oscillation added to the other forcing, so that the
 // members' 20-year means rise above and fall back below the thresholds several times.
-const input = syntheticInput(1750, 2150);
-const n = input.years.length;
-const a = input.forcing.byAgent;
-const task: MemberTask = {
-  seed: 19,
-  sampling: AR6_SAMPLING,
-  co2Formula: 'ar6',
-  co2Wm2: a.co2,
-  aerosolWm2: a.aerosol,
-  otherWm2: a.ch4.map((v, k) => v + a.n2o[k] + a.other[k] + a.solar[k] + a.volcanic[k] + 1.5 * Math.sin((2 * Math.PI * k) / 60)),
-  baselineFrom: 100,
-  baselineTo: 150,
-};
+const task = syntheticTask(19, (k) => 1.5 * Math.sin((2 * Math.PI * k) / 60));
+const n = task.otherWm2.length;
 const thresholds = [0.8, 0.3, 1.4];
 
 /** Members [from, to) the one-member-at-a-time way: runMembersInto with an ExceedanceCounter. */

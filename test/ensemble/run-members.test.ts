@@ -1,24 +1,15 @@
 import { describe, expect, it } from 'vitest';
 import { energyBalance, propagateTwoBoxInto, twoBoxMatrix, type TwoBoxParams } from '../../src/climate/index.js';
-import { AR6_SAMPLING, MEMBER_PARAMETERS, runMembersInto, type MemberBlock, type MemberTask } from '../../src/ensemble/index.js';
+import { MEMBER_PARAMETERS, runMembersInto, type MemberBlock } from '../../src/ensemble/index.js';
 import { expm, matrix } from 'mathjs';
 import { forcingOfDoubling } from '../../src/forcing/co2.js';
 import { expectAllClose } from '../asserts.js';
-import { syntheticInput } from './synthetic-input.js';
+import { syntheticInput, syntheticTask } from './synthetic-input.js';
 
 const input = syntheticInput(1750, 2150);
 const n = input.years.length;
 const a = input.forcing.byAgent;
-const task: MemberTask = {
-  seed: 31,
-  sampling: AR6_SAMPLING,
-  co2Formula: 'ar6',
-  co2Wm2: a.co2,
-  aerosolWm2: a.aerosol,
-  otherWm2: a.ch4.map((v, k) => v + a.n2o[k] + a.other[k] + a.solar[k] + a.volcanic[k]),
-  baselineFrom: 100,
-  baselineTo: 150,
-};
+const task = syntheticTask(31);
 
 function run(from: number, to: number): MemberBlock {
   const count = to - from;
