@@ -4,9 +4,10 @@ import { readPathway } from '../io/load-pathway.js';
 import { comparePathways, milestoneYears, type PathwayWarming } from '../metrics/index.js';
 import { defaultWorkerCount, runEnsemble, startEnsembleThreads, type EnsembleThreads } from '../ensemble/index.js';
 import { ensembleInput, projectPathway } from '../projection/index.js';
-import { comparisonCharts, comparisonHtml, comparisonJson, comparisonLongTable, comparisonMarkdown, comparisonText } from '../report/index.js';
+import { comparisonCharts, comparisonHtml, comparisonJson, comparisonLongTable, comparisonMarkdown, comparisonText, comparisonUncertainty, scopedNotes, standardCautions, type ScopedNote } from '../report/index.js';
 import type { CliIo } from './cli-io.js';
 import { addModelOptions, type ModelOptions, numberListOption, pathwayArg, resolveModelParams, wholeNumberOption, yearRangeOption } from './options.js';
+import { notesAndCautions } from './notes-and-cautions.js';
 import { pathwayInputs, writeOutput } from './output.js';
 import { paramsToJson } from '../climate/params.js';
 
@@ -44,12 +45,12 @@ export function compareCommand(io: CliIo): Command {
     .action(async (args: string[], opts: CompareOptions) => {
       const { params, paramsFile } = resolveModelParams(opts, io);
       const files: string[] = [];
-      const notes: string[] = [];
+      const scoped: ScopedNote[] = [];
       const runs = args.map((arg) => {
         const read = readPathway(pathwayArg(arg, io), { splice: opts.splice });
         files.push(...pathwayInputs(read));
         const p = projectPathway(read.pathway, { params, baseline: opts.baseline, carbonFeedback: opts.carbonFeedback });
-        notes.push(...[...p.provenance.notes, ...p.notes].map((n) => `${p.name}: ${n}`));
+        scoped.push(...[...p.provenance.notes, ...p.notes].map((text) => ({ pathway: p.name, text })));
         return { projection: p, pathway: read.pathway };
       });
       const ref = runs[0].projection;
@@ -69,13 +70,21 @@ export function compareCommand(io: CliIo): Command {
           // With an ensemble, the line is its median and the ranges its percentiles (same seed per pathway).
           const { input, notes: inputNotes } = ensembleInput(pathway, params);
           const e = await runEnsemble(input, { members: opts.members, seed: opts.seed, thresholds: opts.thresholds, baseline: opts.baseline, ...(threads ? { threads } : {}) });
-          notes.push(...[...inputNotes, ...e.notes].map((n) => `${p.name} ensemble: ${n}`));
+          scoped.push(...[...inputNotes, ...e.notes].map((text) => ({ pathway: p.name, ensemble: true, text })));
           const pc = e.percentiles;
-          pathways.push({ ...base, warmingK: pc.p50, range: { p05: pc.p05, p17: pc.p17, p83: pc.p83, p95: pc.p95 } });
+          const crossingOdds = e.crossings.map((x, j) => ({
+            thresholdK: x.thresholdK,
+            byYear: x.byMilestone,
+            medianYear: x.medianYear,
+            withinRun: x.probabilityWithinRun,
+            shareAbove: e.probAbove[j],
+          }));
+          pathways.push({ ...base, warmingK: pc.p50, range: { p05: pc.p05, p17: pc.p17, p83: pc.p83, p95: pc.p95 }, crossingOdds });
         }
       } finally {
         await threads?.close();
       }
+      const notes = scopedNotes(scoped, runs.map((r) => r.projection.name));
       const c = comparePathways(pathways, {
         milestoneYears: opts.years ?? milestoneYears(firstFuture, last, 10),
         thresholdsK: opts.thresholds,
@@ -86,11 +95,18 @@ export function compareCommand(io: CliIo): Command {
       if (opts.out !== undefined) {
         const inputs = [...files, ...(paramsFile ? [paramsFile] : [])];
         const assumptions: Record<string, string> = {
-          'Climate sensitivity': `ECS ${params.ecsK.toFixed(2)} K, TCR ${params.tcrK.toFixed(2)} K (two-box model calibrated to them)`,
+          'Climate sensitivity':
+            opts.members === undefined
+              ? `ECS ${params.ecsK.toFixed(2)} K, TCR ${params.tcrK.toFixed(2)} K (two-box model calibrated to them)`
+              : 'sampled per ensemble member (see Ensemble); each member\'s two-box model is calibrated to its own ECS and TCR',
           'CO2 forcing': params.co2Formula === 'log' ? 'Myhre et al. 1998, 5.35 ln(C/C0)' : 'Meinshausen et al. 2020 with IPCC AR6 adjustments',
           Baseline: `warming relative to the ${baseline} mean`,
           ...(opts.members !== undefined
-            ? { Ensemble: `${opts.members} members per pathway, seed ${opts.seed}; lines are ensemble medians; ECS, TCR, 2xCO2 and aerosol forcing sampled to the IPCC AR6 ranges` }
+            ? {
+                Ensemble:
+                  `${opts.members} members per pathway, seed ${opts.seed}; lines are ensemble medians; ECS, TCR, 2xCO2 and aerosol forcing ` +
+                  'sampled to the IPCC AR6 assessed ranges, not constrained by observed warming; crossing years and chances from the members',
+              }
             : {}),
           'History splice': runs.map(({ projection: p }) => `${p.name}: ${p.provenance.spliceYear ? `bundled history before ${p.provenance.spliceYear}` : 'none'}`).join('; '),
           Parameters: Object.entries(paramsToJson(params)).map(([k, v]) => `${k} ${typeof v === 'number' ? +v.toPrecision(5) : v}`).join(', '),
@@ -110,6 +126,7 @@ export function compareCommand(io: CliIo): Command {
       }
       const write = opts.out === '-' ? io.stderr : io.stdout;
       write(comparisonText(c, { color: opts.out === '-' ? io.stderrIsTTY : io.stdoutIsTTY, fromYear, baseline, noChart: !opts.chart }));
+      write(notesAndCautions(notes, standardCautions(comparisonUncertainty(c))));
     });
   return cmd;
 }

@@ -14,6 +14,24 @@ export interface WarmingRange {
   p95: Float64Array;
 }
 
+/**
+ * How likely an ensemble makes the crossing of one warming level: shares of its members, each
+ * member crossing when its 20-year mean warming first exceeds the level (the same rule as
+ * `crossingPeriod`).
+ */
+export interface CrossingOdds {
+  /** Warming level, K above the baseline. */
+  thresholdK: number;
+  /** Share of members that have crossed by each year (0-1); null where the run does not cover the 20-year window around that year. */
+  byYear: { year: number; probability: number | null }[];
+  /** First year by which at least half of the members have crossed; null when fewer than half cross within the run. */
+  medianYear: number | null;
+  /** Share of members that cross within the run (0-1). */
+  withinRun: number;
+  /** Per year, the share of members whose 20-year mean warming around that year exceeds the level (NaN where the window leaves the run). */
+  shareAbove: Float64Array;
+}
+
 /** One pathway's projected warming, as a comparison takes it. */
 export interface PathwayWarming {
   /** Display name; names in one comparison must be distinct. */
@@ -24,6 +42,12 @@ export interface PathwayWarming {
   warmingK: Float64Array;
   /** Ensemble percentiles, when an ensemble was run. */
   range?: WarmingRange;
+  /**
+   * The ensemble's crossing odds, one entry per threshold of the comparison (matched by level), when
+   * an ensemble was run. With them, `warmingK` is the ensemble median and reports take crossings
+   * from the members rather than from the median line.
+   */
+  crossingOdds?: CrossingOdds[];
   /** Net CO2 emissions, Gt CO2 per year, when the run is emission-driven. */
   co2Gtco2?: Float64Array;
 }
@@ -62,8 +86,11 @@ export interface PathwayComparison extends PathwayWarming {
   peak: Peak;
   /** True when the peak is the last year: warming is still rising (or flat) at the end of the data. */
   stillRising: boolean;
-  /** One entry per threshold, in order: the first 20-year period above it, or undefined. */
-  crossings: { thresholdK: number; period: CrossingPeriod | undefined }[];
+  /**
+   * One entry per threshold, in order: the first 20-year period of `warmingK` above it, or
+   * undefined, and the ensemble's odds of crossing it when the pathway has an ensemble.
+   */
+  crossings: { thresholdK: number; period: CrossingPeriod | undefined; odds?: CrossingOdds }[];
   /** Warming at each key year, K (NaN when not covered). */
   keyYears: { year: number; warmingK: number }[];
   /** Cumulative CO2 emissions to net zero, Gt CO2, for emission-driven pathways. */
@@ -111,6 +138,10 @@ export function comparePathways(pathways: readonly PathwayWarming[], options: Co
     seen.add(p.label);
   }
   const thresholdsK = [...(options.thresholdsK ?? [1.5, 2])];
+  for (const p of pathways) {
+    const missing = p.crossingOdds && thresholdsK.find((t) => !p.crossingOdds!.some((o) => o.thresholdK === t));
+    if (missing !== undefined) throw new ConfigError(`the ensemble of "${p.label}" has no crossing odds for ${missing} K`, 'crossingOdds');
+  }
   const windowYears = options.windowYears ?? 20;
   const keyYears = [...(options.keyYears ?? [2050, 2100])];
   const milestoneYears = [...options.milestoneYears];
@@ -139,7 +170,11 @@ export function comparePathways(pathways: readonly PathwayWarming[], options: Co
       milestones,
       peak: top,
       stillRising: top.index === p.years.length - 1,
-      crossings: thresholdsK.map((thresholdK) => ({ thresholdK, period: crossingPeriod(p.years, p.warmingK, thresholdK, windowYears) })),
+      crossings: thresholdsK.map((thresholdK) => {
+        const period = crossingPeriod(p.years, p.warmingK, thresholdK, windowYears);
+        const odds = p.crossingOdds?.find((o) => o.thresholdK === thresholdK);
+        return odds ? { thresholdK, period, odds } : { thresholdK, period };
+      }),
       keyYears: keyYears.map((year) => ({ year, warmingK: valueAtYear(p.years, p.warmingK, year) })),
       firstYear: p.years[0],
       lastYear: p.years[p.years.length - 1],

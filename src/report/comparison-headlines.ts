@@ -1,9 +1,11 @@
-import type { Comparison } from '../metrics/compare-pathways.js';
-import { kelvin } from './format-numbers.js';
+import type { Comparison, PathwayComparison } from '../metrics/compare-pathways.js';
+import { kelvin, percent } from './format-numbers.js';
 
 /**
  * One plain sentence per pathway for the top of a report: its peak warming and year, when it
- * reaches each threshold (AR6 20-year-mean rule), and its warming in the last key year.
+ * reaches each threshold (AR6 20-year-mean rule), and its warming in the last key year. For a
+ * pathway with an ensemble the sentence speaks of the median line and, per threshold, of the share
+ * of members that have crossed it by each milestone year and the year by which half have.
  *
  * @param c the comparison
  * @returns sentences, reference first
@@ -12,14 +14,36 @@ import { kelvin } from './format-numbers.js';
  * // 'steady: peak 2.70 K in 2100 (still rising); reaches 1.5 K in 2034 and 2 K in 2058; 2.70 K in 2100.'
  */
 export function comparisonHeadlines(c: Comparison): string[] {
-  return c.pathways.map((p) => {
-    const parts = [`peak ${kelvin(p.peak.value)} K in ${p.peak.year}${p.stillRising ? ' (still rising)' : ''}`];
-    const reached = p.crossings.filter((x) => x.period).map((x) => `${+x.thresholdK.toPrecision(6)} K in ${x.period!.atStart ? `${x.period!.year} or earlier` : x.period!.year}`);
-    const missed = p.crossings.filter((x) => !x.period).map((x) => `${+x.thresholdK.toPrecision(6)} K`);
-    if (reached.length > 0) parts.push(`reaches ${reached.join(' and ')}`);
-    if (missed.length > 0) parts.push(`does not reach ${missed.join(' or ')} by ${p.lastYear}`);
-    const last = p.keyYears.filter((k) => Number.isFinite(k.warmingK)).at(-1);
-    if (last) parts.push(`${kelvin(last.warmingK)} K in ${last.year}`);
-    return `${p.label}: ${parts.join('; ')}.`;
-  });
+  return c.pathways.map((p) => `${p.label}: ${(p.crossings.some((x) => x.odds) ? ensembleParts(p) : singleParts(p)).join('; ')}.`);
+}
+
+function singleParts(p: PathwayComparison): string[] {
+  const parts = [`peak ${kelvin(p.peak.value)} K in ${p.peak.year}${p.stillRising ? ' (still rising)' : ''}`];
+  const reached = p.crossings.filter((x) => x.period).map((x) => `${level(x.thresholdK)} in ${x.period!.atStart ? `${x.period!.year} or earlier` : x.period!.year}`);
+  const missed = p.crossings.filter((x) => !x.period).map((x) => level(x.thresholdK));
+  if (reached.length > 0) parts.push(`reaches ${series(reached)}`);
+  if (missed.length > 0) parts.push(`${series(missed)} not crossed by ${p.lastYear}`);
+  const last = p.keyYears.filter((k) => Number.isFinite(k.warmingK)).at(-1);
+  if (last) parts.push(`${kelvin(last.warmingK)} K in ${last.year}`);
+  return parts;
+}
+
+function ensembleParts(p: PathwayComparison): string[] {
+  const parts = [`median peaks at ${kelvin(p.peak.value)} K in ${p.peak.year}${p.stillRising ? ' (still rising)' : ''}`];
+  for (const { thresholdK, odds } of p.crossings) {
+    if (!odds) continue;
+    const by = odds.byYear.map((b, i) => `${percent(b.probability)}${i === 0 ? ' of members cross it' : ''} by ${b.year}`);
+    by.push(odds.medianYear === null ? `fewer than half by ${p.lastYear}` : `half by ${odds.medianYear}`);
+    parts.push(`${level(thresholdK)}: ${by.join(', ')}`);
+  }
+  const last = p.keyYears.filter((k) => Number.isFinite(k.warmingK)).at(-1);
+  if (last) parts.push(`median ${kelvin(last.warmingK)} K in ${last.year}`);
+  return parts;
+}
+
+const level = (thresholdK: number) => `${+thresholdK.toPrecision(6)} K`;
+
+/** `a`, `a and b`, `a, b and c`. */
+function series(items: string[]): string {
+  return items.length < 2 ? items.join('') : `${items.slice(0, -1).join(', ')} and ${items[items.length - 1]}`;
 }

@@ -38,7 +38,7 @@ export function comparisonHtml(c: Comparison, options: ComparisonHtmlOptions): s
   return htmlReport({
     title: options.title ?? 'Pathway comparison',
     summaryLines: comparisonHeadlines(c),
-    tables: [tables.milestones, tables.summary],
+    tables: [tables.milestones, tables.summary, ...(tables.odds ? [tables.odds] : [])],
     charts: comparisonCharts(c, { baseline, fromYear: options.fromYear }),
     assumptions: {
       ...options.assumptions,

@@ -1,3 +1,4 @@
+import { probAboveColumn } from '../ensemble/ensemble-table.js';
 import type { Comparison } from '../metrics/compare-pathways.js';
 
 /**
@@ -5,7 +6,11 @@ import type { Comparison } from '../metrics/compare-pathways.js';
  * and key years), then per pathway its summary (peak, crossings with their 20-year periods,
  * warming at key years, milestones with differences from the reference, cumulative CO2 to net zero
  * when emission-driven) and its annual series (`years`, `warming_k`, `difference_k`, and the
- * ensemble percentiles and `co2_gtco2` when present). Keys are snake_case like the CSV columns.
+ * ensemble percentiles, `prob_above_<t>` and `co2_gtco2` when present). A pathway with an ensemble
+ * says so in `central_estimate` ("ensemble median": its peak and crossing periods are those of the
+ * median line) and carries per crossing the `odds` from its members: the share crossed by each
+ * milestone year, the year by which half have crossed, and the share crossing within the run.
+ * Keys are snake_case like the CSV columns.
  * Numbers keep full precision; NaN and "not crossed" are `null`. Two-space indentation, with each
  * list of plain values on one line, so files diff cleanly.
  *
@@ -29,14 +34,24 @@ export function comparisonJson(c: Comparison, provenance: object): string {
       pathway: p.label,
       first_year: p.firstYear,
       last_year: p.lastYear,
+      central_estimate: p.crossingOdds ? 'ensemble median' : 'single run',
       peak: { year: num(p.peak.year), warming_k: num(p.peak.value), still_rising: p.stillRising },
-      crossings: p.crossings.map(({ thresholdK, period }) => ({
+      crossings: p.crossings.map(({ thresholdK, period, odds }) => ({
         threshold_k: thresholdK,
         year: period ? period.year : null,
         period_first_year: period ? period.firstYear : null,
         period_last_year: period ? period.lastYear : null,
         period_mean_k: period ? period.mean : null,
         at_start: period ? period.atStart : null,
+        ...(odds
+          ? {
+              odds: {
+                by_year: odds.byYear.map((b) => ({ year: b.year, probability: b.probability })),
+                half_crossed_year: odds.medianYear,
+                within_run: odds.withinRun,
+              },
+            }
+          : {}),
       })),
       key_years: p.keyYears.map((k) => ({ year: k.year, warming_k: num(k.warmingK) })),
       milestones: p.milestones.map((m) => ({
@@ -67,6 +82,7 @@ export function comparisonJson(c: Comparison, provenance: object): string {
         ...(p.range
           ? { warming_p05_k: list(p.range.p05), warming_p17_k: list(p.range.p17), warming_p83_k: list(p.range.p83), warming_p95_k: list(p.range.p95) }
           : {}),
+        ...Object.fromEntries(p.crossings.flatMap(({ thresholdK, odds }) => (odds ? [[probAboveColumn(thresholdK), list(odds.shareAbove)]] : []))),
         ...(p.co2Gtco2 ? { co2_gtco2: list(p.co2Gtco2) } : {}),
       },
     })),

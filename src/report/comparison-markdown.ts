@@ -37,6 +37,7 @@ export function comparisonMarkdown(c: Comparison, options: ComparisonMarkdownOpt
     '',
     markdownTable(tables.milestones),
     markdownTable(tables.summary),
+    ...(tables.odds ? [markdownTable(tables.odds)] : []),
     '## Cautions',
     '',
     ...standardCautions(options.uncertainty ?? comparisonUncertainty(c)).map((l) => `- ${l}`),

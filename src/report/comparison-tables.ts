@@ -1,5 +1,5 @@
 import type { Comparison, PathwayComparison } from '../metrics/compare-pathways.js';
-import { kelvin, MISSING, signedKelvin } from './format-numbers.js';
+import { kelvin, MISSING, percent, signedKelvin } from './format-numbers.js';
 import type { TextTable } from './text-table.js';
 
 /** Options of {@link comparisonTables}. */
@@ -17,7 +17,11 @@ export interface ComparisonTableOptions {
  * - `summary`: one row per pathway: peak warming and its year (marked "still rising" when the peak
  *   is the last year), the crossing year of each threshold under the AR6 20-year-mean rule ("not
  *   crossed by END" when none), warming at the key years and, when any pathway is emission-driven,
- *   cumulative CO2 emissions to net zero (Gt CO2, whole numbers) and the net-zero year.
+ *   cumulative CO2 emissions to net zero (Gt CO2, whole numbers) and the net-zero year. For a
+ *   pathway with an ensemble the peak is that of its median line, and a crossing year is the year
+ *   by which half of its members have crossed ("fewer than half by END" when they have not).
+ * - `odds`, only when some pathway has an ensemble: one row per such pathway, the share of its
+ *   members that have crossed each threshold by each of the ensemble's milestone years.
  *
  * A value a pathway does not cover is `n/a`.
  *
@@ -26,10 +30,11 @@ export interface ComparisonTableOptions {
  * @example
  * comparisonTables(c).milestones.columns // ['Year', 'steady (K)', 'swift (K)', 'swift vs steady (K)']
  */
-export function comparisonTables(c: Comparison, options: ComparisonTableOptions = {}): { milestones: TextTable; summary: TextTable } {
+export function comparisonTables(c: Comparison, options: ComparisonTableOptions = {}): { milestones: TextTable; summary: TextTable; odds?: TextTable } {
   const baseline = options.baseline ?? '1850-1900';
   const [ref, ...others] = c.pathways;
   const anyRange = c.pathways.some((p) => p.range);
+  const withOdds = c.pathways.filter((p) => p.crossings.some((x) => x.odds));
 
   const columns = ['Year', `${ref.label} (K)`];
   for (const p of others) columns.push(`${p.label} (K)`, `${p.label} vs ${ref.label} (K)`);
@@ -39,7 +44,7 @@ export function comparisonTables(c: Comparison, options: ComparisonTableOptions 
     return row;
   });
   const milestoneNotes = [`Warming in K relative to ${baseline}. Differences are each pathway minus the reference, ${ref.label}.`];
-  if (anyRange) milestoneNotes.push('Brackets: the 5-95 % (very likely) range of the ensemble.');
+  if (anyRange) milestoneNotes.push('Brackets: the 5-95 % (very likely) range of the ensemble; the number before them is the ensemble median.');
 
   const netZero = c.pathways.some((p) => p.netZero);
   const sColumns = ['Pathway', 'Peak (K)', 'Peak year'];
@@ -48,8 +53,9 @@ export function comparisonTables(c: Comparison, options: ComparisonTableOptions 
   if (netZero) sColumns.push('CO2 to net zero (Gt CO2)', 'Net-zero year');
   const sRows = c.pathways.map((p) => {
     const row = [p.label, kelvin(p.peak.value), Number.isFinite(p.peak.year) ? `${p.peak.year}${p.stillRising ? ' (still rising)' : ''}` : MISSING];
-    for (const { period } of p.crossings) {
-      row.push(period === undefined ? `not crossed by ${p.lastYear}` : period.atStart ? `${period.year} or earlier` : String(period.year));
+    for (const { period, odds } of p.crossings) {
+      if (odds) row.push(odds.medianYear === null ? `fewer than half by ${p.lastYear}` : String(odds.medianYear));
+      else row.push(period === undefined ? `not crossed by ${p.lastYear}` : period.atStart ? `${period.year} or earlier` : String(period.year));
     }
     for (const k of p.keyYears) row.push(kelvin(k.warmingK));
     if (netZero) {
@@ -65,11 +71,18 @@ export function comparisonTables(c: Comparison, options: ComparisonTableOptions 
       'warming exceeds the level, the IPCC AR6 WG1 convention for global warming levels (of the two middle years, the earlier); ' +
       `"or earlier" when the first complete ${c.windowYears}-year period of the data is already above it.`,
   ];
+  if (withOdds.length > 0) {
+    summaryNotes.push(
+      `With an ensemble (${withOdds.map((p) => p.label).join(', ')}): the peak is that of the median line, and "Reaches" is the year by ` +
+        'which half of the members have crossed the level by the same rule; the table of chances gives the shares.',
+    );
+  }
   if (netZero) {
     const from = [...new Set(c.pathways.flatMap((p) => (p.netZero ? [p.netZero.fromYear] : [])))].join(', ');
     summaryNotes.push(`CO2 to net zero: net CO2 emissions summed from ${from} up to the year before they first reach zero or below.`);
   }
   return {
+    ...(withOdds.length > 0 ? { odds: oddsTable(c, withOdds) } : {}),
     milestones: {
       caption: `Warming at milestone years (K relative to ${baseline})`,
       columns,
@@ -92,4 +105,28 @@ function warmingCell(p: PathwayComparison, m: number): string {
   const central = kelvin(v.warmingK);
   if (!v.range || central === MISSING) return central;
   return `${central} [${kelvin(v.range.p05)} to ${kelvin(v.range.p95)}]`;
+}
+
+/** The chance of crossing each threshold by each milestone year, for the pathways with an ensemble. */
+function oddsTable(c: Comparison, withOdds: PathwayComparison[]): TextTable {
+  const years = [...new Set(withOdds.flatMap((p) => p.crossings.flatMap((x) => x.odds?.byYear.map((b) => b.year) ?? [])))].sort((a, b) => a - b);
+  const columns = ['Pathway'];
+  for (const t of c.thresholdsK) for (const y of years) columns.push(`${+t.toPrecision(6)} K by ${y}`);
+  const rows = withOdds.map((p) => {
+    const row = [p.label];
+    for (const { odds } of p.crossings) {
+      for (const y of years) row.push(percent(odds?.byYear.find((b) => b.year === y)?.probability ?? null));
+    }
+    return row;
+  });
+  return {
+    caption: 'Chance of crossing each warming level (share of ensemble members)',
+    columns,
+    rows,
+    numeric: columns.map((_, j) => j > 0),
+    notes: [
+      `The share of members whose ${c.windowYears}-year mean warming has exceeded the level by the given year (a member counts ` +
+        `once it has crossed, even if it later falls back). n/a: the run does not cover the ${c.windowYears}-year window around that year.`,
+    ],
+  };
 }

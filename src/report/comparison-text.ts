@@ -36,6 +36,7 @@ export function comparisonText(c: Comparison, options: ComparisonTextOptions = {
     comparisonHeadlines(c).map((l) => `  ${l}`).join('\n') + '\n',
     plainTable(tables.milestones),
     plainTable(tables.summary),
+    ...(tables.odds ? [plainTable(tables.odds)] : []),
   ];
   if (!options.noChart) {
     parts.push(

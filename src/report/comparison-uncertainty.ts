@@ -16,7 +16,8 @@ export function comparisonUncertainty(c: Comparison): string | undefined {
   return (
     `Ranges are shown for ${withRange.join(', ')}: the 5-95 % (very likely) range in brackets and shaded, and the 17-83 % (likely) ` +
     'range shaded darker, across the sampled model parameters. They cover parameter uncertainty only; uncertainty in the pathway ' +
-    'itself and in the model structure comes on top.' +
+    'itself and in the model structure comes on top. The parameters are drawn to the IPCC AR6 assessed ranges and are not ' +
+    'constrained by observed warming, so the ranges show what those assessed ranges imply rather than a projection narrowed by the historical record.' +
     (without.length > 0 ? ` ${without.join(', ')}: single central estimates, no range.` : '')
   );
 }

@@ -15,3 +15,17 @@ export function signedKelvin(v: number, digits = 2): string {
   const s = kelvin(v, digits);
   return s === MISSING || s.startsWith('-') || Number(s) === 0 ? s : `+${s}`;
 }
+
+/**
+ * A share (0-1) as a whole percentage (`62 %`); `<1 %` and `>99 %` for shares that are neither none
+ * nor all but would round to them; `n/a` for null or NaN.
+ *
+ * @example percent(0.624) // '62 %'
+ * @example percent(0.997) // '>99 %'
+ */
+export function percent(v: number | null): string {
+  if (v === null || !Number.isFinite(v)) return MISSING;
+  if (v > 0 && v < 0.005) return '<1 %';
+  if (v < 1 && v >= 0.995) return '>99 %';
+  return `${Math.round(100 * v)} %`;
+}

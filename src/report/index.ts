@@ -25,3 +25,5 @@ export type { ChartBand, SvgChartOptions } from './svg-chart.js';
 export { terminalChart } from './terminal-chart.js';
 export type { ChartLine, TerminalChartOptions } from './terminal-chart.js';
 export type { TextTable } from './text-table.js';
+export { scopedNotes } from './scoped-notes.js';
+export type { ScopedNote } from './scoped-notes.js';

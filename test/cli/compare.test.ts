@@ -68,4 +68,21 @@ describe('warmcast compare', () => {
     const inputs = JSON.parse(readFileSync(join(dir, 'c.json'), 'utf8')).provenance.inputs.map((i: { path: string }) => i.path);
     expect(inputs.some((p: string) => p.endsWith('history.csv'))).toBe(true);
   });
+
+  it('with --members takes crossing years and chances from the members, as `warmcast ensemble` does for the same seed, and ends with notes and cautions', async () => {
+    const cmp = captureIo();
+    expect(await main(['compare', 'steady', 'swift', '--members', '300', '--seed', '5', '--no-chart'], cmp)).toBe(0);
+    const ens = captureIo();
+    expect(await main(['ensemble', 'swift', '--members', '300', '--seed', '5', '--no-chart'], ens)).toBe(0);
+    for (const level of ['1.5', '2']) {
+      const e = new RegExp(`^  ${level.replace('.', '\\.')} K \\(20-year mean\\): probability of crossing by 2050 (\\d+) %, by 2100 (\\d+) %; (?:median crossing year (\\d+)|fewer than half)`, 'm').exec(ens.out)!;
+      const c = new RegExp(`Swift transition: .*${level.replace('.', '\\.')} K: (\\d+) % of members cross it by 2050, (\\d+) % by 2100, (?:half by (\\d+)|fewer than half)`).exec(cmp.out)!;
+      expect(e, ens.out).not.toBeNull();
+      expect(c, cmp.out).not.toBeNull();
+      expect(c.slice(1)).toEqual(e.slice(1));
+    }
+    expect(cmp.out).toMatch(/Chance of crossing each warming level/);
+    expect(cmp.out).toMatch(/^  note: all ensembles: .*unphysical/m);
+    expect(cmp.out).toMatch(/^  caution: .*not constrained by observed warming/m);
+  });
 });

@@ -32,3 +32,30 @@ export function fixtureComparison() {
     { milestoneYears: milestoneYears(2024, 2100), cumulativeFromYear: 2020 },
   );
 }
+
+/**
+ * Two pathways over 2000-2100 for the writers' handling of ensemble crossing odds: `single`, one
+ * run that crosses 1.5 K but not 2 K, and `ensemble`, a median line with hand-set odds (2 K: 30 %
+ * of members by 2050, 45 % by 2100, fewer than half within the run).
+ */
+export function oddsComparison() {
+  const y = Float64Array.from({ length: 101 }, (_, i) => 2000 + i);
+  const line = y.map((v) => 1 + 0.0082 * (v - 2000));
+  const shareAbove = (t: number) => y.map((v) => (v < 2009 || v > 2090 ? NaN : Math.min(1, Math.max(0, (1 + 0.008 * (v - 2000) - t) / 0.5 + 0.5))));
+  return comparePathways(
+    [
+      { label: 'single', years: y, warmingK: line },
+      {
+        label: 'ensemble',
+        years: y,
+        warmingK: line,
+        range: { p05: line.map((v) => v - 0.4), p17: line.map((v) => v - 0.2), p83: line.map((v) => v + 0.2), p95: line.map((v) => v + 0.4) },
+        crossingOdds: [
+          { thresholdK: 2, byYear: [{ year: 2050, probability: 0.3 }, { year: 2100, probability: null }], medianYear: null, withinRun: 0.45, shareAbove: shareAbove(2) },
+          { thresholdK: 1.5, byYear: [{ year: 2050, probability: 0.62 }, { year: 2100, probability: null }], medianYear: 2046, withinRun: 0.97, shareAbove: shareAbove(1.5) },
+        ],
+      },
+    ],
+    { milestoneYears: [2050], keyYears: [2050] },
+  );
+}

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { comparePathways } from '../../src/metrics/index.js';
 import { comparisonHeadlines } from '../../src/report/comparison-headlines.js';
+import { oddsComparison } from './comparison-fixture.js';
 
 describe('comparisonHeadlines', () => {
   it('comparisonHeadlines gives one sentence per pathway with peak, crossings and the last key year', () => {
@@ -15,7 +16,17 @@ describe('comparisonHeadlines', () => {
     // steady passes 1.5 K at 2035 and 2 K at 2060 (linear trend; see crossingPeriod).
     expect(comparisonHeadlines(c)).toEqual([
       'steady: peak 2.80 K in 2100 (still rising); reaches 1.5 K in 2035 and 2 K in 2060; 2.80 K in 2100.',
-      'swift: peak 1.45 K in 2100 (still rising); does not reach 1.5 K or 2 K by 2100; 1.45 K in 2100.',
+      'swift: peak 1.45 K in 2100 (still rising); 1.5 K and 2 K not crossed by 2100; 1.45 K in 2100.',
+    ]);
+  });
+
+  it('comparisonHeadlines speaks of the median line and the members\' odds for a pathway with an ensemble, and of the line for one without', () => {
+    // single: 1 + 0.0082 (y - 2000) K; the window s..s+19 has mean 1 + 0.0082 (s + 9.5 - 2000), above 1.5 K first for s = 2052
+    // (1.504 K), labelled 2061; the last window's mean, 1.742 K, stays below 2 K (analytic).
+    expect(comparisonHeadlines(oddsComparison())).toEqual([
+      'single: peak 1.82 K in 2100 (still rising); reaches 1.5 K in 2061; 2 K not crossed by 2100; 1.41 K in 2050.',
+      'ensemble: median peaks at 1.82 K in 2100 (still rising); 1.5 K: 62 % of members cross it by 2050, n/a by 2100, half by 2046; ' +
+        '2 K: 30 % of members cross it by 2050, n/a by 2100, fewer than half by 2100; median 1.41 K in 2050.',
     ]);
   });
 });

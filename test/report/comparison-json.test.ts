@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { comparisonJson } from '../../src/report/comparison-json.js';
-import { fixtureComparison, provenance, years } from './comparison-fixture.js';
+import { fixtureComparison, oddsComparison, provenance, years } from './comparison-fixture.js';
 
 describe('comparisonJson', () => {
   const c = fixtureComparison();
@@ -35,5 +35,17 @@ describe('comparisonJson', () => {
     expect(j.pathways[0].milestones[0].warming_k).toBeNull();
     expect(text).toMatch(/"years": \[1850, 1851, /);
     expect(text.endsWith('}\n')).toBe(true);
+  });
+
+  it('comparisonJson marks an ensemble pathway\'s central estimate as its median and carries the members\' odds and prob_above series', () => {
+    const doc = JSON.parse(comparisonJson(oddsComparison(), {}));
+    expect(doc.pathways.map((p: { central_estimate: string }) => p.central_estimate)).toEqual(['single run', 'ensemble median']);
+    const [c15, c2] = doc.pathways[1].crossings;
+    expect(c15.odds).toEqual({ by_year: [{ year: 2050, probability: 0.62 }, { year: 2100, probability: null }], half_crossed_year: 2046, within_run: 0.97 });
+    expect(c2.odds.half_crossed_year).toBeNull();
+    expect(doc.pathways[0].crossings[0].odds).toBeUndefined();
+    const share = oddsComparison().pathways[1].crossings[0].odds!.shareAbove;
+    expect(doc.pathways[1].annual['prob_above_1.5']).toEqual(Array.from(share, (v) => (Number.isFinite(v) ? v : null)));
+    expect(doc.pathways[0].annual['prob_above_1.5']).toBeUndefined();
   });
 });

@@ -2,7 +2,7 @@ import Papa from 'papaparse';
 import { describe, expect, it } from 'vitest';
 import { formatCsv } from '../../src/io/format-csv.js';
 import { comparisonLongTable } from '../../src/report/comparison-long-table.js';
-import { fixtureComparison, years } from './comparison-fixture.js';
+import { fixtureComparison, oddsComparison, years } from './comparison-fixture.js';
 
 describe('comparisonLongTable', () => {
   const c = fixtureComparison();
@@ -28,5 +28,15 @@ describe('comparisonLongTable', () => {
         expect(row.co2_gtco2 === '').toBe(!p.co2Gtco2);
       }
     });
+  });
+
+  it('comparisonLongTable adds prob_above_<t> per threshold when a pathway has odds, NaN for pathways without', () => {
+    const co = oddsComparison();
+    const t = comparisonLongTable(co);
+    expect(t.columns).toEqual(['pathway', 'year', 'warming_k', 'difference_k', 'warming_p05_k', 'warming_p17_k', 'warming_p83_k', 'warming_p95_k', 'prob_above_1.5', 'prob_above_2']);
+    const col = (name: string) => t.data[t.columns.indexOf(name) - 1];
+    const n = co.pathways[0].years.length;
+    expect(Array.from(col('prob_above_1.5').subarray(0, n)).every(Number.isNaN)).toBe(true);
+    expect(Array.from(col('prob_above_2').subarray(n))).toEqual(Array.from(co.pathways[1].crossings[1].odds!.shareAbove));
   });
 });

@@ -3,7 +3,7 @@ import { comparisonTables } from '../../src/report/comparison-tables.js';
 import { markdownTable } from '../../src/report/markdown-table.js';
 import { comparePathways } from '../../src/metrics/index.js';
 import { expectClose } from '../asserts.js';
-import { fixtureComparison } from './comparison-fixture.js';
+import { fixtureComparison, oddsComparison } from './comparison-fixture.js';
 import { readGfmTables } from './gfm-table.js';
 
 const first = (cell: string) => Number(/^[-+]?\d+(\.\d+)?/.exec(cell)![0]);
@@ -63,5 +63,18 @@ describe('comparisonTables', () => {
     expect(rows[0].slice(2, 5)).toEqual(['2020', '2029 or earlier', 'not crossed by 2060']);
     expect(rows[1].slice(2, 5)).toEqual(['2060 (still rising)', 'not crossed by 2060', 'not crossed by 2060']);
     expect(rows[1][6]).toBe('n/a'); // 2100 lies beyond the data
+  });
+
+  it('with crossing odds, "Reaches" is the year by which half of the members crossed, and a table of chances parses back to the odds', () => {
+    const co = oddsComparison();
+    const t = comparisonTables(co);
+    expect(t.summary.rows.map((r) => r.slice(3, 5))).toEqual([
+      ['2061', 'not crossed by 2100'],
+      ['2046', 'fewer than half by 2100'],
+    ]);
+    const [odds] = readGfmTables(markdownTable(t.odds!));
+    expect(odds.header).toEqual(['Pathway', '1.5 K by 2050', '1.5 K by 2100', '2 K by 2050', '2 K by 2100']);
+    expect(odds.rows).toEqual([['ensemble', '62 %', 'n/a', '30 %', 'n/a']]);
+    expect(comparisonTables(fixtureComparison()).odds).toBeUndefined();
   });
 });
