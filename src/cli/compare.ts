@@ -1,4 +1,5 @@
 import { Command } from 'commander';
+import { ConfigError } from '../errors.js';
 import { formatCsv } from '../io/index.js';
 import { readPathway } from '../io/load-pathway.js';
 import { comparePathways, milestoneYears, type PathwayWarming } from '../metrics/index.js';
@@ -86,7 +87,7 @@ export function compareCommand(io: CliIo): Command {
       }
       const notes = scopedNotes(scoped, runs.map((r) => r.projection.name));
       const c = comparePathways(pathways, {
-        milestoneYears: opts.years ?? milestoneYears(firstFuture, last, 10),
+        milestoneYears: opts.years ? chosenYears(opts.years, runs.map((r) => r.projection.years)) : milestoneYears(firstFuture, last, 10),
         thresholdsK: opts.thresholds,
         cumulativeFromYear: firstFuture,
       });
@@ -138,4 +139,16 @@ export function compareCommand(io: CliIo): Command {
 function ensembleThreadsFor(memberYears: number, emissionDriven: boolean): EnsembleThreads | undefined {
   const count = defaultWorkerCount(memberYears, emissionDriven);
   return count > 1 ? startEnsembleThreads(count) : undefined;
+}
+
+/**
+ * The milestone years given with --years, ascending and each once.
+ * @throws ConfigError for a year that no pathway covers
+ */
+function chosenYears(years: readonly number[], spans: readonly Float64Array[]): number[] {
+  const first = Math.min(...spans.map((y) => y[0]));
+  const last = Math.max(...spans.map((y) => y[y.length - 1]));
+  const outside = years.filter((y) => y < first || y > last);
+  if (outside.length > 0) throw new ConfigError(`--years ${outside.join(', ')} must lie within the years the pathways cover, ${first}-${last}`, 'years');
+  return [...new Set(years)].sort((a, b) => a - b);
 }

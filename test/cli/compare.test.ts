@@ -85,4 +85,13 @@ describe('warmcast compare', () => {
     expect(cmp.out).toMatch(/^  note: all ensembles: .*unphysical/m);
     expect(cmp.out).toMatch(/^  caution: .*not constrained by observed warming/m);
   });
+
+  it('--years are put in order once each, and a year no pathway covers is refused with exit 2', async () => {
+    const io = captureIo();
+    expect(await main(['compare', 'steady', 'swift', '--years', '2100,2050,2100', '--no-chart'], io)).toBe(0);
+    expect(io.out.match(/^  (2050|2100)  /gm)).toEqual(['  2050  ', '  2100  ']);
+    const bad = captureIo();
+    expect(await main(['compare', 'steady', 'swift', '--years', '2200,2050'], bad)).toBe(2);
+    expect(bad.err).toMatch(/--years 2200 must lie within the years the pathways cover, 1750-2150/);
+  });
 });
