@@ -173,3 +173,24 @@ describe('an emission file that starts a few years after the history', () => {
     expect(Number.isFinite(Number(at(2100).airborne_fraction))).toBe(true);
   });
 });
+
+describe('notes of an emission file spliced onto the concentration history', () => {
+  it('run EMISSIONS.csv says how each gas is joined (concentrations computed, emissions diagnosed), never "NaN", and the CSV has numbers there', async () => {
+    const dir = tmp();
+    const file = join(dir, 'emis.csv');
+    writeFileSync(file, '# name: My emissions\nyear,co2_gtco2,ch4_mt,n2o_mt\n2025,40,380,11\n2050,0,250,9\n2100,-5,200,8\n');
+    const io = captureIo();
+    expect(await main(['run', file, '--out', join(dir, 'out.csv'), '--no-chart'], io)).toBe(0);
+    const notes = io.out.split('\n').filter((l) => l.startsWith('  note: '));
+    expect(notes.filter((n) => /NaN/.test(n))).toEqual([]);
+    expect(notes).toContain(
+      "  note: co2_gtco2 given instead of the history's co2_ppm: a run follows the history's co2_ppm to 2024, diagnosing co2_gtco2 from it, and from 2025 computes co2_ppm from the given co2_gtco2",
+    );
+    const rows = Papa.parse<Record<string, string>>(readFileSync(join(dir, 'out.csv'), 'utf8').trim(), { header: true }).data;
+    for (const column of ['co2_ppm', 'co2_gtco2', 'ch4_ppb', 'ch4_mt', 'n2o_ppb', 'n2o_mt']) {
+      expect(rows.every((r) => Number.isFinite(Number(r[column]))), column).toBe(true);
+    }
+    const meta = JSON.parse(readFileSync(join(dir, 'out.meta.json'), 'utf8'));
+    expect(meta.notes.filter((n: string) => /NaN/.test(n))).toEqual([]);
+  });
+});
