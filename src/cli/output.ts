@@ -5,8 +5,15 @@ import type { Projection } from '../projection/index.js';
 import type { CliIo } from './cli-io.js';
 import { buildProvenance, type Provenance, type ProvenanceInput } from './provenance.js';
 
-/** A projection restricted to years from..to (inclusive); the run itself is unchanged. */
+/**
+ * A projection restricted to years from..to (inclusive); the run itself is unchanged.
+ *
+ * @throws ConfigError when `from` is after `to`, or the years lie outside the run's
+ */
 export function clipProjection(p: Projection, from?: number, to?: number): Projection {
+  if (from !== undefined && to !== undefined && from > to) {
+    throw new ConfigError(`--from (${from}) must not be after --to (${to})`, 'from');
+  }
   const first = p.years[0];
   const last = p.years[p.years.length - 1];
   const lo = from ?? first;

@@ -76,7 +76,7 @@ export function runCommand(io: CliIo): Command {
         for (const w of written) io.stderr(`wrote ${w}\n`);
       }
       for (const { projection } of projections) {
-        printProjectionSummary(projection, { write: report, color: opts.out === '-' ? io.stderrIsTTY : io.stdoutIsTTY, chart: opts.chart });
+        printProjectionSummary(projection, { write: report, color: opts.out === '-' ? io.stderrIsTTY : io.stdoutIsTTY, chart: opts.chart, from: opts.from });
       }
     });
   return cmd;

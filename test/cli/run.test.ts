@@ -194,3 +194,34 @@ describe('notes of an emission file spliced onto the concentration history', () 
     expect(meta.notes.filter((n: string) => /NaN/.test(n))).toEqual([]);
   });
 });
+
+describe('warmcast run --from/--to', () => {
+  /** Years of the short table's rows in a run summary. */
+  const tableYears = (out: string) => out.split('\n').filter((l) => /^ {2}\d{4} {2,}/.test(l)).map((l) => Number(l.trim().slice(0, 4)));
+
+  it('run delayed --from 2100 --to 2050 exits 2 saying the order is wrong', async () => {
+    const io = captureIo();
+    expect(await main(['run', 'delayed', '--from', '2100', '--to', '2050'], io)).toBe(2);
+    expect(io.err).toBe('warmcast: --from (2100) must not be after --to (2050)\n');
+  });
+
+  it('run delayed --to 1700 (before the run) still names the run\'s years', async () => {
+    const io = captureIo();
+    expect(await main(['run', 'delayed', '--to', '1700'], io)).toBe(2);
+    expect(io.err).toMatch(/must lie within Delayed action's years 1750-2150/);
+  });
+
+  it('run delayed --from 2000 starts the short table at 2000, before the 2025 splice year', async () => {
+    const io = captureIo();
+    expect(await main(['run', 'delayed', '--from', '2000', '--no-chart'], io)).toBe(0);
+    const years = tableYears(io.out);
+    expect(years.slice(0, 4)).toEqual([2000, 2010, 2020, 2030]);
+    expect(years[years.length - 1]).toBe(2150);
+  });
+
+  it('run delayed without --from still starts the short table at the 2025 splice year', async () => {
+    const io = captureIo();
+    expect(await main(['run', 'delayed', '--no-chart'], io)).toBe(0);
+    expect(tableYears(io.out).slice(0, 2)).toEqual([2025, 2030]);
+  });
+});
