@@ -233,3 +233,23 @@ describe('prescribed forcing out of its plausible range', () => {
     expect(readdirSync(dir).sort()).toEqual(['bigaer.csv', 'bigvol.csv']);
   });
 });
+
+describe('warmcast compare with two files of the same name', () => {
+  it('compare a/p.csv b/p.csv exits 2 and says how to tell them apart (a "# name:" line); with one, the comparison runs', async () => {
+    const dir = tmp();
+    for (const sub of ['a', 'b']) {
+      mkdirSync(join(dir, sub));
+      writeFileSync(join(dir, sub, 'p.csv'), `year,co2_ppm\n2025,425\n2100,${sub === 'a' ? 450 : 550}\n`);
+    }
+    const same = await run(['compare', join(dir, 'a', 'p.csv'), join(dir, 'b', 'p.csv'), '--no-chart']);
+    expect(same.code).toBe(2);
+    expect(same.err).toBe(
+      'warmcast: pathway names in a comparison must be distinct; "p" appears twice. A pathway file is named by its "# name: ..." line, '
+        + 'else by its file name without the extension: give one of them a line such as "# name: Plan B"\n',
+    );
+    writeFileSync(join(dir, 'b', 'p.csv'), '# name: Plan B\nyear,co2_ppm\n2025,425\n2100,550\n');
+    const named = await run(['compare', join(dir, 'a', 'p.csv'), join(dir, 'b', 'p.csv'), '--no-chart']);
+    expect(named.code).toBe(0);
+    expect(named.out).toContain('Plan B');
+  });
+});
