@@ -32,7 +32,7 @@ export function runCommand(io: CliIo): Command {
     .option('--from <year>', 'first year to report (the model still starts from pre-industrial)', yearOption)
     .option('--to <year>', 'last year to report', yearOption)
     .option('--baseline <years>', 'baseline period for warming', yearRangeOption, [1850, 1900])
-    .option('--no-splice', 'do not splice a pathway that starts late onto the bundled history')
+    .option('--no-splice', 'do not splice a pathway that starts late onto the bundled history (the run then starts from zero warming in its first year, not in equilibrium with that year\'s forcing)')
     .option('--no-carbon-feedback', 'emission-driven runs: switch off the carbon-climate feedback on uptake')
     .option('--no-chart', 'omit the terminal chart');
   addModelOptions(cmd)

@@ -225,3 +225,21 @@ describe('warmcast run --from/--to', () => {
     expect(tableYears(io.out).slice(0, 2)).toEqual([2025, 2030]);
   });
 });
+
+describe('warmcast run --no-splice', () => {
+  it('run FILE --no-splice notes the forcing columns taken as zero, beside the gases held at 1750', async () => {
+    const dir = tmp();
+    const file = join(dir, 'sparse.csv');
+    writeFileSync(file, '# name: My sparse pathway\nyear,co2_ppm,aerosol_wm2\n2030,440,-0.8\n2050,470,-0.6\n2100,450,-0.3\n');
+    const io = captureIo();
+    expect(await main(['run', file, '--no-splice', '--baseline', '2030-2040', '--no-chart'], io)).toBe(0);
+    expect(io.out).toContain('  note: other_wm2, solar_wm2, volcanic_wm2 not given: taken as zero\n');
+    expect(io.out).toContain('  note: CH4 not given: held at its 1750 value\n');
+  });
+
+  it('run --help says --no-splice starts from zero warming in the first year, not in equilibrium', async () => {
+    const io = captureIo();
+    expect(await main(['run', '--help'], io)).toBe(0);
+    expect(io.out.replace(/\s+/g, ' ')).toContain("the run then starts from zero warming in its first year, not in equilibrium with that year's forcing");
+  });
+});

@@ -12,7 +12,7 @@ writeFileSync(join(dir, 'calm.csv'),
   '# name: Calm\n# description: A short test pathway\nyear,co2_gtco2,aerosol_wm2\n2023,40,-1.1\n2028,30,-0.9\n2033,20,-0.5\n');
 
 describe('describePathway', () => {
-  it('describePathway lists file, rows, years, steps, columns with units, splice, notes and missing gases', () => {
+  it('describePathway lists file, rows, years, steps, columns with units, splice, notes, missing gases and forcing taken as zero', () => {
     const { parsed, pathway } = readPathway('calm', { pathwaysDir: dir });
     expect(describePathway(parsed, pathway)).toEqual([
       `file: ${join(dir, 'calm.csv')}`,
@@ -32,6 +32,7 @@ describe('describePathway', () => {
       "note: co2_gtco2 given instead of the history's co2_ppm: a run follows the history's co2_ppm to 2022, diagnosing co2_gtco2 from it, and from 2023 computes co2_ppm from the given co2_gtco2",
       'note: aerosol_wm2 not in history: NaN before 2023',
       'gases not given (held at pre-industrial): N2O',
+      'forcing not given (taken as zero): other_wm2, volcanic_wm2',
     ]);
   });
 
