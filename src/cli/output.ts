@@ -1,12 +1,19 @@
 import { extname, join, resolve } from 'node:path';
 import { ConfigError } from '../errors.js';
-import { bundledPathwaysDir, formatCsv, formatJson, formatMarkdown, writeFileAtomic, type ReadPathwayResult, type Table } from '../io/index.js';
+import { bundledPathwaysDir, formatCsv, formatJson, formatMarkdown, writeFilesAtomic, type ReadPathwayResult, type Table } from '../io/index.js';
 import type { Projection } from '../projection/index.js';
 import type { CliIo } from './cli-io.js';
 import { buildProvenance, type Provenance, type ProvenanceInput } from './provenance.js';
 
-/** A projection restricted to years from..to (inclusive); the run itself is unchanged. */
+/**
+ * A projection restricted to years from..to (inclusive); the run itself is unchanged.
+ *
+ * @throws ConfigError when `from` is after `to`, or the years lie outside the run's
+ */
 export function clipProjection(p: Projection, from?: number, to?: number): Projection {
+  if (from !== undefined && to !== undefined && from > to) {
+    throw new ConfigError(`--from (${from}) must not be after --to (${to})`, 'from');
+  }
   const first = p.years[0];
   const last = p.years[p.years.length - 1];
   const lo = from ?? first;
@@ -37,11 +44,13 @@ export interface OutputContext extends ProvenanceInput {
 /**
  * Writes `path` in the format its extension names, atomically, with provenance: inside the file for
  * JSON, Markdown, SVG and HTML, in a `.meta.json` sidecar for CSV (so spreadsheets get a clean
- * table). `out` is resolved against the command's working directory; `-` writes the CSV form to
- * stdout.
+ * table). A CSV and its sidecar are written all-or-nothing (writeFilesAtomic): if either cannot be
+ * written, neither is, and existing files are left as they were. `out` is resolved against the
+ * command's working directory; `-` writes the CSV form to stdout.
  *
  * @returns the paths written
- * @throws ConfigError for an extension the command does not write
+ * @throws ConfigError for an extension the command does not write, or a target that cannot be
+ *   written (see writeFilesAtomic)
  */
 export function writeOutput(out: string, renderers: Renderers, ctx: OutputContext): string[] {
   const provenance = buildProvenance(ctx);
@@ -55,16 +64,11 @@ export function writeOutput(out: string, renderers: Renderers, ctx: OutputContex
   if (!render) {
     throw new ConfigError(`--out ${path}: the extension must be one of ${Object.keys(renderers).join(', ')} (it picks the format)`, 'out');
   }
-  const content = render(provenance);
-  const write = (target: string, text: string) => writeFileAtomic(target, text, { inputs: ctx.inputs });
-  if (ext === '.csv') {
-    const sidecar = path.slice(0, -ext.length) + '.meta.json';
-    write(path, content);
-    write(sidecar, JSON.stringify(provenance, null, 2) + '\n');
-    return [path, sidecar];
-  }
-  write(path, content);
-  return [path];
+  const files = [{ path, content: render(provenance) }];
+  if (ext === '.csv') files.push({ path: path.slice(0, -ext.length) + '.meta.json', content: JSON.stringify(provenance, null, 2) + '\n' });
+  // The table and its sidecar land together or not at all: a CSV without its provenance is not written.
+  writeFilesAtomic(files, { inputs: ctx.inputs });
+  return files.map((f) => f.path);
 }
 
 /** The formats of a plain yearly table: CSV, JSON with provenance, Markdown with provenance below. */

@@ -32,7 +32,7 @@ export function runCommand(io: CliIo): Command {
     .option('--from <year>', 'first year to report (the model still starts from pre-industrial)', yearOption)
     .option('--to <year>', 'last year to report', yearOption)
     .option('--baseline <years>', 'baseline period for warming', yearRangeOption, [1850, 1900])
-    .option('--no-splice', 'do not splice a pathway that starts late onto the bundled history')
+    .option('--no-splice', 'do not splice a pathway that starts late onto the bundled history (the run then starts from zero warming in its first year, not in equilibrium with that year\'s forcing)')
     .option('--no-carbon-feedback', 'emission-driven runs: switch off the carbon-climate feedback on uptake')
     .option('--no-chart', 'omit the terminal chart');
   addModelOptions(cmd)
@@ -76,7 +76,7 @@ export function runCommand(io: CliIo): Command {
         for (const w of written) io.stderr(`wrote ${w}\n`);
       }
       for (const { projection } of projections) {
-        printProjectionSummary(projection, { write: report, color: opts.out === '-' ? io.stderrIsTTY : io.stdoutIsTTY, chart: opts.chart });
+        printProjectionSummary(projection, { write: report, color: opts.out === '-' ? io.stderrIsTTY : io.stdoutIsTTY, chart: opts.chart, from: opts.from });
       }
     });
   return cmd;

@@ -17,10 +17,14 @@ const TABLE_COLUMNS = [
 
 /**
  * Prints what `warmcast run` shows on a terminal: a heading with the pathway and its splice, a short
- * table every 10 years over the future (or 25 over a long history), the headline lines (warming in
- * 2030, 2050, 2100, peak and its year), a chart, the notes and the caution.
+ * table every 10 years over the future (or 25 over a long history) or, when the report was asked to
+ * start at a year (`from`, the `--from` the projection was clipped to), from its first year, the
+ * headline lines (warming in 2030, 2050, 2100, peak and its year), a chart, the notes and the caution.
  */
-export function printProjectionSummary(p: Projection, out: { write: (s: string) => void; color: boolean; chart: boolean }): void {
+export function printProjectionSummary(
+  p: Projection,
+  out: { write: (s: string) => void; color: boolean; chart: boolean; from?: number },
+): void {
   const { years, columns } = p;
   const first = years[0];
   const last = years[years.length - 1];
@@ -35,8 +39,9 @@ export function printProjectionSummary(p: Projection, out: { write: (s: string) 
   lines.push('');
 
   const splice = p.provenance.spliceYear;
-  // The table starts at the splice year only when that year is shown: `--to` may end the report before it.
-  const start = splice !== undefined && splice >= first && splice <= last ? splice : first;
+  // Without --from the table starts at the splice year, when that year is shown (`--to` may end the
+  // report before it); with --from it starts where the user asked.
+  const start = out.from === undefined && splice !== undefined && splice >= first && splice <= last ? splice : first;
   const step = last - start > 200 ? 25 : 10;
   const rows: number[] = [];
   for (let y = Math.ceil(start / step) * step; y <= last; y += step) rows.push(y);

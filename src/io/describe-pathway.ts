@@ -1,12 +1,13 @@
-import { COLUMN_UNITS, GASES, PATHWAY_COLUMNS, type Gas, type Pathway } from '../pathway.js';
+import { COLUMN_UNITS, FORCING_COLUMNS, GASES, PATHWAY_COLUMNS, type Gas, type Pathway } from '../pathway.js';
 import type { ParsedPathway } from './parse-pathway.js';
 import { describeTimeSteps, isAnnualGrid } from './time-steps.js';
 
 /**
  * What `warmcast check` prints about one pathway: the file, its name, the rows read and their years,
  * the time column, each column with its unit and range, the spacing of the rows and whether they were
- * interpolated, the splice onto the history, any other provenance notes, and the gases the file does
- * not give (which the run holds at pre-industrial values).
+ * interpolated, the splice onto the history, any other provenance notes, the gases the file does
+ * not give (which the run holds at pre-industrial values) and the forcing columns it does not give
+ * (which the run takes as zero).
  *
  * @param parsed - the rows as read (parsePathway)
  * @param pathway - the pathway a run uses (toAnnual, possibly spliceOntoHistory)
@@ -59,6 +60,8 @@ export function describePathway(parsed: ParsedPathway, pathway: Pathway): string
   if (missing.length > 0) {
     lines.push(`gases not given (held at pre-industrial): ${missing.map((g) => g.toUpperCase()).join(', ')}`);
   }
+  const zeroForcing = FORCING_COLUMNS.filter((c) => pathway.series[c] === undefined);
+  if (zeroForcing.length > 0) lines.push(`forcing not given (taken as zero): ${zeroForcing.join(', ')}`);
   return lines;
 }
 

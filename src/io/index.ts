@@ -24,5 +24,5 @@ export { tableColumns, type Table, type TableColumn } from './table.js';
 export { formatCsv } from './format-csv.js';
 export { formatMarkdown } from './format-markdown.js';
 export { formatJson } from './format-json.js';
-export { writeFileAtomic, type WriteFileAtomicOptions } from './write-file-atomic.js';
+export { writeFileAtomic, writeFilesAtomic, type FileToWrite, type WriteFileAtomicOptions } from './write-file-atomic.js';
 export { parseParams, PARAMS_FILE_KEYS } from './read-params.js';

@@ -1,5 +1,5 @@
 import { InputError } from '../errors.js';
-import { GASES, PATHWAY_COLUMNS, type Pathway, type PathwayColumn } from '../pathway.js';
+import { EMISSION_COLUMNS, GASES, PATHWAY_COLUMNS, type Pathway, type PathwayColumn } from '../pathway.js';
 
 /**
  * Joins a pathway that starts after the history's first year onto that history, so that a run
@@ -14,7 +14,9 @@ import { GASES, PATHWAY_COLUMNS, type Pathway, type PathwayColumn } from '../pat
  *   eruption at the end of the record is not carried forward. Notes say which.
  * - a gas the pathway gives in the other form than the history does (the pathway gives `co2_gtco2`,
  *   the history `co2_ppm`): both series are kept. The history's form holds the history's values
- *   before F and NaN from F on; the pathway's form is NaN before F. The carbon cycle joins the two.
+ *   before F and NaN from F on; the pathway's form is NaN before F. The carbon cycle joins the two,
+ *   and the note says so in the terms of a run (concentrations followed and emissions diagnosed
+ *   before F, concentrations computed from the emissions after).
  * - a column in the pathway but not in the history (nor its other form) is NaN before F.
  * - a column in neither stays absent (physics holds it at pre-industrial and says so).
  * - when F is more than one year after H, the years in between are bridged linearly from the
@@ -129,8 +131,12 @@ export function spliceOntoHistory(future: Pathway, history: Pathway): Pathway {
   }
   for (const [given, replaced] of switched) {
     const from = backfilled.includes(given) ? hLast + 1 : f0;
-    notes.push(`${given} given instead of the history's ${replaced}: ${replaced} holds history values to `
-      + `${from - 1} and is NaN from ${from}; ${given} is NaN before ${from}`);
+    // Said as a run uses the two series (runEmissionDriven), not as the gaps between them look here.
+    notes.push((EMISSION_COLUMNS as readonly PathwayColumn[]).includes(given)
+      ? `${given} given instead of the history's ${replaced}: a run follows the history's ${replaced} to ${from - 1}, `
+        + `diagnosing ${given} from it, and from ${from} computes ${replaced} from the given ${given}`
+      : `${given} given instead of the history's ${replaced}: the history's ${replaced} is used to ${from - 1} `
+        + `and the file's ${given} from ${from}`);
   }
   if (notInHistory.length > 0) notes.push(`${notInHistory.join(', ')} not in history: NaN before ${f0}`);
 

@@ -81,21 +81,50 @@ export const VALUE_BOUNDS: Readonly<Record<PathwayColumn, ValueBounds>> = {
       'present total emissions are about 27 Mt N2O yr-1 (17 Tg N yr-1, Global N2O Budget; from memory); '
       + 'an emission rate cannot be negative; 200 is about 7 times present (common practice, no source)',
   },
-  aerosol_wm2: forcingBounds('an aerosol effective radiative forcing'),
-  other_wm2: forcingBounds('an effective radiative forcing'),
-  solar_wm2: forcingBounds('a solar effective radiative forcing anomaly (not an irradiance)'),
-  volcanic_wm2: forcingBounds('a volcanic effective radiative forcing'),
-};
-
-function forcingBounds(quantity: string): ValueBounds {
-  return {
-    min: -50,
-    max: 50,
-    quantity,
+  // The four forcing bounds below are ours (common practice, no source): several times the widest
+  // value of each column in pathways/history.csv (aerosol -1.3 to 0, other -0.01 to 0.89, solar
+  // -0.07 to 0.13, volcanic -4.5 to 0 W m-2), wide enough for any scenario we know of, narrow enough
+  // that a value in the wrong unit or with a slipped sign or decimal point fails.
+  aerosol_wm2: {
+    min: -5,
+    max: 1,
+    quantity: 'an aerosol effective radiative forcing',
     unit: 'W m-2',
     source:
-      'the largest annual-mean volcanic forcings of the last millennia are of order -10 to -30 W m-2 and the '
-      + 'ERF of 4 x CO2 is about 8 W m-2 (from memory); 50 W m-2 rejects an irradiance (1361 W m-2) or '
-      + 'mW m-2 entered by mistake (common practice, no source)',
-  };
-}
+      'low end: about 4 times the strongest aerosol forcing in pathways/history.csv (-1.3 W m-2); high end: '
+      + 'aerosols cool on balance, and 1 W m-2 leaves room for a scenario dominated by absorbing aerosol '
+      + '(common practice, no source)',
+  },
+  other_wm2: {
+    min: -5,
+    max: 10,
+    quantity: 'an effective radiative forcing',
+    unit: 'W m-2',
+    source:
+      'the column collects every other agent (ozone, halocarbons, land use, contrails, ...), about 0.9 W m-2 at '
+      + 'the end of pathways/history.csv; 10 W m-2 is more than 10 times that and above the ERF of 4 x CO2, '
+      + 'and -5 W m-2 leaves room for a deliberate cooling scenario (common practice, no source)',
+  },
+  solar_wm2: {
+    min: -3,
+    max: 3,
+    quantity: 'a solar effective radiative forcing anomaly (not an irradiance)',
+    unit: 'W m-2',
+    source:
+      'the solar column of pathways/history.csv spans -0.07 to 0.13 W m-2; 3 W m-2 is over 20 times that, '
+      + 'room for any grand-minimum or -maximum scenario, and rejects a total irradiance (about 1361 W m-2) '
+      + '(common practice, no source)',
+  },
+  volcanic_wm2: {
+    min: -15,
+    max: 1,
+    quantity: 'a volcanic effective radiative forcing',
+    unit: 'W m-2',
+    source:
+      'low end: the strongest eruption year in pathways/history.csv is -4.5 W m-2 (its origin is in '
+      + 'pathways/README.md); -15 W m-2 is more than 3 times that, room for eruptions larger than any in that '
+      + 'record; '
+      + 'high end: volcanic forcing only cools, but some records measure it from a mean background, which '
+      + 'makes quiet years a few tenths positive (common practice, no source)',
+  },
+};

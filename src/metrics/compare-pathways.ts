@@ -134,7 +134,14 @@ export function comparePathways(pathways: readonly PathwayWarming[], options: Co
   if (pathways.length === 0) throw new ConfigError('a comparison must be given at least one pathway', 'pathways');
   const seen = new Set<string>();
   for (const p of pathways) {
-    if (seen.has(p.label)) throw new ConfigError(`pathway names in a comparison must be distinct; "${p.label}" appears twice`, 'pathways');
+    if (seen.has(p.label)) {
+      // Labels of pathway files come from their `# name:` line, else the file name (parsePathway).
+      throw new ConfigError(
+        `pathway names in a comparison must be distinct; "${p.label}" appears twice. A pathway file is named by its `
+          + '"# name: ..." line, else by its file name without the extension: give one of them a line such as "# name: Plan B"',
+        'pathways',
+      );
+    }
     seen.add(p.label);
   }
   const thresholdsK = [...(options.thresholdsK ?? [1.5, 2])];

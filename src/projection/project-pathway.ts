@@ -5,7 +5,7 @@ import { ConfigError } from '../errors.js';
 import { FORCING_AGENTS, forcingByAgent, type ForcingAgent, type ForcingOptions } from '../forcing/agents.js';
 import { PREINDUSTRIAL } from '../forcing/constants.js';
 import { DEFAULT_TOLERANCES, type OdeTolerances } from '../numerics/integrate-steps.js';
-import { EMISSION_COLUMNS, GASES, type Pathway, type PathwayProvenance } from '../pathway.js';
+import { EMISSION_COLUMNS, FORCING_COLUMNS, GASES, type Pathway, type PathwayProvenance } from '../pathway.js';
 
 /** Options of {@link projectPathway}. */
 export interface ProjectionOptions {
@@ -56,7 +56,7 @@ export interface Projection {
    * emissions, `cumulative_co2_gtco2` and `airborne_fraction`.
    */
   columns: Record<string, Float64Array>;
-  /** Things the user should know about this run (gases held at 1750 values, ...). */
+  /** Things the user should know about this run (gases held at 1750 values, forcing columns taken as zero, ...). */
   notes: string[];
   /** The carbon-cycle result of an emission-driven run (budget, diagnosed emissions, mass balance). */
   carbon?: EmissionRunResult;
@@ -64,8 +64,10 @@ export interface Projection {
 
 /**
  * Projects warming for a pathway: concentrations -> ERF by agent (IPCC AR6 formulas) -> two-box
- * energy balance integrated by odex from pre-industrial equilibrium at the first year -> warming
- * relative to the baseline mean.
+ * energy balance integrated by odex from rest at the first year (T = T_d = 0, the pre-industrial
+ * equilibrium, whatever that year's forcing: a pathway starting after 1750 without the history
+ * splice misses the warming already reached by then) -> warming relative to the baseline mean.
+ * Notes name the gases held at their 1750 values and the forcing columns taken as zero.
  *
  * @param pathway annual pathway (concentrations and prescribed forcing)
  * @param options parameters, baseline, method
@@ -82,6 +84,9 @@ export function projectPathway(pathway: Pathway, options: ProjectionOptions): Pr
   for (const [gas, cols] of Object.entries(GASES)) {
     if (!s[cols.concentration] && !s[cols.emission]) notes.push(`${gas.toUpperCase()} not given: held at its 1750 value`);
   }
+  // forcingByAgent adds nothing for an absent forcing column; say so, as for the gases above.
+  const zeroForcing = FORCING_COLUMNS.filter((c) => !s[c]);
+  if (zeroForcing.length > 0) notes.push(`${zeroForcing.join(', ')} not given: taken as zero`);
   const forcingOptions: ForcingOptions = { co2Formula: params.co2Formula, forcing2xWm2: params.forcing2xWm2, aerosolScale: options.aerosolScale };
   const tolerances = options.tolerances ?? DEFAULT_TOLERANCES;
 

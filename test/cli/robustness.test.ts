@@ -213,3 +213,43 @@ describe('warmcast check on several files', () => {
     expect(r.err).toContain(`${join(dir, 'gone.csv')}: must be an existing file`);
   });
 });
+
+describe('prescribed forcing out of its plausible range', () => {
+  it('check and run refuse aerosol_wm2 -50 and volcanic_wm2 -20 / solar_wm2 5 with exit 2, file:line and column, and no output file', async () => {
+    const dir = tmp();
+    const aerosol = join(dir, 'bigaer.csv');
+    writeFileSync(aerosol, 'year,aerosol_wm2\n2030,-50\n2050,0\n');
+    const volcanic = join(dir, 'bigvol.csv');
+    writeFileSync(volcanic, 'year,volcanic_wm2,solar_wm2\n2030,-20,5\n2050,0,0\n');
+    const checked = await run(['check', aerosol, volcanic]);
+    expect(checked.code).toBe(2);
+    expect(checked.err).toContain(`${aerosol}:2: column "aerosol_wm2": must be a plausible value for an aerosol effective radiative forcing (got "-50"; expected a value from -5 to 1 W m-2)`);
+    expect(checked.err).toContain(`${volcanic}:2: column "volcanic_wm2": must be a plausible value for a volcanic effective radiative forcing (got "-20"; expected a value from -15 to 1 W m-2)`);
+    expect(checked.err).toContain(`${volcanic}:2: column "solar_wm2"`);
+    const ran = await run(['run', aerosol, '--out', join(dir, 'out.csv')]);
+    expect(ran.code).toBe(2);
+    expect(ran.err).toContain(`${aerosol}:2: column "aerosol_wm2": must be a plausible value`);
+    expect(ran.out).toBe('');
+    expect(readdirSync(dir).sort()).toEqual(['bigaer.csv', 'bigvol.csv']);
+  });
+});
+
+describe('warmcast compare with two files of the same name', () => {
+  it('compare a/p.csv b/p.csv exits 2 and says how to tell them apart (a "# name:" line); with one, the comparison runs', async () => {
+    const dir = tmp();
+    for (const sub of ['a', 'b']) {
+      mkdirSync(join(dir, sub));
+      writeFileSync(join(dir, sub, 'p.csv'), `year,co2_ppm\n2025,425\n2100,${sub === 'a' ? 450 : 550}\n`);
+    }
+    const same = await run(['compare', join(dir, 'a', 'p.csv'), join(dir, 'b', 'p.csv'), '--no-chart']);
+    expect(same.code).toBe(2);
+    expect(same.err).toBe(
+      'warmcast: pathway names in a comparison must be distinct; "p" appears twice. A pathway file is named by its "# name: ..." line, '
+        + 'else by its file name without the extension: give one of them a line such as "# name: Plan B"\n',
+    );
+    writeFileSync(join(dir, 'b', 'p.csv'), '# name: Plan B\nyear,co2_ppm\n2025,425\n2100,550\n');
+    const named = await run(['compare', join(dir, 'a', 'p.csv'), join(dir, 'b', 'p.csv'), '--no-chart']);
+    expect(named.code).toBe(0);
+    expect(named.out).toContain('Plan B');
+  });
+});

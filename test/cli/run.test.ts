@@ -173,3 +173,73 @@ describe('an emission file that starts a few years after the history', () => {
     expect(Number.isFinite(Number(at(2100).airborne_fraction))).toBe(true);
   });
 });
+
+describe('notes of an emission file spliced onto the concentration history', () => {
+  it('run EMISSIONS.csv says how each gas is joined (concentrations computed, emissions diagnosed), never "NaN", and the CSV has numbers there', async () => {
+    const dir = tmp();
+    const file = join(dir, 'emis.csv');
+    writeFileSync(file, '# name: My emissions\nyear,co2_gtco2,ch4_mt,n2o_mt\n2025,40,380,11\n2050,0,250,9\n2100,-5,200,8\n');
+    const io = captureIo();
+    expect(await main(['run', file, '--out', join(dir, 'out.csv'), '--no-chart'], io)).toBe(0);
+    const notes = io.out.split('\n').filter((l) => l.startsWith('  note: '));
+    expect(notes.filter((n) => /NaN/.test(n))).toEqual([]);
+    expect(notes).toContain(
+      "  note: co2_gtco2 given instead of the history's co2_ppm: a run follows the history's co2_ppm to 2024, diagnosing co2_gtco2 from it, and from 2025 computes co2_ppm from the given co2_gtco2",
+    );
+    const rows = Papa.parse<Record<string, string>>(readFileSync(join(dir, 'out.csv'), 'utf8').trim(), { header: true }).data;
+    for (const column of ['co2_ppm', 'co2_gtco2', 'ch4_ppb', 'ch4_mt', 'n2o_ppb', 'n2o_mt']) {
+      expect(rows.every((r) => Number.isFinite(Number(r[column]))), column).toBe(true);
+    }
+    const meta = JSON.parse(readFileSync(join(dir, 'out.meta.json'), 'utf8'));
+    expect(meta.notes.filter((n: string) => /NaN/.test(n))).toEqual([]);
+  });
+});
+
+describe('warmcast run --from/--to', () => {
+  /** Years of the short table's rows in a run summary. */
+  const tableYears = (out: string) => out.split('\n').filter((l) => /^ {2}\d{4} {2,}/.test(l)).map((l) => Number(l.trim().slice(0, 4)));
+
+  it('run delayed --from 2100 --to 2050 exits 2 saying the order is wrong', async () => {
+    const io = captureIo();
+    expect(await main(['run', 'delayed', '--from', '2100', '--to', '2050'], io)).toBe(2);
+    expect(io.err).toBe('warmcast: --from (2100) must not be after --to (2050)\n');
+  });
+
+  it('run delayed --to 1700 (before the run) still names the run\'s years', async () => {
+    const io = captureIo();
+    expect(await main(['run', 'delayed', '--to', '1700'], io)).toBe(2);
+    expect(io.err).toMatch(/must lie within Delayed action's years 1750-2150/);
+  });
+
+  it('run delayed --from 2000 starts the short table at 2000, before the 2025 splice year', async () => {
+    const io = captureIo();
+    expect(await main(['run', 'delayed', '--from', '2000', '--no-chart'], io)).toBe(0);
+    const years = tableYears(io.out);
+    expect(years.slice(0, 4)).toEqual([2000, 2010, 2020, 2030]);
+    expect(years[years.length - 1]).toBe(2150);
+  });
+
+  it('run delayed without --from still starts the short table at the 2025 splice year', async () => {
+    const io = captureIo();
+    expect(await main(['run', 'delayed', '--no-chart'], io)).toBe(0);
+    expect(tableYears(io.out).slice(0, 2)).toEqual([2025, 2030]);
+  });
+});
+
+describe('warmcast run --no-splice', () => {
+  it('run FILE --no-splice notes the forcing columns taken as zero, beside the gases held at 1750', async () => {
+    const dir = tmp();
+    const file = join(dir, 'sparse.csv');
+    writeFileSync(file, '# name: My sparse pathway\nyear,co2_ppm,aerosol_wm2\n2030,440,-0.8\n2050,470,-0.6\n2100,450,-0.3\n');
+    const io = captureIo();
+    expect(await main(['run', file, '--no-splice', '--baseline', '2030-2040', '--no-chart'], io)).toBe(0);
+    expect(io.out).toContain('  note: other_wm2, solar_wm2, volcanic_wm2 not given: taken as zero\n');
+    expect(io.out).toContain('  note: CH4 not given: held at its 1750 value\n');
+  });
+
+  it('run --help says --no-splice starts from zero warming in the first year, not in equilibrium', async () => {
+    const io = captureIo();
+    expect(await main(['run', '--help'], io)).toBe(0);
+    expect(io.out.replace(/\s+/g, ' ')).toContain("the run then starts from zero warming in its first year, not in equilibrium with that year's forcing");
+  });
+});

@@ -12,7 +12,7 @@ writeFileSync(join(dir, 'calm.csv'),
   '# name: Calm\n# description: A short test pathway\nyear,co2_gtco2,aerosol_wm2\n2023,40,-1.1\n2028,30,-0.9\n2033,20,-0.5\n');
 
 describe('describePathway', () => {
-  it('describePathway lists file, rows, years, steps, columns with units, splice, notes and missing gases', () => {
+  it('describePathway lists file, rows, years, steps, columns with units, splice, notes, missing gases and forcing taken as zero', () => {
     const { parsed, pathway } = readPathway('calm', { pathwaysDir: dir });
     expect(describePathway(parsed, pathway)).toEqual([
       `file: ${join(dir, 'calm.csv')}`,
@@ -29,9 +29,10 @@ describe('describePathway', () => {
       'run covers: 2020 to 2033 (14 years)',
       'note: ch4_ppb not in file: taken from history to 2022, then held at the 2022 value',
       'note: solar_wm2 not in file: taken from history to 2022, then held at the mean of 2020-2022',
-      "note: co2_gtco2 given instead of the history's co2_ppm: co2_ppm holds history values to 2022 and is NaN from 2023; co2_gtco2 is NaN before 2023",
+      "note: co2_gtco2 given instead of the history's co2_ppm: a run follows the history's co2_ppm to 2022, diagnosing co2_gtco2 from it, and from 2023 computes co2_ppm from the given co2_gtco2",
       'note: aerosol_wm2 not in history: NaN before 2023',
       'gases not given (held at pre-industrial): N2O',
+      'forcing not given (taken as zero): other_wm2, volcanic_wm2',
     ]);
   });
 

@@ -108,7 +108,7 @@ const badCases: [fixture: string, problem: Expected][] = [
   ['irradiance-in-forcing.csv', {
     code: 'input.out-of-range', line: 3, column: 'solar_wm2', value: '1361.2',
     message: 'must be a plausible value for a solar effective radiative forcing anomaly (not an irradiance)',
-    expected: 'a value from -50 to 50 W m-2',
+    expected: 'a value from -3 to 3 W m-2',
   }],
   ['bad-date.csv', {
     code: 'input.bad-date', line: 3, column: 'date', value: '2030-02-30',

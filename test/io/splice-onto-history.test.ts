@@ -53,9 +53,16 @@ describe('spliceOntoHistory', () => {
     expect(values(s, 'co2_ppm')).toEqual([370, 371, 372, 373, 374, nan, nan, nan]);
     expect(values(s, 'co2_gtco2')).toEqual([nan, nan, nan, nan, nan, 40, 38, 36]);
     expect(s.provenance.notes).toContain(
-      "co2_gtco2 given instead of the history's co2_ppm: co2_ppm holds history values to 2004 and is NaN from 2005; "
-      + 'co2_gtco2 is NaN before 2005',
+      "co2_gtco2 given instead of the history's co2_ppm: a run follows the history's co2_ppm to 2004, "
+      + 'diagnosing co2_gtco2 from it, and from 2005 computes co2_ppm from the given co2_gtco2',
     );
+  });
+
+  it('spliceOntoHistory notes a concentration future after an emission history in data terms (a run needs the other order)', () => {
+    const emissionHistory = pathway(2000, { co2_gtco2: [30, 31, 32, 33, 34] }, 'bundled:history');
+    const future = pathway(2005, { co2_ppm: [380, 381] }, 'plan.csv');
+    const s = spliceOntoHistory(future, emissionHistory);
+    expect(s.provenance.notes).toContain("co2_ppm given instead of the history's co2_gtco2: the history's co2_gtco2 is used to 2004 and the file's co2_ppm from 2005");
   });
 
   it('spliceOntoHistory lets a future that starts inside the history win from its first year', () => {
@@ -108,7 +115,7 @@ describe('spliceOntoHistory', () => {
       "co2_gtco2 held at the file's 2007 value over 2005-2006: the history gives that gas as a concentration, which cannot be bridged linearly to an emission rate",
     );
     expect(s.provenance.notes).toContain(
-      "co2_gtco2 given instead of the history's co2_ppm: co2_ppm holds history values to 2004 and is NaN from 2005; co2_gtco2 is NaN before 2005",
+      "co2_gtco2 given instead of the history's co2_ppm: a run follows the history's co2_ppm to 2004, diagnosing co2_gtco2 from it, and from 2005 computes co2_ppm from the given co2_gtco2",
     );
   });
 

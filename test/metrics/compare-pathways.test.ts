@@ -51,7 +51,7 @@ describe('comparePathways', () => {
 
   it('comparePathways rejects an empty list and repeated names', () => {
     expect(() => comparePathways([], { milestoneYears: [] })).toThrow(ConfigError);
-    expect(() => comparePathways([steady, steady], { milestoneYears: [] })).toThrow(/must be distinct/);
+    expect(() => comparePathways([steady, steady], { milestoneYears: [] })).toThrow(/must be distinct; "steady" appears twice\. .*give one of them a line such as "# name: Plan B"$/);
   });
 
   it('comparePathways attaches an ensemble\'s odds to the crossing of the same level, and refuses odds that lack a threshold', () => {

@@ -32,6 +32,19 @@ describe('projectPathway', () => {
     expectAllClose(run.columns.forcing_ch4_wm2, new Float64Array(years.length), 1e-15);
   });
 
+  it('takes a forcing column that is not given as zero and says which, in one note; none when all four are given', () => {
+    const n = years.length;
+    const run = projectPathway(pathway(years, { co2_ppm: new Float64Array(n).fill(400), aerosol_wm2: new Float64Array(n).fill(-0.5) }), { params });
+    expect(run.notes).toContain('other_wm2, solar_wm2, volcanic_wm2 not given: taken as zero');
+    for (const agent of ['other', 'solar', 'volcanic']) expectAllClose(run.columns[`forcing_${agent}_wm2`], new Float64Array(n), 0, agent);
+    const zero = () => new Float64Array(n);
+    const all = projectPathway(
+      pathway(years, { co2_ppm: new Float64Array(n).fill(400), aerosol_wm2: zero(), other_wm2: zero(), solar_wm2: zero(), volcanic_wm2: zero() }),
+      { params },
+    );
+    expect(all.notes.filter((note) => note.includes('taken as zero'))).toEqual([]);
+  });
+
   it('throws ConfigError when the baseline lies outside the years', () => {
     const short = years.filter((y) => y >= 1950);
     expect(() => projectPathway(pathway(short, { co2_ppm: new Float64Array(short.length).fill(400) }), { params })).toThrow(ConfigError);
