@@ -30,13 +30,27 @@ export function captureIo(cwd = process.cwd()): CliIo & { out: string; err: stri
   return io;
 }
 
-/** The process's own streams. */
+/**
+ * The process's own streams. When the reader of standard output or error goes away (a pipe into `head`),
+ * further output is dropped quietly instead of ending in an unhandled EPIPE; the command still
+ * finishes and its files are still written.
+ */
 export function processIo(): CliIo {
   return {
-    stdout: (text) => void process.stdout.write(text),
-    stderr: (text) => void process.stderr.write(text),
+    stdout: quietOnClosedPipe(process.stdout),
+    stderr: quietOnClosedPipe(process.stderr),
     stdoutIsTTY: Boolean(process.stdout.isTTY),
     stderrIsTTY: Boolean(process.stderr.isTTY),
     cwd: process.cwd(),
   };
+}
+
+/** A writer to `stream` that stops writing, without an error, once the stream's reader has gone. */
+function quietOnClosedPipe(stream: NodeJS.WriteStream): (text: string) => void {
+  let readerGone = false;
+  stream.on('error', (e: NodeJS.ErrnoException) => {
+    if (e.code !== 'EPIPE') throw e;
+    readerGone = true;
+  });
+  return (text) => void (readerGone || stream.write(text));
 }

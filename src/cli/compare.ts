@@ -33,7 +33,7 @@ export function compareCommand(io: CliIo): Command {
     .option('--years <list>', 'milestone years, e.g. 2030,2040,2050,2100 (default every 10 years over the future)', numberListOption('--years'))
     .option('--thresholds <list>', 'warming levels in K whose crossing years are reported', numberListOption('--thresholds'), [1.5, 2])
     .option('--baseline <years>', 'baseline period for warming', yearRangeOption, [1850, 1900])
-    .option('--no-splice', 'do not splice pathways that start late onto the bundled history')
+    .option('--no-splice', 'do not splice pathways that start late onto the bundled history (each run then starts from zero warming in its first year)')
     .option('--no-carbon-feedback', 'emission-driven runs: switch off the carbon-climate feedback on uptake')
     .option('--members <count>', 'also run a parameter ensemble of this many members per pathway: ranges in tables and shaded in charts, median as the line', wholeNumberOption('--members', 2))
     .option('--seed <integer>', 'random seed of the ensembles (with --members)', wholeNumberOption('--seed', 0), 1)

@@ -128,6 +128,12 @@ describe('the built binary (black box)', () => {
     expect(r.stdout.trim()).toBe(JSON.parse(readFileSync('package.json', 'utf8')).version);
   });
 
+  it('stops quietly, exit 0, when the reader of its output goes away (a pipe into head)', () => {
+    const r = spawnSync('bash', ['-c', '"$0" "$1" run --out - | head -c 100 >/dev/null; echo "exit ${PIPESTATUS[0]}" >&2; "$0" "$1" ensemble swift --members 500 --out - 2>&1 | head -c 100 >/dev/null; echo "exit ${PIPESTATUS[0]}" >&2', process.execPath, bin], { encoding: 'utf8' });
+    expect(r.stderr).not.toMatch(/EPIPE|Unhandled|internal error/);
+    expect(r.stderr.match(/^exit \d+$/gm)).toEqual(['exit 0', 'exit 0']);
+  });
+
   it('run on a missing file exits 2 with the file named', () => {
     const r = spawnSync(process.execPath, [bin, 'run', 'no-such-file.csv'], { encoding: 'utf8' });
     expect(r.status).toBe(2);
