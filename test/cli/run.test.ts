@@ -65,7 +65,7 @@ describe('warmcast run (in-process)', () => {
     writeFileSync(bad, '{\n  "ecs_k": 3,\n  "ecs": 4\n}\n');
     const io2 = captureIo();
     expect(await main(['run', 'swift', '--params', bad], io2)).toBe(2);
-    expect(io2.err).toMatch(/bad\.json:3: column "ecs": is not a parameter; did you mean "ecs_k"\?/);
+    expect(io2.err).toMatch(/bad\.json:3: key "ecs": is not a parameter; did you mean "ecs_k"\?/);
   });
 });
 
