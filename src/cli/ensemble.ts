@@ -65,7 +65,7 @@ export function ensembleCommand(io: CliIo): Command {
     )
     .action(async (arg: string, opts: EnsembleCliOptions) => {
       if (opts.seed >= 2 ** 32) throw new ConfigError('--seed must be below 2^32', 'seed');
-      const { params, paramsFile } = resolveModelParams(opts, io);
+      const { params, paramsFile, notes: paramNotes } = resolveModelParams(opts, io);
       const read = readPathway(pathwayArg(arg, io), { splice: opts.splice });
       const { input, notes } = ensembleInput(read.pathway, params);
       const inputs = [...pathwayInputs(read), ...(paramsFile ? [paramsFile] : [])];
@@ -78,7 +78,7 @@ export function ensembleCommand(io: CliIo): Command {
         workers: opts.workers,
         onProgress: progressBar(io, 'members', 20_000),
       });
-      const allNotes = [...read.pathway.provenance.notes, ...notes, ...result.notes];
+      const allNotes = [...read.pathway.provenance.notes, ...notes, ...result.notes, ...paramNotes];
       if (opts.shard) {
         if (!opts.out || !opts.out.toLowerCase().endsWith('.json')) throw new ConfigError('--shard writes a shard file: give --out NAME.json', 'out');
         writeOutput(opts.out, { '.json': () => shardToJson(result.members!) }, { inputs, params, baseline: opts.baseline, notes: allNotes, seed: opts.seed, io });
@@ -110,13 +110,13 @@ export function mergeCommand(io: CliIo): Command {
         return { file, members: shardFromJson(text, file) };
       });
       const result = summarizeEnsemble(mergeShards(shards));
-      const { params } = resolveModelParams(opts, io);
+      const { params, notes: paramNotes } = resolveModelParams(opts, io);
       emitEnsemble(result, 'merged ensemble', {
         out: opts.out,
         chart: opts.chart,
         inputs: files.map((f) => resolve(io.cwd, f)),
         params,
-        notes: result.notes,
+        notes: [...result.notes, ...paramNotes],
         io,
       });
     });

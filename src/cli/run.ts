@@ -49,7 +49,7 @@ export function runCommand(io: CliIo): Command {
         throw new ConfigError('--out takes one pathway; to put several side by side use `warmcast compare`', 'out');
       }
       if (!(opts.rtol > 0 && opts.atol > 0)) throw new ConfigError('--rtol and --atol must be positive', 'rtol');
-      const { params, paramsFile } = resolveModelParams(opts, io);
+      const { params, paramsFile, notes: paramNotes } = resolveModelParams(opts, io);
       const projections: { projection: Projection; files: string[] }[] = [];
       for (const arg of args) {
         const read = readPathway(pathwayArg(arg, io), { splice: opts.splice });
@@ -70,13 +70,13 @@ export function runCommand(io: CliIo): Command {
           inputs,
           params,
           baseline: opts.baseline,
-          notes: [...projection.provenance.notes, ...projection.notes],
+          notes: [...projection.provenance.notes, ...projection.notes, ...paramNotes],
           io,
         });
         for (const w of written) io.stderr(`wrote ${w}\n`);
       }
       for (const { projection } of projections) {
-        printProjectionSummary(projection, { write: report, color: opts.out === '-' ? io.stderrIsTTY : io.stdoutIsTTY, chart: opts.chart });
+        printProjectionSummary(projection, { write: report, color: opts.out === '-' ? io.stderrIsTTY : io.stdoutIsTTY, chart: opts.chart, notes: paramNotes });
       }
     });
   return cmd;

@@ -19,8 +19,11 @@ const TABLE_COLUMNS = [
  * Prints what `warmcast run` shows on a terminal: a heading with the pathway and its splice, a short
  * table every 10 years over the future (or 25 over a long history), the headline lines (warming in
  * 2030, 2050, 2100, peak and its year), a chart, the notes and the caution.
+ *
+ * @param out where to write, whether in colour and with the chart, and the run's own notes (on its
+ *   parameters, say), printed after the pathway's
  */
-export function printProjectionSummary(p: Projection, out: { write: (s: string) => void; color: boolean; chart: boolean }): void {
+export function printProjectionSummary(p: Projection, out: { write: (s: string) => void; color: boolean; chart: boolean; notes?: readonly string[] }): void {
   const { years, columns } = p;
   const first = years[0];
   const last = years[years.length - 1];
@@ -80,7 +83,7 @@ export function printProjectionSummary(p: Projection, out: { write: (s: string) 
         '\n',
     );
   }
-  const notes = [...p.provenance.notes, ...p.notes];
+  const notes = [...p.provenance.notes, ...p.notes, ...(out.notes ?? [])];
   if (notes.length > 0) out.write('\n' + notes.map((n) => `  note: ${n}`).join('\n') + '\n');
   out.write('\n' + standardCautions().map((c) => `  caution: ${c}`).join('\n') + '\n\n');
 }

@@ -69,6 +69,22 @@ describe('warmcast run (in-process)', () => {
   });
 });
 
+describe('warmcast run --params with --ecs', () => {
+  it('calibrate --ecs 3 --tcr 1.8 > params.json, then run --params params.json --ecs 4 runs ECS 4 K, TCR 1.8 K and notes the re-derivation', async () => {
+    const dir = tmp();
+    const io = captureIo();
+    expect(await main(['calibrate', '--ecs', '3', '--tcr', '1.8'], io)).toBe(0);
+    writeFileSync(join(dir, 'params.json'), io.out);
+    const r = captureIo(dir);
+    expect(await main(['run', 'delayed', '--params', 'params.json', '--ecs', '4', '--no-chart', '--out', 'out.json'], r)).toBe(0);
+    expect(r.out).toContain('ECS 4.00 K, TCR 1.80 K');
+    expect(r.out).toMatch(/note: --ecs 4 overrides the ECS target of params\.json, so the feedback_wm2k and exchange_wm2k it gives/);
+    const meta = JSON.parse(readFileSync(join(dir, 'out.json'), 'utf8')).provenance;
+    expect(meta.parameters).toEqual(paramsToJson(calibrate({ ecsK: 4, tcrK: 1.8 })));
+    expect(meta.notes.some((n: string) => n.includes('re-derived for ECS 4 K and TCR 1.8 K'))).toBe(true);
+  });
+});
+
 describe('warmcast calibrate', () => {
   it('prints only the parameter JSON on stdout, which --params reads back to the same model', async () => {
     const io = captureIo();
