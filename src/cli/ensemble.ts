@@ -8,7 +8,7 @@ import { readPathway } from '../io/load-pathway.js';
 import { ensembleInput } from '../projection/index.js';
 import { standardCautions, terminalChart } from '../report/index.js';
 import type { CliIo } from './cli-io.js';
-import { addModelOptions, type ModelOptions, numberListOption, pathwayArg, resolveModelParams, wholeNumberOption, yearRangeOption } from './options.js';
+import { addModelOptions, baselineOption, type ModelOptions, pathwayArg, resolveModelParams, thresholdsOption, wholeNumberOption } from './options.js';
 import { pathwayInputs, tableRenderers, writeOutput } from './output.js';
 import { progressBar } from './progress.js';
 
@@ -49,8 +49,8 @@ export function ensembleCommand(io: CliIo): Command {
     .argument('<pathway>', 'pathway CSV file or bundled name')
     .option('-n, --members <count>', 'ensemble members', wholeNumberOption('--members', 1), 1000)
     .option('--seed <integer>', 'random seed (same seed, same output on any machine and any number of workers)', wholeNumberOption('--seed', 0), 1)
-    .option('--thresholds <list>', 'warming levels in K for exceedance probabilities', numberListOption('--thresholds'), [1.5, 2, 3])
-    .option('--baseline <years>', 'baseline period for warming', yearRangeOption, [1850, 1900])
+    .addOption(thresholdsOption('warming levels in K for exceedance probabilities', [1.5, 2, 3]))
+    .addOption(baselineOption())
     .option('--shard <K/N>', 'run only the K-th of N equal slices of the members and write them as a shard file (.json) for `warmcast merge`', shardOption)
     .option('--workers <count>', 'threads (default: chosen by run size; the output does not depend on it)', wholeNumberOption('--workers', 1))
     .option('-o, --out <file>', 'write the yearly percentiles and probabilities: .csv (+ .meta.json), .json, .md; with --shard a .json shard file')

@@ -2,7 +2,7 @@ import { existsSync, readFileSync } from 'node:fs';
 import { resolve } from 'node:path';
 import { InvalidArgumentError, Option, type Command } from 'commander';
 import { calibrate, type CalibrationTargets } from '../climate/calibrate.js';
-import { PARAM_KEYS, type ClimateParams } from '../climate/params.js';
+import { CALIBRATION_DEFAULTS, PARAM_KEYS, type ClimateParams } from '../climate/params.js';
 import { InputError } from '../errors.js';
 import { parseParams } from '../io/read-params.js';
 import type { CliIo } from './cli-io.js';
@@ -51,6 +51,21 @@ export function numberListOption(name: string) {
   };
 }
 
+/** The default baseline period, inclusive years (the IPCC AR6 reference for global warming levels). */
+export const DEFAULT_BASELINE: readonly [number, number] = [1850, 1900];
+
+/** `--baseline <years>`, its default shown in help as it is typed (`1850-1900`). */
+export function baselineOption(): Option {
+  return new Option('--baseline <years>', 'baseline period for warming and for the thresholds read against it')
+    .argParser(yearRangeOption)
+    .default([...DEFAULT_BASELINE], DEFAULT_BASELINE.join('-'));
+}
+
+/** `--thresholds <list>` with `defaults`, shown in help as they are typed (`1.5,2`). */
+export function thresholdsOption(description: string, defaults: number[]): Option {
+  return new Option('--thresholds <list>', description).argParser(numberListOption('--thresholds')).default(defaults, defaults.join(','));
+}
+
 /** The model options shared by run, compare, ensemble and calibrate. */
 export interface ModelOptions {
   params?: string;
@@ -59,13 +74,24 @@ export interface ModelOptions {
   co2Formula?: 'ar6' | 'log';
 }
 
-/** Adds `--params`, `--ecs`, `--tcr` and `--co2-formula` to a command. */
+/**
+ * Adds `--params`, `--ecs`, `--tcr` and `--co2-formula` to a command. `--co2-formula` shows its
+ * default (ar6) in help, but the option is left unset when the flag is not given, so that a
+ * `co2_formula` in the `--params` file still applies (`calibrate` falls back to ar6 itself).
+ */
 export function addModelOptions(cmd: Command): Command {
   return cmd
     .option('--params <file>', 'model parameters JSON (any subset of the keys `warmcast calibrate` prints)')
     .option('--ecs <kelvin>', 'equilibrium climate sensitivity target, K (default 3.0, IPCC AR6 best estimate)', numberOption('--ecs'))
     .option('--tcr <kelvin>', 'transient climate response target, K (default 1.8, IPCC AR6 best estimate)', numberOption('--tcr'))
-    .addOption(new Option('--co2-formula <name>', 'CO2 forcing: ar6 (Meinshausen et al. 2020 + AR6 adjustment) or log (Myhre et al. 1998)').choices(['ar6', 'log']));
+    .addOption(
+      new Option('--co2-formula <name>', 'CO2 forcing: ar6 (Meinshausen et al. 2020 + AR6 adjustment) or log (Myhre et al. 1998)')
+        .choices(['ar6', 'log'])
+        .default(CALIBRATION_DEFAULTS.co2Formula, CALIBRATION_DEFAULTS.co2Formula),
+    )
+    .hook('preAction', (command) => {
+      if (command.getOptionValueSource('co2Formula') === 'default') command.setOptionValue('co2Formula', undefined);
+    });
 }
 
 /**

@@ -3,7 +3,7 @@ import { ConfigError } from '../errors.js';
 import { readPathway } from '../io/load-pathway.js';
 import { projectPathway, type Projection } from '../projection/index.js';
 import type { CliIo } from './cli-io.js';
-import { addModelOptions, type ModelOptions, numberOption, pathwayArg, resolveModelParams, yearOption, yearRangeOption } from './options.js';
+import { addModelOptions, baselineOption, type ModelOptions, numberOption, pathwayArg, resolveModelParams, yearOption } from './options.js';
 import { clipProjection, pathwayInputs, projectionTable, tableRenderers, writeOutput } from './output.js';
 import { printProjectionSummary } from './summary.js';
 
@@ -31,7 +31,7 @@ export function runCommand(io: CliIo): Command {
     .option('-o, --out <file>', 'write the full yearly trajectory; the extension picks the format: .csv (+ .meta.json), .json, .md; - for stdout as CSV')
     .option('--from <year>', 'first year to report (the model still starts from pre-industrial)', yearOption)
     .option('--to <year>', 'last year to report', yearOption)
-    .option('--baseline <years>', 'baseline period for warming', yearRangeOption, [1850, 1900])
+    .addOption(baselineOption())
     .option('--no-splice', 'do not splice a pathway that starts late onto the bundled history')
     .option('--no-carbon-feedback', 'emission-driven runs: switch off the carbon-climate feedback on uptake')
     .option('--no-chart', 'omit the terminal chart');
