@@ -6,7 +6,7 @@ import { ensembleTable, mergeShards, runEnsemble, shardFromJson, shardToJson, su
 import type { Table } from '../io/index.js';
 import { readPathway } from '../io/load-pathway.js';
 import { ensembleInput } from '../projection/index.js';
-import { standardCautions, terminalChart } from '../report/index.js';
+import { standardCautions, terminalChart, thresholdBaselineNote, thresholdName } from '../report/index.js';
 import type { CliIo } from './cli-io.js';
 import { addModelOptions, baselineOption, type ModelOptions, pathwayArg, resolveModelParams, thresholdsOption, wholeNumberOption } from './options.js';
 import { pathwayInputs, tableRenderers, writeOutput } from './output.js';
@@ -130,6 +130,8 @@ function emitEnsemble(
   ctx: { out?: string; chart: boolean; inputs: string[]; params: ReturnType<typeof resolveModelParams>['params']; notes: string[]; io: CliIo },
 ): void {
   const { io } = ctx;
+  const baselineNote = thresholdBaselineNote(result.config.baseline);
+  const notes = baselineNote ? [...ctx.notes, baselineNote] : ctx.notes;
   const t = ensembleTable(result);
   const table: Table = { columns: t.columns, data: t.columns.map((c) => t.values[c]) };
   const caution = [standardCautions()[0], uncertaintyText(result), standardCautions()[2]].join(' ');
@@ -138,7 +140,7 @@ function emitEnsemble(
       inputs: ctx.inputs,
       params: ctx.params,
       baseline: result.config.baseline,
-      notes: ctx.notes,
+      notes,
       seed: result.config.seed,
       caution,
       io,
@@ -146,7 +148,7 @@ function emitEnsemble(
     for (const w of written) io.stderr(`wrote ${w}\n`);
   }
   const write = ctx.out === '-' ? io.stderr : io.stdout;
-  write(ensembleSummary(result, name));
+  write(ensembleSummary(result, name) + (baselineNote ? `  note: ${baselineNote}\n` : ''));
   if (ctx.chart) {
     const { years, percentiles: p } = result;
     const i0 = Math.max(0, Math.min(1850, years[years.length - 1]) - years[0]);
@@ -193,7 +195,7 @@ function ensembleSummary(r: EnsembleResult, name: string): string {
   for (const x of r.crossings) {
     const by = x.byMilestone.map((m) => `by ${m.year} ${pct(m.probability)}`).join(', ');
     const median = x.medianYear === null ? `fewer than half of the members cross it by ${years[years.length - 1]}` : `median crossing year ${x.medianYear}`;
-    lines.push(`  ${x.thresholdK} K (20-year mean): probability of crossing ${by}; ${median}`);
+    lines.push(`  ${thresholdName(x.thresholdK, c.baseline)} (20-year mean): probability of crossing ${by}; ${median}`);
   }
   return lines.join('\n') + '\n';
 }

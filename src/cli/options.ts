@@ -4,6 +4,7 @@ import { InvalidArgumentError, Option, type Command } from 'commander';
 import { calibrate, type CalibrationTargets } from '../climate/calibrate.js';
 import { CALIBRATION_DEFAULTS, PARAM_KEYS, type ClimateParams } from '../climate/params.js';
 import { InputError } from '../errors.js';
+import { AR6_REFERENCE_PERIOD } from '../report/index.js';
 import { parseParams } from '../io/read-params.js';
 import type { CliIo } from './cli-io.js';
 
@@ -51,8 +52,8 @@ export function numberListOption(name: string) {
   };
 }
 
-/** The default baseline period, inclusive years (the IPCC AR6 reference for global warming levels). */
-export const DEFAULT_BASELINE: readonly [number, number] = [1850, 1900];
+/** The default baseline period, inclusive years: the reference of the IPCC AR6 global warming levels. */
+export const DEFAULT_BASELINE = AR6_REFERENCE_PERIOD;
 
 /** `--baseline <years>`, its default shown in help as it is typed (`1850-1900`). */
 export function baselineOption(): Option {

@@ -2,6 +2,7 @@ import { Command, Option } from 'commander';
 import { ConfigError } from '../errors.js';
 import { readPathway } from '../io/load-pathway.js';
 import { projectPathway, type Projection } from '../projection/index.js';
+import { thresholdBaselineNote } from '../report/index.js';
 import type { CliIo } from './cli-io.js';
 import { addModelOptions, baselineOption, type ModelOptions, numberOption, pathwayArg, resolveModelParams, yearOption } from './options.js';
 import { clipProjection, pathwayInputs, projectionTable, tableRenderers, writeOutput } from './output.js';
@@ -50,6 +51,8 @@ export function runCommand(io: CliIo): Command {
       }
       if (!(opts.rtol > 0 && opts.atol > 0)) throw new ConfigError('--rtol and --atol must be positive', 'rtol');
       const { params, paramsFile, notes: paramNotes } = resolveModelParams(opts, io);
+      const baselineNote = thresholdBaselineNote(opts.baseline);
+      const runNotes = [...paramNotes, ...(baselineNote ? [baselineNote] : [])];
       const projections: { projection: Projection; files: string[] }[] = [];
       for (const arg of args) {
         const read = readPathway(pathwayArg(arg, io), { splice: opts.splice });
@@ -70,13 +73,13 @@ export function runCommand(io: CliIo): Command {
           inputs,
           params,
           baseline: opts.baseline,
-          notes: [...projection.provenance.notes, ...projection.notes, ...paramNotes],
+          notes: [...projection.provenance.notes, ...projection.notes, ...runNotes],
           io,
         });
         for (const w of written) io.stderr(`wrote ${w}\n`);
       }
       for (const { projection } of projections) {
-        printProjectionSummary(projection, { write: report, color: opts.out === '-' ? io.stderrIsTTY : io.stdoutIsTTY, chart: opts.chart, notes: paramNotes });
+        printProjectionSummary(projection, { write: report, color: opts.out === '-' ? io.stderrIsTTY : io.stdoutIsTTY, chart: opts.chart, notes: runNotes });
       }
     });
   return cmd;
