@@ -1,4 +1,4 @@
-/** Reference period of the IPCC AR6 global warming levels (1.5 K, 2 K), inclusive years (AR6 WG1 SPM, Box SPM.1). */
+/** Reference period of the IPCC AR6 global warming levels (1.5 K, 2 K), inclusive years (IPCC AR6 WG1 SPM, from memory). */
 export const AR6_REFERENCE_PERIOD: readonly [number, number] = [1850, 1900];
 
 /** Whether warming relative to `baseline` is on the footing of the AR6 warming levels. */

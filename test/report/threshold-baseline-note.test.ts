@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { AR6_REFERENCE_PERIOD, isAr6Baseline, thresholdBaselineNote } from '../../src/report/threshold-baseline-note.js';
 
 describe('thresholdBaselineNote', () => {
-  it('AR6_REFERENCE_PERIOD is 1850-1900, the reference of the AR6 global warming levels (IPCC AR6 WG1 SPM, Box SPM.1)', () => {
+  it('AR6_REFERENCE_PERIOD is 1850-1900, the reference of the AR6 global warming levels (IPCC AR6 WG1 SPM, from memory)', () => {
     expect(AR6_REFERENCE_PERIOD).toEqual([1850, 1900]);
     expect(isAr6Baseline([1850, 1900])).toBe(true);
     expect(isAr6Baseline([1850, 1899])).toBe(false);
