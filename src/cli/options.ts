@@ -53,7 +53,7 @@ export function numberListOption(name: string) {
 }
 
 /** The default baseline period, inclusive years: the reference of the IPCC AR6 global warming levels. */
-export const DEFAULT_BASELINE = AR6_REFERENCE_PERIOD;
+const DEFAULT_BASELINE = AR6_REFERENCE_PERIOD;
 
 /** `--baseline <years>`, its default shown in help as it is typed (`1850-1900`). */
 export function baselineOption(): Option {
