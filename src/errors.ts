@@ -25,6 +25,8 @@ export interface InputLocation {
   line?: number;
   /** Column name as written in the header (or a 1-based column number when there is no name). */
   column?: string;
+  /** Key of a JSON object (a parameters file), as written. */
+  key?: string;
 }
 
 /** One problem found in an input file. */
@@ -33,24 +35,38 @@ export interface InputProblem extends InputLocation {
   code: string;
   /** What is wrong, in words, without the location (the location is formatted separately). */
   message: string;
-  /** The offending text, when there is one. */
+  /** The offending text, when there is one (shown in double quotes). */
   value?: string;
+  /**
+   * The offending value in the file's own notation, shown as written instead of `value`: JSON
+   * `"3.0"`, `null` or `[1, 2]`, where added quotes would hide whether it was text.
+   */
+  literal?: string;
   /** The expected form, e.g. "a number such as 415.2". */
   expected?: string;
 }
 
-/** Formats one problem as `file:line: column "x": message (got "v"; expected ...)`. */
+/**
+ * Formats one problem as `file:line: column "x": message (got "v"; expected ...)`; a JSON problem
+ * names its `key "x"` instead, and a `literal` is shown as written (`got "3.0"`, `got null`).
+ */
 export function formatInputProblem(p: InputProblem): string {
   let where = p.file;
   if (p.line !== undefined) where += `:${p.line}`;
   let text = `${where}: `;
   if (p.column !== undefined) text += `column "${p.column}": `;
+  if (p.key !== undefined) text += `key "${p.key}": `;
   text += p.message;
   const extras: string[] = [];
-  if (p.value !== undefined) extras.push(`got "${p.value.length > 60 ? p.value.slice(0, 57) + '...' : p.value}"`);
+  if (p.literal !== undefined) extras.push(`got ${shorten(p.literal)}`);
+  else if (p.value !== undefined) extras.push(`got "${shorten(p.value)}"`);
   if (p.expected !== undefined) extras.push(`expected ${p.expected}`);
   if (extras.length > 0) text += ` (${extras.join('; ')})`;
   return text;
+}
+
+function shorten(text: string): string {
+  return text.length > 60 ? text.slice(0, 57) + '...' : text;
 }
 
 /** Bad input file or bad values in it. Holds every problem found, not only the first. Exit code 2. */

@@ -22,7 +22,7 @@ export function calibrateCommand(io: CliIo): Command {
   addModelOptions(cmd)
     .addHelpText('after', '\nExample:\n  warmcast calibrate --ecs 3 --tcr 1.8 > params.json\n  warmcast run delayed --params params.json\n')
     .action((opts: CalibrateOptions) => {
-      const { params } = resolveModelParams(
+      const { params, notes } = resolveModelParams(
         { ...opts },
         io,
         {
@@ -39,6 +39,7 @@ export function calibrateCommand(io: CliIo): Command {
           `gamma = ${params.exchangeWm2K.toFixed(4)} W m-2 K-1 gives TCR ${params.tcrK.toFixed(4)} K (mean of years 61-80, 1 %/yr CO2); ` +
           `time scales ${m.tauFast.toFixed(1)} yr and ${m.tauSlow.toFixed(0)} yr\n`,
       );
+      for (const note of notes) io.stderr(`note: ${note}\n`);
     });
   return cmd;
 }

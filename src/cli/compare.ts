@@ -7,7 +7,7 @@ import { defaultWorkerCount, runEnsemble, startEnsembleThreads, type EnsembleThr
 import { ensembleInput, projectPathway } from '../projection/index.js';
 import { comparisonCharts, comparisonHtml, comparisonJson, comparisonLongTable, comparisonMarkdown, comparisonText, comparisonUncertainty, scopedNotes, standardCautions, type ScopedNote } from '../report/index.js';
 import type { CliIo } from './cli-io.js';
-import { addModelOptions, type ModelOptions, numberListOption, pathwayArg, resolveModelParams, wholeNumberOption, yearRangeOption } from './options.js';
+import { addModelOptions, baselineOption, type ModelOptions, numberListOption, pathwayArg, resolveModelParams, thresholdsOption, wholeNumberOption } from './options.js';
 import { notesAndCautions } from './notes-and-cautions.js';
 import { pathwayInputs, writeOutput } from './output.js';
 import { paramsToJson } from '../climate/params.js';
@@ -31,8 +31,8 @@ export function compareCommand(io: CliIo): Command {
     .argument('<pathway...>', 'pathway CSV files or bundled names; the first is the reference')
     .option('-o, --out <file>', 'write the comparison; the extension picks the format: .md, .csv (+ .meta.json), .json, .svg, .html')
     .option('--years <list>', 'milestone years, e.g. 2030,2040,2050,2100 (default every 10 years over the future)', numberListOption('--years'))
-    .option('--thresholds <list>', 'warming levels in K whose crossing years are reported', numberListOption('--thresholds'), [1.5, 2])
-    .option('--baseline <years>', 'baseline period for warming', yearRangeOption, [1850, 1900])
+    .addOption(thresholdsOption('warming levels in K whose crossing years are reported', [1.5, 2]))
+    .addOption(baselineOption())
     .option('--no-splice', 'do not splice pathways that start late onto the bundled history (each run then starts from zero warming in its first year)')
     .option('--no-carbon-feedback', 'emission-driven runs: switch off the carbon-climate feedback on uptake')
     .option('--members <count>', 'also run a parameter ensemble of this many members per pathway: ranges in tables and shaded in charts, median as the line', wholeNumberOption('--members', 2))

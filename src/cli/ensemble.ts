@@ -6,9 +6,9 @@ import { ensembleTable, mergeShards, runEnsemble, shardFromJson, shardToJson, su
 import type { Table } from '../io/index.js';
 import { readPathway } from '../io/load-pathway.js';
 import { ensembleInput } from '../projection/index.js';
-import { standardCautions, terminalChart } from '../report/index.js';
+import { standardCautions, terminalChart, thresholdBaselineNote, thresholdName } from '../report/index.js';
 import type { CliIo } from './cli-io.js';
-import { addModelOptions, type ModelOptions, numberListOption, pathwayArg, resolveModelParams, wholeNumberOption, yearRangeOption } from './options.js';
+import { addModelOptions, baselineOption, type ModelOptions, pathwayArg, resolveModelParams, thresholdsOption, wholeNumberOption } from './options.js';
 import { pathwayInputs, tableRenderers, writeOutput } from './output.js';
 import { progressBar } from './progress.js';
 
@@ -49,8 +49,8 @@ export function ensembleCommand(io: CliIo): Command {
     .argument('<pathway>', 'pathway CSV file or bundled name')
     .option('-n, --members <count>', 'ensemble members', wholeNumberOption('--members', 1), 1000)
     .option('--seed <integer>', 'random seed (same seed, same output on any machine and any number of workers)', wholeNumberOption('--seed', 0), 1)
-    .option('--thresholds <list>', 'warming levels in K for exceedance probabilities', numberListOption('--thresholds'), [1.5, 2, 3])
-    .option('--baseline <years>', 'baseline period for warming', yearRangeOption, [1850, 1900])
+    .addOption(thresholdsOption('warming levels in K for exceedance probabilities', [1.5, 2, 3]))
+    .addOption(baselineOption())
     .option('--shard <K/N>', 'run only the K-th of N equal slices of the members and write them as a shard file (.json) for `warmcast merge`', shardOption)
     .option('--workers <count>', 'threads (default: chosen by run size; the output does not depend on it)', wholeNumberOption('--workers', 1))
     .option('-o, --out <file>', 'write the yearly percentiles and probabilities: .csv (+ .meta.json), .json, .md; with --shard a .json shard file')
@@ -65,7 +65,7 @@ export function ensembleCommand(io: CliIo): Command {
     )
     .action(async (arg: string, opts: EnsembleCliOptions) => {
       if (opts.seed >= 2 ** 32) throw new ConfigError('--seed must be below 2^32', 'seed');
-      const { params, paramsFile } = resolveModelParams(opts, io);
+      const { params, paramsFile, notes: paramNotes } = resolveModelParams(opts, io);
       const read = readPathway(pathwayArg(arg, io), { splice: opts.splice });
       const { input, notes } = ensembleInput(read.pathway, params);
       const inputs = [...pathwayInputs(read), ...(paramsFile ? [paramsFile] : [])];
@@ -78,7 +78,7 @@ export function ensembleCommand(io: CliIo): Command {
         workers: opts.workers,
         onProgress: progressBar(io, 'members', 20_000),
       });
-      const allNotes = [...read.pathway.provenance.notes, ...notes, ...result.notes];
+      const allNotes = [...read.pathway.provenance.notes, ...notes, ...result.notes, ...paramNotes];
       if (opts.shard) {
         if (!opts.out || !opts.out.toLowerCase().endsWith('.json')) throw new ConfigError('--shard writes a shard file: give --out NAME.json', 'out');
         writeOutput(opts.out, { '.json': () => shardToJson(result.members!) }, { inputs, params, baseline: opts.baseline, notes: allNotes, seed: opts.seed, io });
@@ -110,13 +110,13 @@ export function mergeCommand(io: CliIo): Command {
         return { file, members: shardFromJson(text, file) };
       });
       const result = summarizeEnsemble(mergeShards(shards));
-      const { params } = resolveModelParams(opts, io);
+      const { params, notes: paramNotes } = resolveModelParams(opts, io);
       emitEnsemble(result, 'merged ensemble', {
         out: opts.out,
         chart: opts.chart,
         inputs: files.map((f) => resolve(io.cwd, f)),
         params,
-        notes: result.notes,
+        notes: [...result.notes, ...paramNotes],
         io,
       });
     });
@@ -130,6 +130,8 @@ function emitEnsemble(
   ctx: { out?: string; chart: boolean; inputs: string[]; params: ReturnType<typeof resolveModelParams>['params']; notes: string[]; io: CliIo },
 ): void {
   const { io } = ctx;
+  const baselineNote = thresholdBaselineNote(result.config.baseline);
+  const notes = baselineNote ? [...ctx.notes, baselineNote] : ctx.notes;
   const t = ensembleTable(result);
   const table: Table = { columns: t.columns, data: t.columns.map((c) => t.values[c]) };
   const caution = [standardCautions()[0], uncertaintyText(result), standardCautions()[2]].join(' ');
@@ -138,7 +140,7 @@ function emitEnsemble(
       inputs: ctx.inputs,
       params: ctx.params,
       baseline: result.config.baseline,
-      notes: ctx.notes,
+      notes,
       seed: result.config.seed,
       caution,
       io,
@@ -146,7 +148,7 @@ function emitEnsemble(
     for (const w of written) io.stderr(`wrote ${w}\n`);
   }
   const write = ctx.out === '-' ? io.stderr : io.stdout;
-  write(ensembleSummary(result, name));
+  write(ensembleSummary(result, name) + (baselineNote ? `  note: ${baselineNote}\n` : ''));
   if (ctx.chart) {
     const { years, percentiles: p } = result;
     const i0 = Math.max(0, Math.min(1850, years[years.length - 1]) - years[0]);
@@ -193,7 +195,7 @@ function ensembleSummary(r: EnsembleResult, name: string): string {
   for (const x of r.crossings) {
     const by = x.byMilestone.map((m) => `by ${m.year} ${pct(m.probability)}`).join(', ');
     const median = x.medianYear === null ? `fewer than half of the members cross it by ${years[years.length - 1]}` : `median crossing year ${x.medianYear}`;
-    lines.push(`  ${x.thresholdK} K (20-year mean): probability of crossing ${by}; ${median}`);
+    lines.push(`  ${thresholdName(x.thresholdK, c.baseline)} (20-year mean): probability of crossing ${by}; ${median}`);
   }
   return lines.join('\n') + '\n';
 }

@@ -2,8 +2,9 @@ import { existsSync, readFileSync } from 'node:fs';
 import { resolve } from 'node:path';
 import { InvalidArgumentError, Option, type Command } from 'commander';
 import { calibrate, type CalibrationTargets } from '../climate/calibrate.js';
-import type { ClimateParams } from '../climate/params.js';
+import { CALIBRATION_DEFAULTS, PARAM_KEYS, type ClimateParams } from '../climate/params.js';
 import { InputError } from '../errors.js';
+import { AR6_REFERENCE_PERIOD } from '../report/index.js';
 import { parseParams } from '../io/read-params.js';
 import type { CliIo } from './cli-io.js';
 
@@ -51,6 +52,21 @@ export function numberListOption(name: string) {
   };
 }
 
+/** The default baseline period, inclusive years: the reference of the IPCC AR6 global warming levels. */
+const DEFAULT_BASELINE = AR6_REFERENCE_PERIOD;
+
+/** `--baseline <years>`, its default shown in help as it is typed (`1850-1900`). */
+export function baselineOption(): Option {
+  return new Option('--baseline <years>', 'baseline period for warming and for the thresholds read against it')
+    .argParser(yearRangeOption)
+    .default([...DEFAULT_BASELINE], DEFAULT_BASELINE.join('-'));
+}
+
+/** `--thresholds <list>` with `defaults`, shown in help as they are typed (`1.5,2`). */
+export function thresholdsOption(description: string, defaults: number[]): Option {
+  return new Option('--thresholds <list>', description).argParser(numberListOption('--thresholds')).default(defaults, defaults.join(','));
+}
+
 /** The model options shared by run, compare, ensemble and calibrate. */
 export interface ModelOptions {
   params?: string;
@@ -59,27 +75,45 @@ export interface ModelOptions {
   co2Formula?: 'ar6' | 'log';
 }
 
-/** Adds `--params`, `--ecs`, `--tcr` and `--co2-formula` to a command. */
+/**
+ * Adds `--params`, `--ecs`, `--tcr` and `--co2-formula` to a command. `--co2-formula` shows its
+ * default (ar6) in help, but the option is left unset when the flag is not given, so that a
+ * `co2_formula` in the `--params` file still applies (`calibrate` falls back to ar6 itself).
+ */
 export function addModelOptions(cmd: Command): Command {
   return cmd
     .option('--params <file>', 'model parameters JSON (any subset of the keys `warmcast calibrate` prints)')
     .option('--ecs <kelvin>', 'equilibrium climate sensitivity target, K (default 3.0, IPCC AR6 best estimate)', numberOption('--ecs'))
     .option('--tcr <kelvin>', 'transient climate response target, K (default 1.8, IPCC AR6 best estimate)', numberOption('--tcr'))
-    .addOption(new Option('--co2-formula <name>', 'CO2 forcing: ar6 (Meinshausen et al. 2020 + AR6 adjustment) or log (Myhre et al. 1998)').choices(['ar6', 'log']));
+    .addOption(
+      new Option('--co2-formula <name>', 'CO2 forcing: ar6 (Meinshausen et al. 2020 + AR6 adjustment) or log (Myhre et al. 1998)')
+        .choices(['ar6', 'log'])
+        .default(CALIBRATION_DEFAULTS.co2Formula, CALIBRATION_DEFAULTS.co2Formula),
+    )
+    .hook('preAction', (command) => {
+      if (command.getOptionValueSource('co2Formula') === 'default') command.setOptionValue('co2Formula', undefined);
+    });
 }
 
 /**
- * Resolves the model parameters from a `--params` file and flags (flags win over the file, explicit
- * physical parameters win over ECS/TCR targets) through `calibrate`.
+ * Resolves the model parameters from a `--params` file, flags and `overrides` through `calibrate`.
+ * Flags win over the file, and an explicit physical parameter wins over the ECS/TCR targets
+ * (DESIGN.md). A target flag (`--ecs`, `--tcr`) also re-derives the physical parameters the file's
+ * own calibration derived from its targets: `feedback_wm2k` (from ECS) and `exchange_wm2k` (from TCR
+ * given the feedback), so `--params calibrated.json --ecs 4` keeps the file's TCR rather than its
+ * gamma. Parameters chosen independently of the targets (heat capacities, efficacy, F2x, formula)
+ * stay as the file gives them, and one given in `overrides` wins over everything.
  *
- * @returns the parameters and the params file read, if any (for provenance)
+ * @param overrides explicit physical parameters from other flags (calibrate's heat capacities, ...)
+ * @returns the parameters, the params file read, if any (for provenance), and notes saying which
+ *   parameters were re-derived
  */
 export function resolveModelParams(
   opts: ModelOptions,
   io: CliIo,
   overrides: CalibrationTargets = {},
-): { params: ClimateParams; paramsFile?: string } {
-  let targets: CalibrationTargets = {};
+): { params: ClimateParams; paramsFile?: string; notes: string[] } {
+  let fromFile: CalibrationTargets = {};
   let paramsFile: string | undefined;
   if (opts.params !== undefined) {
     paramsFile = resolve(io.cwd, opts.params);
@@ -91,17 +125,37 @@ export function resolveModelParams(
       const why = code === 'ENOENT' ? 'does not exist' : code === 'EISDIR' ? 'is a directory, not a file' : `cannot be read (${code})`;
       throw new InputError([{ file: opts.params, code: 'input.unreadable', message: `parameters file ${why}`, expected: 'a JSON file of model parameters' }]);
     }
-    targets = parseParams(text, opts.params);
+    fromFile = parseParams(text, opts.params);
   }
-  for (const [k, v] of Object.entries(overrides)) if (v !== undefined) (targets as Record<string, unknown>)[k] = v;
+  const explicit = Object.fromEntries(Object.entries(overrides).filter(([, v]) => v !== undefined)) as CalibrationTargets;
+  const targets: CalibrationTargets = { ...fromFile, ...explicit };
   if (opts.ecs !== undefined) targets.ecsK = opts.ecs;
   if (opts.tcr !== undefined) targets.tcrK = opts.tcr;
   if (opts.co2Formula !== undefined) targets.co2Formula = opts.co2Formula;
-  // A flag target should win over physical values from a file that would otherwise override it.
-  if (opts.ecs !== undefined) delete targets.feedbackWm2K;
-  if (opts.tcr !== undefined) delete targets.exchangeWm2K;
-  return { params: calibrate(targets), paramsFile };
+
+  // Lambda follows from ECS, gamma from TCR given lambda: a new ECS moves both, a new TCR only gamma.
+  const derived: (keyof CalibrationTargets)[] = opts.ecs !== undefined ? ['feedbackWm2K', 'exchangeWm2K'] : opts.tcr !== undefined ? ['exchangeWm2K'] : [];
+  const rederived = derived.filter((k) => fromFile[k] !== undefined && explicit[k] === undefined);
+  // A file that fixes gamma without stating tcr_k still implies a TCR: keep that one.
+  if (rederived.includes('exchangeWm2K') && targets.tcrK === undefined) targets.tcrK = calibrate(fromFile).tcrK;
+  for (const k of rederived) delete targets[k];
+  const params = calibrate(targets);
+
+  const notes: string[] = [];
+  if (rederived.length > 0) {
+    const flags = [opts.ecs !== undefined ? `--ecs ${opts.ecs}` : '', opts.tcr !== undefined ? `--tcr ${opts.tcr}` : ''].filter(Boolean).join(' and ');
+    const which = opts.ecs !== undefined && opts.tcr !== undefined ? 'ECS and TCR targets' : opts.ecs !== undefined ? 'ECS target' : 'TCR target';
+    notes.push(
+      `${flags} overrides the ${which} of ${opts.params}, so the ${rederived.map((k) => JSON_KEY[k]).join(' and ')} it gives ` +
+        `(derived from its own targets) ${rederived.length > 1 ? 'were' : 'was'} re-derived for ECS ${+params.ecsK.toFixed(4)} K and ` +
+        `TCR ${+params.tcrK.toFixed(4)} K; the file's other parameters are kept`,
+    );
+  }
+  return { params, paramsFile, notes };
 }
+
+/** JSON key of each calibration input, for notes. */
+const JSON_KEY = Object.fromEntries(Object.entries(PARAM_KEYS).map(([json, field]) => [field, json])) as Record<keyof ClimateParams, string>;
 
 /**
  * A pathway argument as the io layer should look it up: a path relative to the command's working

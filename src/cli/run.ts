@@ -2,8 +2,9 @@ import { Command, Option } from 'commander';
 import { ConfigError } from '../errors.js';
 import { readPathway } from '../io/load-pathway.js';
 import { projectPathway, type Projection } from '../projection/index.js';
+import { thresholdBaselineNote } from '../report/index.js';
 import type { CliIo } from './cli-io.js';
-import { addModelOptions, type ModelOptions, numberOption, pathwayArg, resolveModelParams, yearOption, yearRangeOption } from './options.js';
+import { addModelOptions, baselineOption, type ModelOptions, numberOption, pathwayArg, resolveModelParams, yearOption } from './options.js';
 import { clipProjection, pathwayInputs, projectionTable, tableRenderers, writeOutput } from './output.js';
 import { printProjectionSummary } from './summary.js';
 
@@ -31,7 +32,7 @@ export function runCommand(io: CliIo): Command {
     .option('-o, --out <file>', 'write the full yearly trajectory; the extension picks the format: .csv (+ .meta.json), .json, .md; - for stdout as CSV')
     .option('--from <year>', 'first year to report (the model still starts from pre-industrial)', yearOption)
     .option('--to <year>', 'last year to report', yearOption)
-    .option('--baseline <years>', 'baseline period for warming', yearRangeOption, [1850, 1900])
+    .addOption(baselineOption())
     .option('--no-splice', 'do not splice a pathway that starts late onto the bundled history (the run then starts from zero warming in its first year, not in equilibrium with that year\'s forcing)')
     .option('--no-carbon-feedback', 'emission-driven runs: switch off the carbon-climate feedback on uptake')
     .option('--no-chart', 'omit the terminal chart');
@@ -49,7 +50,9 @@ export function runCommand(io: CliIo): Command {
         throw new ConfigError('--out takes one pathway; to put several side by side use `warmcast compare`', 'out');
       }
       if (!(opts.rtol > 0 && opts.atol > 0)) throw new ConfigError('--rtol and --atol must be positive', 'rtol');
-      const { params, paramsFile } = resolveModelParams(opts, io);
+      const { params, paramsFile, notes: paramNotes } = resolveModelParams(opts, io);
+      const baselineNote = thresholdBaselineNote(opts.baseline);
+      const runNotes = [...paramNotes, ...(baselineNote ? [baselineNote] : [])];
       const projections: { projection: Projection; files: string[] }[] = [];
       for (const arg of args) {
         const read = readPathway(pathwayArg(arg, io), { splice: opts.splice });
@@ -70,13 +73,13 @@ export function runCommand(io: CliIo): Command {
           inputs,
           params,
           baseline: opts.baseline,
-          notes: [...projection.provenance.notes, ...projection.notes],
+          notes: [...projection.provenance.notes, ...projection.notes, ...runNotes],
           io,
         });
         for (const w of written) io.stderr(`wrote ${w}\n`);
       }
       for (const { projection } of projections) {
-        printProjectionSummary(projection, { write: report, color: opts.out === '-' ? io.stderrIsTTY : io.stdoutIsTTY, chart: opts.chart, from: opts.from });
+        printProjectionSummary(projection, { write: report, color: opts.out === '-' ? io.stderrIsTTY : io.stdoutIsTTY, chart: opts.chart, from: opts.from, notes: runNotes });
       }
     });
   return cmd;

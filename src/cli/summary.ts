@@ -1,6 +1,6 @@
 import { crossingPeriod, peak, valueAtYear } from '../metrics/index.js';
 import type { Projection } from '../projection/index.js';
-import { plainTable, terminalChart } from '../report/index.js';
+import { isAr6Baseline, plainTable, terminalChart, thresholdName } from '../report/index.js';
 import { standardCautions } from '../report/standard-cautions.js';
 
 /** Years whose warming the summary always states, where the run covers them. */
@@ -20,10 +20,13 @@ const TABLE_COLUMNS = [
  * table every 10 years over the future (or 25 over a long history) or, when the report was asked to
  * start at a year (`from`, the `--from` the projection was clipped to), from its first year, the
  * headline lines (warming in 2030, 2050, 2100, peak and its year), a chart, the notes and the caution.
+ *
+ * @param out where to write, whether in colour and with the chart, the `--from` year, and the run's
+ *   own notes (on its parameters or its baseline, say), printed after the pathway's
  */
 export function printProjectionSummary(
   p: Projection,
-  out: { write: (s: string) => void; color: boolean; chart: boolean; from?: number },
+  out: { write: (s: string) => void; color: boolean; chart: boolean; from?: number; notes?: readonly string[] },
 ): void {
   const { years, columns } = p;
   const first = years[0];
@@ -60,12 +63,15 @@ export function printProjectionSummary(
   if (headline.length > 0) lines.push(`  warming in ${headline.join(', ')}`);
   const top = peak(years, w);
   lines.push(`  peak warming ${top.value.toFixed(2)} K in ${top.year}${top.year === last ? ' (the last year: still rising)' : ''}`);
+  // On another baseline the threshold is named with it, and the rule is not called AR6's levels.
+  const rule = isAr6Baseline(p.baseline) ? 'the IPCC AR6 20-year-mean rule' : '20-year-mean rule';
   for (const level of [1.5, 2]) {
     const c = crossingPeriod(years, w, level);
+    const name = thresholdName(level, p.baseline);
     lines.push(
       c === undefined
-        ? `  ${level} K: 20-year mean not above it by ${last}`
-        : `  ${level} K: first reached in ${c.year}${c.atStart ? ' or earlier' : ''} (mean of ${c.firstYear}-${c.lastYear} is ${c.mean.toFixed(2)} K; the IPCC AR6 20-year-mean rule)`,
+        ? `  ${name}: not crossed by ${last}`
+        : `  ${name}: first reached in ${c.year}${c.atStart ? ' or earlier' : ''} (mean of ${c.firstYear}-${c.lastYear} is ${c.mean.toFixed(2)} K; ${rule})`,
     );
   }
   out.write(lines.join('\n') + '\n');
@@ -85,7 +91,7 @@ export function printProjectionSummary(
         '\n',
     );
   }
-  const notes = [...p.provenance.notes, ...p.notes];
+  const notes = [...p.provenance.notes, ...p.notes, ...(out.notes ?? [])];
   if (notes.length > 0) out.write('\n' + notes.map((n) => `  note: ${n}`).join('\n') + '\n');
   out.write('\n' + standardCautions().map((c) => `  caution: ${c}`).join('\n') + '\n\n');
 }

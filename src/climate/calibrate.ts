@@ -1,4 +1,4 @@
-import { ConfigError } from '../errors.js';
+import { ConfigError, NumericalError } from '../errors.js';
 import { co2Forcing, forcingOfDoubling } from '../forcing/co2.js';
 import { PREINDUSTRIAL } from '../forcing/constants.js';
 import { findRoot } from '../numerics/find-root.js';
@@ -50,17 +50,27 @@ const POSITIVE_KEYS = ['ecsK', 'tcrK', 'upperHeatCapacity', 'deepHeatCapacity', 
 const GAMMA_RANGE = [1e-6, 50] as const;
 
 /**
+ * Largest difference, K, between a sensitivity target and what the calibrated model achieves that
+ * still counts as rounding (the root finder stops at 1e-12 W m-2 K-1 in gamma, a few 1e-13 K in
+ * TCR); anything larger is a failed calibration. Common practice, no source.
+ */
+const TARGET_TOLERANCE_K = 1e-9;
+
+/**
  * Derives a full parameter set from ECS and TCR: lambda = F2x / ECS (the equilibrium of the two-box
  * model is T = F / lambda), then gamma solved by Brent's method so that the model's own 1 %/yr CO2
- * run gives the TCR target. A physical parameter given explicitly (`feedbackWm2K`,
- * `exchangeWm2K`) wins over the targets; the returned `ecsK` and `tcrK` are then the values the
- * resolved model actually has (F2x / lambda and its 1 %/yr-run TCR).
+ * run gives the TCR target. The returned `ecsK` and `tcrK` are the targets exactly as given (the
+ * model is checked to reach them within 1e-9 K). A physical parameter given explicitly
+ * (`feedbackWm2K`, `exchangeWm2K`) wins over the targets; the returned `ecsK` and `tcrK` are then
+ * the values the resolved model actually has (F2x / lambda and its 1 %/yr-run TCR), or the targets
+ * where it meets them within 1e-9 K (a calibrated parameter file read back).
  *
  * @param targets ECS, TCR, the fixed choices (heat capacities, efficacy, F2x, formula) and any
  *   explicit physical parameters
  * @returns the resolved parameters
  * @throws ConfigError when a value is unphysical (non-positive heat capacity, TCR >= ECS, ...) or
  *   no exchange coefficient in (0, 50] W m-2 K-1 reaches the TCR with these heat capacities
+ * @throws NumericalError when the solved model misses a target by more than 1e-9 K
  * @example calibrate({ ecsK: 3, tcrK: 1.8 }).exchangeWm2K // ≈ 1.018
  */
 export function calibrate(targets: CalibrationTargets = {}): ClimateParams {
@@ -91,8 +101,11 @@ export function calibrate(targets: CalibrationTargets = {}): ClimateParams {
     const p = withExchange(exchangeWm2K);
     return { ...p, ecsK: p.forcing2xWm2 / p.feedbackWm2K, tcrK: transientResponse(p) };
   };
-  if (targets.exchangeWm2K !== undefined) return resolved(targets.exchangeWm2K);
-
+  if (targets.exchangeWm2K !== undefined) {
+    // Explicit physics wins; targets it meets to rounding (a calibrated file read back) stay as written.
+    const p = resolved(targets.exchangeWm2K);
+    return { ...p, ecsK: nearTarget(p.ecsK, targets.ecsK), tcrK: nearTarget(p.tcrK, targets.tcrK) };
+  }
   const ecsK = base.forcing2xWm2 / feedbackWm2K;
   if (!(base.tcrK < ecsK)) {
     throw new ConfigError(`tcr_k (${base.tcrK} K) must be below ecs_k (${ecsK} K): the transient response cannot exceed the equilibrium`, 'tcr_k');
@@ -113,7 +126,39 @@ export function calibrate(targets: CalibrationTargets = {}): ClimateParams {
       'tcr_k',
     );
   }
-  return resolved(findRoot(tcrAt, gammaMin, gammaMax, 1e-12));
+  const achieved = resolved(findRoot(tcrAt, gammaMin, gammaMax, 1e-12));
+  // TCR, and ECS unless an explicit feedback made it a result, are targets the model was solved for:
+  // report them as asked (no 1.8000000000000604), after checking the model reaches them.
+  return {
+    ...achieved,
+    ecsK: targets.feedbackWm2K === undefined ? metTarget('ecs_k', achieved.ecsK, base.ecsK) : nearTarget(achieved.ecsK, targets.ecsK),
+    tcrK: metTarget('tcr_k', achieved.tcrK, base.tcrK),
+  };
+}
+
+/**
+ * A target the calibration solved for, once the model is checked to reach it.
+ *
+ * @param name JSON key, for the message
+ * @param achievedK what the calibrated model gives, K
+ * @param targetK what was asked, K
+ * @returns `targetK` exactly
+ * @throws NumericalError when the model misses it by more than {@link TARGET_TOLERANCE_K}
+ */
+function metTarget(name: string, achievedK: number, targetK: number): number {
+  if (!(Math.abs(achievedK - targetK) <= TARGET_TOLERANCE_K)) {
+    throw new NumericalError(
+      `calibration failed: the solved model gives ${name} ${achievedK} K, not the target ${targetK} K ` +
+        `(more than ${TARGET_TOLERANCE_K} K off); please report this with the parameters used`,
+      'numerical.calibration',
+    );
+  }
+  return targetK;
+}
+
+/** The target when the model meets it to rounding, else what the model gives (explicit physics won). */
+function nearTarget(achievedK: number, targetK: number | undefined): number {
+  return targetK !== undefined && Math.abs(achievedK - targetK) <= TARGET_TOLERANCE_K ? targetK : achievedK;
 }
 
 /** JSON key of each parameter, for messages that name what the user wrote. */

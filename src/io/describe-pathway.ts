@@ -25,7 +25,7 @@ export function describePathway(parsed: ParsedPathway, pathway: Pathway): string
   lines.push(`rows read: ${n} (lines ${parsed.rowLines[0]}-${parsed.rowLines[n - 1]})`);
   lines.push(parsed.timeColumn === 'year'
     ? 'time column: year'
-    : 'time column: date (ISO 8601; a mid-year date labels its whole year)');
+    : 'time column: date (ISO 8601; 1 or 2 July labels its whole year)');
   lines.push(`years in file: ${formatYear(t[0])} to ${formatYear(t[n - 1])}`);
   lines.push(isAnnualGrid(t)
     ? 'steps: 1-year steps on whole years (no interpolation)'

@@ -11,15 +11,16 @@ const REDUCED_PRECISION = /^[+-]?\d{4}(-?\d{2})?$|^\d{4}-?W\d{2}$/i;
  * decimal year label used on warmcast's annual grid.
  *
  * Convention: a pathway value is an annual mean, and a date says where that mean is centred. A
- * `year` column's whole year Y labels the mean over calendar year Y, whose centre is mid-year. So the
- * date's instant is placed in its calendar year as the fraction
- * f = (instant - 1 January 00:00 UTC) / (length of that year), and the label is Y + f - 0.5.
- * A date without a time of day stands for its own centre, 12:00 UTC.
- * - 2030-07-02 (common year: 182.5 of 365 days have passed at its noon, f = 0.5) gives exactly 2030;
- *   dates of mid-year annual means therefore land on the whole-year labels.
- * - 2032-07-02 (leap year) gives 2032 + 183.5/366 - 0.5 = 2032.00137, half a day past the label;
- *   the annual interpolation tolerates one day (see toAnnual).
- * - 2030-01-01 gives 2029 + 0.5/365 + 0.5 = 2029.50137: a mean centred on New Year.
+ * `year` column's whole year Y labels the mean over calendar year Y, whose centre is mid-year.
+ * - A date on 1 or 2 July of year Y, at any time of day, means exactly Y. The middle of the year is
+ *   noon on 2 July in a common year and midnight between 1 and 2 July in a leap year (183 of 366
+ *   days), so both days name it however the leap day falls, and a mid-year file lands on its whole
+ *   years with no interpolation.
+ * - Any other date is placed in its calendar year as the fraction
+ *   f = (instant - 1 January 00:00 UTC) / (length of that year), and the label is Y + f - 0.5.
+ *   A date without a time of day stands for its own centre, 12:00 UTC.
+ *   2030-01-01 gives 2029 + 0.5/365 + 0.5 = 2029.50137: a mean centred on New Year;
+ *   2030-07-03 gives 2030 + 1/365 = 2030.00274.
  *
  * A year, month or week alone (`2030`, `2030-07`, `2030-W27`) is refused: it names a span, not the
  * centre of one (write a `year` column instead).
@@ -27,7 +28,8 @@ const REDUCED_PRECISION = /^[+-]?\d{4}(-?\d{2})?$|^\d{4}-?W\d{2}$/i;
  * @param text - an ISO 8601 calendar, ordinal or week date, optionally with a time and offset
  * @returns `{ ok: true, year }` with the decimal year label, or `{ ok: false, reason }`
  * @example
- * isoDateToYear('2030-07-02') // { ok: true, year: 2030 }
+ * isoDateToYear('2030-07-01') // { ok: true, year: 2030 }
+ * isoDateToYear('2032-07-02') // { ok: true, year: 2032 }
  * isoDateToYear('2030-02-30') // { ok: false, reason: 'you specified 30 (of type number) as a day, which is invalid' }
  */
 export function isoDateToYear(text: string): IsoDateYear {
@@ -35,11 +37,13 @@ export function isoDateToYear(text: string): IsoDateYear {
   if (REDUCED_PRECISION.test(trimmed)) {
     return { ok: false, reason: 'a year, month or week alone is not a date' };
   }
-  let instant = DateTime.fromISO(trimmed, { zone: 'utc' });
-  if (!instant.isValid) {
-    return { ok: false, reason: instant.invalidExplanation ?? instant.invalidReason ?? 'not an ISO 8601 date' };
+  // The calendar day as written (in its own offset), for the mid-year rule.
+  const written = DateTime.fromISO(trimmed, { zone: 'utc', setZone: true });
+  if (!written.isValid) {
+    return { ok: false, reason: written.invalidExplanation ?? written.invalidReason ?? 'not an ISO 8601 date' };
   }
-  if (!/t/i.test(trimmed)) instant = instant.plus({ hours: 12 });
+  if (written.month === 7 && (written.day === 1 || written.day === 2)) return { ok: true, year: written.year };
+  const instant = (/t/i.test(trimmed) ? written : written.plus({ hours: 12 })).toUTC();
   const y = instant.year;
   const start = DateTime.utc(y, 1, 1).toMillis();
   const end = DateTime.utc(y + 1, 1, 1).toMillis();

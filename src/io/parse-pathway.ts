@@ -342,7 +342,7 @@ function readHeader(cells: string[], line: number, report: Report): CellRole[] {
       code: 'input.no-time-column',
       line,
       message: 'must have a time column',
-      expected: 'a column named "year" (whole or decimal years) or "date" (ISO 8601 dates such as 2030-07-02)',
+      expected: 'a column named "year" (whole or decimal years) or "date" (ISO 8601 dates such as 2030-07-01; 1 or 2 July means that whole year)',
     });
   } else if (timeRoles.length > 1) {
     report({
@@ -454,16 +454,16 @@ function readTime(
     return read.value;
   }
   if (cell === '') {
-    report({ ...at, code: 'input.empty-cell', message: 'must not be empty', expected: 'an ISO 8601 date such as 2030-07-02 in every row' });
+    report({ ...at, code: 'input.empty-cell', message: 'must not be empty', expected: 'an ISO 8601 date such as 2030-07-01 in every row' });
     return NaN;
   }
   const read = isoDateToYear(cell);
   if (!read.ok) {
-    report({ ...at, code: 'input.bad-date', message: `must be an ISO 8601 date: ${read.reason}`, expected: 'a full date such as 2030-07-02' });
+    report({ ...at, code: 'input.bad-date', message: `must be an ISO 8601 date: ${read.reason}`, expected: 'a full date such as 2030-07-01 (1 or 2 July means that whole year)' });
     return NaN;
   }
   if (!(read.year >= YEAR_MIN && read.year <= YEAR_MAX)) {
-    report({ ...at, code: 'input.bad-year', message: `must be a date in the years ${YEAR_MIN} to ${YEAR_MAX}`, expected: 'a full date such as 2030-07-02' });
+    report({ ...at, code: 'input.bad-year', message: `must be a date in the years ${YEAR_MIN} to ${YEAR_MAX}`, expected: 'a full date such as 2030-07-01 (1 or 2 July means that whole year)' });
     return NaN;
   }
   return read.year;

@@ -38,7 +38,7 @@ export function parseParams(text: string, file: string): CalibrationTargets {
     if (!(key in PARAM_KEYS)) {
       const near = nearestName(key, Object.keys(PARAM_KEYS));
       problems.push({
-        file, line, column: key, code: 'input.unknown-key',
+        file, line, key, code: 'input.unknown-key',
         message: `is not a parameter${near ? `; did you mean "${near}"?` : ''}`,
         expected: `one of ${Object.keys(PARAM_KEYS).join(', ')}`,
       });
@@ -47,11 +47,11 @@ export function parseParams(text: string, file: string): CalibrationTargets {
     const field = PARAM_KEYS[key as keyof ClimateParamsJson];
     if (key === 'co2_formula') {
       if (typeof value === 'string' && (FORMULAS as readonly string[]).includes(value)) out.co2Formula = value as (typeof FORMULAS)[number];
-      else problems.push({ file, line, column: key, code: 'input.bad-value', message: 'must be "ar6" or "log"', value: JSON.stringify(value), expected: '"ar6" (Meinshausen et al. 2020 with AR6 adjustment) or "log" (Myhre et al. 1998)' });
+      else problems.push({ file, line, key, code: 'input.bad-value', message: 'must be "ar6" or "log"', literal: JSON.stringify(value), expected: '"ar6" (Meinshausen et al. 2020 with AR6 adjustment) or "log" (Myhre et al. 1998)' });
     } else if (typeof value === 'number' && Number.isFinite(value)) {
       (out as Record<string, number>)[field] = value;
     } else {
-      problems.push({ file, line, column: key, code: 'input.bad-type', message: 'must be a number', value: JSON.stringify(value), expected: 'a number such as 3.0' });
+      problems.push({ file, line, key, code: 'input.bad-type', message: 'must be a number', literal: JSON.stringify(value), expected: 'a number such as 3.0' });
     }
   }
   if (problems.length > 0) throw new InputError(problems);

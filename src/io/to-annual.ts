@@ -5,8 +5,9 @@ import { describeTimeSteps, isAnnualGrid } from './time-steps.js';
 
 /**
  * How far (in years) a first or last row may sit inside a whole year and still give that year its
- * value: one day. Dates of mid-year means in leap years land half a day past the whole year
- * (see isoDateToYear); without this slack such a file would lose its first year.
+ * value: one day. A date a day off mid-year (30 June, 3 July; 1 and 2 July are exactly the whole
+ * year, see isoDateToYear) lands up to a day from the whole year; without this slack such a file
+ * would lose its first year.
  */
 const END_TOLERANCE_YEARS = 1 / 365;
 

@@ -21,6 +21,8 @@ export { plainTable } from './plain-table.js';
 export { provenanceEntries } from './provenance-entries.js';
 export { standardCautions } from './standard-cautions.js';
 export { svgChart } from './svg-chart.js';
+export { AR6_REFERENCE_PERIOD, isAr6Baseline, thresholdBaselineNote } from './threshold-baseline-note.js';
+export { thresholdName } from './threshold-name.js';
 export type { ChartBand, SvgChartOptions } from './svg-chart.js';
 export { terminalChart } from './terminal-chart.js';
 export type { ChartLine, TerminalChartOptions } from './terminal-chart.js';

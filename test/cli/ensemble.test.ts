@@ -40,6 +40,20 @@ describe('warmcast ensemble and merge', () => {
     expect(readFileSync(join(dir, 'm.csv')).equals(a)).toBe(true);
   });
 
+  it('ensemble --baseline 1995-2014 names thresholds "above the 1995-2014 mean" and carries the baseline note on the terminal and in the files', async () => {
+    const dir = tmp();
+    const io = captureIo();
+    expect(await main(['ensemble', 'delayed', '--members', '50', '--baseline', '1995-2014', '--no-chart', '--out', join(dir, 'e.csv')], io)).toBe(0);
+    expect(io.out).toMatch(/^  1\.5 K above the 1995-2014 mean \(20-year mean\): probability of crossing/m);
+    expect(io.out).not.toMatch(/^  1\.5 K \(20-year mean\)/m);
+    const note = 'IPCC AR6 global warming levels (1.5 K, 2 K) are relative to 1850-1900; with the 1995-2014 baseline';
+    expect(io.out).toContain(`note: ${note}`);
+    expect(JSON.parse(readFileSync(join(dir, 'e.meta.json'), 'utf8')).notes.join('\n')).toContain(note);
+    const plain = captureIo();
+    expect(await main(['ensemble', 'delayed', '--members', '50', '--no-chart'], plain)).toBe(0);
+    expect(plain.out).not.toContain('global warming levels');
+  });
+
   it('refuses to merge an incomplete set of shards with exit 2', async () => {
     const dir = tmp();
     expect(await main(['ensemble', 'swift', '--members', '40', '--seed', '3', '--shard', '1/2', '--out', join(dir, 's1.json')], captureIo())).toBe(0);

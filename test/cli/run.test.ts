@@ -65,7 +65,63 @@ describe('warmcast run (in-process)', () => {
     writeFileSync(bad, '{\n  "ecs_k": 3,\n  "ecs": 4\n}\n');
     const io2 = captureIo();
     expect(await main(['run', 'swift', '--params', bad], io2)).toBe(2);
-    expect(io2.err).toMatch(/bad\.json:3: column "ecs": is not a parameter; did you mean "ecs_k"\?/);
+    expect(io2.err).toMatch(/bad\.json:3: key "ecs": is not a parameter; did you mean "ecs_k"\?/);
+  });
+});
+
+describe('warmcast run thresholds and the baseline', () => {
+  const NOTE = 'IPCC AR6 global warming levels (1.5 K, 2 K) are relative to 1850-1900; with the 1995-2014 baseline the thresholds here are read against the 1995-2014 mean';
+
+  it('run --baseline 1995-2014 names each threshold "above the 1995-2014 mean", not the AR6 rule, and prints the baseline note', async () => {
+    const io = captureIo();
+    expect(await main(['run', 'delayed', '--baseline', '1995-2014', '--no-chart'], io)).toBe(0);
+    expect(io.out).toMatch(/^  1\.5 K above the 1995-2014 mean: first reached in \d{4} \(mean of \d{4}-\d{4} is 1\.5\d K; 20-year-mean rule\)$/m);
+    expect(io.out).toMatch(/^  2 K above the 1995-2014 mean: /m);
+    expect(io.out).not.toMatch(/^  (1\.5|2) K:/m);
+    expect(io.out).not.toContain('IPCC AR6 20-year-mean rule');
+    expect(io.out).toContain(`note: ${NOTE}`);
+  });
+
+  it('run --baseline 1995-2014 --out writes the baseline note into .md, .json and the .csv sidecar', async () => {
+    const dir = tmp();
+    for (const ext of ['md', 'json', 'csv']) {
+      expect(await main(['run', 'steady', '--baseline', '1995-2014', '--no-chart', '--out', join(dir, `out.${ext}`)], captureIo())).toBe(0);
+    }
+    expect(readFileSync(join(dir, 'out.md'), 'utf8')).toContain(NOTE);
+    expect(JSON.parse(readFileSync(join(dir, 'out.json'), 'utf8')).provenance.notes.join('\n')).toContain(NOTE);
+    expect(JSON.parse(readFileSync(join(dir, 'out.meta.json'), 'utf8')).notes.join('\n')).toContain(NOTE);
+  });
+
+  it('run on the default 1850-1900 baseline names thresholds as AR6 levels ("1.5 K: ...; the IPCC AR6 20-year-mean rule") with no baseline note', async () => {
+    const io = captureIo();
+    expect(await main(['run', 'delayed', '--no-chart'], io)).toBe(0);
+    expect(io.out).toMatch(/^  1\.5 K: first reached in \d{4} .*; the IPCC AR6 20-year-mean rule\)$/m);
+    expect(io.out).not.toContain('global warming levels');
+  });
+
+  it('run says "not crossed by END" (the README\'s wording) for a threshold the run never crosses', async () => {
+    const io = captureIo();
+    expect(await main(['run', 'delayed', '--to', '2040', '--no-chart'], io)).toBe(0);
+    expect(io.out).toMatch(/^  2 K: not crossed by 2040$/m);
+    const other = captureIo();
+    expect(await main(['run', 'delayed', '--to', '2040', '--baseline', '1995-2014', '--no-chart'], other)).toBe(0);
+    expect(other.out).toMatch(/^  2 K above the 1995-2014 mean: not crossed by 2040$/m);
+  });
+});
+
+describe('warmcast run --params with --ecs', () => {
+  it('calibrate --ecs 3 --tcr 1.8 > params.json, then run --params params.json --ecs 4 runs ECS 4 K, TCR 1.8 K and notes the re-derivation', async () => {
+    const dir = tmp();
+    const io = captureIo();
+    expect(await main(['calibrate', '--ecs', '3', '--tcr', '1.8'], io)).toBe(0);
+    writeFileSync(join(dir, 'params.json'), io.out);
+    const r = captureIo(dir);
+    expect(await main(['run', 'delayed', '--params', 'params.json', '--ecs', '4', '--no-chart', '--out', 'out.json'], r)).toBe(0);
+    expect(r.out).toContain('ECS 4.00 K, TCR 1.80 K');
+    expect(r.out).toMatch(/note: --ecs 4 overrides the ECS target of params\.json, so the feedback_wm2k and exchange_wm2k it gives/);
+    const meta = JSON.parse(readFileSync(join(dir, 'out.json'), 'utf8')).provenance;
+    expect(meta.parameters).toEqual(paramsToJson(calibrate({ ecsK: 4, tcrK: 1.8 })));
+    expect(meta.notes.some((n: string) => n.includes('re-derived for ECS 4 K and TCR 1.8 K'))).toBe(true);
   });
 });
 

@@ -1,4 +1,4 @@
-import { describe, expect, it } from 'vitest';
+import { describe, expect, it, vi } from 'vitest';
 import { calibrate, transientResponse } from '../../src/climate/index.js';
 import { ConfigError } from '../../src/errors.js';
 import { expectClose } from '../asserts.js';
@@ -34,5 +34,38 @@ describe('calibrate', () => {
     expect(() => calibrate({ ecsK: 2, tcrK: 2.5 })).toThrow(ConfigError);
     expect(() => calibrate({ upperHeatCapacity: -1 })).toThrow(/upper_heat_capacity must be a positive number/);
     expect(() => calibrate({ ecsK: 3, tcrK: 2.99 })).toThrow(/out of reach/);
+  });
+
+  it('calibrate returns ECS and TCR exactly as asked (1.8, not 1.8000000000000604), the model reaching them within 1e-9 K', () => {
+    for (const [ecs, tcr] of [[3, 1.8], [2.5, 1.4], [4, 2.2], [3.3, 1.87]]) {
+      const p = calibrate({ ecsK: ecs, tcrK: tcr });
+      expect(p.ecsK).toBe(ecs);
+      expect(p.tcrK).toBe(tcr);
+      expectClose(transientResponse(p), tcr, 1e-9, 'achieved TCR');
+    }
+  });
+
+  it('calibrate of a calibrated set read back (explicit feedback and exchange) keeps the targets as written', () => {
+    const p = calibrate(calibrate({ ecsK: 3, tcrK: 1.8 }));
+    expect(p.ecsK).toBe(3);
+    expect(p.tcrK).toBe(1.8);
+  });
+
+  it('calibrate reports a solved model that misses the TCR target by more than 1e-9 K as a NumericalError, never silently', async () => {
+    // A root finder that stops early (gamma 1e-9 above the root moves TCR by far more than 1e-9 K).
+    vi.resetModules();
+    vi.doMock('../../src/numerics/find-root.js', async (load) => {
+      const real = await load<typeof import('../../src/numerics/find-root.js')>();
+      return { findRoot: (f: (x: number) => number, lo: number, hi: number, tol?: number) => real.findRoot(f, lo, hi, tol) + 1e-3 };
+    });
+    try {
+      const fresh = await import('../../src/climate/calibrate.js');
+      const errors = await import('../../src/errors.js');
+      expect(() => fresh.calibrate({ ecsK: 3, tcrK: 1.8 })).toThrow(errors.NumericalError);
+      expect(() => fresh.calibrate({ ecsK: 3, tcrK: 1.8 })).toThrow(/calibration failed: the solved model gives tcr_k 1\.79\d* K, not the target 1\.8 K/);
+    } finally {
+      vi.doUnmock('../../src/numerics/find-root.js');
+      vi.resetModules();
+    }
   });
 });

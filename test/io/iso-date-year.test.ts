@@ -4,9 +4,11 @@ import { isoDateToYear } from '../../src/io/iso-date-year.js';
 
 /**
  * Independent oracle: the same convention computed with the JavaScript Date's UTC day arithmetic
- * instead of luxon. Label = year + (noon of the day - 1 Jan) / (length of the year) - 0.5.
+ * instead of luxon. 1 or 2 July of year Y is exactly Y; any other day is
+ * year + (noon of the day - 1 Jan) / (length of the year) - 0.5.
  */
 function oracle(y: number, month: number, day: number): number {
+  if (month === 7 && (day === 1 || day === 2)) return y;
   const start = Date.UTC(y, 0, 1);
   const length = Date.UTC(y + 1, 0, 1) - start;
   return y + (Date.UTC(y, month - 1, day) + 12 * 3_600_000 - start) / length - 0.5;
@@ -19,27 +21,42 @@ const year = (text: string) => {
 };
 
 describe('isoDateToYear', () => {
-  it('isoDateToYear(2030-07-02) is exactly 2030: noon of 2 July is mid-year in a 365-day year', () => {
+  it('isoDateToYear(2030-07-01) and (2030-07-02) are exactly 2030: the middle of a 365-day year is noon of 2 July', () => {
     // 31+28+31+30+31+30 = 181 days before 1 July; noon of 2 July is 182.5 days in; 182.5/365 = 0.5.
+    expect(year('2030-07-01')).toBe(2030);
     expect(year('2030-07-02')).toBe(2030);
   });
 
-  it('isoDateToYear(2032-07-02) is 2032 + 183.5/366 - 0.5 in a leap year (hand computation)', () => {
-    expect(year('2032-07-02')).toBe(2032 + 183.5 / 366 - 0.5);
+  it('isoDateToYear(2032-07-01) and (2032-07-02) are exactly 2032 in a leap year: its middle is midnight between them (183 of 366 days)', () => {
+    expect(year('2032-07-01')).toBe(2032);
+    expect(year('2032-07-02')).toBe(2032);
+  });
+
+  it('isoDateToYear of 1 or 2 July at any time of day, as written in its own offset, is the whole year (a spreadsheet\'s T00:00:00 too)', () => {
+    expect(year('2030-07-01T00:00:00')).toBe(2030);
+    expect(year('2030-07-02T23:59:59Z')).toBe(2030);
+    expect(year('2032-07-01T01:00:00+02:00')).toBe(2032);
+  });
+
+  it('isoDateToYear keeps the fractional year of a date off mid-year: 2030-07-03 is 2030 + 1/365, 2030-06-30 is 2030 - 2/365 (hand computation)', () => {
+    expect(year('2030-07-03')).toBeCloseTo(2030 + 1 / 365, 12);
+    expect(year('2030-06-30')).toBeCloseTo(2030 - 2 / 365, 12);
+    expect(year('2032-07-03')).toBeCloseTo(2032 + 184.5 / 366 - 0.5, 12);
   });
 
   it('isoDateToYear(2030-01-01) is 2029.5 + 0.5/365: a mean centred on New Year', () => {
     expect(year('2030-01-01')).toBeCloseTo(2029.5 + 0.5 / 365, 12);
   });
 
-  it('isoDateToYear reads a time and offset as an instant: 14:00+02:00 on 2 July is noon UTC', () => {
-    expect(year('2030-07-02T14:00:00+02:00')).toBe(2030);
+  it('isoDateToYear reads a time and offset as an instant off mid-year: 14:00+02:00 on 3 July is noon UTC, 2030 + 1/365', () => {
+    expect(year('2030-07-03T14:00:00+02:00')).toBeCloseTo(2030 + 1 / 365, 12);
   });
 
   it('isoDateToYear reads ordinal (2030-183) and week (2030-W27-2) dates as 2 July 2030 (ISO 8601 calendar, hand-checked)', () => {
     // 2030-01-01 is a Tuesday, so ISO week 1 starts Monday 2029-12-31 and week 27 on Monday 1 July.
     expect(year('2030-183')).toBe(2030);
     expect(year('2030-W27-2')).toBe(2030);
+    expect(year('2030-184')).toBeCloseTo(2030 + 1 / 365, 12);
   });
 
   it('isoDateToYear agrees with Date.UTC day arithmetic for any calendar date from 1000 to 2999', () => {

@@ -49,7 +49,7 @@ const badCases: [fixture: string, problem: Expected][] = [
   }],
   ['missing-time-column.csv', {
     code: 'input.no-time-column', line: 2, message: 'must have a time column',
-    expected: 'a column named "year" (whole or decimal years) or "date" (ISO 8601 dates such as 2030-07-02)',
+    expected: 'a column named "year" (whole or decimal years) or "date" (ISO 8601 dates such as 2030-07-01; 1 or 2 July means that whole year)',
   }],
   ['both-year-and-date.csv', {
     code: 'input.two-time-columns', line: 1, column: 'date', value: 'date',
@@ -114,11 +114,11 @@ const badCases: [fixture: string, problem: Expected][] = [
     code: 'input.bad-date', line: 3, column: 'date', value: '2030-02-30',
     // The reason is luxon's own explanation of the invalid day.
     message: 'must be an ISO 8601 date: you specified 30 (of type number) as a day, which is invalid',
-    expected: 'a full date such as 2030-07-02',
+    expected: 'a full date such as 2030-07-01 (1 or 2 July means that whole year)',
   }],
   ['partial-date.csv', {
     code: 'input.bad-date', line: 2, column: 'date', value: '2025-07',
-    message: 'must be an ISO 8601 date: a year, month or week alone is not a date', expected: 'a full date such as 2030-07-02',
+    message: 'must be an ISO 8601 date: a year, month or week alone is not a date', expected: 'a full date such as 2030-07-01 (1 or 2 July means that whole year)',
   }],
   ['year-out-of-range.csv', {
     code: 'input.bad-year', line: 3, column: 'year', value: '20300', message: 'must be a year from 1000 to 3000',
@@ -276,12 +276,11 @@ describe('parsePathway on awkward but valid fixtures', () => {
     expect(Array.from(parse('decimal-years.csv').times)).toEqual([2025.5, 2026.5, 2027.5]);
   });
 
-  it('parsePathway(awkward/dates.csv) maps mid-year dates to whole years (leap year 2032 half a day late)', () => {
+  it('parsePathway(awkward/dates.csv) maps mid-year dates (2 July) to exactly their whole years, the leap year 2032 too', () => {
     const p = parse('dates.csv');
     expect(p.timeColumn).toBe('date');
-    // Hand computation: noon of 2 July is 182.5 days into a 365-day year (f = 0.5) and 183.5 days into
-    // the 366-day 2032 (f = 183.5/366); label = year + f - 0.5 (rule in isoDateToYear).
-    expect(Array.from(p.times)).toEqual([2030, 2031, 2032 + 183.5 / 366 - 0.5]);
+    // Rule in isoDateToYear: 1 or 2 July of year Y is the middle of Y, leap year or not.
+    expect(Array.from(p.times)).toEqual([2030, 2031, 2032]);
   });
 
   it('parsePathway(awkward/metadata.csv) collects "# key: value" lines anywhere, keys lower-cased', () => {

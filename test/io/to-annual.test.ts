@@ -52,12 +52,19 @@ describe('toAnnual', () => {
     expect(p.provenance.notes).toEqual(['interpolated linearly from 3 rows (1-year steps) to 2 annual values']);
   });
 
-  it('toAnnual(awkward/dates.csv) keeps 2030-2032 although the leap-year row sits half a day past 2032', () => {
+  it('toAnnual(awkward/dates.csv) gives 2030-2032 exactly the rows\' values: mid-year dates need no interpolation, leap year included', () => {
     const p = toAnnual(awkward('dates.csv'));
     expect(Array.from(p.years)).toEqual([2030, 2031, 2032]);
-    // 2032 lies between (2031, 442) and (2032 + 183.5/366 - 0.5, 444): hand computation.
-    const t2 = 2032 + 183.5 / 366 - 0.5;
-    expectAllClose(p.series.co2_ppm!, [440, 442, 442 + (2 * 1) / (t2 - 2031)], 1e-12, 'co2_ppm');
+    expect(Array.from(p.series.co2_ppm!)).toEqual([440, 442, 444]);
+    expect(p.provenance.notes).toEqual([]);
+  });
+
+  it('toAnnual of 1 July dates (2020-07-01, 2030-07-01, 2040-07-01) gives 2030 exactly 440, not 440.004, and 2025 exactly 430', () => {
+    const p = toAnnual(parsePathway('date,co2_ppm\n2020-07-01,420\n2030-07-01,440\n2040-07-01,460\n', 'july.csv'));
+    expect(p.years[0]).toBe(2020);
+    expect(p.years[p.years.length - 1]).toBe(2040);
+    expect(p.series.co2_ppm![2030 - 2020]).toBe(440);
+    expect(p.series.co2_ppm![2025 - 2020]).toBe(430);
   });
 
   it('toAnnual copies a file already on consecutive whole years unchanged, with no note', () => {
