@@ -5,7 +5,7 @@ import { readPathway } from '../io/load-pathway.js';
 import { comparePathways, milestoneYears, type PathwayWarming } from '../metrics/index.js';
 import { defaultWorkerCount, runEnsemble, startEnsembleThreads, type EnsembleThreads } from '../ensemble/index.js';
 import { ensembleInput, projectPathway } from '../projection/index.js';
-import { comparisonCharts, comparisonHtml, comparisonJson, comparisonLongTable, comparisonMarkdown, comparisonText, comparisonUncertainty, scopedNotes, standardCautions, type ScopedNote } from '../report/index.js';
+import { comparisonCharts, comparisonHtml, comparisonJson, comparisonLongTable, comparisonMarkdown, comparisonText, comparisonUncertainty, scopedNotes, standardCautions, thresholdBaselineNote, type ScopedNote } from '../report/index.js';
 import type { CliIo } from './cli-io.js';
 import { addModelOptions, baselineOption, type ModelOptions, numberListOption, pathwayArg, resolveModelParams, thresholdsOption, wholeNumberOption } from './options.js';
 import { notesAndCautions } from './notes-and-cautions.js';
@@ -44,7 +44,8 @@ export function compareCommand(io: CliIo): Command {
       '\nExamples:\n  warmcast compare steady delayed swift\n  warmcast compare steady swift --years 2030,2050,2100 --out table.md\n  warmcast compare steady delayed swift --out report.html\n',
     )
     .action(async (args: string[], opts: CompareOptions) => {
-      const { params, paramsFile } = resolveModelParams(opts, io);
+      const { params, paramsFile, notes: paramNotes } = resolveModelParams(opts, io);
+      const baselineNote = thresholdBaselineNote(opts.baseline);
       const files: string[] = [];
       const scoped: ScopedNote[] = [];
       const runs = args.map((arg) => {
@@ -85,7 +86,7 @@ export function compareCommand(io: CliIo): Command {
       } finally {
         await threads?.close();
       }
-      const notes = scopedNotes(scoped, runs.map((r) => r.projection.name));
+      const notes = [...paramNotes, ...(baselineNote ? [baselineNote] : []), ...scopedNotes(scoped, runs.map((r) => r.projection.name))];
       const c = comparePathways(pathways, {
         milestoneYears: opts.years ? chosenYears(opts.years, runs.map((r) => r.projection.years)) : milestoneYears(firstFuture, last, 10),
         thresholdsK: opts.thresholds,
@@ -101,7 +102,7 @@ export function compareCommand(io: CliIo): Command {
               ? `ECS ${params.ecsK.toFixed(2)} K, TCR ${params.tcrK.toFixed(2)} K (two-box model calibrated to them)`
               : 'sampled per ensemble member (see Ensemble); each member\'s two-box model is calibrated to its own ECS and TCR',
           'CO2 forcing': params.co2Formula === 'log' ? 'Myhre et al. 1998, 5.35 ln(C/C0)' : 'Meinshausen et al. 2020 with IPCC AR6 adjustments',
-          Baseline: `warming relative to the ${baseline} mean`,
+          Baseline: `warming relative to the ${baseline} mean${baselineNote ? `; ${baselineNote}` : ''}`,
           ...(opts.members !== undefined
             ? {
                 Ensemble:

@@ -1,5 +1,6 @@
 import type { Comparison, PathwayComparison } from '../metrics/compare-pathways.js';
 import { kelvin, percent } from './format-numbers.js';
+import { thresholdName } from './threshold-name.js';
 
 /**
  * One plain sentence per pathway for the top of a report: its peak warming and year, when it
@@ -8,16 +9,20 @@ import { kelvin, percent } from './format-numbers.js';
  * of members that have crossed it by each milestone year and the year by which half have.
  *
  * @param c the comparison
+ * @param baseline the baseline period the warming is relative to, as printed (default `1850-1900`);
+ *   on any other, levels are named with it (see thresholdName)
  * @returns sentences, reference first
  * @example
  * comparisonHeadlines(c)[0]
  * // 'steady: peak 2.70 K in 2100 (still rising); reaches 1.5 K in 2034 and 2 K in 2058; 2.70 K in 2100.'
  */
-export function comparisonHeadlines(c: Comparison): string[] {
-  return c.pathways.map((p) => `${p.label}: ${(p.crossings.some((x) => x.odds) ? ensembleParts(p) : singleParts(p)).join('; ')}.`);
+export function comparisonHeadlines(c: Comparison, baseline = '1850-1900'): string[] {
+  const [from, to] = baseline.split('-').map(Number);
+  const level = (thresholdK: number) => thresholdName(+thresholdK.toPrecision(6), [from, to]);
+  return c.pathways.map((p) => `${p.label}: ${(p.crossings.some((x) => x.odds) ? ensembleParts(p, level) : singleParts(p, level)).join('; ')}.`);
 }
 
-function singleParts(p: PathwayComparison): string[] {
+function singleParts(p: PathwayComparison, level: (thresholdK: number) => string): string[] {
   const parts = [`peak ${kelvin(p.peak.value)} K in ${p.peak.year}${p.stillRising ? ' (still rising)' : ''}`];
   const reached = p.crossings.filter((x) => x.period).map((x) => `${level(x.thresholdK)} in ${x.period!.atStart ? `${x.period!.year} or earlier` : x.period!.year}`);
   const missed = p.crossings.filter((x) => !x.period).map((x) => level(x.thresholdK));
@@ -28,7 +33,7 @@ function singleParts(p: PathwayComparison): string[] {
   return parts;
 }
 
-function ensembleParts(p: PathwayComparison): string[] {
+function ensembleParts(p: PathwayComparison, level: (thresholdK: number) => string): string[] {
   const parts = [`median peaks at ${kelvin(p.peak.value)} K in ${p.peak.year}${p.stillRising ? ' (still rising)' : ''}`];
   for (const { thresholdK, odds } of p.crossings) {
     if (!odds) continue;
@@ -40,8 +45,6 @@ function ensembleParts(p: PathwayComparison): string[] {
   if (last) parts.push(`median ${kelvin(last.warmingK)} K in ${last.year}`);
   return parts;
 }
-
-const level = (thresholdK: number) => `${+thresholdK.toPrecision(6)} K`;
 
 /** `a`, `a and b`, `a, b and c`. */
 function series(items: string[]): string {

@@ -37,7 +37,7 @@ export function comparisonHtml(c: Comparison, options: ComparisonHtmlOptions): s
   const tables = comparisonTables(c, { baseline });
   return htmlReport({
     title: options.title ?? 'Pathway comparison',
-    summaryLines: comparisonHeadlines(c),
+    summaryLines: comparisonHeadlines(c, baseline),
     tables: [tables.milestones, tables.summary, ...(tables.odds ? [tables.odds] : [])],
     charts: comparisonCharts(c, { baseline, fromYear: options.fromYear }),
     assumptions: {

@@ -33,7 +33,7 @@ export function comparisonMarkdown(c: Comparison, options: ComparisonMarkdownOpt
   const out = [
     `# ${inline(options.title ?? 'Pathway comparison')}`,
     '',
-    ...comparisonHeadlines(c).map((l) => `- ${inline(l)}`),
+    ...comparisonHeadlines(c, options.baseline).map((l) => `- ${inline(l)}`),
     '',
     markdownTable(tables.milestones),
     markdownTable(tables.summary),

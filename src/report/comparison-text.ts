@@ -33,7 +33,7 @@ export function comparisonText(c: Comparison, options: ComparisonTextOptions = {
   const baseline = options.baseline ?? '1850-1900';
   const tables = comparisonTables(c, { baseline });
   const parts = [
-    comparisonHeadlines(c).map((l) => `  ${l}`).join('\n') + '\n',
+    comparisonHeadlines(c, baseline).map((l) => `  ${l}`).join('\n') + '\n',
     plainTable(tables.milestones),
     plainTable(tables.summary),
     ...(tables.odds ? [plainTable(tables.odds)] : []),

@@ -29,4 +29,10 @@ describe('comparisonHeadlines', () => {
         '2 K: 30 % of members cross it by 2050, n/a by 2100, fewer than half by 2100; median 1.41 K in 2050.',
     ]);
   });
+
+  it('comparisonHeadlines names each level with the baseline when it is not 1850-1900', () => {
+    expect(comparisonHeadlines(oddsComparison(), '1995-2014')[0]).toBe(
+      'single: peak 1.82 K in 2100 (still rising); reaches 1.5 K above the 1995-2014 mean in 2061; 2 K above the 1995-2014 mean not crossed by 2100; 1.41 K in 2050.',
+    );
+  });
 });
