@@ -7,27 +7,51 @@ import { InputError } from '../errors.js';
 import { parseParams } from '../io/read-params.js';
 import type { CliIo } from './cli-io.js';
 
-/** Coerces a finite number option. */
+/**
+ * A number written in decimal: optional sign, digits with an optional point, optional exponent
+ * (`2.5`, `-1`, `.5`, `1e6`). JavaScript's Number() also reads hexadecimal, binary and octal
+ * (`0x10` is 16), `Infinity`, and an empty or blank text as 0; none of these is what a user means.
+ */
+const DECIMAL = /^[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:e[+-]?\d+)?$/i;
+
+/** The value of decimal text (surrounding spaces allowed), or NaN for anything else. */
+function decimalValue(text: string): number {
+  const t = text.trim();
+  return DECIMAL.test(t) ? Number(t) : NaN;
+}
+
+/**
+ * Coerces a finite decimal number option (`2.5`, `-1`, `1e-10`); hexadecimal, `Infinity`, empty
+ * and blank text are refused.
+ * @example numberOption('--ecs')('4.5') // 4.5
+ */
 export function numberOption(name: string) {
   return (text: string): number => {
-    const v = Number(text);
-    if (text.trim() === '' || !Number.isFinite(v)) throw new InvalidArgumentError(`${name} must be a number, got "${text}"`);
+    const v = decimalValue(text);
+    if (!Number.isFinite(v)) throw new InvalidArgumentError(`${name} must be a decimal number such as 2.5, got "${text}"`);
     return v;
   };
 }
 
-/** Coerces a whole number of at least `min`. */
+/**
+ * Coerces a whole number of at least `min`, written in decimal digits; exponent notation that is
+ * an exact whole number (`1e6`) is accepted, hexadecimal (`0x10`), fractions, empty and blank text
+ * are not.
+ * @example wholeNumberOption('--members', 1)('1e6') // 1000000
+ */
 export function wholeNumberOption(name: string, min: number) {
   return (text: string): number => {
-    const v = Number(text);
-    if (!Number.isInteger(v) || v < min) throw new InvalidArgumentError(`${name} must be a whole number of at least ${min}, got "${text}"`);
+    const v = decimalValue(text);
+    if (!Number.isSafeInteger(v) || v < min) {
+      throw new InvalidArgumentError(`${name} must be a whole number of at least ${min} in decimal digits, such as 2000 or 1e6; got "${text}"`);
+    }
     return v;
   };
 }
 
-/** Coerces a whole-number year option. */
+/** Coerces a whole-number year option, written in decimal digits. */
 export function yearOption(text: string): number {
-  const v = Number(text);
+  const v = decimalValue(text);
   if (!Number.isInteger(v) || v < 1000 || v > 3000) throw new InvalidArgumentError(`must be a year such as 2100, got "${text}"`);
   return v;
 }
@@ -39,13 +63,12 @@ export function yearRangeOption(text: string): [number, number] {
   return [Number(m[1]), Number(m[2])];
 }
 
-/** Coerces a comma-separated list of numbers (`1.5,2,3`). */
+/** Coerces a comma-separated list of decimal numbers (`1.5,2,3`); empty items are refused. */
 export function numberListOption(name: string) {
   return (text: string): number[] => {
-    const parts = text.split(',').map((s) => s.trim());
-    const values = parts.map(Number);
-    if (parts.some((p) => p === '') || values.some((v) => !Number.isFinite(v))) {
-      throw new InvalidArgumentError(`${name} must be numbers separated by commas, such as 1.5,2,3; got "${text}"`);
+    const values = text.split(',').map(decimalValue);
+    if (values.some((v) => !Number.isFinite(v))) {
+      throw new InvalidArgumentError(`${name} must be decimal numbers separated by commas, such as 1.5,2,3; got "${text}"`);
     }
     return values;
   };
