@@ -82,9 +82,17 @@ function markdownWithProvenance(table: Table, provenance: Provenance): string {
     formatMarkdown(table, 4) +
     `\nwarmcast ${provenance.version}, ${provenance.created_utc}; warming relative to ${provenance.baseline}; inputs: ${inputs}.\n` +
     `Parameters: ${Object.entries(provenance.parameters).map(([k, v]) => `${k} ${typeof v === 'number' ? +v.toPrecision(6) : v}`).join(', ')}.\n` +
-    (provenance.notes.length ? `Notes: ${provenance.notes.join(' ')}\n` : '') +
+    (provenance.notes.length ? `\nNotes:\n\n${provenance.notes.map((n) => `- ${markdownText(n)}`).join('\n')}\n` : '') +
     `\n${provenance.caution}\n`
   );
+}
+
+/**
+ * A note as the text of one Markdown list item: line breaks become spaces, and backslashes and `<`
+ * are escaped so that `prob_above_<t>` is not read as an HTML tag.
+ */
+function markdownText(text: string): string {
+  return text.replace(/\r\n|\r|\n/g, ' ').replace(/\\/g, '\\\\').replace(/</g, '\\<');
 }
 
 /**
