@@ -1,18 +1,19 @@
-import { Command, InvalidArgumentError } from 'commander';
+import { Command, InvalidArgumentError, Option } from 'commander';
 import { readFileSync } from 'node:fs';
 import { resolve } from 'node:path';
 import { ConfigError, InputError } from '../errors.js';
-import { ensembleTable, mergeShards, runEnsemble, shardFromJson, shardToJson, summarizeEnsemble, type EnsembleResult } from '../ensemble/index.js';
+import { ensembleTable, mergeShards, runEnsemble, shardFromJson, shardToJson, summarizeEnsemble, type EnsembleConfig, type EnsembleResult } from '../ensemble/index.js';
 import type { Table } from '../io/index.js';
 import { readPathway } from '../io/load-pathway.js';
 import { ensembleInput } from '../projection/index.js';
 import { standardCautions, terminalChart } from '../report/index.js';
 import type { CliIo } from './cli-io.js';
-import { addModelOptions, type ModelOptions, numberListOption, pathwayArg, resolveModelParams, wholeNumberOption, yearRangeOption } from './options.js';
+import { numberListOption, pathwayArg, refuseOptions, resolveModelParams, wholeNumberOption, yearRangeOption, type RefusedOption } from './options.js';
 import { pathwayInputs, tableRenderers, writeOutput } from './output.js';
 import { progressBar } from './progress.js';
 
-interface EnsembleCliOptions extends ModelOptions {
+interface EnsembleCliOptions {
+  co2Formula?: 'ar6' | 'log';
   members: number;
   seed: number;
   thresholds: number[];
@@ -36,6 +37,36 @@ function uncertaintyText(r: EnsembleResult): string {
   );
 }
 
+/** What the model options of `run` would set, and why an ensemble draws or fixes it instead. */
+const SAMPLED =
+  'each member draws its own ECS, TCR, 2xCO2 forcing and aerosol forcing from the IPCC AR6 assessed ranges, derives its feedback and ocean exchange from them, ' +
+  'and holds the heat capacities and efficacy at the model defaults';
+
+/** Options of `run` that `ensemble` refuses. */
+const ENSEMBLE_REFUSES: RefusedOption[] = [
+  { flags: '--ecs <kelvin>', why: `${SAMPLED}; for one run with a chosen ECS use \`warmcast run --ecs\`` },
+  { flags: '--tcr <kelvin>', why: `${SAMPLED}; for one run with a chosen TCR use \`warmcast run --tcr\`` },
+  { flags: '--params <file>', why: `${SAMPLED}, so it reads no parameters file; the CO2 formula is chosen with --co2-formula` },
+];
+
+/** Why `merge` takes no model options. */
+const FROM_SHARDS = 'every setting comes from the shards (the CO2 formula they were made with; ECS, TCR, 2xCO2 and aerosol forcing are sampled per member)';
+const MERGE_REFUSES: RefusedOption[] = ['--ecs <kelvin>', '--tcr <kelvin>', '--params <file>', '--co2-formula <name>'].map((flags) => ({ flags, why: FROM_SHARDS }));
+
+/**
+ * The parameters an ensemble's provenance records: only what every member shares, as `--params`
+ * keys (the CO2 formula and the fixed heat capacities and efficacy); the notes describe the sampled
+ * quantities.
+ */
+function ensembleParameters(c: EnsembleConfig): Record<string, number | string> {
+  return {
+    co2_formula: c.co2Formula,
+    upper_heat_capacity: c.sampling.upperHeatCapacity,
+    deep_heat_capacity: c.sampling.deepHeatCapacity,
+    deep_efficacy: c.sampling.deepEfficacy,
+  };
+}
+
 function shardOption(text: string): { index: number; count: number } {
   const m = /^(\d+)\/(\d+)$/.exec(text.trim());
   if (!m || Number(m[1]) < 1 || Number(m[1]) > Number(m[2])) throw new InvalidArgumentError(`must be K/N with 1 <= K <= N, such as 3/100; got "${text}"`);
@@ -55,20 +86,23 @@ export function ensembleCommand(io: CliIo): Command {
     .option('--workers <count>', 'threads (default: chosen by run size; the output does not depend on it)', wholeNumberOption('--workers', 1))
     .option('-o, --out <file>', 'write the yearly percentiles and probabilities: .csv (+ .meta.json), .json, .md; with --shard a .json shard file')
     .option('--no-splice', 'do not splice a pathway that starts late onto the bundled history')
-    .option('--no-chart', 'omit the terminal chart');
-  addModelOptions(cmd)
+    .option('--no-chart', 'omit the terminal chart')
+    .addOption(new Option('--co2-formula <name>', 'CO2 forcing: ar6 (Meinshausen et al. 2020 + AR6 adjustment) or log (Myhre et al. 1998)').choices(['ar6', 'log']));
+  refuseOptions(cmd, ENSEMBLE_REFUSES)
     .addHelpText(
       'after',
-      '\nExamples:\n  warmcast ensemble swift --members 2000 --seed 7 --out swift-ens.csv\n' +
+      '\nECS, TCR, 2xCO2 and aerosol forcing are sampled per member, so --ecs, --tcr and --params are not taken.\n' +
+        '\nExamples:\n  warmcast ensemble swift --members 2000 --seed 7 --out swift-ens.csv\n' +
         '  warmcast ensemble swift --members 1000000 --seed 7 --shard 3/100 --out shard-3.json   # one task of an array job\n' +
         '  warmcast merge shard-*.json --out swift-ens.csv\n',
     )
     .action(async (arg: string, opts: EnsembleCliOptions) => {
       if (opts.seed >= 2 ** 32) throw new ConfigError('--seed must be below 2^32', 'seed');
-      const { params, paramsFile } = resolveModelParams(opts, io);
+      // Central parameters: the CO2 formula, and the CH4 and N2O of an emission pathway's central run.
+      const { params } = resolveModelParams({ co2Formula: opts.co2Formula }, io);
       const read = readPathway(pathwayArg(arg, io), { splice: opts.splice });
       const { input, notes } = ensembleInput(read.pathway, params);
-      const inputs = [...pathwayInputs(read), ...(paramsFile ? [paramsFile] : [])];
+      const inputs = pathwayInputs(read);
       const result = await runEnsemble(input, {
         members: opts.members,
         seed: opts.seed,
@@ -81,11 +115,11 @@ export function ensembleCommand(io: CliIo): Command {
       const allNotes = [...read.pathway.provenance.notes, ...notes, ...result.notes];
       if (opts.shard) {
         if (!opts.out || !opts.out.toLowerCase().endsWith('.json')) throw new ConfigError('--shard writes a shard file: give --out NAME.json', 'out');
-        writeOutput(opts.out, { '.json': () => shardToJson(result.members!) }, { inputs, params, baseline: opts.baseline, notes: allNotes, seed: opts.seed, io });
+        writeOutput(opts.out, { '.json': () => shardToJson(result.members!) }, { inputs, parameters: ensembleParameters(result.config), baseline: opts.baseline, notes: allNotes, seed: opts.seed, io });
         io.stderr(`wrote shard ${opts.shard.index}/${opts.shard.count} (${result.memberCount} members) to ${opts.out}; combine all shards with \`warmcast merge\`\n`);
         return;
       }
-      emitEnsemble(result, read.pathway.name, { out: opts.out, chart: opts.chart, inputs, params, notes: allNotes, io });
+      emitEnsemble(result, read.pathway.name, { out: opts.out, chart: opts.chart, inputs, notes: allNotes, io });
     });
   return cmd;
 }
@@ -97,9 +131,9 @@ export function mergeCommand(io: CliIo): Command {
     .argument('<shard...>', 'shard files (.json), all K from 1 to N of one ensemble')
     .option('-o, --out <file>', 'write the yearly percentiles and probabilities: .csv (+ .meta.json), .json, .md')
     .option('--no-chart', 'omit the terminal chart');
-  addModelOptions(cmd)
-    .addHelpText('after', '\nExample:\n  warmcast merge shard-*.json --out swift-ens.csv\n')
-    .action((files: string[], opts: ModelOptions & { out?: string; chart: boolean }) => {
+  refuseOptions(cmd, MERGE_REFUSES)
+    .addHelpText('after', '\nEvery setting (pathway, seed, members, thresholds, baseline, CO2 formula) comes from the shards.\n\nExample:\n  warmcast merge shard-*.json --out swift-ens.csv\n')
+    .action((files: string[], opts: { out?: string; chart: boolean }) => {
       const shards = files.map((file) => {
         let text: string;
         try {
@@ -110,12 +144,10 @@ export function mergeCommand(io: CliIo): Command {
         return { file, members: shardFromJson(text, file) };
       });
       const result = summarizeEnsemble(mergeShards(shards));
-      const { params } = resolveModelParams(opts, io);
       emitEnsemble(result, 'merged ensemble', {
         out: opts.out,
         chart: opts.chart,
         inputs: files.map((f) => resolve(io.cwd, f)),
-        params,
         notes: result.notes,
         io,
       });
@@ -127,7 +159,7 @@ export function mergeCommand(io: CliIo): Command {
 function emitEnsemble(
   result: EnsembleResult,
   name: string,
-  ctx: { out?: string; chart: boolean; inputs: string[]; params: ReturnType<typeof resolveModelParams>['params']; notes: string[]; io: CliIo },
+  ctx: { out?: string; chart: boolean; inputs: string[]; notes: string[]; io: CliIo },
 ): void {
   const { io } = ctx;
   const t = ensembleTable(result);
@@ -136,7 +168,7 @@ function emitEnsemble(
   if (ctx.out !== undefined) {
     const written = writeOutput(ctx.out, tableRenderers(table), {
       inputs: ctx.inputs,
-      params: ctx.params,
+      parameters: ensembleParameters(result.config),
       baseline: result.config.baseline,
       notes: ctx.notes,
       seed: result.config.seed,

@@ -3,7 +3,7 @@ import { resolve } from 'node:path';
 import { InvalidArgumentError, Option, type Command } from 'commander';
 import { calibrate, type CalibrationTargets } from '../climate/calibrate.js';
 import type { ClimateParams } from '../climate/params.js';
-import { InputError } from '../errors.js';
+import { ConfigError, InputError } from '../errors.js';
 import { parseParams } from '../io/read-params.js';
 import type { CliIo } from './cli-io.js';
 
@@ -74,7 +74,7 @@ export function numberListOption(name: string) {
   };
 }
 
-/** The model options shared by run, compare, ensemble and calibrate. */
+/** The model options shared by run, compare and calibrate (ensemble takes only --co2-formula). */
 export interface ModelOptions {
   params?: string;
   ecs?: number;
@@ -89,6 +89,33 @@ export function addModelOptions(cmd: Command): Command {
     .option('--ecs <kelvin>', 'equilibrium climate sensitivity target, K (default 3.0, IPCC AR6 best estimate)', numberOption('--ecs'))
     .option('--tcr <kelvin>', 'transient climate response target, K (default 1.8, IPCC AR6 best estimate)', numberOption('--tcr'))
     .addOption(new Option('--co2-formula <name>', 'CO2 forcing: ar6 (Meinshausen et al. 2020 + AR6 adjustment) or log (Myhre et al. 1998)').choices(['ar6', 'log']));
+}
+
+/** An option a command refuses, and why. */
+export interface RefusedOption {
+  /** Commander flags, e.g. `--ecs <kelvin>`. */
+  flags: string;
+  /** Why the command does not use it (the rest of the message names the command and the option). */
+  why: string;
+}
+
+/**
+ * Adds options that `cmd` does not use but that a user may well try (they exist on sister commands):
+ * hidden from the help, and refused with a ConfigError (exit 2) that says why, so that a value is
+ * never accepted and silently ignored.
+ *
+ * @example refuseOptions(cmd, [{ flags: '--ecs <kelvin>', why: 'each member draws its own ECS' }])
+ * // warmcast ensemble swift --ecs 4.5 -> "ensemble does not take --ecs: each member draws its own ECS" (exit 2)
+ */
+export function refuseOptions(cmd: Command, refused: RefusedOption[]): Command {
+  for (const { flags, why } of refused) {
+    const option = new Option(flags).hideHelp();
+    option.argParser(() => {
+      throw new ConfigError(`${cmd.name()} does not take ${option.long}: ${why}`, option.attributeName());
+    });
+    cmd.addOption(option);
+  }
+  return cmd;
 }
 
 /**

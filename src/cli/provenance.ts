@@ -37,7 +37,13 @@ export function sha256File(path: string): string {
 export interface ProvenanceInput {
   /** Absolute paths of every input file (hashed; never overwritten by outputs). */
   inputs: string[];
-  params: ClimateParams;
+  /** The parameters of a run with one parameter set (recorded as `--params` reads them). */
+  params?: ClimateParams;
+  /**
+   * The parameters to record instead of `params`, when no single set was used: an ensemble records
+   * only what it holds fixed for every member (its notes describe what it samples).
+   */
+  parameters?: Record<string, number | string>;
   baseline: readonly [number, number];
   notes: string[];
   seed?: number;
@@ -45,14 +51,14 @@ export interface ProvenanceInput {
   caution?: string;
 }
 
-/** Builds the provenance record for files read (`inputs`, absolute paths) and the parameters used. */
+/** Builds the provenance record for files read (`inputs`, absolute paths) and the parameters used (`parameters`, else `params`). */
 export function buildProvenance(args: ProvenanceInput): Provenance {
   return {
     tool: 'warmcast',
     version: packageVersion(),
     created_utc: DateTime.utc().toISO() ?? new Date().toISOString(),
     inputs: [...new Set(args.inputs)].map((path) => ({ path, sha256: sha256File(path) })),
-    parameters: paramsToJson(args.params),
+    parameters: args.parameters ?? (args.params ? paramsToJson(args.params) : {}),
     baseline: `${args.baseline[0]}-${args.baseline[1]}`,
     ...(args.seed !== undefined ? { seed: args.seed } : {}),
     notes: args.notes,

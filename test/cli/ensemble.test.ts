@@ -1,4 +1,4 @@
-import { mkdtempSync, readFileSync, readdirSync } from 'node:fs';
+import { mkdtempSync, readFileSync, readdirSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import Papa from 'papaparse';
@@ -52,5 +52,44 @@ describe('warmcast ensemble and merge', () => {
     const io = captureIo();
     expect(await main(['ensemble', 'swift', '--shard', '4/3'], io)).toBe(2);
     expect(io.err).toMatch(/K\/N/);
+  });
+
+  it('ensemble refuses --ecs, --tcr and --params with exit 2 saying they are sampled, and writes nothing', async () => {
+    const dir = tmp();
+    writeFileSync(join(dir, 'p.json'), JSON.stringify({ upper_heat_capacity: 12 }));
+    for (const extra of [['--ecs', '4.5'], ['--tcr=2.3'], ['--params', join(dir, 'p.json')]]) {
+      const io = captureIo();
+      expect(await main(['ensemble', 'swift', '--members', '20', ...extra, '--out', join(dir, 'e.csv')], io)).toBe(2);
+      expect(io.err).toMatch(/ensemble does not take --(ecs|tcr|params): each member draws its own ECS, TCR, 2xCO2 forcing and aerosol forcing/);
+      expect(io.out).toBe('');
+    }
+    expect(readdirSync(dir)).toEqual(['p.json']);
+  });
+
+  it('ensemble --co2-formula log changes the ensemble and is recorded; provenance holds only what every member shares', async () => {
+    const dir = tmp();
+    const run = (args: string[]) => main(['ensemble', 'swift', '--members', '50', '--seed', '7', '--no-chart', ...args], captureIo());
+    expect(await run(['--out', join(dir, 'ar6.csv')])).toBe(0);
+    expect(await run(['--co2-formula', 'log', '--out', join(dir, 'log.csv')])).toBe(0);
+    expect(readFileSync(join(dir, 'log.csv')).equals(readFileSync(join(dir, 'ar6.csv')))).toBe(false);
+    const meta = JSON.parse(readFileSync(join(dir, 'log.meta.json'), 'utf8'));
+    expect(meta.parameters).toEqual({ co2_formula: 'log', upper_heat_capacity: 8, deep_heat_capacity: 100, deep_efficacy: 1 });
+    expect(JSON.parse(readFileSync(join(dir, 'ar6.meta.json'), 'utf8')).parameters.co2_formula).toBe('ar6');
+  });
+
+  it('merge refuses --co2-formula, --ecs, --tcr and --params with exit 2 (it takes everything from the shards) and records the shards\' CO2 formula', async () => {
+    const dir = tmp();
+    for (const k of [1, 2]) {
+      expect(await main(['ensemble', 'swift', '--members', '40', '--co2-formula', 'log', '--shard', `${k}/2`, '--out', join(dir, `s${k}.json`)], captureIo())).toBe(0);
+    }
+    const shards = [join(dir, 's1.json'), join(dir, 's2.json')];
+    for (const extra of [['--co2-formula', 'ar6'], ['--ecs', '4.5'], ['--tcr', '2'], ['--params', 'p.json']]) {
+      const io = captureIo();
+      expect(await main(['merge', ...shards, ...extra, '--out', join(dir, 'm.csv')], io)).toBe(2);
+      expect(io.err).toMatch(/merge does not take --[a-z0-9-]+: every setting comes from the shards/);
+    }
+    expect(readdirSync(dir).sort()).toEqual(['s1.json', 's2.json']);
+    expect(await main(['merge', ...shards, '--out', join(dir, 'm.csv'), '--no-chart'], captureIo())).toBe(0);
+    expect(JSON.parse(readFileSync(join(dir, 'm.meta.json'), 'utf8')).parameters.co2_formula).toBe('log');
   });
 });
