@@ -2,13 +2,13 @@ import { Command, InvalidArgumentError, Option } from 'commander';
 import { readFileSync } from 'node:fs';
 import { resolve } from 'node:path';
 import { ConfigError, InputError } from '../errors.js';
-import { ensembleTable, mergeShards, runEnsemble, shardFromJson, shardToJson, summarizeEnsemble, type EnsembleConfig, type EnsembleResult } from '../ensemble/index.js';
+import { ensembleTable, mergeShards, RUNNING_MEAN_WINDOW, runEnsemble, shardFromJson, shardToJson, summarizeEnsemble, type EnsembleConfig, type EnsembleResult } from '../ensemble/index.js';
 import type { Table } from '../io/index.js';
 import { readPathway } from '../io/load-pathway.js';
 import { ensembleInput } from '../projection/index.js';
 import { standardCautions, terminalChart } from '../report/index.js';
 import type { CliIo } from './cli-io.js';
-import { numberListOption, pathwayArg, refuseOptions, resolveModelParams, wholeNumberOption, yearRangeOption, type RefusedOption } from './options.js';
+import { pathwayArg, refuseOptions, resolveModelParams, warmingLevelsOption, wholeNumberOption, yearRangeOption, type RefusedOption } from './options.js';
 import { pathwayInputs, tableRenderers, writeOutput } from './output.js';
 import { progressBar } from './progress.js';
 
@@ -80,7 +80,7 @@ export function ensembleCommand(io: CliIo): Command {
     .argument('<pathway>', 'pathway CSV file or bundled name')
     .option('-n, --members <count>', 'ensemble members', wholeNumberOption('--members', 1), 1000)
     .option('--seed <integer>', 'random seed (same seed, same output on any machine and any number of workers)', wholeNumberOption('--seed', 0), 1)
-    .option('--thresholds <list>', 'warming levels in K for exceedance probabilities', numberListOption('--thresholds'), [1.5, 2, 3])
+    .option('--thresholds <list>', 'warming levels in K above the baseline (above 0) for exceedance probabilities', warmingLevelsOption('--thresholds'), [1.5, 2, 3])
     .option('--baseline <years>', 'baseline period for warming', yearRangeOption, [1850, 1900])
     .option('--shard <K/N>', 'run only the K-th of N equal slices of the members and write them as a shard file (.json) for `warmcast merge`', shardOption)
     .option('--workers <count>', 'threads (default: chosen by run size; the output does not depend on it)', wholeNumberOption('--workers', 1))
@@ -201,6 +201,11 @@ function emitEnsemble(
   write('\n' + [standardCautions()[0], uncertaintyText(result), standardCautions()[2]].map((c) => `  caution: ${c}`).join('\n') + '\n\n');
 }
 
+/** A share as a whole percentage, with shares that round to 0 % shown as under 1 %. */
+function share(v: number): string {
+  return v > 0 && v < 0.005 ? 'under 1 %' : `${(100 * v).toFixed(0)} %`;
+}
+
 /** The headline lines of an ensemble: members, seed, redraws, sampled ranges, crossing probabilities. */
 function ensembleSummary(r: EnsembleResult, name: string): string {
   const lines: string[] = [];
@@ -222,10 +227,18 @@ function ensembleSummary(r: EnsembleResult, name: string): string {
       lines.push(`  ${y}: median ${p.p50[i].toFixed(2)} K, likely (17-83 %) ${p.p17[i].toFixed(2)}-${p.p83[i].toFixed(2)} K, very likely (5-95 %) ${p.p05[i].toFixed(2)}-${p.p95[i].toFixed(2)} K`);
     }
   }
+  // The first complete 20-year window: members above the level there may have been above before it.
+  const window0 = `${years[0]}-${years[0] + RUNNING_MEAN_WINDOW.before + RUNNING_MEAN_WINDOW.after}`;
   for (const x of r.crossings) {
     const by = x.byMilestone.map((m) => `by ${m.year} ${pct(m.probability)}`).join(', ');
-    const median = x.medianYear === null ? `fewer than half of the members cross it by ${years[years.length - 1]}` : `median crossing year ${x.medianYear}`;
-    lines.push(`  ${x.thresholdK} K (20-year mean): probability of crossing ${by}; ${median}`);
+    const atStart = 2 * x.aboveAtStart >= 1;
+    const median = atStart
+      ? `median crossing: already above at the start (the first 20-year mean, ${window0})`
+      : x.medianYear === null
+        ? `fewer than half of the members cross it by ${years[years.length - 1]}`
+        : `median crossing year ${x.medianYear}`;
+    const some = !atStart && x.aboveAtStart > 0 ? `; ${share(x.aboveAtStart)} of members already above it at the start (${window0})` : '';
+    lines.push(`  ${x.thresholdK} K (20-year mean): probability of crossing ${by}; ${median}${some}`);
   }
   return lines.join('\n') + '\n';
 }

@@ -74,6 +74,23 @@ export function numberListOption(name: string) {
   };
 }
 
+/**
+ * Coerces a comma-separated list of warming levels (`1.5,2,3`), K above the baseline: decimal
+ * numbers above 0 (a level of 0 K or below would be "reached" by the baseline itself).
+ * @example warmingLevelsOption('--thresholds')('1.5,2') // [1.5, 2]
+ */
+export function warmingLevelsOption(name: string) {
+  const list = numberListOption(name);
+  return (text: string): number[] => {
+    const values = list(text);
+    const bad = values.filter((v) => !(v > 0));
+    if (bad.length > 0) {
+      throw new InvalidArgumentError(`${name} must be warming levels above 0 K (levels of warming above the baseline), such as 1.5,2,3; got ${bad.join(', ')}`);
+    }
+    return values;
+  };
+}
+
 /** The model options shared by run, compare and calibrate (ensemble takes only --co2-formula). */
 export interface ModelOptions {
   params?: string;

@@ -25,6 +25,12 @@ export interface ThresholdCrossing {
   medianYear: number | null;
   /** Share of members that cross at all within the run. */
   probabilityWithinRun: number;
+  /**
+   * Share of members already above the level in the first complete 20-year window of the run (their
+   * crossing year is that window's labelled year, but they may have been above before it). When it
+   * is at least one half, `medianYear` is that first labelled year and says only "at the start".
+   */
+  aboveAtStart: number;
 }
 
 /** Summary quantiles of one sampled parameter across members. */
@@ -129,7 +135,7 @@ export function summarizeEnsemble(members: EnsembleMembers | EnsembleMemberParam
       const k = year - config.firstYear;
       return { year, probability: k >= first && k <= last ? cumulative[k] / m : null };
     });
-    return { thresholdK, byMilestone, medianYear, probabilityWithinRun: total / m };
+    return { thresholdK, byMilestone, medianYear, probabilityWithinRun: total / m, aboveAtStart: first <= last ? crossedAt[first] / m : 0 };
   });
 
   const parameters = Object.fromEntries(MEMBER_PARAMETERS.map((name) => [name, summarizeValues(members.parameters[name])])) as Record<

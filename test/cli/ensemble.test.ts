@@ -92,4 +92,21 @@ describe('warmcast ensemble and merge', () => {
     expect(await main(['merge', ...shards, '--out', join(dir, 'm.csv'), '--no-chart'], captureIo())).toBe(0);
     expect(JSON.parse(readFileSync(join(dir, 'm.meta.json'), 'utf8')).parameters.co2_formula).toBe('log');
   });
+
+  it('ensemble refuses warming levels of 0 K and below with exit 2 (levels are above the baseline)', async () => {
+    for (const t of ['--thresholds=-1', '--thresholds=0', '--thresholds=1.5,0']) {
+      const io = captureIo();
+      expect(await main(['ensemble', 'swift', '--members', '20', t], io)).toBe(2);
+      expect(io.err).toMatch(/--thresholds must be warming levels above 0 K/);
+      expect(io.out).toBe('');
+    }
+  });
+
+  it('ensemble says "already above at the start" instead of a median crossing year when half the members are above a small level in the first 20-year window', async () => {
+    const io = captureIo();
+    expect(await main(['ensemble', 'swift', '--members', '400', '--thresholds', '0.001,0.05,1.5', '--no-chart'], io)).toBe(0);
+    expect(io.out).toMatch(/0\.001 K \(20-year mean\): [^\n]*; median crossing: already above at the start \(the first 20-year mean, 1750-1769\)\n/);
+    expect(io.out).toMatch(/0\.05 K \(20-year mean\): [^\n]*; median crossing year \d{4}; \d+ % of members already above it at the start \(1750-1769\)\n/);
+    expect(io.out).toMatch(/1\.5 K \(20-year mean\): [^\n]*; median crossing year 20\d\d\n/);
+  });
 });

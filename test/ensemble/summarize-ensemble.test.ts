@@ -64,7 +64,26 @@ describe('summarizeEnsemble', () => {
       const median = sorted[Math.ceil(e.memberCount / 2) - 1];
       expect(c.medianYear).toBe(Number.isFinite(median) ? median : null);
       expect(c.probabilityWithinRun).toBe(crossing.filter(Number.isFinite).length / e.memberCount);
+      expect(c.aboveAtStart).toBe(means.filter((mean) => mean[9] > t).length / e.memberCount);
     });
+  });
+
+  it('summarizeEnsemble counts the members already above a level in the first 20-year window (aboveAtStart); at least half of them makes the median crossing year the first window\'s year', () => {
+    const low = members(400, [-1, 0.25, 5]);
+    const r = summarizeEnsemble(low);
+    const firstMeans = Array.from({ length: 400 }, (_, i) => {
+      const out = new Float64Array(low.config.yearCount);
+      runningMeanInto(series(low, i), out);
+      return out[9];
+    });
+    expect(r.crossings[0].aboveAtStart).toBe(1);
+    expect(r.crossings[0].medianYear).toBe(1909);
+    const share = firstMeans.filter((v) => v > 0.25).length / 400;
+    expect(share).toBeGreaterThan(0);
+    expect(share).toBeLessThan(0.5);
+    expect(r.crossings[1].aboveAtStart).toBe(share);
+    expect(r.crossings[1].medianYear).toBeGreaterThan(1909);
+    expect(r.crossings[2].aboveAtStart).toBe(0);
   });
 
   it('summarizeEnsemble orders its percentiles and its exceedance probabilities (quantiles are monotone in p; a higher level is exceeded no more often)', () => {
