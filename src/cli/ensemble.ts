@@ -2,7 +2,7 @@ import { Command, InvalidArgumentError, Option } from 'commander';
 import { readFileSync } from 'node:fs';
 import { resolve } from 'node:path';
 import { ConfigError, InputError } from '../errors.js';
-import { ensembleTable, mergeShards, RUNNING_MEAN_WINDOW, runEnsemble, shardFromJson, shardToJson, summarizeEnsemble, type EnsembleConfig, type EnsembleResult } from '../ensemble/index.js';
+import { ensembleTable, fewMembersWarning, mergeShards, RUNNING_MEAN_WINDOW, runEnsemble, shardFromJson, shardToJson, summarizeEnsemble, type EnsembleConfig, type EnsembleResult } from '../ensemble/index.js';
 import type { Table } from '../io/index.js';
 import { readPathway } from '../io/load-pathway.js';
 import { ensembleInput } from '../projection/index.js';
@@ -211,13 +211,16 @@ function ensembleSummary(r: EnsembleResult, name: string): string {
   const lines: string[] = [];
   const c = r.config;
   const pct = (v: number | null) => (v === null ? 'n/a (run too short)' : `${(100 * v).toFixed(0)} %`);
-  lines.push(`${name}: ${r.memberCount} members, seed ${c.seed}; ${r.redraws} unphysical draws redrawn; warming relative to ${c.baseline.join('-')}`);
+  lines.push(`${name}: ${r.memberCount} member${r.memberCount === 1 ? '' : 's'}, seed ${c.seed}; ${r.redraws} unphysical draws redrawn; warming relative to ${c.baseline.join('-')}`);
+  const few = fewMembersWarning(r.memberCount);
+  if (few) lines.push(`  warning: ${few}`);
   const q = (k: 'ecsK' | 'tcrK') => r.parameters[k as keyof typeof r.parameters];
   const ecs = q('ecsK');
   const tcr = q('tcrK');
   if (ecs && tcr) {
     lines.push(
-      `  sampled ECS ${ecs.p50.toFixed(2)} K [${ecs.p05.toFixed(2)}-${ecs.p95.toFixed(2)}], TCR ${tcr.p50.toFixed(2)} K [${tcr.p05.toFixed(2)}-${tcr.p95.toFixed(2)}] (median [5-95 %]); ECS-TCR correlation ${r.ecsTcrCorrelation.toFixed(2)}`,
+      `  sampled ECS ${ecs.p50.toFixed(2)} K [${ecs.p05.toFixed(2)}-${ecs.p95.toFixed(2)}], TCR ${tcr.p50.toFixed(2)} K [${tcr.p05.toFixed(2)}-${tcr.p95.toFixed(2)}] (median [5-95 %]); ` +
+        `ECS-TCR correlation ${r.memberCount < 3 ? 'n/a (fewer than 3 members)' : r.ecsTcrCorrelation.toFixed(2)}`,
     );
   }
   const { years, percentiles: p } = r;

@@ -24,5 +24,5 @@ export type { MemberDraw, MemberParameter, MemberSampler, SampledMembers } from 
 export { AR6_SAMPLING, describeSampling, validateSampling } from './sampling.js';
 export type { EnsembleSampling } from './sampling.js';
 export { SHARD_FORMAT, SHARD_VERSION, shardFileBytes, shardFromJson, shardToJson } from './shard-file.js';
-export { exceedanceCountsLength, PERCENTILE_NAMES, PERCENTILES, summarizeEnsemble } from './summarize-ensemble.js';
+export { exceedanceCountsLength, FEW_MEMBERS, fewMembersWarning, PERCENTILE_NAMES, PERCENTILES, summarizeEnsemble } from './summarize-ensemble.js';
 export type { EnsembleResult, ParameterSummary, PercentileName, ThresholdCrossing } from './summarize-ensemble.js';

@@ -109,4 +109,22 @@ describe('warmcast ensemble and merge', () => {
     expect(io.out).toMatch(/0\.05 K \(20-year mean\): [^\n]*; median crossing year \d{4}; \d+ % of members already above it at the start \(1750-1769\)\n/);
     expect(io.out).toMatch(/1\.5 K \(20-year mean\): [^\n]*; median crossing year 20\d\d\n/);
   });
+
+  it('ensemble of 1 or 2 members prints the ECS-TCR correlation as n/a and warns, on the terminal and in the notes, that its ranges are rough', async () => {
+    const dir = tmp();
+    for (const n of [1, 2]) {
+      const io = captureIo();
+      expect(await main(['ensemble', 'swift', '--members', String(n), '--no-chart', '--out', join(dir, `e${n}.json`)], io)).toBe(0);
+      expect(io.out).toMatch(/ECS-TCR correlation n\/a \(fewer than 3 members\)/);
+      expect(io.out).not.toMatch(/NaN|correlation -?1\.00/);
+      expect(io.out).toMatch(new RegExp(`\\n  warning: only ${n} members?: percentile ranges and probabilities from so few members are rough`));
+      const notes: string[] = JSON.parse(readFileSync(join(dir, `e${n}.json`), 'utf8')).provenance.notes;
+      expect(notes.some((note) => note.startsWith(`warning: only ${n} member`))).toBe(true);
+    }
+    const io = captureIo();
+    expect(await main(['ensemble', 'swift', '--members', '100', '--no-chart'], io)).toBe(0);
+    expect(io.out).not.toMatch(/warning/);
+    expect(io.out).toMatch(/ECS-TCR correlation 0\.\d\d/);
+  });
 });
+

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { AR6_SAMPLING, MEMBER_PARAMETERS, PERCENTILES, summarizeEnsemble, type EnsembleMembers } from '../../src/ensemble/index.js';
+import { AR6_SAMPLING, FEW_MEMBERS, fewMembersWarning, MEMBER_PARAMETERS, PERCENTILES, summarizeEnsemble, type EnsembleMembers } from '../../src/ensemble/index.js';
 import { runningMeanInto } from '../../src/ensemble/running-mean.js';
 import { quantileSorted } from '../../src/numerics/quantiles.js';
 
@@ -108,3 +108,18 @@ describe('summarizeEnsemble', () => {
     expect(result.notes.join('\n')).toMatch(/3 unphysical parameter draws were redrawn/);
   });
 });
+
+describe('fewMembersWarning', () => {
+  it('fewMembersWarning(n) warns below 100 members with the binomial standard error 0.5/sqrt(n) of a probability near 50 % (common practice, no source)', () => {
+    expect(fewMembersWarning(25)).toMatch(/^only 25 members: .* about 10 percentage points, 0\.5\/sqrt\(25\)/);
+    expect(fewMembersWarning(1)).toMatch(/^only 1 member: .* about 50 percentage points/);
+    expect(fewMembersWarning(FEW_MEMBERS - 1)).toBeDefined();
+    expect(fewMembersWarning(FEW_MEMBERS)).toBeUndefined();
+  });
+
+  it('summarizeEnsemble notes the warning for an ensemble of fewer than 100 members, and not for 100', () => {
+    expect(summarizeEnsemble(members(30)).notes.filter((n) => n.startsWith('warning: only 30 members'))).toHaveLength(1);
+    expect(summarizeEnsemble(members(100)).notes.some((n) => n.startsWith('warning:'))).toBe(false);
+  });
+});
+
