@@ -28,7 +28,8 @@ interface EnsembleCliOptions {
 /** The uncertainty sentence of an ensemble's outputs. */
 function uncertaintyText(r: EnsembleResult): string {
   const carbon = r.config.emissionDriven
-    ? ' Each member also runs its own CO2 cycle, responding to its own warming, with a sampled multiplier on the carbon-cycle response time (Joos et al. 2013 spread); CH4 and N2O follow one central run.'
+    ? ' Each member also runs its own CO2 cycle, responding to its own warming, with a sampled multiplier on the pre-industrial iIRF100 r0 of its uptake feedback ' +
+      '(the 100-year integrated CO2 impulse response; Joos et al. 2013 multi-model spread); CH4 and N2O follow one central run.'
     : '';
   return (
     `Ranges are the 5-95 % and 17-83 % spread of ${r.memberCount} members whose ECS, TCR, 2xCO2 forcing and aerosol forcing ` +
@@ -222,6 +223,10 @@ function ensembleSummary(r: EnsembleResult, name: string): string {
       `  sampled ECS ${ecs.p50.toFixed(2)} K [${ecs.p05.toFixed(2)}-${ecs.p95.toFixed(2)}], TCR ${tcr.p50.toFixed(2)} K [${tcr.p05.toFixed(2)}-${tcr.p95.toFixed(2)}] (median [5-95 %]); ` +
         `ECS-TCR correlation ${r.memberCount < 3 ? 'n/a (fewer than 3 members)' : r.ecsTcrCorrelation.toFixed(2)}`,
     );
+  }
+  const carbon = r.parameters.irf100Scale;
+  if (c.emissionDriven && carbon) {
+    lines.push(`  sampled carbon-cycle multiplier on the pre-industrial iIRF100 r0 ${carbon.p50.toFixed(2)} [${carbon.p05.toFixed(2)}-${carbon.p95.toFixed(2)}] (median [5-95 %])`);
   }
   const { years, percentiles: p } = r;
   for (const y of [2030, 2050, 2100]) {

@@ -126,5 +126,23 @@ describe('warmcast ensemble and merge', () => {
     expect(io.out).not.toMatch(/warning/);
     expect(io.out).toMatch(/ECS-TCR correlation 0\.\d\d/);
   });
+
+  it('an emission ensemble prints the 5-95 % range of its carbon-cycle multiplier, and its caution names the multiplier as the README does (on the pre-industrial iIRF100 r0)', async () => {
+    const io = captureIo();
+    expect(await main(['ensemble', 'swift-emissions', '--members', '200', '--seed', '3', '--no-chart'], io)).toBe(0);
+    const line = /\n  sampled carbon-cycle multiplier on the pre-industrial iIRF100 r0 (\d\.\d\d) \[(\d\.\d\d)-(\d\.\d\d)\] \(median \[5-95 %\]\)\n/.exec(io.out);
+    expect(line, io.out).not.toBeNull();
+    const [p50, p05, p95] = line!.slice(1).map(Number);
+    // Drawn with median 1 and 5-95 % 0.765-1.235 (src/ensemble/sampling.ts); 200 members land near it.
+    expect(p05).toBeLessThan(p50);
+    expect(p50).toBeLessThan(p95);
+    expect(p05).toBeGreaterThan(0.6);
+    expect(p95).toBeLessThan(1.4);
+    expect(io.out).toMatch(/caution: .*sampled multiplier on the pre-industrial iIRF100 r0 of its uptake feedback/);
+    expect(io.out).not.toMatch(/response time/);
+    const plain = captureIo();
+    expect(await main(['ensemble', 'swift', '--members', '200', '--seed', '3', '--no-chart'], plain)).toBe(0);
+    expect(plain.out).not.toMatch(/iIRF100/);
+  });
 });
 
