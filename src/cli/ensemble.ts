@@ -2,11 +2,11 @@ import { Command, InvalidArgumentError, Option } from 'commander';
 import { readFileSync } from 'node:fs';
 import { resolve } from 'node:path';
 import { ConfigError, InputError } from '../errors.js';
-import { ensembleTable, fewMembersWarning, mergeShards, RUNNING_MEAN_WINDOW, runEnsemble, shardFromJson, shardToJson, summarizeEnsemble, type EnsembleConfig, type EnsembleResult } from '../ensemble/index.js';
+import { ensembleHeadlines, ensembleTable, fewMembersWarning, mergeShards, runEnsemble, shardFromJson, shardToJson, summarizeEnsemble, type EnsembleConfig, type EnsembleHeadlines, type EnsembleResult } from '../ensemble/index.js';
 import type { Table } from '../io/index.js';
 import { readPathway } from '../io/load-pathway.js';
 import { ensembleInput } from '../projection/index.js';
-import { standardCautions, terminalChart } from '../report/index.js';
+import { ensembleHeadlineLines, ensembleHeadlinesMarkdown, standardCautions, terminalChart } from '../report/index.js';
 import type { CliIo } from './cli-io.js';
 import { pathwayArg, refuseOptions, resolveModelParams, warmingLevelsOption, wholeNumberOption, yearRangeOption, type RefusedOption } from './options.js';
 import { pathwayInputs, tableRenderers, writeOutput } from './output.js';
@@ -165,9 +165,12 @@ function emitEnsemble(
   const { io } = ctx;
   const t = ensembleTable(result);
   const table: Table = { columns: t.columns, data: t.columns.map((c) => t.values[c]) };
+  const headlines = ensembleHeadlines(result);
   const caution = [standardCautions()[0], uncertaintyText(result), standardCautions()[2]].join(' ');
   if (ctx.out !== undefined) {
-    const written = writeOutput(ctx.out, tableRenderers(table), {
+    const renderers = tableRenderers(table, { json: { headlines }, markdownBefore: ensembleHeadlinesMarkdown(headlines) });
+    const written = writeOutput(ctx.out, renderers, {
+      sidecar: { headlines },
       inputs: ctx.inputs,
       parameters: ensembleParameters(result.config),
       baseline: result.config.baseline,
@@ -179,7 +182,7 @@ function emitEnsemble(
     for (const w of written) io.stderr(`wrote ${w}\n`);
   }
   const write = ctx.out === '-' ? io.stderr : io.stdout;
-  write(ensembleSummary(result, name));
+  write(ensembleSummary(result, headlines, name));
   if (ctx.chart) {
     const { years, percentiles: p } = result;
     const i0 = Math.max(0, Math.min(1850, years[years.length - 1]) - years[0]);
@@ -202,32 +205,15 @@ function emitEnsemble(
   write('\n' + [standardCautions()[0], uncertaintyText(result), standardCautions()[2]].map((c) => `  caution: ${c}`).join('\n') + '\n\n');
 }
 
-/** A share as a whole percentage, with shares that round to 0 % shown as under 1 %. */
-function share(v: number): string {
-  return v > 0 && v < 0.005 ? 'under 1 %' : `${(100 * v).toFixed(0)} %`;
-}
-
-/** The headline lines of an ensemble: members, seed, redraws, sampled ranges, crossing probabilities. */
-function ensembleSummary(r: EnsembleResult, name: string): string {
+/** The headline lines of an ensemble: members, seed, redraws, sampled ranges, warming at milestones, crossing probabilities. */
+function ensembleSummary(r: EnsembleResult, h: EnsembleHeadlines, name: string): string {
   const lines: string[] = [];
   const c = r.config;
-  const pct = (v: number | null) => (v === null ? 'n/a (run too short)' : `${(100 * v).toFixed(0)} %`);
   lines.push(`${name}: ${r.memberCount} member${r.memberCount === 1 ? '' : 's'}, seed ${c.seed}; ${r.redraws} unphysical draws redrawn; warming relative to ${c.baseline.join('-')}`);
   const few = fewMembersWarning(r.memberCount);
   if (few) lines.push(`  warning: ${few}`);
-  const q = (k: 'ecsK' | 'tcrK') => r.parameters[k as keyof typeof r.parameters];
-  const ecs = q('ecsK');
-  const tcr = q('tcrK');
-  if (ecs && tcr) {
-    lines.push(
-      `  sampled ECS ${ecs.p50.toFixed(2)} K [${ecs.p05.toFixed(2)}-${ecs.p95.toFixed(2)}], TCR ${tcr.p50.toFixed(2)} K [${tcr.p05.toFixed(2)}-${tcr.p95.toFixed(2)}] (median [5-95 %]); ` +
-        `ECS-TCR correlation ${r.memberCount < 3 ? 'n/a (fewer than 3 members)' : r.ecsTcrCorrelation.toFixed(2)}`,
-    );
-  }
-  const carbon = r.parameters.irf100Scale;
-  if (c.emissionDriven && carbon) {
-    lines.push(`  sampled carbon-cycle multiplier on the pre-industrial iIRF100 r0 ${carbon.p50.toFixed(2)} [${carbon.p05.toFixed(2)}-${carbon.p95.toFixed(2)}] (median [5-95 %])`);
-  }
+  const { sampled, thresholds } = ensembleHeadlineLines(h);
+  lines.push(...sampled);
   const { years, percentiles: p } = r;
   for (const y of [2030, 2050, 2100]) {
     const i = y - years[0];
@@ -235,18 +221,6 @@ function ensembleSummary(r: EnsembleResult, name: string): string {
       lines.push(`  ${y}: median ${p.p50[i].toFixed(2)} K, likely (17-83 %) ${p.p17[i].toFixed(2)}-${p.p83[i].toFixed(2)} K, very likely (5-95 %) ${p.p05[i].toFixed(2)}-${p.p95[i].toFixed(2)} K`);
     }
   }
-  // The first complete 20-year window: members above the level there may have been above before it.
-  const window0 = `${years[0]}-${years[0] + RUNNING_MEAN_WINDOW.before + RUNNING_MEAN_WINDOW.after}`;
-  for (const x of r.crossings) {
-    const by = x.byMilestone.map((m) => `by ${m.year} ${pct(m.probability)}`).join(', ');
-    const atStart = 2 * x.aboveAtStart >= 1;
-    const median = atStart
-      ? `median crossing: already above at the start (the first 20-year mean, ${window0})`
-      : x.medianYear === null
-        ? `fewer than half of the members cross it by ${years[years.length - 1]}`
-        : `median crossing year ${x.medianYear}`;
-    const some = !atStart && x.aboveAtStart > 0 ? `; ${share(x.aboveAtStart)} of members already above it at the start (${window0})` : '';
-    lines.push(`  ${x.thresholdK} K (20-year mean): probability of crossing ${by}; ${median}${some}`);
-  }
+  lines.push(...thresholds);
   return lines.join('\n') + '\n';
 }

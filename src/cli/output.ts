@@ -32,6 +32,11 @@ export type Renderers = Partial<Record<'.csv' | '.json' | '.md' | '.svg' | '.htm
 /** What {@link writeOutput} needs: the provenance inputs and where to write stdout. */
 export interface OutputContext extends ProvenanceInput {
   io: CliIo;
+  /**
+   * More members of a CSV's `.meta.json` sidecar, after the provenance (an ensemble's `headlines`),
+   * so that what the JSON and Markdown forms carry beside the table is not lost with CSV.
+   */
+  sidecar?: Record<string, unknown>;
 }
 
 /**
@@ -60,19 +65,30 @@ export function writeOutput(out: string, renderers: Renderers, ctx: OutputContex
   if (ext === '.csv') {
     const sidecar = path.slice(0, -ext.length) + '.meta.json';
     write(path, content);
-    write(sidecar, JSON.stringify(provenance, null, 2) + '\n');
+    write(sidecar, JSON.stringify({ ...provenance, ...ctx.sidecar }, null, 2) + '\n');
     return [path, sidecar];
   }
   write(path, content);
   return [path];
 }
 
-/** The formats of a plain yearly table: CSV, JSON with provenance, Markdown with provenance below. */
-export function tableRenderers(table: Table): Renderers {
+/** What a yearly table's files carry besides the table (an ensemble's headlines). */
+export interface TableExtras {
+  /** Members of the JSON form's top-level object, after the provenance. */
+  json?: Record<string, unknown>;
+  /** Markdown placed above the table. */
+  markdownBefore?: string;
+}
+
+/**
+ * The formats of a plain yearly table: CSV, JSON with provenance, Markdown with provenance below
+ * (and `extras` in the JSON and above the Markdown table).
+ */
+export function tableRenderers(table: Table, extras: TableExtras = {}): Renderers {
   return {
     '.csv': () => formatCsv(table),
-    '.json': (p) => formatJson(table, p),
-    '.md': (p) => markdownWithProvenance(table, p),
+    '.json': (p) => formatJson(table, p, extras.json),
+    '.md': (p) => (extras.markdownBefore ? `${extras.markdownBefore}\n` : '') + markdownWithProvenance(table, p),
   };
 }
 

@@ -1,6 +1,8 @@
 export { assessedQuantile, LIKELY_Z, normalRange, pointRange, VERY_LIKELY_Z } from './assessed-range.js';
 export type { AssessedRange } from './assessed-range.js';
 export type { EnsembleConfig, EnsembleMembers } from './ensemble-members.js';
+export { ensembleHeadlines } from './ensemble-headlines.js';
+export type { EnsembleHeadlines, MedianCrossing, ThresholdHeadline } from './ensemble-headlines.js';
 export { ensembleTable, probAboveColumn } from './ensemble-table.js';
 export type { EnsembleTable } from './ensemble-table.js';
 export { EXCHANGE_RANGE, exchangeForTcr, solverTransientResponse, tcrSolver } from './exchange-for-tcr.js';

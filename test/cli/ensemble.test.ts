@@ -144,5 +144,36 @@ describe('warmcast ensemble and merge', () => {
     expect(await main(['ensemble', 'swift', '--members', '200', '--seed', '3', '--no-chart'], plain)).toBe(0);
     expect(plain.out).not.toMatch(/iIRF100/);
   });
+
+  it('ensemble --out writes the headlines: a headlines object in .json and in the .csv\'s .meta.json (the CSV stays a yearly table), a table above the yearly table in .md; merge --out the same', async () => {
+    const dir = tmp();
+    const args = ['delayed', '--members', '120', '--seed', '4', '--no-chart'];
+    const io = captureIo();
+    expect(await main(['ensemble', ...args, '--out', join(dir, 'e.json')], io)).toBe(0);
+    for (const ext of ['csv', 'md']) expect(await main(['ensemble', ...args, '--out', join(dir, `e.${ext}`)], captureIo())).toBe(0);
+    const json = JSON.parse(readFileSync(join(dir, 'e.json'), 'utf8'));
+    const h = json.headlines;
+    expect(Object.keys(json)).toEqual(['provenance', 'headlines', 'columns', 'rows']);
+    expect(h.members).toBe(120);
+    expect(h.thresholds.map((t: { threshold_k: number }) => t.threshold_k)).toEqual([1.5, 2, 3]);
+    // The same figures as the terminal: 1.5 K crossed by 2050 and 2100, and its median crossing year.
+    const t15 = h.thresholds[0];
+    const pct = (v: number) => `${(100 * v).toFixed(0)} %`;
+    expect(io.out).toContain(`1.5 K (20-year mean): probability of crossing by 2050 ${pct(t15.probability_crossed_by['2050'])}, by 2100 ${pct(t15.probability_crossed_by['2100'])}; median crossing year ${t15.median_crossing_year}`);
+    expect(io.out).toContain(`sampled ECS ${h.sampled.ecs_k.p50.toFixed(2)} K [${h.sampled.ecs_k.p05.toFixed(2)}-${h.sampled.ecs_k.p95.toFixed(2)}]`);
+    expect(Object.keys(h.sampled)).toEqual(['ecs_k', 'tcr_k']);
+    expect(JSON.parse(readFileSync(join(dir, 'e.meta.json'), 'utf8')).headlines).toEqual(h);
+    expect(readFileSync(join(dir, 'e.csv'), 'utf8').split('\n')[0]).toMatch(/^year,warming_p05_k,/);
+    const md = readFileSync(join(dir, 'e.md'), 'utf8');
+    expect(md.startsWith('**Headlines: 120 members, seed 4;')).toBe(true);
+    expect(md.indexOf('| warming level |')).toBeLessThan(md.indexOf('| year |'));
+    expect(md).toContain(`| ${t15.median_crossing_year} `);
+
+    for (const k of [1, 2]) expect(await main(['ensemble', ...args, '--shard', `${k}/2`, '--out', join(dir, `s${k}.json`)], captureIo())).toBe(0);
+    expect(await main(['merge', join(dir, 's1.json'), join(dir, 's2.json'), '--no-chart', '--out', join(dir, 'm.json')], captureIo())).toBe(0);
+    expect(await main(['merge', join(dir, 's1.json'), join(dir, 's2.json'), '--no-chart', '--out', join(dir, 'm.csv')], captureIo())).toBe(0);
+    expect(JSON.parse(readFileSync(join(dir, 'm.json'), 'utf8')).headlines).toEqual(h);
+    expect(JSON.parse(readFileSync(join(dir, 'm.meta.json'), 'utf8')).headlines).toEqual(h);
+  });
 });
 
