@@ -1,5 +1,5 @@
 import { InputError, type InputProblem } from '../errors.js';
-import type { EnsembleMembers } from './ensemble-members.js';
+import type { EnsembleConfig, EnsembleMembers } from './ensemble-members.js';
 import { shardRange } from './run-ensemble.js';
 import { MEMBER_PARAMETERS, emptyParameters, type MemberParameter } from './sample-members.js';
 
@@ -79,8 +79,11 @@ export function shardMerger(): ShardMerger {
       }
       const base = first.members;
       if (JSON.stringify(m.config) !== reference) {
-        const fields = (Object.keys(m.config) as (keyof typeof m.config)[]).filter((k) => JSON.stringify(m.config[k]) !== JSON.stringify(base.config[k]));
-        problems.push({ file: s.file, code: 'input.shard-mismatch', message: `must come from the same ensemble as ${first.file}; it differs in ${fields.join(', ')}` });
+        problems.push({
+          file: s.file,
+          code: 'input.shard-mismatch',
+          message: `must come from the same ensemble as ${first.file}; it differs in ${joinWords(configDifferences(m.config, base.config))}`,
+        });
         return;
       }
       if (m.shard.count !== base.shard!.count) {
@@ -127,4 +130,37 @@ export function shardMerger(): ShardMerger {
       return merged!;
     },
   };
+}
+
+/**
+ * How two ensemble configurations differ, in the words of the options that set them (`--seed (8,
+ * not 7)`), this shard's value first. The input checksum is named only when nothing else about the
+ * pathway differs (a different CO2 formula, kind or span of years changes the forcing too).
+ */
+function configDifferences(c: EnsembleConfig, ref: EnsembleConfig): string[] {
+  const out: string[] = [];
+  const differ = (k: keyof EnsembleConfig) => JSON.stringify(c[k]) !== JSON.stringify(ref[k]);
+  const option = (k: keyof EnsembleConfig, words: string, show: (x: EnsembleConfig) => string) => {
+    if (differ(k)) out.push(`${words} (${show(c)}, not ${show(ref)})`);
+  };
+  const span = (x: EnsembleConfig) => `${x.firstYear}-${x.firstYear + x.yearCount - 1}`;
+  const kind = (x: EnsembleConfig) => (x.emissionDriven ? 'emission-driven' : 'concentration-driven');
+  option('seed', '--seed', (x) => String(x.seed));
+  option('membersTotal', '--members', (x) => String(x.membersTotal));
+  option('thresholds', '--thresholds', (x) => x.thresholds.join(','));
+  option('baseline', '--baseline', (x) => x.baseline.join('-'));
+  option('co2Formula', '--co2-formula', (x) => x.co2Formula);
+  if (differ('firstYear') || differ('yearCount')) out.push(`the pathway's years (${span(c)}, not ${span(ref)})`);
+  option('emissionDriven', 'the kind of pathway', kind);
+  if (differ('inputChecksum') && !['co2Formula', 'emissionDriven', 'firstYear', 'yearCount'].some((k) => differ(k as keyof EnsembleConfig))) {
+    out.push('the pathway (another file, or its contents differ)');
+  }
+  option('milestones', 'the milestone years of the crossing probabilities', (x) => x.milestones.join(','));
+  if (differ('scheme') || differ('sampling')) out.push('the parameter sampling (the shards come from different warmcast versions or sampling settings)');
+  return out;
+}
+
+/** `a`, `a and b`, `a, b and c`. */
+function joinWords(words: string[]): string {
+  return words.length <= 1 ? words.join('') : `${words.slice(0, -1).join(', ')} and ${words[words.length - 1]}`;
 }
