@@ -2,7 +2,7 @@ import { Command, InvalidArgumentError, Option } from 'commander';
 import { readFileSync } from 'node:fs';
 import { resolve } from 'node:path';
 import { ConfigError, InputError } from '../errors.js';
-import { ensembleHeadlines, ensembleTable, fewMembersWarning, mergeShards, runEnsemble, shardFromJson, shardToJson, summarizeEnsemble, type EnsembleConfig, type EnsembleHeadlines, type EnsembleResult } from '../ensemble/index.js';
+import { ensembleHeadlines, ensembleTable, fewMembersWarning, mergeShards, runEnsemble, shardFromJson, shardToJson, summarizeEnsemble, type EnsembleConfig, type EnsembleHeadlines, type EnsembleOrigin, type EnsembleResult } from '../ensemble/index.js';
 import type { Table } from '../io/index.js';
 import { readPathway } from '../io/load-pathway.js';
 import { ensembleInput } from '../projection/index.js';
@@ -11,6 +11,7 @@ import type { CliIo } from './cli-io.js';
 import { pathwayArg, refuseOptions, resolveModelParams, warmingLevelsOption, wholeNumberOption, yearRangeOption, type RefusedOption } from './options.js';
 import { pathwayInputs, tableRenderers, writeOutput } from './output.js';
 import { progressBar } from './progress.js';
+import { sha256File } from './provenance.js';
 
 interface EnsembleCliOptions {
   co2Formula?: 'ar6' | 'log';
@@ -113,14 +114,24 @@ export function ensembleCommand(io: CliIo): Command {
         workers: opts.workers,
         onProgress: progressBar(io, 'members', 20_000),
       });
-      const allNotes = [...read.pathway.provenance.notes, ...notes, ...result.notes];
+      // Recorded in shard files, so that a merge can say what the ensemble was made from.
+      const origin: EnsembleOrigin = {
+        pathway: read.pathway.name,
+        inputs: inputs.map((path) => ({ path, sha256: sha256File(path) })),
+        notes: [...read.pathway.provenance.notes, ...notes],
+      };
+      const allNotes = [...origin.notes, ...result.notes];
       if (opts.shard) {
         if (!opts.out || !opts.out.toLowerCase().endsWith('.json')) throw new ConfigError('--shard writes a shard file: give --out NAME.json', 'out');
-        writeOutput(opts.out, { '.json': () => shardToJson(result.members!) }, { inputs, parameters: ensembleParameters(result.config), baseline: opts.baseline, notes: allNotes, seed: opts.seed, io });
+        writeOutput(
+          opts.out,
+          { '.json': () => shardToJson({ ...result.members!, origin }) },
+          { inputs, parameters: ensembleParameters(result.config), baseline: opts.baseline, notes: allNotes, seed: opts.seed, pathway: origin.pathway, io },
+        );
         io.stderr(`wrote shard ${opts.shard.index}/${opts.shard.count} (${result.memberCount} members) to ${opts.out}; combine all shards with \`warmcast merge\`\n`);
         return;
       }
-      emitEnsemble(result, read.pathway.name, { out: opts.out, chart: opts.chart, inputs, notes: allNotes, io });
+      emitEnsemble(result, origin.pathway, { out: opts.out, chart: opts.chart, inputs, notes: allNotes, pathway: origin.pathway, io });
     });
   return cmd;
 }
@@ -144,23 +155,30 @@ export function mergeCommand(io: CliIo): Command {
         }
         return { file, members: shardFromJson(text, file) };
       });
-      const result = summarizeEnsemble(mergeShards(shards));
-      emitEnsemble(result, 'merged ensemble', {
+      const merged = mergeShards(shards);
+      const result = summarizeEnsemble(merged);
+      // Shards record the pathway since the shard file gained `pathway`; older ones merge without it.
+      const origin = merged.origin;
+      emitEnsemble(result, origin?.pathway ?? 'merged ensemble (pathway not recorded in the shards)', {
         out: opts.out,
         chart: opts.chart,
         inputs: files.map((f) => resolve(io.cwd, f)),
-        notes: result.notes,
+        notes: origin ? [...origin.notes, ...result.notes] : [NOT_RECORDED, ...result.notes],
+        ...(origin ? { pathway: origin.pathway, pathwayInputs: origin.inputs } : {}),
         io,
       });
     });
   return cmd;
 }
 
+/** The note of a merge whose shards do not record their pathway. */
+const NOT_RECORDED = "the pathway's name, input files and notes were not recorded in the shards (written by an earlier warmcast); the shards agree on its forcing (checksum)";
+
 /** Writes an ensemble's table (if asked) and prints its summary and chart. */
 function emitEnsemble(
   result: EnsembleResult,
   name: string,
-  ctx: { out?: string; chart: boolean; inputs: string[]; notes: string[]; io: CliIo },
+  ctx: { out?: string; chart: boolean; inputs: string[]; notes: string[]; pathway?: string; pathwayInputs?: EnsembleOrigin['inputs']; io: CliIo },
 ): void {
   const { io } = ctx;
   const t = ensembleTable(result);
@@ -176,6 +194,8 @@ function emitEnsemble(
       baseline: result.config.baseline,
       notes: ctx.notes,
       seed: result.config.seed,
+      pathway: ctx.pathway,
+      pathwayInputs: ctx.pathwayInputs,
       caution,
       io,
     });

@@ -93,10 +93,12 @@ export function tableRenderers(table: Table, extras: TableExtras = {}): Renderer
 }
 
 function markdownWithProvenance(table: Table, provenance: Provenance): string {
-  const inputs = provenance.inputs.map((i) => `${i.path} (sha256 ${i.sha256.slice(0, 12)}…)`).join('; ');
+  const files = (list: { path: string; sha256: string }[]) => list.map((i) => `${i.path} (sha256 ${i.sha256.slice(0, 12)}…)`).join('; ');
+  const pathway = provenance.pathway !== undefined ? `pathway: ${provenance.pathway}; ` : '';
+  const recorded = provenance.pathway_inputs ? `; pathway files (as recorded in the shards): ${files(provenance.pathway_inputs)}` : '';
   return (
     formatMarkdown(table, 4) +
-    `\nwarmcast ${provenance.version}, ${provenance.created_utc}; warming relative to ${provenance.baseline}; inputs: ${inputs}.\n` +
+    `\nwarmcast ${provenance.version}, ${provenance.created_utc}; ${pathway}warming relative to ${provenance.baseline}; inputs: ${files(provenance.inputs)}${recorded}.\n` +
     `Parameters: ${Object.entries(provenance.parameters).map(([k, v]) => `${k} ${typeof v === 'number' ? +v.toPrecision(6) : v}`).join(', ')}.\n` +
     (provenance.notes.length ? `\nNotes:\n\n${provenance.notes.map((n) => `- ${markdownText(n)}`).join('\n')}\n` : '') +
     `\n${provenance.caution}\n`

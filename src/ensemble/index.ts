@@ -1,6 +1,6 @@
 export { assessedQuantile, LIKELY_Z, normalRange, pointRange, VERY_LIKELY_Z } from './assessed-range.js';
 export type { AssessedRange } from './assessed-range.js';
-export type { EnsembleConfig, EnsembleMembers } from './ensemble-members.js';
+export type { EnsembleConfig, EnsembleMembers, EnsembleOrigin } from './ensemble-members.js';
 export { ensembleHeadlines } from './ensemble-headlines.js';
 export type { EnsembleHeadlines, MedianCrossing, ThresholdHeadline } from './ensemble-headlines.js';
 export { ensembleTable, probAboveColumn } from './ensemble-table.js';

@@ -1,5 +1,5 @@
 import { InputError, type InputProblem } from '../errors.js';
-import type { EnsembleConfig, EnsembleMembers } from './ensemble-members.js';
+import type { EnsembleConfig, EnsembleMembers, EnsembleOrigin } from './ensemble-members.js';
 import { shardRange } from './run-ensemble.js';
 import { MEMBER_PARAMETERS, emptyParameters, type MemberParameter } from './sample-members.js';
 
@@ -28,10 +28,12 @@ export interface ShardMerger {
  * come in any order; every shard 1..N of the same ensemble must be there exactly once.
  *
  * @param shards the shard files' members
- * @returns the members of the whole ensemble (no `shard`)
+ * @returns the members of the whole ensemble (no `shard`), with the pathway `origin` the shards
+ *   record (none when no shard records it, as in files from before it was recorded)
  * @throws InputError when a file holds a whole ensemble rather than a shard, comes from a different
- *   ensemble (seed, pathway, years, baseline, thresholds, sampling or member count differ), repeats
- *   a shard, or shards are missing
+ *   ensemble (seed, pathway, years, baseline, thresholds, sampling or member count differ), records
+ *   a different pathway origin (name, file SHA-256 or notes) than another shard, repeats a shard, or
+ *   shards are missing
  * @example summarizeEnsemble(mergeShards(files.map((file) => ({ file, members: shardFromJson(read(file), file) }))))
  */
 export function mergeShards(shards: ShardInput[]): EnsembleMembers {
@@ -56,6 +58,8 @@ export function shardMerger(): ShardMerger {
   let first: ShardInput | undefined;
   let reference = '';
   let merged: EnsembleMembers | undefined;
+  // The first recorded origin (older shard files have none) and the file it came from.
+  let origin: { file: string; origin: EnsembleOrigin } | undefined;
 
   return {
     add(s: ShardInput): void {
@@ -99,6 +103,14 @@ export function shardMerger(): ShardMerger {
         });
         return;
       }
+      if (m.origin && origin) {
+        const differs = originDifference(m.origin, origin.origin);
+        if (differs) {
+          problems.push({ file: s.file, code: 'input.shard-mismatch', message: `must come from the same pathway as ${origin.file}; ${differs}` });
+          return;
+        }
+      }
+      if (m.origin && !origin) origin = { file: s.file, origin: m.origin };
       const seen = byIndex.get(m.shard.index);
       if (seen !== undefined) {
         problems.push({ file: s.file, code: 'input.shard-repeated', message: `must not repeat shard ${m.shard.index}/${m.shard.count}, already given by ${seen}` });
@@ -127,7 +139,7 @@ export function shardMerger(): ShardMerger {
         }
       }
       if (problems.length > 0) throw new InputError(problems);
-      return merged!;
+      return origin ? { ...merged!, origin: origin.origin } : merged!;
     },
   };
 }
@@ -158,6 +170,23 @@ function configDifferences(c: EnsembleConfig, ref: EnsembleConfig): string[] {
   option('milestones', 'the milestone years of the crossing probabilities', (x) => x.milestones.join(','));
   if (differ('scheme') || differ('sampling')) out.push('the parameter sampling (the shards come from different warmcast versions or sampling settings)');
   return out;
+}
+
+/**
+ * How a shard's recorded pathway differs from the reference one, in words, or undefined when they
+ * agree (same name, same files by SHA-256, same notes; paths may differ between machines).
+ */
+function originDifference(o: EnsembleOrigin, ref: EnsembleOrigin): string | undefined {
+  const hashes = (x: EnsembleOrigin) => x.inputs.map((i) => i.sha256).join(',');
+  if (o.pathway !== ref.pathway || hashes(o) !== hashes(ref)) return `it was made from ${describeOrigin(o)}, not ${describeOrigin(ref)}`;
+  if (JSON.stringify(o.notes) !== JSON.stringify(ref.notes)) return 'its notes on how the pathway was read differ (read with other settings or another warmcast version)';
+  return undefined;
+}
+
+/** `"Swift transition" (swift.csv sha256 f0e6870b0bd9…, history.csv sha256 59fb814be3d0…)`. */
+function describeOrigin(o: EnsembleOrigin): string {
+  const files = o.inputs.map((i) => `${i.path.split(/[\\/]/).pop()} sha256 ${i.sha256.slice(0, 12)}…`);
+  return `"${o.pathway}" (${files.join(', ')})`;
 }
 
 /** `a`, `a and b`, `a, b and c`. */

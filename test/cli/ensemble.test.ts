@@ -175,5 +175,56 @@ describe('warmcast ensemble and merge', () => {
     expect(JSON.parse(readFileSync(join(dir, 'm.json'), 'utf8')).headlines).toEqual(h);
     expect(JSON.parse(readFileSync(join(dir, 'm.meta.json'), 'utf8')).headlines).toEqual(h);
   });
+
+  it('merge reports the pathway the shards record: its name as the title, its files with SHA-256 and the same notes as one whole run', async () => {
+    const dir = tmp();
+    const args = ['swift', '--members', '60', '--seed', '2', '--no-chart'];
+    const whole = captureIo();
+    expect(await main(['ensemble', ...args, '--out', join(dir, 'whole.csv')], whole)).toBe(0);
+    for (const k of [1, 2]) expect(await main(['ensemble', ...args, '--shard', `${k}/2`, '--out', join(dir, `s${k}.json`)], captureIo())).toBe(0);
+    const io = captureIo();
+    expect(await main(['merge', join(dir, 's1.json'), join(dir, 's2.json'), '--no-chart', '--out', join(dir, 'm.csv')], io)).toBe(0);
+    expect(readFileSync(join(dir, 'm.csv')).equals(readFileSync(join(dir, 'whole.csv')))).toBe(true);
+    expect(io.out.split('\n')[0]).toMatch(/^Swift transition: 60 members, seed 2;/);
+    const a = JSON.parse(readFileSync(join(dir, 'whole.meta.json'), 'utf8'));
+    const m = JSON.parse(readFileSync(join(dir, 'm.meta.json'), 'utf8'));
+    expect(m.pathway).toBe('Swift transition');
+    expect(a.pathway).toBe('Swift transition');
+    expect(m.pathway_inputs).toEqual(a.inputs);
+    expect(m.pathway_inputs.map((i: { path: string }) => i.path.split(/[\\/]/).pop())).toEqual(['swift.csv', 'history.csv']);
+    expect(m.inputs.map((i: { path: string }) => i.path)).toEqual([join(dir, 's1.json'), join(dir, 's2.json')]);
+    expect(m.notes).toEqual(a.notes);
+    expect(m.notes.some((n: string) => /spliced onto bundled history/.test(n))).toBe(true);
+  });
+
+  it('merge of shards without a pathway record (older shard files) still merges bit for bit and says the pathway was not recorded', async () => {
+    const dir = tmp();
+    const args = ['delayed', '--members', '40', '--seed', '9', '--no-chart'];
+    expect(await main(['ensemble', ...args, '--out', join(dir, 'whole.csv')], captureIo())).toBe(0);
+    for (const k of [1, 2]) {
+      expect(await main(['ensemble', ...args, '--shard', `${k}/2`, '--out', join(dir, `s${k}.json`)], captureIo())).toBe(0);
+      const doc = JSON.parse(readFileSync(join(dir, `s${k}.json`), 'utf8'));
+      delete doc.pathway;
+      writeFileSync(join(dir, `s${k}.json`), JSON.stringify(doc));
+    }
+    const io = captureIo();
+    expect(await main(['merge', join(dir, 's1.json'), join(dir, 's2.json'), '--no-chart', '--out', join(dir, 'm.csv')], io)).toBe(0);
+    expect(readFileSync(join(dir, 'm.csv')).equals(readFileSync(join(dir, 'whole.csv')))).toBe(true);
+    expect(io.out.split('\n')[0]).toMatch(/^merged ensemble \(pathway not recorded in the shards\): 40 members/);
+    const m = JSON.parse(readFileSync(join(dir, 'm.meta.json'), 'utf8'));
+    expect(m.pathway).toBeUndefined();
+    expect(m.notes[0]).toMatch(/^the pathway's name, input files and notes were not recorded in the shards/);
+  });
+
+  it('merge of shards from different pathways exits 2 naming the pathway in the user\'s words, and writes nothing', async () => {
+    const dir = tmp();
+    expect(await main(['ensemble', 'swift', '--members', '40', '--shard', '1/2', '--out', join(dir, 's1.json')], captureIo())).toBe(0);
+    expect(await main(['ensemble', 'delayed', '--members', '40', '--shard', '2/2', '--out', join(dir, 's2.json')], captureIo())).toBe(0);
+    const io = captureIo();
+    expect(await main(['merge', join(dir, 's1.json'), join(dir, 's2.json'), '--out', join(dir, 'm.csv')], io)).toBe(2);
+    expect(io.err).toContain(`${join(dir, 's2.json')}: must come from the same ensemble as ${join(dir, 's1.json')}; it differs in the pathway (another file, or its contents differ)`);
+    expect(io.err).not.toMatch(/inputChecksum|membersTotal|co2Formula/);
+    expect(readdirSync(dir).sort()).toEqual(['s1.json', 's2.json']);
+  });
 });
 

@@ -70,6 +70,25 @@ describe('mergeShards', () => {
     expect(two.members.config).toEqual(one.members.config);
   });
 
+  it('mergeShards keeps the pathway origin the shards record, refuses shards whose records disagree, and merges shards without one', async () => {
+    const origin = { pathway: 'Synthetic', inputs: [{ path: '/a/synthetic.csv', sha256: 'ab'.repeat(32) }], notes: ['note one'] };
+    const [one, two, three] = [await shard(1), await shard(2), await shard(3)];
+    const withOrigin = (s: typeof one, o: typeof origin | undefined, file = s.file) => ({ file, members: { ...s.members, ...(o ? { origin: o } : {}) } });
+    // Paths may differ between the machines that ran the shards; names, hashes and notes may not.
+    const moved = { ...origin, inputs: [{ path: '/b/synthetic.csv', sha256: origin.inputs[0].sha256 }] };
+    expect(mergeShards([withOrigin(one, origin), withOrigin(two, moved), withOrigin(three, origin)]).origin).toEqual(origin);
+    expect(mergeShards([withOrigin(one, undefined), withOrigin(two, origin), withOrigin(three, undefined)]).origin).toEqual(origin);
+    expect(mergeShards([one, two, three]).origin).toBeUndefined();
+    const edited = { ...origin, inputs: [{ path: '/a/synthetic.csv', sha256: 'ef'.repeat(32) }] };
+    expect(() => mergeShards([withOrigin(one, origin), withOrigin(two, edited, 'e.json'), withOrigin(three, origin)])).toThrow(
+      /e\.json: must come from the same pathway as s1\.json; it was made from "Synthetic" \(synthetic\.csv sha256 efefefefefef…\), not "Synthetic" \(synthetic\.csv sha256 abababababab…\)/,
+    );
+    expect(() => mergeShards([withOrigin(one, origin), withOrigin(two, { ...origin, pathway: 'Other' }, 'n.json'), withOrigin(three, origin)])).toThrow(/n\.json: .* made from "Other"/);
+    expect(() => mergeShards([withOrigin(one, origin), withOrigin(two, { ...origin, notes: ['note two'] }, 'o.json'), withOrigin(three, origin)])).toThrow(
+      /o\.json: must come from the same pathway as s1\.json; its notes on how the pathway was read differ/,
+    );
+  });
+
   it('shardMerger takes shards one at a time with the same result as mergeShards', async () => {
     const shards = [await shard(2), await shard(1), await shard(3)];
     const merger = shardMerger();
