@@ -2,7 +2,7 @@ import { Command, InvalidArgumentError, Option } from 'commander';
 import { readFileSync } from 'node:fs';
 import { resolve } from 'node:path';
 import { ConfigError, InputError } from '../errors.js';
-import { ensembleHeadlines, ensembleTable, fewMembersWarning, mergeShards, runEnsemble, shardFromJson, shardToJson, summarizeEnsemble, type EnsembleConfig, type EnsembleHeadlines, type EnsembleOrigin, type EnsembleResult } from '../ensemble/index.js';
+import { defaultWorkerCount, ensembleHeadlines, ensembleTable, fewMembersWarning, runEnsemble, shardFromJson, shardMerger, shardRange, shardToJson, summarizeEnsemble, type EnsembleConfig, type EnsembleHeadlines, type EnsembleOrigin, type EnsembleResult } from '../ensemble/index.js';
 import type { Table } from '../io/index.js';
 import { readPathway } from '../io/load-pathway.js';
 import { ensembleInput } from '../projection/index.js';
@@ -10,6 +10,7 @@ import { ensembleHeadlineLines, ensembleHeadlinesMarkdown, standardCautions, ter
 import type { CliIo } from './cli-io.js';
 import { pathwayArg, refuseOptions, resolveModelParams, warmingLevelsOption, wholeNumberOption, yearRangeOption, type RefusedOption } from './options.js';
 import { pathwayInputs, tableRenderers, writeOutput } from './output.js';
+import { allocationError, checkEnsembleMemory, checkMergeMemory } from './memory-check.js';
 import { progressBar } from './progress.js';
 import { sha256File } from './provenance.js';
 
@@ -105,15 +106,22 @@ export function ensembleCommand(io: CliIo): Command {
       const read = readPathway(pathwayArg(arg, io), { splice: opts.splice });
       const { input, notes } = ensembleInput(read.pathway, params);
       const inputs = pathwayInputs(read);
-      const result = await runEnsemble(input, {
-        members: opts.members,
-        seed: opts.seed,
-        thresholds: opts.thresholds,
-        baseline: opts.baseline,
-        shard: opts.shard,
-        workers: opts.workers,
-        onProgress: progressBar(io, 'members', 20_000),
-      });
+      const years = input.years.length;
+      const emissionDriven = input.carbon !== undefined;
+      const count = opts.shard ? shardSize(opts.members, opts.shard) : opts.members;
+      const threads = opts.workers ?? defaultWorkerCount(count * years, emissionDriven);
+      checkEnsembleMemory({ members: opts.members, count, years, emissionDriven, shard: opts.shard, threads });
+      const result = await outOfMemoryAsInput(`an ensemble of ${count} members over ${years} years`, () =>
+        runEnsemble(input, {
+          members: opts.members,
+          seed: opts.seed,
+          thresholds: opts.thresholds,
+          baseline: opts.baseline,
+          shard: opts.shard,
+          workers: opts.workers,
+          onProgress: progressBar(io, 'members', 20_000),
+        }),
+      );
       // Recorded in shard files, so that a merge can say what the ensemble was made from.
       const origin: EnsembleOrigin = {
         pathway: read.pathway.name,
@@ -123,10 +131,12 @@ export function ensembleCommand(io: CliIo): Command {
       const allNotes = [...origin.notes, ...result.notes];
       if (opts.shard) {
         if (!opts.out || !opts.out.toLowerCase().endsWith('.json')) throw new ConfigError('--shard writes a shard file: give --out NAME.json', 'out');
-        writeOutput(
-          opts.out,
-          { '.json': () => shardToJson({ ...result.members!, origin }) },
-          { inputs, parameters: ensembleParameters(result.config), baseline: opts.baseline, notes: allNotes, seed: opts.seed, pathway: origin.pathway, io },
+        await outOfMemoryAsInput(`writing a shard file of ${count} members over ${years} years`, () =>
+          writeOutput(
+            opts.out!,
+            { '.json': () => shardToJson({ ...result.members!, origin }) },
+            { inputs, parameters: ensembleParameters(result.config), baseline: opts.baseline, notes: allNotes, seed: opts.seed, pathway: origin.pathway, io },
+          ),
         );
         io.stderr(`wrote shard ${opts.shard.index}/${opts.shard.count} (${result.memberCount} members) to ${opts.out}; combine all shards with \`warmcast merge\`\n`);
         return;
@@ -145,17 +155,28 @@ export function mergeCommand(io: CliIo): Command {
     .option('--no-chart', 'omit the terminal chart');
   refuseOptions(cmd, MERGE_REFUSES)
     .addHelpText('after', '\nEvery setting (pathway, seed, members, thresholds, baseline, CO2 formula) comes from the shards.\n\nExample:\n  warmcast merge shard-*.json --out swift-ens.csv\n')
-    .action((files: string[], opts: { out?: string; chart: boolean }) => {
-      const shards = files.map((file) => {
-        let text: string;
-        try {
-          text = readFileSync(resolve(io.cwd, file), 'utf8');
-        } catch (e) {
-          throw new InputError([{ file, code: 'input.unreadable', message: `shard file cannot be read (${(e as NodeJS.ErrnoException).code})`, expected: 'a shard file written by `warmcast ensemble --shard K/N`' }]);
+    .action(async (files: string[], opts: { out?: string; chart: boolean }) => {
+      // One shard at a time, so that only the merged members and one shard's data are held.
+      const merger = shardMerger();
+      let checked = false;
+      const merged = await outOfMemoryAsInput('merging the shards', () => {
+        for (const file of files) {
+          let text: string;
+          try {
+            text = readFileSync(resolve(io.cwd, file), 'utf8');
+          } catch (e) {
+            throw new InputError([{ file, code: 'input.unreadable', message: `shard file cannot be read (${(e as NodeJS.ErrnoException).code})`, expected: 'a shard file written by `warmcast ensemble --shard K/N`' }]);
+          }
+          const members = shardFromJson(text, file);
+          if (!checked && members.shard) {
+            // Shards are equal to within one member; the merge allocates the whole ensemble at the first.
+            checkMergeMemory(members.config.membersTotal, members.config.yearCount, members.memberCount + 1);
+            checked = true;
+          }
+          merger.add({ file, members });
         }
-        return { file, members: shardFromJson(text, file) };
+        return merger.finish();
       });
-      const merged = mergeShards(shards);
       const result = summarizeEnsemble(merged);
       // Shards record the pathway since the shard file gained `pathway`; older ones merge without it.
       const origin = merged.origin;
@@ -169,6 +190,24 @@ export function mergeCommand(io: CliIo): Command {
       });
     });
   return cmd;
+}
+
+/** Members of one shard (`shardRange`'s slice). */
+function shardSize(members: number, shard: { index: number; count: number }): number {
+  const { from, to } = shardRange(members, shard);
+  return to - from;
+}
+
+/**
+ * Runs `work`, turning an allocation failure (engine limit or exhausted memory) into a ConfigError
+ * (exit 2) that says what ran out of memory, instead of an internal error.
+ */
+async function outOfMemoryAsInput<T>(what: string, work: () => T | Promise<T>): Promise<T> {
+  try {
+    return await work();
+  } catch (e) {
+    throw allocationError(e, what) ?? e;
+  }
 }
 
 /** The note of a merge whose shards do not record their pathway. */

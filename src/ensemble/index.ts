@@ -2,6 +2,8 @@ export { assessedQuantile, LIKELY_Z, normalRange, pointRange, VERY_LIKELY_Z } fr
 export type { AssessedRange } from './assessed-range.js';
 export type { EnsembleConfig, EnsembleMembers, EnsembleOrigin } from './ensemble-members.js';
 export { ensembleHeadlines } from './ensemble-headlines.js';
+export { ensembleMemory, mergeMemory } from './ensemble-memory.js';
+export type { MemoryEstimate } from './ensemble-memory.js';
 export type { EnsembleHeadlines, MedianCrossing, ThresholdHeadline } from './ensemble-headlines.js';
 export { ensembleTable, probAboveColumn } from './ensemble-table.js';
 export type { EnsembleTable } from './ensemble-table.js';
