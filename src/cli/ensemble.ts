@@ -87,7 +87,7 @@ export function ensembleCommand(io: CliIo): Command {
     .option('--baseline <years>', 'baseline period for warming', yearRangeOption, [1850, 1900])
     .option('--shard <K/N>', 'run only the K-th of N equal slices of the members and write them as a shard file (.json) for `warmcast merge`', shardOption)
     .option('--workers <count>', 'threads (default: chosen by run size; the output does not depend on it)', wholeNumberOption('--workers', 1))
-    .option('-o, --out <file>', 'write the yearly percentiles and probabilities: .csv (+ .meta.json), .json, .md; with --shard a .json shard file')
+    .option('-o, --out <file>', 'write the headline figures and the yearly percentiles and probabilities: .csv (+ .meta.json), .json, .md; with --shard a .json shard file')
     .option('--no-splice', 'do not splice a pathway that starts late onto the bundled history')
     .option('--no-chart', 'omit the terminal chart')
     .addOption(new Option('--co2-formula <name>', 'CO2 forcing: ar6 (Meinshausen et al. 2020 + AR6 adjustment) or log (Myhre et al. 1998)').choices(['ar6', 'log']));
@@ -151,7 +151,7 @@ export function mergeCommand(io: CliIo): Command {
   const cmd = new Command('merge')
     .description('combine the shard files of one ensemble (from `warmcast ensemble --shard K/N`) into its full statistics')
     .argument('<shard...>', 'shard files (.json), all K from 1 to N of one ensemble')
-    .option('-o, --out <file>', 'write the yearly percentiles and probabilities: .csv (+ .meta.json), .json, .md')
+    .option('-o, --out <file>', 'write the headline figures and the yearly percentiles and probabilities: .csv (+ .meta.json), .json, .md')
     .option('--no-chart', 'omit the terminal chart');
   refuseOptions(cmd, MERGE_REFUSES)
     .addHelpText('after', '\nEvery setting (pathway, seed, members, thresholds, baseline, CO2 formula) comes from the shards.\n\nExample:\n  warmcast merge shard-*.json --out swift-ens.csv\n')
