@@ -1,18 +1,21 @@
-import { Command, InvalidArgumentError } from 'commander';
+import { Command, InvalidArgumentError, Option } from 'commander';
 import { readFileSync } from 'node:fs';
 import { resolve } from 'node:path';
 import { ConfigError, InputError } from '../errors.js';
-import { ensembleTable, mergeShards, runEnsemble, shardFromJson, shardToJson, summarizeEnsemble, type EnsembleResult } from '../ensemble/index.js';
+import { defaultWorkerCount, ensembleHeadlines, ensembleTable, fewMembersWarning, runEnsemble, shardFromJson, shardMerger, shardRange, shardToJson, summarizeEnsemble, type EnsembleConfig, type EnsembleHeadlines, type EnsembleOrigin, type EnsembleResult } from '../ensemble/index.js';
 import type { Table } from '../io/index.js';
 import { readPathway } from '../io/load-pathway.js';
 import { ensembleInput } from '../projection/index.js';
-import { standardCautions, terminalChart, thresholdBaselineNote, thresholdName } from '../report/index.js';
+import { ensembleHeadlineLines, ensembleHeadlinesMarkdown, standardCautions, terminalChart, thresholdBaselineNote } from '../report/index.js';
 import type { CliIo } from './cli-io.js';
-import { addModelOptions, baselineOption, type ModelOptions, pathwayArg, resolveModelParams, thresholdsOption, wholeNumberOption } from './options.js';
+import { baselineOption, pathwayArg, refuseOptions, resolveModelParams, thresholdsOption, wholeNumberOption, type RefusedOption } from './options.js';
 import { pathwayInputs, tableRenderers, writeOutput } from './output.js';
+import { allocationError, checkEnsembleMemory, checkMergeMemory } from './memory-check.js';
 import { progressBar } from './progress.js';
+import { sha256File } from './provenance.js';
 
-interface EnsembleCliOptions extends ModelOptions {
+interface EnsembleCliOptions {
+  co2Formula?: 'ar6' | 'log';
   members: number;
   seed: number;
   thresholds: number[];
@@ -27,13 +30,44 @@ interface EnsembleCliOptions extends ModelOptions {
 /** The uncertainty sentence of an ensemble's outputs. */
 function uncertaintyText(r: EnsembleResult): string {
   const carbon = r.config.emissionDriven
-    ? ' Each member also runs its own CO2 cycle, responding to its own warming, with a sampled multiplier on the carbon-cycle response time (Joos et al. 2013 spread); CH4 and N2O follow one central run.'
+    ? ' Each member also runs its own CO2 cycle, responding to its own warming, with a sampled multiplier on the pre-industrial iIRF100 r0 of its uptake feedback ' +
+      '(the 100-year integrated CO2 impulse response; Joos et al. 2013 multi-model spread); CH4 and N2O follow one central run.'
     : '';
   return (
     `Ranges are the 5-95 % and 17-83 % spread of ${r.memberCount} members whose ECS, TCR, 2xCO2 forcing and aerosol forcing ` +
     `were drawn to match the IPCC AR6 assessed ranges.${carbon} They do not include uncertainty in the pathway or in the model structure, ` +
     'and they are not constrained by observed warming.'
   );
+}
+
+/** What the model options of `run` would set, and why an ensemble draws or fixes it instead. */
+const SAMPLED =
+  'each member draws its own ECS, TCR, 2xCO2 forcing and aerosol forcing from the IPCC AR6 assessed ranges, derives its feedback and ocean exchange from them, ' +
+  'and holds the heat capacities and efficacy at the model defaults';
+
+/** Options of `run` that `ensemble` refuses. */
+const ENSEMBLE_REFUSES: RefusedOption[] = [
+  { flags: '--ecs <kelvin>', why: `${SAMPLED}; for one run with a chosen ECS use \`warmcast run --ecs\`` },
+  { flags: '--tcr <kelvin>', why: `${SAMPLED}; for one run with a chosen TCR use \`warmcast run --tcr\`` },
+  { flags: '--params <file>', why: `${SAMPLED}, so it reads no parameters file; the CO2 formula is chosen with --co2-formula` },
+];
+
+/** Why `merge` takes no model options. */
+const FROM_SHARDS = 'every setting comes from the shards (the CO2 formula they were made with; ECS, TCR, 2xCO2 and aerosol forcing are sampled per member)';
+const MERGE_REFUSES: RefusedOption[] = ['--ecs <kelvin>', '--tcr <kelvin>', '--params <file>', '--co2-formula <name>'].map((flags) => ({ flags, why: FROM_SHARDS }));
+
+/**
+ * The parameters an ensemble's provenance records: only what every member shares, as `--params`
+ * keys (the CO2 formula and the fixed heat capacities and efficacy); the notes describe the sampled
+ * quantities.
+ */
+function ensembleParameters(c: EnsembleConfig): Record<string, number | string> {
+  return {
+    co2_formula: c.co2Formula,
+    upper_heat_capacity: c.sampling.upperHeatCapacity,
+    deep_heat_capacity: c.sampling.deepHeatCapacity,
+    deep_efficacy: c.sampling.deepEfficacy,
+  };
 }
 
 function shardOption(text: string): { index: number; count: number } {
@@ -49,43 +83,65 @@ export function ensembleCommand(io: CliIo): Command {
     .argument('<pathway>', 'pathway CSV file or bundled name')
     .option('-n, --members <count>', 'ensemble members', wholeNumberOption('--members', 1), 1000)
     .option('--seed <integer>', 'random seed (same seed, same output on any machine and any number of workers)', wholeNumberOption('--seed', 0), 1)
-    .addOption(thresholdsOption('warming levels in K for exceedance probabilities', [1.5, 2, 3]))
+    .addOption(thresholdsOption('warming levels in K above the baseline (above 0) for exceedance probabilities', [1.5, 2, 3]))
     .addOption(baselineOption())
     .option('--shard <K/N>', 'run only the K-th of N equal slices of the members and write them as a shard file (.json) for `warmcast merge`', shardOption)
     .option('--workers <count>', 'threads (default: chosen by run size; the output does not depend on it)', wholeNumberOption('--workers', 1))
-    .option('-o, --out <file>', 'write the yearly percentiles and probabilities: .csv (+ .meta.json), .json, .md; with --shard a .json shard file')
+    .option('-o, --out <file>', 'write the headline figures and the yearly percentiles and probabilities: .csv (+ .meta.json), .json, .md; with --shard a .json shard file')
     .option('--no-splice', 'do not splice a pathway that starts late onto the bundled history')
-    .option('--no-chart', 'omit the terminal chart');
-  addModelOptions(cmd)
+    .option('--no-chart', 'omit the terminal chart')
+    .addOption(new Option('--co2-formula <name>', 'CO2 forcing: ar6 (Meinshausen et al. 2020 + AR6 adjustment) or log (Myhre et al. 1998)').choices(['ar6', 'log']).default('ar6', 'ar6'));
+  refuseOptions(cmd, ENSEMBLE_REFUSES)
     .addHelpText(
       'after',
-      '\nExamples:\n  warmcast ensemble swift --members 2000 --seed 7 --out swift-ens.csv\n' +
+      '\nECS, TCR, 2xCO2 and aerosol forcing are sampled per member, so --ecs, --tcr and --params are not taken.\n' +
+        '\nExamples:\n  warmcast ensemble swift --members 2000 --seed 7 --out swift-ens.csv\n' +
         '  warmcast ensemble swift --members 1000000 --seed 7 --shard 3/100 --out shard-3.json   # one task of an array job\n' +
         '  warmcast merge shard-*.json --out swift-ens.csv\n',
     )
     .action(async (arg: string, opts: EnsembleCliOptions) => {
       if (opts.seed >= 2 ** 32) throw new ConfigError('--seed must be below 2^32', 'seed');
-      const { params, paramsFile, notes: paramNotes } = resolveModelParams(opts, io);
+      // Central parameters: the CO2 formula, and the CH4 and N2O of an emission pathway's central run.
+      const { params } = resolveModelParams({ co2Formula: opts.co2Formula }, io);
       const read = readPathway(pathwayArg(arg, io), { splice: opts.splice });
       const { input, notes } = ensembleInput(read.pathway, params);
-      const inputs = [...pathwayInputs(read), ...(paramsFile ? [paramsFile] : [])];
-      const result = await runEnsemble(input, {
-        members: opts.members,
-        seed: opts.seed,
-        thresholds: opts.thresholds,
-        baseline: opts.baseline,
-        shard: opts.shard,
-        workers: opts.workers,
-        onProgress: progressBar(io, 'members', 20_000),
-      });
-      const allNotes = [...read.pathway.provenance.notes, ...notes, ...result.notes, ...paramNotes];
+      const inputs = pathwayInputs(read);
+      const years = input.years.length;
+      const emissionDriven = input.carbon !== undefined;
+      const count = opts.shard ? shardSize(opts.members, opts.shard) : opts.members;
+      const threads = opts.workers ?? defaultWorkerCount(count * years, emissionDriven);
+      checkEnsembleMemory({ members: opts.members, count, years, emissionDriven, shard: opts.shard, threads });
+      const result = await outOfMemoryAsInput(`an ensemble of ${count} members over ${years} years`, () =>
+        runEnsemble(input, {
+          members: opts.members,
+          seed: opts.seed,
+          thresholds: opts.thresholds,
+          baseline: opts.baseline,
+          shard: opts.shard,
+          workers: opts.workers,
+          onProgress: progressBar(io, 'members', 20_000),
+        }),
+      );
+      // Recorded in shard files, so that a merge can say what the ensemble was made from.
+      const origin: EnsembleOrigin = {
+        pathway: read.pathway.name,
+        inputs: inputs.map((path) => ({ path, sha256: sha256File(path) })),
+        notes: [...read.pathway.provenance.notes, ...notes],
+      };
+      const allNotes = [...origin.notes, ...result.notes];
       if (opts.shard) {
         if (!opts.out || !opts.out.toLowerCase().endsWith('.json')) throw new ConfigError('--shard writes a shard file: give --out NAME.json', 'out');
-        writeOutput(opts.out, { '.json': () => shardToJson(result.members!) }, { inputs, params, baseline: opts.baseline, notes: allNotes, seed: opts.seed, io });
+        await outOfMemoryAsInput(`writing a shard file of ${count} members over ${years} years`, () =>
+          writeOutput(
+            opts.out!,
+            { '.json': () => shardToJson({ ...result.members!, origin }) },
+            { inputs, parameters: ensembleParameters(result.config), baseline: opts.baseline, notes: allNotes, seed: opts.seed, pathway: origin.pathway, io },
+          ),
+        );
         io.stderr(`wrote shard ${opts.shard.index}/${opts.shard.count} (${result.memberCount} members) to ${opts.out}; combine all shards with \`warmcast merge\`\n`);
         return;
       }
-      emitEnsemble(result, read.pathway.name, { out: opts.out, chart: opts.chart, inputs, params, notes: allNotes, io });
+      emitEnsemble(result, origin.pathway, { out: opts.out, chart: opts.chart, inputs, notes: allNotes, pathway: origin.pathway, io });
     });
   return cmd;
 }
@@ -95,60 +151,99 @@ export function mergeCommand(io: CliIo): Command {
   const cmd = new Command('merge')
     .description('combine the shard files of one ensemble (from `warmcast ensemble --shard K/N`) into its full statistics')
     .argument('<shard...>', 'shard files (.json), all K from 1 to N of one ensemble')
-    .option('-o, --out <file>', 'write the yearly percentiles and probabilities: .csv (+ .meta.json), .json, .md')
+    .option('-o, --out <file>', 'write the headline figures and the yearly percentiles and probabilities: .csv (+ .meta.json), .json, .md')
     .option('--no-chart', 'omit the terminal chart');
-  addModelOptions(cmd)
-    .addHelpText('after', '\nExample:\n  warmcast merge shard-*.json --out swift-ens.csv\n')
-    .action((files: string[], opts: ModelOptions & { out?: string; chart: boolean }) => {
-      const shards = files.map((file) => {
-        let text: string;
-        try {
-          text = readFileSync(resolve(io.cwd, file), 'utf8');
-        } catch (e) {
-          throw new InputError([{ file, code: 'input.unreadable', message: `shard file cannot be read (${(e as NodeJS.ErrnoException).code})`, expected: 'a shard file written by `warmcast ensemble --shard K/N`' }]);
+  refuseOptions(cmd, MERGE_REFUSES)
+    .addHelpText('after', '\nEvery setting (pathway, seed, members, thresholds, baseline, CO2 formula) comes from the shards.\n\nExample:\n  warmcast merge shard-*.json --out swift-ens.csv\n')
+    .action(async (files: string[], opts: { out?: string; chart: boolean }) => {
+      // One shard at a time, so that only the merged members and one shard's data are held.
+      const merger = shardMerger();
+      let checked = false;
+      const merged = await outOfMemoryAsInput('merging the shards', () => {
+        for (const file of files) {
+          let text: string;
+          try {
+            text = readFileSync(resolve(io.cwd, file), 'utf8');
+          } catch (e) {
+            throw new InputError([{ file, code: 'input.unreadable', message: `shard file cannot be read (${(e as NodeJS.ErrnoException).code})`, expected: 'a shard file written by `warmcast ensemble --shard K/N`' }]);
+          }
+          const members = shardFromJson(text, file);
+          if (!checked && members.shard) {
+            // Shards are equal to within one member; the merge allocates the whole ensemble at the first.
+            checkMergeMemory(members.config.membersTotal, members.config.yearCount, members.memberCount + 1);
+            checked = true;
+          }
+          merger.add({ file, members });
         }
-        return { file, members: shardFromJson(text, file) };
+        return merger.finish();
       });
-      const result = summarizeEnsemble(mergeShards(shards));
-      const { params, notes: paramNotes } = resolveModelParams(opts, io);
-      emitEnsemble(result, 'merged ensemble', {
+      const result = summarizeEnsemble(merged);
+      // Shards record the pathway since the shard file gained `pathway`; older ones merge without it.
+      const origin = merged.origin;
+      emitEnsemble(result, origin?.pathway ?? 'merged ensemble (pathway not recorded in the shards)', {
         out: opts.out,
         chart: opts.chart,
         inputs: files.map((f) => resolve(io.cwd, f)),
-        params,
-        notes: [...result.notes, ...paramNotes],
+        notes: origin ? [...origin.notes, ...result.notes] : [NOT_RECORDED, ...result.notes],
+        ...(origin ? { pathway: origin.pathway, pathwayInputs: origin.inputs } : {}),
         io,
       });
     });
   return cmd;
 }
 
+/** Members of one shard (`shardRange`'s slice). */
+function shardSize(members: number, shard: { index: number; count: number }): number {
+  const { from, to } = shardRange(members, shard);
+  return to - from;
+}
+
+/**
+ * Runs `work`, turning an allocation failure (engine limit or exhausted memory) into a ConfigError
+ * (exit 2) that says what ran out of memory, instead of an internal error.
+ */
+async function outOfMemoryAsInput<T>(what: string, work: () => T | Promise<T>): Promise<T> {
+  try {
+    return await work();
+  } catch (e) {
+    throw allocationError(e, what) ?? e;
+  }
+}
+
+/** The note of a merge whose shards do not record their pathway. */
+const NOT_RECORDED = "the pathway's name, input files and notes were not recorded in the shards (written by an earlier warmcast); the shards agree on its forcing (checksum)";
+
 /** Writes an ensemble's table (if asked) and prints its summary and chart. */
 function emitEnsemble(
   result: EnsembleResult,
   name: string,
-  ctx: { out?: string; chart: boolean; inputs: string[]; params: ReturnType<typeof resolveModelParams>['params']; notes: string[]; io: CliIo },
+  ctx: { out?: string; chart: boolean; inputs: string[]; notes: string[]; pathway?: string; pathwayInputs?: EnsembleOrigin['inputs']; io: CliIo },
 ): void {
   const { io } = ctx;
   const baselineNote = thresholdBaselineNote(result.config.baseline);
   const notes = baselineNote ? [...ctx.notes, baselineNote] : ctx.notes;
   const t = ensembleTable(result);
   const table: Table = { columns: t.columns, data: t.columns.map((c) => t.values[c]) };
+  const headlines = ensembleHeadlines(result);
   const caution = [standardCautions()[0], uncertaintyText(result), standardCautions()[2]].join(' ');
   if (ctx.out !== undefined) {
-    const written = writeOutput(ctx.out, tableRenderers(table), {
+    const renderers = tableRenderers(table, { json: { headlines }, markdownBefore: ensembleHeadlinesMarkdown(headlines) });
+    const written = writeOutput(ctx.out, renderers, {
+      sidecar: { headlines },
       inputs: ctx.inputs,
-      params: ctx.params,
+      parameters: ensembleParameters(result.config),
       baseline: result.config.baseline,
       notes,
       seed: result.config.seed,
+      pathway: ctx.pathway,
+      pathwayInputs: ctx.pathwayInputs,
       caution,
       io,
     });
     for (const w of written) io.stderr(`wrote ${w}\n`);
   }
   const write = ctx.out === '-' ? io.stderr : io.stdout;
-  write(ensembleSummary(result, name) + (baselineNote ? `  note: ${baselineNote}\n` : ''));
+  write(ensembleSummary(result, headlines, name) + (baselineNote ? `  note: ${baselineNote}\n` : ''));
   if (ctx.chart) {
     const { years, percentiles: p } = result;
     const i0 = Math.max(0, Math.min(1850, years[years.length - 1]) - years[0]);
@@ -171,20 +266,15 @@ function emitEnsemble(
   write('\n' + [standardCautions()[0], uncertaintyText(result), standardCautions()[2]].map((c) => `  caution: ${c}`).join('\n') + '\n\n');
 }
 
-/** The headline lines of an ensemble: members, seed, redraws, sampled ranges, crossing probabilities. */
-function ensembleSummary(r: EnsembleResult, name: string): string {
+/** The headline lines of an ensemble: members, seed, redraws, sampled ranges, warming at milestones, crossing probabilities. */
+function ensembleSummary(r: EnsembleResult, h: EnsembleHeadlines, name: string): string {
   const lines: string[] = [];
   const c = r.config;
-  const pct = (v: number | null) => (v === null ? 'n/a (run too short)' : `${(100 * v).toFixed(0)} %`);
-  lines.push(`${name}: ${r.memberCount} members, seed ${c.seed}; ${r.redraws} unphysical draws redrawn; warming relative to ${c.baseline.join('-')}`);
-  const q = (k: 'ecsK' | 'tcrK') => r.parameters[k as keyof typeof r.parameters];
-  const ecs = q('ecsK');
-  const tcr = q('tcrK');
-  if (ecs && tcr) {
-    lines.push(
-      `  sampled ECS ${ecs.p50.toFixed(2)} K [${ecs.p05.toFixed(2)}-${ecs.p95.toFixed(2)}], TCR ${tcr.p50.toFixed(2)} K [${tcr.p05.toFixed(2)}-${tcr.p95.toFixed(2)}] (median [5-95 %]); ECS-TCR correlation ${r.ecsTcrCorrelation.toFixed(2)}`,
-    );
-  }
+  lines.push(`${name}: ${r.memberCount} member${r.memberCount === 1 ? '' : 's'}, seed ${c.seed}; ${r.redraws} unphysical draws redrawn; warming relative to ${c.baseline.join('-')}`);
+  const few = fewMembersWarning(r.memberCount);
+  if (few) lines.push(`  warning: ${few}`);
+  const { sampled, thresholds } = ensembleHeadlineLines(h);
+  lines.push(...sampled);
   const { years, percentiles: p } = r;
   for (const y of [2030, 2050, 2100]) {
     const i = y - years[0];
@@ -192,10 +282,6 @@ function ensembleSummary(r: EnsembleResult, name: string): string {
       lines.push(`  ${y}: median ${p.p50[i].toFixed(2)} K, likely (17-83 %) ${p.p17[i].toFixed(2)}-${p.p83[i].toFixed(2)} K, very likely (5-95 %) ${p.p05[i].toFixed(2)}-${p.p95[i].toFixed(2)} K`);
     }
   }
-  for (const x of r.crossings) {
-    const by = x.byMilestone.map((m) => `by ${m.year} ${pct(m.probability)}`).join(', ');
-    const median = x.medianYear === null ? `fewer than half of the members cross it by ${years[years.length - 1]}` : `median crossing year ${x.medianYear}`;
-    lines.push(`  ${thresholdName(x.thresholdK, c.baseline)} (20-year mean): probability of crossing ${by}; ${median}`);
-  }
+  lines.push(...thresholds);
   return lines.join('\n') + '\n';
 }

@@ -3,32 +3,56 @@ import { resolve } from 'node:path';
 import { InvalidArgumentError, Option, type Command } from 'commander';
 import { calibrate, type CalibrationTargets } from '../climate/calibrate.js';
 import { CALIBRATION_DEFAULTS, PARAM_KEYS, type ClimateParams } from '../climate/params.js';
-import { InputError } from '../errors.js';
+import { ConfigError, InputError } from '../errors.js';
 import { AR6_REFERENCE_PERIOD } from '../report/index.js';
 import { parseParams } from '../io/read-params.js';
 import type { CliIo } from './cli-io.js';
 
-/** Coerces a finite number option. */
+/**
+ * A number written in decimal: optional sign, digits with an optional point, optional exponent
+ * (`2.5`, `-1`, `.5`, `1e6`). JavaScript's Number() also reads hexadecimal, binary and octal
+ * (`0x10` is 16), `Infinity`, and an empty or blank text as 0; none of these is what a user means.
+ */
+const DECIMAL = /^[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:e[+-]?\d+)?$/i;
+
+/** The value of decimal text (surrounding spaces allowed), or NaN for anything else. */
+function decimalValue(text: string): number {
+  const t = text.trim();
+  return DECIMAL.test(t) ? Number(t) : NaN;
+}
+
+/**
+ * Coerces a finite decimal number option (`2.5`, `-1`, `1e-10`); hexadecimal, `Infinity`, empty
+ * and blank text are refused.
+ * @example numberOption('--ecs')('4.5') // 4.5
+ */
 export function numberOption(name: string) {
   return (text: string): number => {
-    const v = Number(text);
-    if (text.trim() === '' || !Number.isFinite(v)) throw new InvalidArgumentError(`${name} must be a number, got "${text}"`);
+    const v = decimalValue(text);
+    if (!Number.isFinite(v)) throw new InvalidArgumentError(`${name} must be a decimal number such as 2.5, got "${text}"`);
     return v;
   };
 }
 
-/** Coerces a whole number of at least `min`. */
+/**
+ * Coerces a whole number of at least `min`, written in decimal digits; exponent notation that is
+ * an exact whole number (`1e6`) is accepted, hexadecimal (`0x10`), fractions, empty and blank text
+ * are not.
+ * @example wholeNumberOption('--members', 1)('1e6') // 1000000
+ */
 export function wholeNumberOption(name: string, min: number) {
   return (text: string): number => {
-    const v = Number(text);
-    if (!Number.isInteger(v) || v < min) throw new InvalidArgumentError(`${name} must be a whole number of at least ${min}, got "${text}"`);
+    const v = decimalValue(text);
+    if (!Number.isSafeInteger(v) || v < min) {
+      throw new InvalidArgumentError(`${name} must be a whole number of at least ${min} in decimal digits, such as 2000 or 1e6; got "${text}"`);
+    }
     return v;
   };
 }
 
-/** Coerces a whole-number year option. */
+/** Coerces a whole-number year option, written in decimal digits. */
 export function yearOption(text: string): number {
-  const v = Number(text);
+  const v = decimalValue(text);
   if (!Number.isInteger(v) || v < 1000 || v > 3000) throw new InvalidArgumentError(`must be a year such as 2100, got "${text}"`);
   return v;
 }
@@ -40,13 +64,12 @@ export function yearRangeOption(text: string): [number, number] {
   return [Number(m[1]), Number(m[2])];
 }
 
-/** Coerces a comma-separated list of numbers (`1.5,2,3`). */
+/** Coerces a comma-separated list of decimal numbers (`1.5,2,3`); empty items are refused. */
 export function numberListOption(name: string) {
   return (text: string): number[] => {
-    const parts = text.split(',').map((s) => s.trim());
-    const values = parts.map(Number);
-    if (parts.some((p) => p === '') || values.some((v) => !Number.isFinite(v))) {
-      throw new InvalidArgumentError(`${name} must be numbers separated by commas, such as 1.5,2,3; got "${text}"`);
+    const values = text.split(',').map(decimalValue);
+    if (values.some((v) => !Number.isFinite(v))) {
+      throw new InvalidArgumentError(`${name} must be decimal numbers separated by commas, such as 1.5,2,3; got "${text}"`);
     }
     return values;
   };
@@ -62,12 +85,29 @@ export function baselineOption(): Option {
     .default([...DEFAULT_BASELINE], DEFAULT_BASELINE.join('-'));
 }
 
-/** `--thresholds <list>` with `defaults`, shown in help as they are typed (`1.5,2`). */
+/** `--thresholds <list>` (warming levels above 0 K) with `defaults`, shown in help as they are typed (`1.5,2`). */
 export function thresholdsOption(description: string, defaults: number[]): Option {
-  return new Option('--thresholds <list>', description).argParser(numberListOption('--thresholds')).default(defaults, defaults.join(','));
+  return new Option('--thresholds <list>', description).argParser(warmingLevelsOption('--thresholds')).default(defaults, defaults.join(','));
 }
 
-/** The model options shared by run, compare, ensemble and calibrate. */
+/**
+ * Coerces a comma-separated list of warming levels (`1.5,2,3`), K above the baseline: decimal
+ * numbers above 0 (a level of 0 K or below would be "reached" by the baseline itself).
+ * @example warmingLevelsOption('--thresholds')('1.5,2') // [1.5, 2]
+ */
+export function warmingLevelsOption(name: string) {
+  const list = numberListOption(name);
+  return (text: string): number[] => {
+    const values = list(text);
+    const bad = values.filter((v) => !(v > 0));
+    if (bad.length > 0) {
+      throw new InvalidArgumentError(`${name} must be warming levels above 0 K (levels of warming above the baseline), such as 1.5,2,3; got ${bad.join(', ')}`);
+    }
+    return values;
+  };
+}
+
+/** The model options shared by run, compare and calibrate (ensemble takes only --co2-formula). */
 export interface ModelOptions {
   params?: string;
   ecs?: number;
@@ -93,6 +133,33 @@ export function addModelOptions(cmd: Command): Command {
     .hook('preAction', (command) => {
       if (command.getOptionValueSource('co2Formula') === 'default') command.setOptionValue('co2Formula', undefined);
     });
+}
+
+/** An option a command refuses, and why. */
+export interface RefusedOption {
+  /** Commander flags, e.g. `--ecs <kelvin>`. */
+  flags: string;
+  /** Why the command does not use it (the rest of the message names the command and the option). */
+  why: string;
+}
+
+/**
+ * Adds options that `cmd` does not use but that a user may well try (they exist on sister commands):
+ * hidden from the help, and refused with a ConfigError (exit 2) that says why, so that a value is
+ * never accepted and silently ignored.
+ *
+ * @example refuseOptions(cmd, [{ flags: '--ecs <kelvin>', why: 'each member draws its own ECS' }])
+ * // warmcast ensemble swift --ecs 4.5 -> "ensemble does not take --ecs: each member draws its own ECS" (exit 2)
+ */
+export function refuseOptions(cmd: Command, refused: RefusedOption[]): Command {
+  for (const { flags, why } of refused) {
+    const option = new Option(flags).hideHelp();
+    option.argParser(() => {
+      throw new ConfigError(`${cmd.name()} does not take ${option.long}: ${why}`, option.attributeName());
+    });
+    cmd.addOption(option);
+  }
+  return cmd;
 }
 
 /**

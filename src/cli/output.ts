@@ -39,6 +39,11 @@ export type Renderers = Partial<Record<'.csv' | '.json' | '.md' | '.svg' | '.htm
 /** What {@link writeOutput} needs: the provenance inputs and where to write stdout. */
 export interface OutputContext extends ProvenanceInput {
   io: CliIo;
+  /**
+   * More members of a CSV's `.meta.json` sidecar, after the provenance (an ensemble's `headlines`),
+   * so that what the JSON and Markdown forms carry beside the table is not lost with CSV.
+   */
+  sidecar?: Record<string, unknown>;
 }
 
 /**
@@ -65,30 +70,51 @@ export function writeOutput(out: string, renderers: Renderers, ctx: OutputContex
     throw new ConfigError(`--out ${path}: the extension must be one of ${Object.keys(renderers).join(', ')} (it picks the format)`, 'out');
   }
   const files = [{ path, content: render(provenance) }];
-  if (ext === '.csv') files.push({ path: path.slice(0, -ext.length) + '.meta.json', content: JSON.stringify(provenance, null, 2) + '\n' });
+  if (ext === '.csv') files.push({ path: path.slice(0, -ext.length) + '.meta.json', content: JSON.stringify({ ...provenance, ...ctx.sidecar }, null, 2) + '\n' });
   // The table and its sidecar land together or not at all: a CSV without its provenance is not written.
   writeFilesAtomic(files, { inputs: ctx.inputs });
   return files.map((f) => f.path);
 }
 
-/** The formats of a plain yearly table: CSV, JSON with provenance, Markdown with provenance below. */
-export function tableRenderers(table: Table): Renderers {
+/** What a yearly table's files carry besides the table (an ensemble's headlines). */
+export interface TableExtras {
+  /** Members of the JSON form's top-level object, after the provenance. */
+  json?: Record<string, unknown>;
+  /** Markdown placed above the table. */
+  markdownBefore?: string;
+}
+
+/**
+ * The formats of a plain yearly table: CSV, JSON with provenance, Markdown with provenance below
+ * (and `extras` in the JSON and above the Markdown table).
+ */
+export function tableRenderers(table: Table, extras: TableExtras = {}): Renderers {
   return {
     '.csv': () => formatCsv(table),
-    '.json': (p) => formatJson(table, p),
-    '.md': (p) => markdownWithProvenance(table, p),
+    '.json': (p) => formatJson(table, p, extras.json),
+    '.md': (p) => (extras.markdownBefore ? `${extras.markdownBefore}\n` : '') + markdownWithProvenance(table, p),
   };
 }
 
 function markdownWithProvenance(table: Table, provenance: Provenance): string {
-  const inputs = provenance.inputs.map((i) => `${i.path} (sha256 ${i.sha256.slice(0, 12)}…)`).join('; ');
+  const files = (list: { path: string; sha256: string }[]) => list.map((i) => `${i.path} (sha256 ${i.sha256.slice(0, 12)}…)`).join('; ');
+  const pathway = provenance.pathway !== undefined ? `pathway: ${provenance.pathway}; ` : '';
+  const recorded = provenance.pathway_inputs ? `; pathway files (as recorded in the shards): ${files(provenance.pathway_inputs)}` : '';
   return (
     formatMarkdown(table, 4) +
-    `\nwarmcast ${provenance.version}, ${provenance.created_utc}; warming relative to ${provenance.baseline}; inputs: ${inputs}.\n` +
+    `\nwarmcast ${provenance.version}, ${provenance.created_utc}; ${pathway}warming relative to ${provenance.baseline}; inputs: ${files(provenance.inputs)}${recorded}.\n` +
     `Parameters: ${Object.entries(provenance.parameters).map(([k, v]) => `${k} ${typeof v === 'number' ? +v.toPrecision(6) : v}`).join(', ')}.\n` +
-    (provenance.notes.length ? `Notes: ${provenance.notes.join(' ')}\n` : '') +
+    (provenance.notes.length ? `\nNotes:\n\n${provenance.notes.map((n) => `- ${markdownText(n)}`).join('\n')}\n` : '') +
     `\n${provenance.caution}\n`
   );
+}
+
+/**
+ * A note as the text of one Markdown list item: line breaks become spaces, and backslashes and `<`
+ * are escaped so that `prob_above_<t>` is not read as an HTML tag.
+ */
+function markdownText(text: string): string {
+  return text.replace(/\r\n|\r|\n/g, ' ').replace(/\\/g, '\\\\').replace(/</g, '\\<');
 }
 
 /**

@@ -17,6 +17,13 @@ export interface Provenance {
   parameters: Record<string, number | string>;
   /** Baseline of the warming columns. */
   baseline: string;
+  /** The pathway's name, for ensembles and merged shards. */
+  pathway?: string;
+  /**
+   * A merge's pathway files as its shards recorded them (path when the shard was written, SHA-256
+   * then); `inputs` lists the shard files the merge read.
+   */
+  pathway_inputs?: { path: string; sha256: string }[];
   /** Random seed, for ensembles. */
   seed?: number;
   /** Notes on the pathways: history splice, interpolation, gases held at 1750 values. */
@@ -37,23 +44,35 @@ export function sha256File(path: string): string {
 export interface ProvenanceInput {
   /** Absolute paths of every input file (hashed; never overwritten by outputs). */
   inputs: string[];
-  params: ClimateParams;
+  /** The parameters of a run with one parameter set (recorded as `--params` reads them). */
+  params?: ClimateParams;
+  /**
+   * The parameters to record instead of `params`, when no single set was used: an ensemble records
+   * only what it holds fixed for every member (its notes describe what it samples).
+   */
+  parameters?: Record<string, number | string>;
   baseline: readonly [number, number];
   notes: string[];
   seed?: number;
+  /** See Provenance.pathway. */
+  pathway?: string;
+  /** See Provenance.pathway_inputs. */
+  pathwayInputs?: { path: string; sha256: string }[];
   /** Caution text (default: the single-run cautions). */
   caution?: string;
 }
 
-/** Builds the provenance record for files read (`inputs`, absolute paths) and the parameters used. */
+/** Builds the provenance record for files read (`inputs`, absolute paths) and the parameters used (`parameters`, else `params`). */
 export function buildProvenance(args: ProvenanceInput): Provenance {
   return {
     tool: 'warmcast',
     version: packageVersion(),
     created_utc: DateTime.utc().toISO() ?? new Date().toISOString(),
     inputs: [...new Set(args.inputs)].map((path) => ({ path, sha256: sha256File(path) })),
-    parameters: paramsToJson(args.params),
+    parameters: args.parameters ?? (args.params ? paramsToJson(args.params) : {}),
     baseline: `${args.baseline[0]}-${args.baseline[1]}`,
+    ...(args.pathway !== undefined ? { pathway: args.pathway } : {}),
+    ...(args.pathwayInputs !== undefined ? { pathway_inputs: args.pathwayInputs } : {}),
     ...(args.seed !== undefined ? { seed: args.seed } : {}),
     notes: args.notes,
     caution: args.caution ?? CAUTION,

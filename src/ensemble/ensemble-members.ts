@@ -37,6 +37,20 @@ export interface EnsembleConfig {
 }
 
 /**
+ * What an ensemble was made from, as its shard files record it for `warmcast merge` (which does not
+ * read the pathway again): the pathway's name, its input files with their SHA-256, and the notes on
+ * how it was read (interpolation, history splice, emission handling).
+ */
+export interface EnsembleOrigin {
+  /** The pathway's display name (its `# name:` metadata or file name). */
+  pathway: string;
+  /** The files it was read from, as paths when the shard was written, with their SHA-256 (hex). */
+  inputs: { path: string; sha256: string }[];
+  /** Notes on the pathway and the ensemble input, for provenance. */
+  notes: string[];
+}
+
+/**
  * The raw members of an ensemble or of one shard of it: every member's yearly warming and
  * parameters. Everything an ensemble reports is computed from this, so shards holding it merge into
  * exactly what one run gives.
@@ -55,6 +69,8 @@ export interface EnsembleMembers {
   parameters: Record<MemberParameter, Float64Array>;
   /** Unphysical draws discarded while drawing these members. */
   redraws: number;
+  /** What the ensemble was made from, when known (recorded in shard files; absent in older ones). */
+  origin?: EnsembleOrigin;
 }
 
 /**

@@ -1,6 +1,10 @@
 export { assessedQuantile, LIKELY_Z, normalRange, pointRange, VERY_LIKELY_Z } from './assessed-range.js';
 export type { AssessedRange } from './assessed-range.js';
-export type { EnsembleConfig, EnsembleMembers } from './ensemble-members.js';
+export type { EnsembleConfig, EnsembleMembers, EnsembleOrigin } from './ensemble-members.js';
+export { ensembleHeadlines } from './ensemble-headlines.js';
+export { ensembleMemory, mergeMemory } from './ensemble-memory.js';
+export type { MemoryEstimate } from './ensemble-memory.js';
+export type { EnsembleHeadlines, MedianCrossing, ThresholdHeadline } from './ensemble-headlines.js';
 export { ensembleTable, probAboveColumn } from './ensemble-table.js';
 export type { EnsembleTable } from './ensemble-table.js';
 export { EXCHANGE_RANGE, exchangeForTcr, solverTransientResponse, tcrSolver } from './exchange-for-tcr.js';
@@ -24,5 +28,5 @@ export type { MemberDraw, MemberParameter, MemberSampler, SampledMembers } from 
 export { AR6_SAMPLING, describeSampling, validateSampling } from './sampling.js';
 export type { EnsembleSampling } from './sampling.js';
 export { SHARD_FORMAT, SHARD_VERSION, shardFileBytes, shardFromJson, shardToJson } from './shard-file.js';
-export { exceedanceCountsLength, PERCENTILE_NAMES, PERCENTILES, summarizeEnsemble } from './summarize-ensemble.js';
+export { exceedanceCountsLength, FEW_MEMBERS, fewMembersWarning, PERCENTILE_NAMES, PERCENTILES, summarizeEnsemble } from './summarize-ensemble.js';
 export type { EnsembleResult, ParameterSummary, PercentileName, ThresholdCrossing } from './summarize-ensemble.js';

@@ -1,5 +1,5 @@
 import { InputError, type InputProblem } from '../errors.js';
-import type { EnsembleMembers } from './ensemble-members.js';
+import type { EnsembleConfig, EnsembleMembers, EnsembleOrigin } from './ensemble-members.js';
 import { shardRange } from './run-ensemble.js';
 import { MEMBER_PARAMETERS, emptyParameters, type MemberParameter } from './sample-members.js';
 
@@ -28,10 +28,12 @@ export interface ShardMerger {
  * come in any order; every shard 1..N of the same ensemble must be there exactly once.
  *
  * @param shards the shard files' members
- * @returns the members of the whole ensemble (no `shard`)
+ * @returns the members of the whole ensemble (no `shard`), with the pathway `origin` the shards
+ *   record (none when no shard records it, as in files from before it was recorded)
  * @throws InputError when a file holds a whole ensemble rather than a shard, comes from a different
- *   ensemble (seed, pathway, years, baseline, thresholds, sampling or member count differ), repeats
- *   a shard, or shards are missing
+ *   ensemble (seed, pathway, years, baseline, thresholds, sampling or member count differ), records
+ *   a different pathway origin (name, file SHA-256 or notes) than another shard, repeats a shard, or
+ *   shards are missing
  * @example summarizeEnsemble(mergeShards(files.map((file) => ({ file, members: shardFromJson(read(file), file) }))))
  */
 export function mergeShards(shards: ShardInput[]): EnsembleMembers {
@@ -56,6 +58,8 @@ export function shardMerger(): ShardMerger {
   let first: ShardInput | undefined;
   let reference = '';
   let merged: EnsembleMembers | undefined;
+  // The first recorded origin (older shard files have none) and the file it came from.
+  let origin: { file: string; origin: EnsembleOrigin } | undefined;
 
   return {
     add(s: ShardInput): void {
@@ -79,8 +83,11 @@ export function shardMerger(): ShardMerger {
       }
       const base = first.members;
       if (JSON.stringify(m.config) !== reference) {
-        const fields = (Object.keys(m.config) as (keyof typeof m.config)[]).filter((k) => JSON.stringify(m.config[k]) !== JSON.stringify(base.config[k]));
-        problems.push({ file: s.file, code: 'input.shard-mismatch', message: `must come from the same ensemble as ${first.file}; it differs in ${fields.join(', ')}` });
+        problems.push({
+          file: s.file,
+          code: 'input.shard-mismatch',
+          message: `must come from the same ensemble as ${first.file}; it differs in ${joinWords(configDifferences(m.config, base.config))}`,
+        });
         return;
       }
       if (m.shard.count !== base.shard!.count) {
@@ -96,6 +103,14 @@ export function shardMerger(): ShardMerger {
         });
         return;
       }
+      if (m.origin && origin) {
+        const differs = originDifference(m.origin, origin.origin);
+        if (differs) {
+          problems.push({ file: s.file, code: 'input.shard-mismatch', message: `must come from the same pathway as ${origin.file}; ${differs}` });
+          return;
+        }
+      }
+      if (m.origin && !origin) origin = { file: s.file, origin: m.origin };
       const seen = byIndex.get(m.shard.index);
       if (seen !== undefined) {
         problems.push({ file: s.file, code: 'input.shard-repeated', message: `must not repeat shard ${m.shard.index}/${m.shard.count}, already given by ${seen}` });
@@ -124,7 +139,57 @@ export function shardMerger(): ShardMerger {
         }
       }
       if (problems.length > 0) throw new InputError(problems);
-      return merged!;
+      return origin ? { ...merged!, origin: origin.origin } : merged!;
     },
   };
+}
+
+/**
+ * How two ensemble configurations differ, in the words of the options that set them (`--seed (8,
+ * not 7)`), this shard's value first. The input checksum is named only when nothing else about the
+ * pathway differs (a different CO2 formula, kind or span of years changes the forcing too).
+ */
+function configDifferences(c: EnsembleConfig, ref: EnsembleConfig): string[] {
+  const out: string[] = [];
+  const differ = (k: keyof EnsembleConfig) => JSON.stringify(c[k]) !== JSON.stringify(ref[k]);
+  const option = (k: keyof EnsembleConfig, words: string, show: (x: EnsembleConfig) => string) => {
+    if (differ(k)) out.push(`${words} (${show(c)}, not ${show(ref)})`);
+  };
+  const span = (x: EnsembleConfig) => `${x.firstYear}-${x.firstYear + x.yearCount - 1}`;
+  const kind = (x: EnsembleConfig) => (x.emissionDriven ? 'emission-driven' : 'concentration-driven');
+  option('seed', '--seed', (x) => String(x.seed));
+  option('membersTotal', '--members', (x) => String(x.membersTotal));
+  option('thresholds', '--thresholds', (x) => x.thresholds.join(','));
+  option('baseline', '--baseline', (x) => x.baseline.join('-'));
+  option('co2Formula', '--co2-formula', (x) => x.co2Formula);
+  if (differ('firstYear') || differ('yearCount')) out.push(`the pathway's years (${span(c)}, not ${span(ref)})`);
+  option('emissionDriven', 'the kind of pathway', kind);
+  if (differ('inputChecksum') && !['co2Formula', 'emissionDriven', 'firstYear', 'yearCount'].some((k) => differ(k as keyof EnsembleConfig))) {
+    out.push('the pathway (another file, or its contents differ)');
+  }
+  option('milestones', 'the milestone years of the crossing probabilities', (x) => x.milestones.join(','));
+  if (differ('scheme') || differ('sampling')) out.push('the parameter sampling (the shards come from different warmcast versions or sampling settings)');
+  return out;
+}
+
+/**
+ * How a shard's recorded pathway differs from the reference one, in words, or undefined when they
+ * agree (same name, same files by SHA-256, same notes; paths may differ between machines).
+ */
+function originDifference(o: EnsembleOrigin, ref: EnsembleOrigin): string | undefined {
+  const hashes = (x: EnsembleOrigin) => x.inputs.map((i) => i.sha256).join(',');
+  if (o.pathway !== ref.pathway || hashes(o) !== hashes(ref)) return `it was made from ${describeOrigin(o)}, not ${describeOrigin(ref)}`;
+  if (JSON.stringify(o.notes) !== JSON.stringify(ref.notes)) return 'its notes on how the pathway was read differ (read with other settings or another warmcast version)';
+  return undefined;
+}
+
+/** `"Swift transition" (swift.csv sha256 f0e6870b0bd9…, history.csv sha256 59fb814be3d0…)`. */
+function describeOrigin(o: EnsembleOrigin): string {
+  const files = o.inputs.map((i) => `${i.path.split(/[\\/]/).pop()} sha256 ${i.sha256.slice(0, 12)}…`);
+  return `"${o.pathway}" (${files.join(', ')})`;
+}
+
+/** `a`, `a and b`, `a, b and c`. */
+function joinWords(words: string[]): string {
+  return words.length <= 1 ? words.join('') : `${words.slice(0, -1).join(', ')} and ${words[words.length - 1]}`;
 }

@@ -1,5 +1,5 @@
 import { InputError, type InputProblem } from '../errors.js';
-import type { EnsembleConfig, EnsembleMembers } from './ensemble-members.js';
+import type { EnsembleConfig, EnsembleMembers, EnsembleOrigin } from './ensemble-members.js';
 import type { AssessedRange } from './assessed-range.js';
 import { MEMBER_PARAMETERS, MEMBER_PARAMETER_KEYS, type MemberParameter } from './sample-members.js';
 import type { EnsembleSampling } from './sampling.js';
@@ -26,19 +26,22 @@ const PERCENTILE_FIELDS = ['p05', 'p17', 'p50', 'p83', 'p95'] as const;
 
 /**
  * Bytes of a shard file: every member's yearly warming and its seven parameters as little-endian
- * Float64 in base64 (4/3 of 8 bytes per value), plus under 2 kB of description.
+ * Float64 in base64 (4/3 of 8 bytes per value), plus under 4 kB of description (the pathway's name,
+ * files and notes included).
  * @example shardFileBytes(10_000, 551) // ≈ 59.4 MB
  */
 export function shardFileBytes(members: number, years: number): number {
-  return Math.ceil(((members * (years + MEMBER_PARAMETERS.length) * 8) / 3) * 4) + 2000;
+  return Math.ceil(((members * (years + MEMBER_PARAMETERS.length) * 8) / 3) * 4) + 4000;
 }
 
 /**
  * Writes members (a shard, or a whole ensemble) as the JSON text of a shard file. The values are
  * stored exactly (Float64 bit patterns in base64), so merging shard files gives bit for bit what one
  * run gives; the size is given by {@link shardFileBytes} (about 5.9 kB per member for 1750-2300).
+ * `members.origin`, when given, is stored as `pathway` (name, input files with SHA-256, notes), so
+ * that a merge can report what the ensemble was made from; files without it still read and merge.
  *
- * @param members from runEnsemble(...).members
+ * @param members from runEnsemble(...).members, with the origin set by the caller that read the pathway
  * @returns JSON text
  * @example writeFile('shard-3.json', shardToJson(result.members)) // in src/cli
  */
@@ -63,6 +66,7 @@ export function shardToJson(members: EnsembleMembers): string {
       emission_driven: c.emissionDriven,
       input_checksum: c.inputChecksum,
     },
+    ...(members.origin ? { pathway: { name: members.origin.pathway, inputs: members.origin.inputs, notes: members.origin.notes } } : {}),
     shard: members.shard ?? null,
     member_start: members.memberStart,
     member_count: members.memberCount,
@@ -128,6 +132,7 @@ export function shardFromJson(text: string, file: string): EnsembleMembers {
     const s = (isObject(doc.shard) ? doc.shard : {}) as Record<string, unknown>;
     shard = { index: int(s.index, 'shard.index', 1), count: int(s.count, 'shard.count', 1) };
   }
+  const origin = doc.pathway === undefined ? undefined : readOrigin(doc.pathway, problem);
   const memberStart = int(doc.member_start, 'member_start');
   const memberCount = int(doc.member_count, 'member_count', 1);
   const redraws = int(doc.redraws, 'redraws');
@@ -152,7 +157,24 @@ export function shardFromJson(text: string, file: string): EnsembleMembers {
     emissionDriven: cfg.emission_driven as boolean,
     inputChecksum: cfg.input_checksum as string,
   };
-  return { config, shard, memberStart, memberCount, warmingK, parameters, redraws };
+  return { config, shard, memberStart, memberCount, warmingK, parameters, redraws, ...(origin ? { origin } : {}) };
+}
+
+/** The optional `pathway` record: { name, inputs: [{ path, sha256 }], notes }. */
+function readOrigin(value: unknown, problem: (field: string, message: string) => void): EnsembleOrigin | undefined {
+  const v = (isObject(value) ? value : {}) as Record<string, unknown>;
+  const inputs = Array.isArray(v.inputs) ? v.inputs : [];
+  const goodInputs = Array.isArray(v.inputs) && inputs.every((i) => isObject(i) && typeof (i as Record<string, unknown>).path === 'string' && /^[0-9a-f]{64}$/.test(String((i as Record<string, unknown>).sha256)));
+  const goodNotes = Array.isArray(v.notes) && v.notes.every((n) => typeof n === 'string');
+  if (!isObject(value) || typeof v.name !== 'string' || !goodInputs || !goodNotes) {
+    problem('pathway', 'must be { "name": text, "inputs": [{ "path": text, "sha256": 64 hex digits }], "notes": [text] }');
+    return undefined;
+  }
+  return {
+    pathway: v.name as string,
+    inputs: (inputs as { path: string; sha256: string }[]).map(({ path, sha256 }) => ({ path, sha256 })),
+    notes: [...(v.notes as string[])],
+  };
 }
 
 function readSampling(value: unknown, problem: (field: string, message: string) => void): EnsembleSampling | undefined {

@@ -25,6 +25,12 @@ export interface ThresholdCrossing {
   medianYear: number | null;
   /** Share of members that cross at all within the run. */
   probabilityWithinRun: number;
+  /**
+   * Share of members already above the level in the first complete 20-year window of the run (their
+   * crossing year is that window's labelled year, but they may have been above before it). When it
+   * is at least one half, `medianYear` is that first labelled year and says only "at the start".
+   */
+  aboveAtStart: number;
 }
 
 /** Summary quantiles of one sampled parameter across members. */
@@ -129,7 +135,7 @@ export function summarizeEnsemble(members: EnsembleMembers | EnsembleMemberParam
       const k = year - config.firstYear;
       return { year, probability: k >= first && k <= last ? cumulative[k] / m : null };
     });
-    return { thresholdK, byMilestone, medianYear, probabilityWithinRun: total / m };
+    return { thresholdK, byMilestone, medianYear, probabilityWithinRun: total / m, aboveAtStart: first <= last ? crossedAt[first] / m : 0 };
   });
 
   const parameters = Object.fromEntries(MEMBER_PARAMETERS.map((name) => [name, summarizeValues(members.parameters[name])])) as Record<
@@ -254,13 +260,37 @@ export function exceedanceCountsInto(
   counter.addCountsTo(counts);
 }
 
+/**
+ * Ensembles smaller than this get a warning that their ranges and probabilities are rough (a rule of
+ * thumb: common practice, no source).
+ */
+export const FEW_MEMBERS = 100;
+
+/**
+ * The warning for an ensemble of fewer than {@link FEW_MEMBERS} members, with the sampling error of
+ * a probability near 50 % (the binomial standard error 0.5 / sqrt(n); common practice, no source);
+ * undefined for larger ensembles.
+ * @example fewMembersWarning(25) // 'only 25 members: ... about 10 percentage points ...'
+ */
+export function fewMembersWarning(members: number): string | undefined {
+  if (members >= FEW_MEMBERS) return undefined;
+  const error = (100 * 0.5) / Math.sqrt(members);
+  return (
+    `only ${members} member${members === 1 ? '' : 's'}: percentile ranges and probabilities from so few members are rough ` +
+    `(a probability near 50 % has a sampling standard error of about ${error.toFixed(0)} percentage points, 0.5/sqrt(${members}), ` +
+    `and the 5-95 % range rests on the few most extreme members); use at least ${FEW_MEMBERS} members`
+  );
+}
+
 /** The conventions behind the numbers, for an output's provenance. */
 function ensembleNotes(members: EnsembleMemberParameters): string[] {
   const c = members.config;
   const { before, after } = RUNNING_MEAN_WINDOW;
   const held = members.shard ? `shard ${members.shard.index}/${members.shard.count}: members ${members.memberStart}-${members.memberStart + members.memberCount - 1} of ${c.membersTotal}` : `${c.membersTotal} members`;
+  const few = fewMembersWarning(c.membersTotal);
   return [
     `ensemble of ${held}, seed ${c.seed}; member i draws from ${MEMBER_STREAM_SCHEME} (pure-rand), so it depends only on the seed and i`,
+    ...(few ? [`warning: ${few}`] : []),
     `${members.redraws} unphysical parameter draws were redrawn (TCR not below ECS, non-positive forcing or sensitivity, or a TCR the two-box model cannot reach)`,
     'warming_pXX_k: percentiles across members of each year\'s warming, by linear interpolation between order statistics (Hyndman & Fan 1996, definition 7)',
     `prob_above_<t>: share of members whose 20-year mean warming (years y-${before} to y+${after}) exceeds t K, the IPCC AR6 convention for reaching a warming level; empty where the 20-year window leaves the run`,

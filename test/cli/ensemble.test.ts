@@ -1,4 +1,4 @@
-import { mkdtempSync, readFileSync, readdirSync } from 'node:fs';
+import { mkdtempSync, readFileSync, readdirSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import Papa from 'papaparse';
@@ -67,4 +67,178 @@ describe('warmcast ensemble and merge', () => {
     expect(await main(['ensemble', 'swift', '--shard', '4/3'], io)).toBe(2);
     expect(io.err).toMatch(/K\/N/);
   });
+
+  it('ensemble refuses --ecs, --tcr and --params with exit 2 saying they are sampled, and writes nothing', async () => {
+    const dir = tmp();
+    writeFileSync(join(dir, 'p.json'), JSON.stringify({ upper_heat_capacity: 12 }));
+    for (const extra of [['--ecs', '4.5'], ['--tcr=2.3'], ['--params', join(dir, 'p.json')]]) {
+      const io = captureIo();
+      expect(await main(['ensemble', 'swift', '--members', '20', ...extra, '--out', join(dir, 'e.csv')], io)).toBe(2);
+      expect(io.err).toMatch(/ensemble does not take --(ecs|tcr|params): each member draws its own ECS, TCR, 2xCO2 forcing and aerosol forcing/);
+      expect(io.out).toBe('');
+    }
+    expect(readdirSync(dir)).toEqual(['p.json']);
+  });
+
+  it('ensemble --co2-formula log changes the ensemble and is recorded; provenance holds only what every member shares', async () => {
+    const dir = tmp();
+    const run = (args: string[]) => main(['ensemble', 'swift', '--members', '50', '--seed', '7', '--no-chart', ...args], captureIo());
+    expect(await run(['--out', join(dir, 'ar6.csv')])).toBe(0);
+    expect(await run(['--co2-formula', 'log', '--out', join(dir, 'log.csv')])).toBe(0);
+    expect(readFileSync(join(dir, 'log.csv')).equals(readFileSync(join(dir, 'ar6.csv')))).toBe(false);
+    const meta = JSON.parse(readFileSync(join(dir, 'log.meta.json'), 'utf8'));
+    expect(meta.parameters).toEqual({ co2_formula: 'log', upper_heat_capacity: 8, deep_heat_capacity: 100, deep_efficacy: 1 });
+    expect(JSON.parse(readFileSync(join(dir, 'ar6.meta.json'), 'utf8')).parameters.co2_formula).toBe('ar6');
+  });
+
+  it('merge refuses --co2-formula, --ecs, --tcr and --params with exit 2 (it takes everything from the shards) and records the shards\' CO2 formula', async () => {
+    const dir = tmp();
+    for (const k of [1, 2]) {
+      expect(await main(['ensemble', 'swift', '--members', '40', '--co2-formula', 'log', '--shard', `${k}/2`, '--out', join(dir, `s${k}.json`)], captureIo())).toBe(0);
+    }
+    const shards = [join(dir, 's1.json'), join(dir, 's2.json')];
+    for (const extra of [['--co2-formula', 'ar6'], ['--ecs', '4.5'], ['--tcr', '2'], ['--params', 'p.json']]) {
+      const io = captureIo();
+      expect(await main(['merge', ...shards, ...extra, '--out', join(dir, 'm.csv')], io)).toBe(2);
+      expect(io.err).toMatch(/merge does not take --[a-z0-9-]+: every setting comes from the shards/);
+    }
+    expect(readdirSync(dir).sort()).toEqual(['s1.json', 's2.json']);
+    expect(await main(['merge', ...shards, '--out', join(dir, 'm.csv'), '--no-chart'], captureIo())).toBe(0);
+    expect(JSON.parse(readFileSync(join(dir, 'm.meta.json'), 'utf8')).parameters.co2_formula).toBe('log');
+  });
+
+  it('ensemble refuses warming levels of 0 K and below with exit 2 (levels are above the baseline)', async () => {
+    for (const t of ['--thresholds=-1', '--thresholds=0', '--thresholds=1.5,0']) {
+      const io = captureIo();
+      expect(await main(['ensemble', 'swift', '--members', '20', t], io)).toBe(2);
+      expect(io.err).toMatch(/--thresholds must be warming levels above 0 K/);
+      expect(io.out).toBe('');
+    }
+  });
+
+  it('ensemble says "already above at the start" instead of a median crossing year when half the members are above a small level in the first 20-year window', async () => {
+    const io = captureIo();
+    expect(await main(['ensemble', 'swift', '--members', '400', '--thresholds', '0.001,0.05,1.5', '--no-chart'], io)).toBe(0);
+    expect(io.out).toMatch(/0\.001 K \(20-year mean\): [^\n]*; median crossing: already above at the start \(the first 20-year mean, 1750-1769\)\n/);
+    expect(io.out).toMatch(/0\.05 K \(20-year mean\): [^\n]*; median crossing year \d{4}; \d+ % of members already above it at the start \(1750-1769\)\n/);
+    expect(io.out).toMatch(/1\.5 K \(20-year mean\): [^\n]*; median crossing year 20\d\d\n/);
+  });
+
+  it('ensemble of 1 or 2 members prints the ECS-TCR correlation as n/a and warns, on the terminal and in the notes, that its ranges are rough', async () => {
+    const dir = tmp();
+    for (const n of [1, 2]) {
+      const io = captureIo();
+      expect(await main(['ensemble', 'swift', '--members', String(n), '--no-chart', '--out', join(dir, `e${n}.json`)], io)).toBe(0);
+      expect(io.out).toMatch(/ECS-TCR correlation n\/a \(fewer than 3 members\)/);
+      expect(io.out).not.toMatch(/NaN|correlation -?1\.00/);
+      expect(io.out).toMatch(new RegExp(`\\n  warning: only ${n} members?: percentile ranges and probabilities from so few members are rough`));
+      const notes: string[] = JSON.parse(readFileSync(join(dir, `e${n}.json`), 'utf8')).provenance.notes;
+      expect(notes.some((note) => note.startsWith(`warning: only ${n} member`))).toBe(true);
+    }
+    const io = captureIo();
+    expect(await main(['ensemble', 'swift', '--members', '100', '--no-chart'], io)).toBe(0);
+    expect(io.out).not.toMatch(/warning/);
+    expect(io.out).toMatch(/ECS-TCR correlation 0\.\d\d/);
+  });
+
+  it('an emission ensemble prints the 5-95 % range of its carbon-cycle multiplier, and its caution names the multiplier as the README does (on the pre-industrial iIRF100 r0)', async () => {
+    const io = captureIo();
+    expect(await main(['ensemble', 'swift-emissions', '--members', '200', '--seed', '3', '--no-chart'], io)).toBe(0);
+    const line = /\n  sampled carbon-cycle multiplier on the pre-industrial iIRF100 r0 (\d\.\d\d) \[(\d\.\d\d)-(\d\.\d\d)\] \(median \[5-95 %\]\)\n/.exec(io.out);
+    expect(line, io.out).not.toBeNull();
+    const [p50, p05, p95] = line!.slice(1).map(Number);
+    // Drawn with median 1 and 5-95 % 0.765-1.235 (src/ensemble/sampling.ts); 200 members land near it.
+    expect(p05).toBeLessThan(p50);
+    expect(p50).toBeLessThan(p95);
+    expect(p05).toBeGreaterThan(0.6);
+    expect(p95).toBeLessThan(1.4);
+    expect(io.out).toMatch(/caution: .*sampled multiplier on the pre-industrial iIRF100 r0 of its uptake feedback/);
+    expect(io.out).not.toMatch(/response time/);
+    const plain = captureIo();
+    expect(await main(['ensemble', 'swift', '--members', '200', '--seed', '3', '--no-chart'], plain)).toBe(0);
+    expect(plain.out).not.toMatch(/iIRF100/);
+  });
+
+  it('ensemble --out writes the headlines: a headlines object in .json and in the .csv\'s .meta.json (the CSV stays a yearly table), a table above the yearly table in .md; merge --out the same', async () => {
+    const dir = tmp();
+    const args = ['delayed', '--members', '120', '--seed', '4', '--no-chart'];
+    const io = captureIo();
+    expect(await main(['ensemble', ...args, '--out', join(dir, 'e.json')], io)).toBe(0);
+    for (const ext of ['csv', 'md']) expect(await main(['ensemble', ...args, '--out', join(dir, `e.${ext}`)], captureIo())).toBe(0);
+    const json = JSON.parse(readFileSync(join(dir, 'e.json'), 'utf8'));
+    const h = json.headlines;
+    expect(Object.keys(json)).toEqual(['provenance', 'headlines', 'columns', 'rows']);
+    expect(h.members).toBe(120);
+    expect(h.thresholds.map((t: { threshold_k: number }) => t.threshold_k)).toEqual([1.5, 2, 3]);
+    // The same figures as the terminal: 1.5 K crossed by 2050 and 2100, and its median crossing year.
+    const t15 = h.thresholds[0];
+    const pct = (v: number) => `${(100 * v).toFixed(0)} %`;
+    expect(io.out).toContain(`1.5 K (20-year mean): probability of crossing by 2050 ${pct(t15.probability_crossed_by['2050'])}, by 2100 ${pct(t15.probability_crossed_by['2100'])}; median crossing year ${t15.median_crossing_year}`);
+    expect(io.out).toContain(`sampled ECS ${h.sampled.ecs_k.p50.toFixed(2)} K [${h.sampled.ecs_k.p05.toFixed(2)}-${h.sampled.ecs_k.p95.toFixed(2)}]`);
+    expect(Object.keys(h.sampled)).toEqual(['ecs_k', 'tcr_k']);
+    expect(JSON.parse(readFileSync(join(dir, 'e.meta.json'), 'utf8')).headlines).toEqual(h);
+    expect(readFileSync(join(dir, 'e.csv'), 'utf8').split('\n')[0]).toMatch(/^year,warming_p05_k,/);
+    const md = readFileSync(join(dir, 'e.md'), 'utf8');
+    expect(md.startsWith('**Headlines: 120 members, seed 4;')).toBe(true);
+    expect(md.indexOf('| warming level |')).toBeLessThan(md.indexOf('| year |'));
+    expect(md).toContain(`| ${t15.median_crossing_year} `);
+
+    for (const k of [1, 2]) expect(await main(['ensemble', ...args, '--shard', `${k}/2`, '--out', join(dir, `s${k}.json`)], captureIo())).toBe(0);
+    expect(await main(['merge', join(dir, 's1.json'), join(dir, 's2.json'), '--no-chart', '--out', join(dir, 'm.json')], captureIo())).toBe(0);
+    expect(await main(['merge', join(dir, 's1.json'), join(dir, 's2.json'), '--no-chart', '--out', join(dir, 'm.csv')], captureIo())).toBe(0);
+    expect(JSON.parse(readFileSync(join(dir, 'm.json'), 'utf8')).headlines).toEqual(h);
+    expect(JSON.parse(readFileSync(join(dir, 'm.meta.json'), 'utf8')).headlines).toEqual(h);
+  });
+
+  it('merge reports the pathway the shards record: its name as the title, its files with SHA-256 and the same notes as one whole run', async () => {
+    const dir = tmp();
+    const args = ['swift', '--members', '60', '--seed', '2', '--no-chart'];
+    const whole = captureIo();
+    expect(await main(['ensemble', ...args, '--out', join(dir, 'whole.csv')], whole)).toBe(0);
+    for (const k of [1, 2]) expect(await main(['ensemble', ...args, '--shard', `${k}/2`, '--out', join(dir, `s${k}.json`)], captureIo())).toBe(0);
+    const io = captureIo();
+    expect(await main(['merge', join(dir, 's1.json'), join(dir, 's2.json'), '--no-chart', '--out', join(dir, 'm.csv')], io)).toBe(0);
+    expect(readFileSync(join(dir, 'm.csv')).equals(readFileSync(join(dir, 'whole.csv')))).toBe(true);
+    expect(io.out.split('\n')[0]).toMatch(/^Swift transition: 60 members, seed 2;/);
+    const a = JSON.parse(readFileSync(join(dir, 'whole.meta.json'), 'utf8'));
+    const m = JSON.parse(readFileSync(join(dir, 'm.meta.json'), 'utf8'));
+    expect(m.pathway).toBe('Swift transition');
+    expect(a.pathway).toBe('Swift transition');
+    expect(m.pathway_inputs).toEqual(a.inputs);
+    expect(m.pathway_inputs.map((i: { path: string }) => i.path.split(/[\\/]/).pop())).toEqual(['swift.csv', 'history.csv']);
+    expect(m.inputs.map((i: { path: string }) => i.path)).toEqual([join(dir, 's1.json'), join(dir, 's2.json')]);
+    expect(m.notes).toEqual(a.notes);
+    expect(m.notes.some((n: string) => /spliced onto bundled history/.test(n))).toBe(true);
+  });
+
+  it('merge of shards without a pathway record (older shard files) still merges bit for bit and says the pathway was not recorded', async () => {
+    const dir = tmp();
+    const args = ['delayed', '--members', '40', '--seed', '9', '--no-chart'];
+    expect(await main(['ensemble', ...args, '--out', join(dir, 'whole.csv')], captureIo())).toBe(0);
+    for (const k of [1, 2]) {
+      expect(await main(['ensemble', ...args, '--shard', `${k}/2`, '--out', join(dir, `s${k}.json`)], captureIo())).toBe(0);
+      const doc = JSON.parse(readFileSync(join(dir, `s${k}.json`), 'utf8'));
+      delete doc.pathway;
+      writeFileSync(join(dir, `s${k}.json`), JSON.stringify(doc));
+    }
+    const io = captureIo();
+    expect(await main(['merge', join(dir, 's1.json'), join(dir, 's2.json'), '--no-chart', '--out', join(dir, 'm.csv')], io)).toBe(0);
+    expect(readFileSync(join(dir, 'm.csv')).equals(readFileSync(join(dir, 'whole.csv')))).toBe(true);
+    expect(io.out.split('\n')[0]).toMatch(/^merged ensemble \(pathway not recorded in the shards\): 40 members/);
+    const m = JSON.parse(readFileSync(join(dir, 'm.meta.json'), 'utf8'));
+    expect(m.pathway).toBeUndefined();
+    expect(m.notes[0]).toMatch(/^the pathway's name, input files and notes were not recorded in the shards/);
+  });
+
+  it('merge of shards from different pathways exits 2 naming the pathway in the user\'s words, and writes nothing', async () => {
+    const dir = tmp();
+    expect(await main(['ensemble', 'swift', '--members', '40', '--shard', '1/2', '--out', join(dir, 's1.json')], captureIo())).toBe(0);
+    expect(await main(['ensemble', 'delayed', '--members', '40', '--shard', '2/2', '--out', join(dir, 's2.json')], captureIo())).toBe(0);
+    const io = captureIo();
+    expect(await main(['merge', join(dir, 's1.json'), join(dir, 's2.json'), '--out', join(dir, 'm.csv')], io)).toBe(2);
+    expect(io.err).toContain(`${join(dir, 's2.json')}: must come from the same ensemble as ${join(dir, 's1.json')}; it differs in the pathway (another file, or its contents differ)`);
+    expect(io.err).not.toMatch(/inputChecksum|membersTotal|co2Formula/);
+    expect(readdirSync(dir).sort()).toEqual(['s1.json', 's2.json']);
+  });
 });
+

@@ -125,6 +125,20 @@ describe('warmcast run --params with --ecs', () => {
   });
 });
 
+describe('warmcast run --out FILE.md', () => {
+  it('lists the notes as a Markdown bullet list, one note per item, in the order the JSON provenance holds them', async () => {
+    const dir = tmp();
+    expect(await main(['run', 'swift', '--out', join(dir, 'swift.md')], captureIo())).toBe(0);
+    expect(await main(['run', 'swift', '--out', join(dir, 'swift.json')], captureIo())).toBe(0);
+    const md = readFileSync(join(dir, 'swift.md'), 'utf8');
+    const notes: string[] = JSON.parse(readFileSync(join(dir, 'swift.json'), 'utf8')).provenance.notes;
+    expect(notes.length).toBeGreaterThan(1);
+    const block = /\n\nNotes:\n\n((?:- .*\n)+)\n/.exec(md);
+    expect(block, md).not.toBeNull();
+    expect(block![1].trimEnd().split('\n')).toEqual(notes.map((n) => `- ${n.replace(/</g, '\\<')}`));
+  });
+});
+
 describe('warmcast calibrate', () => {
   it('prints only the parameter JSON on stdout, which --params reads back to the same model', async () => {
     const io = captureIo();

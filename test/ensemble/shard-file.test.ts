@@ -4,6 +4,11 @@ import { InputError } from '../../src/errors.js';
 import { syntheticInput } from './synthetic-input.js';
 
 const input = syntheticInput(1750, 2100);
+const origin = {
+  pathway: 'Synthetic',
+  inputs: [{ path: '/data/synthetic.csv', sha256: 'ab'.repeat(32) }, { path: '/opt/warmcast/pathways/history.csv', sha256: 'cd'.repeat(32) }],
+  notes: ['interpolated linearly from 41 rows (10-year steps)', 'spliced onto bundled history at 2025'],
+};
 const members = (await runEnsemble(input, { members: 120, seed: 3, thresholds: [1.5, 2], baseline: [1850, 1900], shard: { index: 2, count: 4 } })).members!;
 
 describe('shardToJson / shardFromJson', () => {
@@ -18,11 +23,22 @@ describe('shardToJson / shardFromJson', () => {
     for (const p of MEMBER_PARAMETERS) expect(Array.from(back.parameters[p])).toEqual(Array.from(members.parameters[p]));
   });
 
-  it('shardFileBytes predicts the size of the written text (4/3 of 8 bytes per stored value, plus under 2 kB)', () => {
-    const text = shardToJson(members);
+  it('shardFileBytes predicts the size of the written text (4/3 of 8 bytes per stored value, plus under 4 kB with the pathway record)', () => {
     const predicted = shardFileBytes(members.memberCount, members.config.yearCount);
-    expect(text.length).toBeLessThanOrEqual(predicted);
-    expect(text.length).toBeGreaterThan(predicted - 2000);
+    for (const text of [shardToJson(members), shardToJson({ ...members, origin })]) {
+      expect(text.length).toBeLessThanOrEqual(predicted);
+      expect(text.length).toBeGreaterThan(predicted - 4000);
+    }
+  });
+
+  it('shardToJson records the pathway origin (name, input files with SHA-256, notes) and shardFromJson reads it back; a file without it reads with none', () => {
+    const text = shardToJson({ ...members, origin });
+    expect(JSON.parse(text).pathway).toEqual({ name: origin.pathway, inputs: origin.inputs, notes: origin.notes });
+    expect(shardFromJson(text, 'o.json').origin).toEqual(origin);
+    expect(shardFromJson(shardToJson(members), 'plain.json').origin).toBeUndefined();
+    const doc = JSON.parse(text);
+    expect(() => shardFromJson(JSON.stringify({ ...doc, pathway: { ...doc.pathway, inputs: [{ path: 'a.csv', sha256: 'xyz' }] } }), 'p.json')).toThrow(/p\.json: column "pathway": must be \{ "name": text/);
+    expect(() => shardFromJson(JSON.stringify({ ...doc, pathway: 'swift' }), 'q.json')).toThrow(/column "pathway"/);
   });
 
   it('shardFromJson rejects what is not a shard file, with InputError naming the file and the field', () => {

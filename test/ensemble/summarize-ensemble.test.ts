@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { AR6_SAMPLING, MEMBER_PARAMETERS, PERCENTILES, summarizeEnsemble, type EnsembleMembers } from '../../src/ensemble/index.js';
+import { AR6_SAMPLING, FEW_MEMBERS, fewMembersWarning, MEMBER_PARAMETERS, PERCENTILES, summarizeEnsemble, type EnsembleMembers } from '../../src/ensemble/index.js';
 import { runningMeanInto } from '../../src/ensemble/running-mean.js';
 import { quantileSorted } from '../../src/numerics/quantiles.js';
 
@@ -64,7 +64,26 @@ describe('summarizeEnsemble', () => {
       const median = sorted[Math.ceil(e.memberCount / 2) - 1];
       expect(c.medianYear).toBe(Number.isFinite(median) ? median : null);
       expect(c.probabilityWithinRun).toBe(crossing.filter(Number.isFinite).length / e.memberCount);
+      expect(c.aboveAtStart).toBe(means.filter((mean) => mean[9] > t).length / e.memberCount);
     });
+  });
+
+  it('summarizeEnsemble counts the members already above a level in the first 20-year window (aboveAtStart); at least half of them makes the median crossing year the first window\'s year', () => {
+    const low = members(400, [-1, 0.25, 5]);
+    const r = summarizeEnsemble(low);
+    const firstMeans = Array.from({ length: 400 }, (_, i) => {
+      const out = new Float64Array(low.config.yearCount);
+      runningMeanInto(series(low, i), out);
+      return out[9];
+    });
+    expect(r.crossings[0].aboveAtStart).toBe(1);
+    expect(r.crossings[0].medianYear).toBe(1909);
+    const share = firstMeans.filter((v) => v > 0.25).length / 400;
+    expect(share).toBeGreaterThan(0);
+    expect(share).toBeLessThan(0.5);
+    expect(r.crossings[1].aboveAtStart).toBe(share);
+    expect(r.crossings[1].medianYear).toBeGreaterThan(1909);
+    expect(r.crossings[2].aboveAtStart).toBe(0);
   });
 
   it('summarizeEnsemble orders its percentiles and its exceedance probabilities (quantiles are monotone in p; a higher level is exceeded no more often)', () => {
@@ -89,3 +108,18 @@ describe('summarizeEnsemble', () => {
     expect(result.notes.join('\n')).toMatch(/3 unphysical parameter draws were redrawn/);
   });
 });
+
+describe('fewMembersWarning', () => {
+  it('fewMembersWarning(n) warns below 100 members with the binomial standard error 0.5/sqrt(n) of a probability near 50 % (common practice, no source)', () => {
+    expect(fewMembersWarning(25)).toMatch(/^only 25 members: .* about 10 percentage points, 0\.5\/sqrt\(25\)/);
+    expect(fewMembersWarning(1)).toMatch(/^only 1 member: .* about 50 percentage points/);
+    expect(fewMembersWarning(FEW_MEMBERS - 1)).toBeDefined();
+    expect(fewMembersWarning(FEW_MEMBERS)).toBeUndefined();
+  });
+
+  it('summarizeEnsemble notes the warning for an ensemble of fewer than 100 members, and not for 100', () => {
+    expect(summarizeEnsemble(members(30)).notes.filter((n) => n.startsWith('warning: only 30 members'))).toHaveLength(1);
+    expect(summarizeEnsemble(members(100)).notes.some((n) => n.startsWith('warning:'))).toBe(false);
+  });
+});
+

@@ -18,6 +18,19 @@ describe('formatJson', () => {
     );
   });
 
+  it('formatJson puts extra members between the provenance and the columns, indented like the provenance', () => {
+    const json = formatJson({ columns: ['year'], data: [Float64Array.of(2030)] }, { tool: 't' }, { headlines: { members: 2, levels: [1.5] } });
+    expect(json).toBe(
+      '{\n'
+      + '  "provenance": {\n    "tool": "t"\n  },\n'
+      + '  "headlines": {\n    "members": 2,\n    "levels": [\n      1.5\n    ]\n  },\n'
+      + '  "columns": ["year"],\n'
+      + '  "rows": [\n    {"year":2030}\n  ]\n'
+      + '}\n',
+    );
+    expect(Object.keys(JSON.parse(json))).toEqual(['provenance', 'headlines', 'columns', 'rows']);
+  });
+
   it('formatJson numbers read back with JSON.parse exactly; NaN and infinities become null (ECMA-404 has no NaN)', () => {
     fc.assert(fc.property(fc.array(fc.double(), { minLength: 1, maxLength: 40 }), (xs) => {
       const values = Float64Array.from(xs);

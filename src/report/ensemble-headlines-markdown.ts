@@ -1,0 +1,36 @@
+import type { EnsembleHeadlines } from '../ensemble/ensemble-headlines.js';
+import { medianCrossingText, percentText, sampledName } from './ensemble-headlines-text.js';
+import { markdownTable } from './markdown-table.js';
+
+/**
+ * An ensemble's headlines as Markdown, to stand above its yearly table: a table of the warming
+ * levels (probability of crossing by each milestone year, median crossing year, and the share above
+ * the level at the start when any member is), then a table of the sampled quantities' percentiles
+ * and the ECS-TCR correlation.
+ *
+ * @param h from ensembleHeadlines
+ * @returns Markdown text ending in a newline
+ * @example ensembleHeadlinesMarkdown(h).split('\n')[0] // '**Headlines: 2000 members, seed 7; warming relative to 1850-1900, as 20-year means**'
+ */
+export function ensembleHeadlinesMarkdown(h: EnsembleHeadlines): string {
+  const milestones = h.thresholds.length > 0 ? Object.keys(h.thresholds[0].probability_crossed_by) : [];
+  const atStart = h.thresholds.some((t) => t.above_at_start > 0);
+  const levels = markdownTable({
+    caption: `Headlines: ${h.members} member${h.members === 1 ? '' : 's'}, seed ${h.seed}; warming relative to ${h.baseline}, as 20-year means`,
+    columns: ['warming level', ...milestones.map((y) => `crossed by ${y}`), 'median crossing year', ...(atStart ? [`above at the start (${h.first_window})`] : [])],
+    rows: h.thresholds.map((t) => [
+      `${t.threshold_k} K`,
+      ...milestones.map((y) => percentText(t.probability_crossed_by[y])),
+      medianCrossingText(t, h),
+      ...(atStart ? [percentText(t.above_at_start, true)] : []),
+    ]),
+    numeric: [true, ...milestones.map(() => true), false, ...(atStart ? [true] : [])],
+  });
+  const sampled = markdownTable({
+    columns: ['sampled', '5 %', '17 %', '50 %', '83 %', '95 %'],
+    rows: Object.entries(h.sampled).map(([key, q]) => [sampledName(key), q.p05.toFixed(2), q.p17.toFixed(2), q.p50.toFixed(2), q.p83.toFixed(2), q.p95.toFixed(2)]),
+    numeric: [false, true, true, true, true, true],
+    notes: [`ECS-TCR correlation across members: ${h.ecs_tcr_correlation === null ? 'n/a (fewer than 3 members)' : h.ecs_tcr_correlation.toFixed(2)}.`],
+  });
+  return `${levels}\n${sampled}`;
+}

@@ -1,0 +1,58 @@
+import type { EnsembleHeadlines, ThresholdHeadline } from '../ensemble/ensemble-headlines.js';
+import { thresholdName } from './threshold-name.js';
+
+/** Display names of the sampled quantities of EnsembleHeadlines.sampled, with their units. */
+const SAMPLED_NAMES: Record<string, string> = {
+  ecs_k: 'ECS (K)',
+  tcr_k: 'TCR (K)',
+  irf100_scale: 'carbon-cycle multiplier on the pre-industrial iIRF100 r0',
+};
+
+/** The display name of a key of EnsembleHeadlines.sampled. */
+export function sampledName(key: string): string {
+  return SAMPLED_NAMES[key] ?? key;
+}
+
+/**
+ * A probability or share as a whole percentage (`81 %`); `n/a (run too short)` for null. With
+ * `under`, a share above 0 that rounds to 0 % reads `under 1 %`.
+ * @example percentText(0.814) // '81 %'
+ */
+export function percentText(v: number | null, under = false): string {
+  if (v === null) return 'n/a (run too short)';
+  return under && v > 0 && v < 0.005 ? 'under 1 %' : `${(100 * v).toFixed(0)} %`;
+}
+
+/**
+ * The median crossing of a warming level in words: the year, "already above at the start (the first
+ * 20-year mean, 1750-1769)", or "fewer than half of the members cross it by 2150".
+ */
+export function medianCrossingText(t: ThresholdHeadline, h: EnsembleHeadlines): string {
+  if (t.median_crossing === 'already-above-at-start') return `already above at the start (the first 20-year mean, ${h.first_window})`;
+  if (t.median_crossing === 'fewer-than-half-cross') return `fewer than half of the members cross it by ${h.last_year}`;
+  return String(t.median_crossing_year);
+}
+
+/**
+ * The terminal lines of an ensemble's headlines, indented by two spaces: the sampled ECS and TCR
+ * (median and 5-95 %) with their correlation, the carbon-cycle multiplier of an emission ensemble,
+ * then per warming level the probability of crossing it by each milestone year and its median
+ * crossing (and the share already above it at the start, when there is one).
+ *
+ * @example ensembleHeadlineLines(h)[0] // '  sampled ECS 3.00 K [2.00-5.00], TCR 1.80 K [1.20-2.40] (median [5-95 %]); ECS-TCR correlation 0.64'
+ */
+export function ensembleHeadlineLines(h: EnsembleHeadlines): { sampled: string[]; thresholds: string[] } {
+  const range = (q: { p05: number; p50: number; p95: number }, unit = '') => `${q.p50.toFixed(2)}${unit} [${q.p05.toFixed(2)}-${q.p95.toFixed(2)}]`;
+  const { ecs_k: ecs, tcr_k: tcr, irf100_scale: carbon } = h.sampled;
+  const correlation = h.ecs_tcr_correlation === null ? 'n/a (fewer than 3 members)' : h.ecs_tcr_correlation.toFixed(2);
+  const sampled = [`  sampled ECS ${range(ecs, ' K')}, TCR ${range(tcr, ' K')} (median [5-95 %]); ECS-TCR correlation ${correlation}`];
+  if (carbon) sampled.push(`  sampled ${sampledName('irf100_scale')} ${range(carbon)} (median [5-95 %])`);
+  const [from, to] = h.baseline.split('-').map(Number);
+  const thresholds = h.thresholds.map((t) => {
+    const by = Object.entries(t.probability_crossed_by).map(([year, p]) => `by ${year} ${percentText(p)}`).join(', ');
+    const median = t.median_crossing === 'crosses' ? `median crossing year ${t.median_crossing_year}` : t.median_crossing === 'already-above-at-start' ? `median crossing: ${medianCrossingText(t, h)}` : medianCrossingText(t, h);
+    const some = t.median_crossing !== 'already-above-at-start' && t.above_at_start > 0 ? `; ${percentText(t.above_at_start, true)} of members already above it at the start (${h.first_window})` : '';
+    return `  ${thresholdName(t.threshold_k, [from, to])} (20-year mean): probability of crossing ${by}; ${median}${some}`;
+  });
+  return { sampled, thresholds };
+}
