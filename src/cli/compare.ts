@@ -44,6 +44,12 @@ export function compareCommand(io: CliIo): Command {
       '\nExamples:\n  warmcast compare steady delayed swift\n  warmcast compare steady swift --years 2030,2050,2100 --out table.md\n  warmcast compare steady delayed swift --out report.html\n',
     )
     .action(async (args: string[], opts: CompareOptions) => {
+      if (opts.members !== undefined) {
+        const given = (['ecs', 'tcr', 'params'] as const).filter((k) => opts[k] !== undefined).map((k) => `--${k}`);
+        if (given.length > 0) {
+          throw new ConfigError(`with --members each member draws its own ECS, TCR, 2xCO2 and aerosol forcing, so ${given.join(', ')} would be ignored: leave ${given.length > 1 ? 'them' : 'it'} out, or compare without --members`, given[0].slice(2));
+        }
+      }
       const { params, paramsFile, notes: paramNotes } = resolveModelParams(opts, io);
       const baselineNote = thresholdBaselineNote(opts.baseline);
       const files: string[] = [];

@@ -101,6 +101,8 @@ export function ensembleCommand(io: CliIo): Command {
     )
     .action(async (arg: string, opts: EnsembleCliOptions) => {
       if (opts.seed >= 2 ** 32) throw new ConfigError('--seed must be below 2^32', 'seed');
+      // Before any work: a shard's members are only of use in a shard file.
+      if (opts.shard && !opts.out?.toLowerCase().endsWith('.json')) throw new ConfigError('--shard writes a shard file: give --out NAME.json', 'out');
       // Central parameters: the CO2 formula, and the CH4 and N2O of an emission pathway's central run.
       const { params } = resolveModelParams({ co2Formula: opts.co2Formula }, io);
       const read = readPathway(pathwayArg(arg, io), { splice: opts.splice });
@@ -130,7 +132,6 @@ export function ensembleCommand(io: CliIo): Command {
       };
       const allNotes = [...origin.notes, ...result.notes];
       if (opts.shard) {
-        if (!opts.out || !opts.out.toLowerCase().endsWith('.json')) throw new ConfigError('--shard writes a shard file: give --out NAME.json', 'out');
         await outOfMemoryAsInput(`writing a shard file of ${count} members over ${years} years`, () =>
           writeOutput(
             opts.out!,

@@ -94,4 +94,11 @@ describe('warmcast compare', () => {
     expect(await main(['compare', 'steady', 'swift', '--years', '2200,2050'], bad)).toBe(2);
     expect(bad.err).toMatch(/--years 2200 must lie within the years the pathways cover, 1750-2150/);
   });
+
+  it('with --members refuses --ecs, --tcr and --params (each member draws its own) instead of ignoring them', async () => {
+    const io = captureIo();
+    expect(await main(['compare', 'steady', 'swift', '--members', '50', '--ecs', '4', '--tcr', '2'], io)).toBe(2);
+    expect(io.err).toMatch(/with --members each member draws its own ECS.*--ecs, --tcr would be ignored/);
+    expect(await main(['compare', 'steady', 'swift', '--members', '50', '--co2-formula', 'log', '--no-chart'], captureIo())).toBe(0);
+  });
 });

@@ -240,5 +240,11 @@ describe('warmcast ensemble and merge', () => {
     expect(io.err).not.toMatch(/inputChecksum|membersTotal|co2Formula/);
     expect(readdirSync(dir).sort()).toEqual(['s1.json', 's2.json']);
   });
-});
 
+  it('--shard without --out NAME.json is refused before any member is drawn or memory is sized', async () => {
+    const io = captureIo();
+    // 10^8 members kept for a shard would be refused by the memory estimate; the missing file is said first.
+    expect(await main(['ensemble', 'swift', '--members', '100000000', '--shard', '1/1'], io)).toBe(2);
+    expect(io.err).toMatch(/--shard writes a shard file: give --out NAME\.json/);
+  });
+});
