@@ -2,29 +2,17 @@
  * `warmcast calibrate` in-process (main(argv, captureIo())): the parameter JSON it prints and how a
  * --params file combines with flags.
  */
-import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
-import { tmpdir } from 'node:os';
+import { writeFileSync } from 'node:fs';
 import { join } from 'node:path';
-import { afterAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { captureIo } from '../../src/cli/cli-io.js';
 import { main } from '../../src/cli/main.js';
 import { calibrate } from '../../src/climate/index.js';
+import { runCli, tempDirs } from './cli-harness.js';
 
-const roots: string[] = [];
-function tmp(): string {
-  const dir = mkdtempSync(join(tmpdir(), 'warmcast-calibrate-'));
-  roots.push(dir);
-  return dir;
-}
-afterAll(() => {
-  for (const dir of roots) rmSync(dir, { recursive: true, force: true });
-});
+const tmp = tempDirs('calibrate');
 
-async function run(argv: string[]): Promise<{ code: number; out: string; err: string }> {
-  const io = captureIo();
-  const code = await main(argv, io);
-  return { code, out: io.out, err: io.err };
-}
+const run = runCli;
 
 describe('warmcast calibrate output', () => {
   it('calibrate --ecs 3 --tcr 1.8 prints "ecs_k": 3 and "tcr_k": 1.8 as asked, with no solver noise', async () => {

@@ -3,13 +3,13 @@
  * and reads them, in-process through main(argv, captureIo()).
  */
 import { InvalidArgumentError } from 'commander';
-import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
-import { tmpdir } from 'node:os';
+import { writeFileSync } from 'node:fs';
 import { join } from 'node:path';
-import { afterAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { captureIo } from '../../src/cli/cli-io.js';
 import { main } from '../../src/cli/main.js';
 import { numberListOption, numberOption, wholeNumberOption, yearOption } from '../../src/cli/options.js';
+import { runCli, tempDirs } from './cli-harness.js';
 
 /** Texts that JavaScript's Number() reads as a number but that are not decimal numbers. */
 const NOT_DECIMAL = ['', ' ', '\t', '0x10', '0X1f', '0b11', '0o7', 'Infinity', '-Infinity', '1_000', '1,5', '2.5.1', 'e3', '1e'];
@@ -73,16 +73,8 @@ describe('commands refuse non-decimal numbers with exit 2', () => {
   }
 });
 
-const roots: string[] = [];
-afterAll(() => {
-  for (const dir of roots) rmSync(dir, { recursive: true, force: true });
-});
-
-async function run(argv: string[]): Promise<{ code: number; out: string; err: string }> {
-  const io = captureIo();
-  const code = await main(argv, io);
-  return { code, out: io.out, err: io.err };
-}
+const tmp = tempDirs('options');
+const run = runCli;
 
 /** The help entry of `flag` (its lines up to the next option), with the line wrapping undone. */
 async function helpEntry(command: string, flag: string): Promise<string> {
@@ -117,8 +109,7 @@ describe('help shows each default in the form the option accepts', () => {
   });
 
   it('a co2_formula in the --params file still applies when --co2-formula is not given (the shown default is not forced on it)', async () => {
-    const dir = mkdtempSync(join(tmpdir(), 'warmcast-options-'));
-    roots.push(dir);
+    const dir = tmp();
     const file = join(dir, 'p.json');
     writeFileSync(file, '{ "co2_formula": "log" }');
     expect(JSON.parse((await run(['calibrate', '--params', file])).out).co2_formula).toBe('log');

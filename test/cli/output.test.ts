@@ -2,22 +2,14 @@
  * writeOutput through the commands that write a CSV with a `.meta.json` provenance sidecar (run,
  * compare, ensemble, merge): the two files land together or not at all.
  */
-import { mkdirSync, mkdtempSync, readdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
-import { tmpdir } from 'node:os';
+import { mkdirSync, readdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
-import { afterAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { captureIo } from '../../src/cli/cli-io.js';
 import { main } from '../../src/cli/main.js';
+import { tempDirs } from './cli-harness.js';
 
-const roots: string[] = [];
-function tmp(): string {
-  const dir = mkdtempSync(join(tmpdir(), 'warmcast-output-'));
-  roots.push(dir);
-  return dir;
-}
-afterAll(() => {
-  for (const dir of roots) rmSync(dir, { recursive: true, force: true });
-});
+const tmp = tempDirs('output');
 
 /** Commands writing `--out <dir>/out.csv`; the merge case first writes its shard into `dir`. */
 const COMMANDS: [string, (dir: string) => Promise<string[]>][] = [

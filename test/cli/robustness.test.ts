@@ -3,32 +3,20 @@
  * what to stderr, exit codes (0 ok, 2 bad input or options: DESIGN.md), messages that name the
  * file, line or key at fault, stack traces only with --debug, and no output file after a failure.
  */
-import { mkdirSync, mkdtempSync, readdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
-import { tmpdir } from 'node:os';
+import { mkdirSync, readdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import Papa from 'papaparse';
-import { afterAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { captureIo } from '../../src/cli/cli-io.js';
 import { main } from '../../src/cli/main.js';
+import { runCli, tempDirs } from './cli-harness.js';
 
-const roots: string[] = [];
-function tmp(): string {
-  const dir = mkdtempSync(join(tmpdir(), 'warmcast-robust-'));
-  roots.push(dir);
-  return dir;
-}
-afterAll(() => {
-  for (const dir of roots) rmSync(dir, { recursive: true, force: true });
-});
+const tmp = tempDirs('robust');
 
 /** A line of a JavaScript stack trace (V8 format: "    at fn (file:line:col)"). */
 const STACK_LINE = /\n\s+at \S/;
 
-async function run(argv: string[], cwd?: string): Promise<{ code: number; out: string; err: string }> {
-  const io = captureIo(cwd);
-  const code = await main(argv, io);
-  return { code, out: io.out, err: io.err };
-}
+const run = runCli;
 
 function escapeRegExp(text: string): string {
   return text.replace(/[.*+?^${}()|[\]\\]/g, '\\$&');
