@@ -22,7 +22,7 @@ export function ensembleHeadlinesMarkdown(h: EnsembleHeadlines): string {
       `${t.threshold_k} K`,
       ...milestones.map((y) => percentText(t.probability_crossed_by[y])),
       medianCrossingText(t, h),
-      ...(atStart ? [percentText(t.above_at_start, true)] : []),
+      ...(atStart ? [percentText(t.above_at_start)] : []),
     ]),
     numeric: [true, ...milestones.map(() => true), false, ...(atStart ? [true] : [])],
   });

@@ -1,4 +1,5 @@
 import type { EnsembleHeadlines, ThresholdHeadline } from '../ensemble/ensemble-headlines.js';
+import { percent } from './format-numbers.js';
 import { thresholdName } from './threshold-name.js';
 
 /** Display names of the sampled quantities of EnsembleHeadlines.sampled, with their units. */
@@ -14,13 +15,12 @@ export function sampledName(key: string): string {
 }
 
 /**
- * A probability or share as a whole percentage (`81 %`); `n/a (run too short)` for null. With
- * `under`, a share above 0 that rounds to 0 % reads `under 1 %`.
+ * A probability or share as a whole percentage (see `percent`: `<1 %` and `>99 %` for shares that
+ * are neither none nor all but would round to them); `n/a (run too short)` for null.
  * @example percentText(0.814) // '81 %'
  */
-export function percentText(v: number | null, under = false): string {
-  if (v === null) return 'n/a (run too short)';
-  return under && v > 0 && v < 0.005 ? 'under 1 %' : `${(100 * v).toFixed(0)} %`;
+export function percentText(v: number | null): string {
+  return v === null ? 'n/a (run too short)' : percent(v);
 }
 
 /**
@@ -51,7 +51,7 @@ export function ensembleHeadlineLines(h: EnsembleHeadlines): { sampled: string[]
   const thresholds = h.thresholds.map((t) => {
     const by = Object.entries(t.probability_crossed_by).map(([year, p]) => `by ${year} ${percentText(p)}`).join(', ');
     const median = t.median_crossing === 'crosses' ? `median crossing year ${t.median_crossing_year}` : t.median_crossing === 'already-above-at-start' ? `median crossing: ${medianCrossingText(t, h)}` : medianCrossingText(t, h);
-    const some = t.median_crossing !== 'already-above-at-start' && t.above_at_start > 0 ? `; ${percentText(t.above_at_start, true)} of members already above it at the start (${h.first_window})` : '';
+    const some = t.median_crossing !== 'already-above-at-start' && t.above_at_start > 0 ? `; ${percentText(t.above_at_start)} of members already above it at the start (${h.first_window})` : '';
     return `  ${thresholdName(t.threshold_k, [from, to])} (20-year mean): probability of crossing ${by}; ${median}${some}`;
   });
   return { sampled, thresholds };

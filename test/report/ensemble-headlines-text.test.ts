@@ -10,7 +10,7 @@ describe('ensembleHeadlineLines', () => {
       '  1.5 K (20-year mean): probability of crossing by 2050 81 %, by 2100 97 %; median crossing year 2031',
       '  0.05 K (20-year mean): probability of crossing by 2050 100 %, by 2100 100 %; median crossing year 1915; 30 % of members already above it at the start (1750-1769)',
       '  0.001 K (20-year mean): probability of crossing by 2050 100 %, by 2100 100 %; median crossing: already above at the start (the first 20-year mean, 1750-1769)',
-      '  3 K (20-year mean): probability of crossing by 2050 0 %, by 2100 n/a (run too short); fewer than half of the members cross it by 2150',
+      '  3 K (20-year mean): probability of crossing by 2050 <1 %, by 2100 n/a (run too short); fewer than half of the members cross it by 2150',
     ]);
   });
 
@@ -22,12 +22,12 @@ describe('ensembleHeadlineLines', () => {
     expect(sampled[1]).toBe('  sampled carbon-cycle multiplier on the pre-industrial iIRF100 r0 1.00 [0.77-1.23] (median [5-95 %])');
   });
 
-  it('percentText rounds to whole percent, and with `under` shows a share that rounds to 0 % as under 1 %', () => {
+  it('percentText rounds to whole percent, never rounds a share that is neither none nor all to 0 % or 100 %, and says why for null', () => {
     expect(percentText(0.814)).toBe('81 %');
     expect(percentText(null)).toBe('n/a (run too short)');
-    expect(percentText(0.004)).toBe('0 %');
-    expect(percentText(0.004, true)).toBe('under 1 %');
-    expect(percentText(0, true)).toBe('0 %');
+    expect(percentText(0.004)).toBe('<1 %');
+    expect(percentText(0.996)).toBe('>99 %');
+    expect(percentText(0)).toBe('0 %');
     expect(medianCrossingText(headlinesFixture().thresholds[0], headlinesFixture())).toBe('2031');
   });
 });
