@@ -111,6 +111,7 @@ export function parsePathway(text: string, file: string): ParsedPathway {
   const rowLines: number[] = [];
   const values = new Map<PathwayColumn, number[]>();
   const lineOfTime = new Map<number, number>();
+  const textOfTime = new Map<number, string>();
   let latestTime = -Infinity;
   let latestTimeText = '';
   let latestTimeLine = 0;
@@ -170,11 +171,14 @@ export function parsePathway(text: string, file: string): ParsedPathway {
       const timeText = cells[roles.indexOf(timeRole)].trim();
       const earlier = lineOfTime.get(time);
       if (earlier !== undefined) {
+        const sameText = textOfTime.get(time) === timeText;
         report({
           code: 'input.duplicate-time',
           line: lineNumber,
           column: timeRole.header,
-          message: `must not repeat a ${timeRole.name}: the same ${timeRole.name} is on line ${earlier}`,
+          message: sameText || timeRole.name === 'year'
+            ? `must not repeat a ${timeRole.name}: the same ${timeRole.name} is on line ${earlier}`
+            : `must not repeat a year: ${textOfTime.get(time)} on line ${earlier} stands for the same year (1 and 2 July both mean the middle of their year)`,
           value: timeText,
           expected: `each ${timeRole.name} once, increasing down the file`,
         });
@@ -194,6 +198,7 @@ export function parsePathway(text: string, file: string): ParsedPathway {
           latestTimeLine = lineNumber;
         }
         lineOfTime.set(time, lineNumber);
+        textOfTime.set(time, timeText);
       }
     }
   }

@@ -186,6 +186,13 @@ describe('parsePathway on bad fixtures', () => {
     expect(p).toMatchObject({ line: 3, value: '2029-07-02', message: 'must increase down the file: this row comes after 2030-07-02 on line 2' });
   });
 
+  it('parsePathway says two different dates on 1 and 2 July stand for the same year, and a repeated date is the same date', () => {
+    const [p] = problemsOf('date,co2_ppm\n2030-07-01,440\n2030-07-02,441\n', 'd.csv');
+    expect(p).toMatchObject({ line: 3, value: '2030-07-02', message: 'must not repeat a year: 2030-07-01 on line 2 stands for the same year (1 and 2 July both mean the middle of their year)' });
+    const [q] = problemsOf('date,co2_ppm\n2030-07-01,440\n2030-07-01,441\n', 'd.csv');
+    expect(q).toMatchObject({ line: 3, message: 'must not repeat a date: the same date is on line 2' });
+  });
+
   it('parsePathway gives no unit hint for header names that happen to be Object properties', () => {
     const [p] = problemsOf('year,co2_ppm,constructor\n2030,440,1\n', 'o.csv');
     expect(p.message).toBe('must be a known column name');
