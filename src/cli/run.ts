@@ -53,7 +53,7 @@ export function runCommand(io: CliIo): Command {
       const { params, paramsFile, notes: paramNotes } = resolveModelParams(opts, io);
       const baselineNote = thresholdBaselineNote(opts.baseline);
       const runNotes = [...paramNotes, ...(baselineNote ? [baselineNote] : [])];
-      const projections: { projection: Projection; files: string[] }[] = [];
+      const projections: { projection: Projection; whole: Projection; files: string[] }[] = [];
       for (const arg of args) {
         const read = readPathway(pathwayArg(arg, io), { splice: opts.splice });
         const full = projectPathway(read.pathway, {
@@ -63,7 +63,7 @@ export function runCommand(io: CliIo): Command {
           carbonFeedback: opts.carbonFeedback,
           tolerances: { relativeTolerance: opts.rtol, absoluteTolerance: opts.atol, maxStepsPerUnit: 2000 },
         });
-        projections.push({ projection: clipProjection(full, opts.from, opts.to), files: pathwayInputs(read) });
+        projections.push({ projection: clipProjection(full, opts.from, opts.to), whole: full, files: pathwayInputs(read) });
       }
       const report = opts.out === '-' ? io.stderr : io.stdout;
       if (opts.out !== undefined) {
@@ -78,8 +78,8 @@ export function runCommand(io: CliIo): Command {
         });
         for (const w of written) io.stderr(`wrote ${w}\n`);
       }
-      for (const { projection } of projections) {
-        printProjectionSummary(projection, { write: report, color: opts.out === '-' ? io.stderrIsTTY : io.stdoutIsTTY, chart: opts.chart, from: opts.from, notes: runNotes });
+      for (const { projection, whole } of projections) {
+        printProjectionSummary(projection, { write: report, color: opts.out === '-' ? io.stderrIsTTY : io.stdoutIsTTY, chart: opts.chart, from: opts.from, notes: runNotes, whole });
       }
     });
   return cmd;

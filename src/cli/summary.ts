@@ -21,12 +21,14 @@ const TABLE_COLUMNS = [
  * start at a year (`from`, the `--from` the projection was clipped to), from its first year, the
  * headline lines (warming in 2030, 2050, 2100, peak and its year), a chart, the notes and the caution.
  *
- * @param out where to write, whether in colour and with the chart, the `--from` year, and the run's
- *   own notes (on its parameters or its baseline, say), printed after the pathway's
+ * @param out where to write, whether in colour and with the chart, the `--from` year, the run's
+ *   own notes (on its parameters or its baseline, say), printed after the pathway's, and `whole`,
+ *   the projection before `--from`/`--to` clipped it: threshold crossings are a property of the
+ *   whole run, so they are read from it and do not move with the reporting window
  */
 export function printProjectionSummary(
   p: Projection,
-  out: { write: (s: string) => void; color: boolean; chart: boolean; from?: number; notes?: readonly string[] },
+  out: { write: (s: string) => void; color: boolean; chart: boolean; from?: number; notes?: readonly string[]; whole?: Projection },
 ): void {
   const { years, columns } = p;
   const first = years[0];
@@ -61,16 +63,21 @@ export function printProjectionSummary(
 
   const headline = HEADLINE_YEARS.filter((y) => y >= first && y <= last).map((y) => `${y}: ${valueAtYear(years, w, y).toFixed(2)} K`);
   if (headline.length > 0) lines.push(`  warming in ${headline.join(', ')}`);
+  const whole = out.whole ?? p;
+  const wholeLast = whole.years[whole.years.length - 1];
+  const clipped = whole.years[0] !== first || wholeLast !== last;
   const top = peak(years, w);
-  lines.push(`  peak warming ${top.value.toFixed(2)} K in ${top.year}${top.year === last ? ' (the last year: still rising)' : ''}`);
+  const rising = top.year === last ? (last === wholeLast ? ' (the last year: still rising)' : ' (the last year shown: still rising)') : '';
+  const atPeak = `${top.value.toFixed(2)} K in ${top.year}${rising}`;
+  lines.push(clipped ? `  highest warming in ${first}-${last}: ${atPeak}` : `  peak warming ${atPeak}`);
   // On another baseline the threshold is named with it, and the rule is not called AR6's levels.
   const rule = isAr6Baseline(p.baseline) ? 'the IPCC AR6 20-year-mean rule' : '20-year-mean rule';
   for (const level of [1.5, 2]) {
-    const c = crossingPeriod(years, w, level);
+    const c = crossingPeriod(whole.years, whole.columns.warming_k, level);
     const name = thresholdName(level, p.baseline);
     lines.push(
       c === undefined
-        ? `  ${name}: not crossed by ${last}`
+        ? `  ${name}: not crossed by ${wholeLast}`
         : `  ${name}: first reached in ${c.year}${c.atStart ? ' or earlier' : ''} (mean of ${c.firstYear}-${c.lastYear} is ${c.mean.toFixed(2)} K; ${rule})`,
     );
   }

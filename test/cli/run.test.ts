@@ -101,11 +101,11 @@ describe('warmcast run thresholds and the baseline', () => {
 
   it('run says "not crossed by END" (the README\'s wording) for a threshold the run never crosses', async () => {
     const io = captureIo();
-    expect(await main(['run', 'delayed', '--to', '2040', '--no-chart'], io)).toBe(0);
-    expect(io.out).toMatch(/^  2 K: not crossed by 2040$/m);
+    expect(await main(['run', 'swift', '--no-chart'], io)).toBe(0);
+    expect(io.out).toMatch(/^  2 K: not crossed by 2150$/m);
     const other = captureIo();
-    expect(await main(['run', 'delayed', '--to', '2040', '--baseline', '1995-2014', '--no-chart'], other)).toBe(0);
-    expect(other.out).toMatch(/^  2 K above the 1995-2014 mean: not crossed by 2040$/m);
+    expect(await main(['run', 'swift', '--baseline', '1995-2014', '--no-chart'], other)).toBe(0);
+    expect(other.out).toMatch(/^  2 K above the 1995-2014 mean: not crossed by 2150$/m);
   });
 });
 
@@ -293,6 +293,20 @@ describe('warmcast run --from/--to', () => {
     const years = tableYears(io.out);
     expect(years.slice(0, 4)).toEqual([2000, 2010, 2020, 2030]);
     expect(years[years.length - 1]).toBe(2150);
+  });
+
+  it('run steady reports the same threshold years whatever --from/--to window it shows, and names the window of the highest warming', async () => {
+    const crossings = async (argv: string[]) => {
+      const io = captureIo();
+      expect(await main(['run', 'steady', ...argv, '--no-chart'], io)).toBe(0);
+      return { lines: io.out.match(/^  (1\.5|2) K: .*$/gm), out: io.out };
+    };
+    const whole = await crossings([]);
+    expect(whole.lines).toHaveLength(2);
+    for (const window of [['--from', '2040', '--to', '2050'], ['--from', '2040'], ['--to', '2035']]) {
+      expect((await crossings(window)).lines, window.join(' ')).toEqual(whole.lines);
+    }
+    expect((await crossings(['--from', '2040', '--to', '2050'])).out).toMatch(/^  highest warming in 2040-2050: \d\.\d\d K in 2050 \(the last year shown: still rising\)$/m);
   });
 
   it('run delayed without --from still starts the short table at the 2025 splice year', async () => {
