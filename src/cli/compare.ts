@@ -10,6 +10,7 @@ import type { CliIo } from './cli-io.js';
 import { addModelOptions, baselineOption, type ModelOptions, numberListOption, pathwayArg, resolveModelParams, thresholdsOption, wholeNumberOption } from './options.js';
 import { notesAndCautions } from './notes-and-cautions.js';
 import { pathwayInputs, writeOutput } from './output.js';
+import { ensembleParameters } from './provenance.js';
 import { paramsToJson } from '../climate/params.js';
 
 interface CompareOptions extends ModelOptions {
@@ -65,6 +66,8 @@ export function compareCommand(io: CliIo): Command {
       const last = ref.years[ref.years.length - 1];
       const firstFuture = ref.provenance.spliceYear ?? ref.years[0];
       const pathways: PathwayWarming[] = [];
+      // With ensembles no single parameter set was used: provenance records what the members share.
+      let shared: Record<string, number | string> | undefined;
       // One set of worker threads for every pathway's ensemble, when their total size pays for it.
       const anyEmissions = runs.some((r) => r.projection.columns.co2_gtco2 !== undefined);
       const threads = opts.members !== undefined ? ensembleThreadsFor(opts.members * ref.years.length * runs.length, anyEmissions) : undefined;
@@ -79,6 +82,7 @@ export function compareCommand(io: CliIo): Command {
           const { input, notes: inputNotes } = ensembleInput(pathway, params);
           const e = await runEnsemble(input, { members: opts.members, seed: opts.seed, thresholds: opts.thresholds, baseline: opts.baseline, ...(threads ? { threads } : {}) });
           scoped.push(...[...inputNotes, ...e.notes].map((text) => ({ pathway: p.name, ensemble: true, text })));
+          shared ??= ensembleParameters(e.config);
           const pc = e.percentiles;
           const crossingOdds = e.crossings.map((x, j) => ({
             thresholdK: x.thresholdK,
@@ -92,7 +96,11 @@ export function compareCommand(io: CliIo): Command {
       } finally {
         await threads?.close();
       }
-      const notes = [...paramNotes, ...(baselineNote ? [baselineNote] : []), ...scopedNotes(scoped, runs.map((r) => r.projection.name))];
+      const medianNote =
+        opts.members !== undefined
+          ? ['warming_k and the milestone values are the ensemble median of each pathway; its crossing years are the first years by which half of the members have crossed']
+          : [];
+      const notes = [...paramNotes, ...(baselineNote ? [baselineNote] : []), ...medianNote, ...scopedNotes(scoped, runs.map((r) => r.projection.name))];
       const c = comparePathways(pathways, {
         milestoneYears: opts.years ? chosenYears(opts.years, runs.map((r) => r.projection.years)) : milestoneYears(firstFuture, last, 10),
         thresholdsK: opts.thresholds,
@@ -117,7 +125,7 @@ export function compareCommand(io: CliIo): Command {
               }
             : {}),
           'History splice': runs.map(({ projection: p }) => `${p.name}: ${p.provenance.spliceYear ? `bundled history before ${p.provenance.spliceYear}` : 'none'}`).join('; '),
-          Parameters: Object.entries(paramsToJson(params)).map(([k, v]) => `${k} ${typeof v === 'number' ? +v.toPrecision(5) : v}`).join(', '),
+          Parameters: Object.entries(shared ?? paramsToJson(params)).map(([k, v]) => `${k} ${typeof v === 'number' ? +v.toPrecision(5) : v}`).join(', '),
         };
         const written = writeOutput(
           opts.out,
@@ -128,7 +136,7 @@ export function compareCommand(io: CliIo): Command {
             '.svg': () => comparisonCharts(c, { fromYear, baseline })[0],
             '.html': (p) => comparisonHtml(c, { provenance: p, assumptions, baseline, fromYear }),
           },
-          { inputs, params, baseline: opts.baseline, notes, io, ...(opts.members !== undefined ? { seed: opts.seed } : {}) },
+          { inputs, params, ...(shared ? { parameters: shared } : {}), baseline: opts.baseline, notes, io, ...(opts.members !== undefined ? { seed: opts.seed } : {}) },
         );
         for (const w of written) io.stderr(`wrote ${w}\n`);
       }

@@ -12,7 +12,7 @@ import { baselineOption, pathwayArg, refuseOptions, resolveModelParams, threshol
 import { pathwayInputs, tableRenderers, writeOutput } from './output.js';
 import { allocationError, checkEnsembleMemory, checkMergeMemory } from './memory-check.js';
 import { progressBar } from './progress.js';
-import { sha256File } from './provenance.js';
+import { ensembleParameters, sha256File } from './provenance.js';
 
 interface EnsembleCliOptions {
   co2Formula?: 'ar6' | 'log';
@@ -56,19 +56,6 @@ const ENSEMBLE_REFUSES: RefusedOption[] = [
 const FROM_SHARDS = 'every setting comes from the shards (the CO2 formula they were made with; ECS, TCR, 2xCO2 and aerosol forcing are sampled per member)';
 const MERGE_REFUSES: RefusedOption[] = ['--ecs <kelvin>', '--tcr <kelvin>', '--params <file>', '--co2-formula <name>'].map((flags) => ({ flags, why: FROM_SHARDS }));
 
-/**
- * The parameters an ensemble's provenance records: only what every member shares, as `--params`
- * keys (the CO2 formula and the fixed heat capacities and efficacy); the notes describe the sampled
- * quantities.
- */
-function ensembleParameters(c: EnsembleConfig): Record<string, number | string> {
-  return {
-    co2_formula: c.co2Formula,
-    upper_heat_capacity: c.sampling.upperHeatCapacity,
-    deep_heat_capacity: c.sampling.deepHeatCapacity,
-    deep_efficacy: c.sampling.deepEfficacy,
-  };
-}
 
 function shardOption(text: string): { index: number; count: number } {
   const m = /^(\d+)\/(\d+)$/.exec(text.trim());

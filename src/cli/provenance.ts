@@ -2,6 +2,7 @@ import { createHash } from 'node:crypto';
 import { readFileSync } from 'node:fs';
 import { DateTime } from 'luxon';
 import { paramsToJson, type ClimateParams } from '../climate/params.js';
+import type { EnsembleConfig } from '../ensemble/index.js';
 import { standardCautions } from '../report/standard-cautions.js';
 import { packageVersion } from './version.js';
 
@@ -76,5 +77,19 @@ export function buildProvenance(args: ProvenanceInput): Provenance {
     ...(args.seed !== undefined ? { seed: args.seed } : {}),
     notes: args.notes,
     caution: args.caution ?? CAUTION,
+  };
+}
+
+/**
+ * The parameters an ensemble's provenance records: only what every member shares, as `--params`
+ * keys (the CO2 formula and the fixed heat capacities and efficacy); the notes describe the sampled
+ * quantities.
+ */
+export function ensembleParameters(c: EnsembleConfig): Record<string, number | string> {
+  return {
+    co2_formula: c.co2Formula,
+    upper_heat_capacity: c.sampling.upperHeatCapacity,
+    deep_heat_capacity: c.sampling.deepHeatCapacity,
+    deep_efficacy: c.sampling.deepEfficacy,
   };
 }

@@ -7,9 +7,10 @@ import type { Comparison } from '../metrics/compare-pathways.js';
  * warming at key years, milestones with differences from the reference, cumulative CO2 to net zero
  * when emission-driven) and its annual series (`years`, `warming_k`, `difference_k`, and the
  * ensemble percentiles, `prob_above_<t>` and `co2_gtco2` when present). A pathway with an ensemble
- * says so in `central_estimate` ("ensemble median": its peak and crossing periods are those of the
- * median line) and carries per crossing the `odds` from its members: the share crossed by each
- * milestone year, the year by which half have crossed, and the share crossing within the run.
+ * says so in `central_estimate` ("ensemble median": its peak is that of the median line); per
+ * crossing its `year` is then the first year by which half of the members have crossed (as in the
+ * tables), `odds` gives the share crossed by each milestone year and within the run, and
+ * `median_line` the median line's own first 20-year period above the level.
  * Keys are snake_case like the CSV columns.
  * Numbers keep full precision; NaN and "not crossed" are `null`. Two-space indentation, with each
  * list of plain values on one line, so files diff cleanly.
@@ -36,23 +37,27 @@ export function comparisonJson(c: Comparison, provenance: object): string {
       last_year: p.lastYear,
       central_estimate: p.crossingOdds ? 'ensemble median' : 'single run',
       peak: { year: num(p.peak.year), warming_k: num(p.peak.value), still_rising: p.stillRising },
-      crossings: p.crossings.map(({ thresholdK, period, odds }) => ({
-        threshold_k: thresholdK,
-        year: period ? period.year : null,
-        period_first_year: period ? period.firstYear : null,
-        period_last_year: period ? period.lastYear : null,
-        period_mean_k: period ? period.mean : null,
-        at_start: period ? period.atStart : null,
-        ...(odds
-          ? {
-              odds: {
-                by_year: odds.byYear.map((b) => ({ year: b.year, probability: b.probability })),
-                half_crossed_year: odds.medianYear,
-                within_run: odds.withinRun,
-              },
-            }
-          : {}),
-      })),
+      crossings: p.crossings.map(({ thresholdK, period, odds }) => {
+        const first20 = {
+          year: period ? period.year : null,
+          period_first_year: period ? period.firstYear : null,
+          period_last_year: period ? period.lastYear : null,
+          period_mean_k: period ? period.mean : null,
+          at_start: period ? period.atStart : null,
+        };
+        if (!odds) return { threshold_k: thresholdK, ...first20 };
+        // With an ensemble the crossing year is the members' (as in the tables); the median line's own is kept apart.
+        return {
+          threshold_k: thresholdK,
+          year: odds.medianYear,
+          year_rule: 'first year by which half of the members have crossed',
+          odds: {
+            by_year: odds.byYear.map((b) => ({ year: b.year, probability: b.probability })),
+            within_run: odds.withinRun,
+          },
+          median_line: first20,
+        };
+      }),
       key_years: p.keyYears.map((k) => ({ year: k.year, warming_k: num(k.warmingK) })),
       milestones: p.milestones.map((m) => ({
         year: m.year,

@@ -55,7 +55,11 @@ describe('warmcast compare', () => {
     const io = captureIo();
     expect(await main(['compare', 'steady', 'swift', '--members', '100', '--seed', '5', '--years', '2050,2100', '--out', join(dir, 'c.json')], io)).toBe(0);
     expect(io.out).toMatch(/\d\.\d\d \[\d\.\d\d to \d\.\d\d\]/);
-    expect(JSON.parse(readFileSync(join(dir, 'c.json'), 'utf8')).provenance.seed).toBe(5);
+    const doc = JSON.parse(readFileSync(join(dir, 'c.json'), 'utf8'));
+    expect(doc.provenance.seed).toBe(5);
+    // No single parameter set was used: provenance records what the members share, not ECS 3 / TCR 1.8.
+    expect(doc.provenance.parameters).toEqual({ co2_formula: 'ar6', upper_heat_capacity: 8, deep_heat_capacity: 100, deep_efficacy: 1 });
+    expect(doc.provenance.notes).toContain('warming_k and the milestone values are the ensemble median of each pathway; its crossing years are the first years by which half of the members have crossed');
   });
 
   it('--out - writes the long CSV alone on stdout, and provenance hashes the history a pathway was spliced onto', async () => {

@@ -41,8 +41,12 @@ describe('comparisonJson', () => {
     const doc = JSON.parse(comparisonJson(oddsComparison(), {}));
     expect(doc.pathways.map((p: { central_estimate: string }) => p.central_estimate)).toEqual(['single run', 'ensemble median']);
     const [c15, c2] = doc.pathways[1].crossings;
-    expect(c15.odds).toEqual({ by_year: [{ year: 2050, probability: 0.62 }, { year: 2100, probability: null }], half_crossed_year: 2046, within_run: 0.97 });
-    expect(c2.odds.half_crossed_year).toBeNull();
+    expect(c15.year).toBe(2046);
+    expect(c15.odds).toEqual({ by_year: [{ year: 2050, probability: 0.62 }, { year: 2100, probability: null }], within_run: 0.97 });
+    // The median line (1 + 0.0082 (y - 2000) K) has its own first 20-year period above 1.5 K: 2052-2071, labelled 2061.
+    expect(c15.median_line).toMatchObject({ year: 2061, period_first_year: 2052, period_last_year: 2071 });
+    expect(c2.year).toBeNull();
+    expect(doc.pathways[0].crossings[0].year).toBe(2061);
     expect(doc.pathways[0].crossings[0].odds).toBeUndefined();
     const share = oddsComparison().pathways[1].crossings[0].odds!.shareAbove;
     expect(doc.pathways[1].annual['prob_above_1.5']).toEqual(Array.from(share, (v) => (Number.isFinite(v) ? v : null)));
