@@ -9,7 +9,7 @@ import { comparisonCharts, comparisonHtml, comparisonJson, comparisonLongTable, 
 import type { CliIo } from './cli-io.js';
 import { addModelOptions, baselineOption, type ModelOptions, numberListOption, pathwayArg, resolveModelParams, thresholdsOption, wholeNumberOption } from './options.js';
 import { notesAndCautions } from './notes-and-cautions.js';
-import { pathwayInputs, writeOutput } from './output.js';
+import { announceWritten, pathwayInputs, writeOutput } from './output.js';
 import { ensembleParameters } from './provenance.js';
 import { paramsToJson } from '../climate/params.js';
 
@@ -138,7 +138,7 @@ export function compareCommand(io: CliIo): Command {
           },
           { inputs, params, ...(shared ? { parameters: shared } : {}), baseline: opts.baseline, notes, io, ...(opts.members !== undefined ? { seed: opts.seed } : {}) },
         );
-        for (const w of written) io.stderr(`wrote ${w}\n`);
+        announceWritten(written, io);
       }
       const write = opts.out === '-' ? io.stderr : io.stdout;
       write(comparisonText(c, { color: opts.out === '-' ? io.stderrIsTTY : io.stdoutIsTTY, fromYear, baseline, noChart: !opts.chart }));

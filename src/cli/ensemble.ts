@@ -9,7 +9,7 @@ import { ensembleInput } from '../projection/index.js';
 import { ensembleHeadlineLines, ensembleHeadlinesMarkdown, standardCautions, terminalChart, thresholdBaselineNote } from '../report/index.js';
 import type { CliIo } from './cli-io.js';
 import { baselineOption, pathwayArg, refuseOptions, resolveModelParams, thresholdsOption, wholeNumberOption, type RefusedOption } from './options.js';
-import { pathwayInputs, tableRenderers, writeOutput } from './output.js';
+import { announceWritten, pathwayInputs, tableRenderers, writeOutput } from './output.js';
 import { allocationError, checkEnsembleMemory, checkMergeMemory } from './memory-check.js';
 import { progressBar } from './progress.js';
 import { ensembleParameters, sha256File } from './provenance.js';
@@ -228,7 +228,7 @@ function emitEnsemble(
       caution,
       io,
     });
-    for (const w of written) io.stderr(`wrote ${w}\n`);
+    announceWritten(written, io);
   }
   const write = ctx.out === '-' ? io.stderr : io.stdout;
   write(ensembleSummary(result, headlines, name) + (baselineNote ? `  note: ${baselineNote}\n` : ''));

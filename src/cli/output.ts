@@ -1,3 +1,4 @@
+import { existsSync } from 'node:fs';
 import { extname, join, resolve } from 'node:path';
 import { ConfigError } from '../errors.js';
 import { bundledPathwaysDir, formatCsv, formatJson, formatMarkdown, writeFilesAtomic, type ReadPathwayResult, type Table } from '../io/index.js';
@@ -53,11 +54,11 @@ export interface OutputContext extends ProvenanceInput {
  * written, neither is, and existing files are left as they were. `out` is resolved against the
  * command's working directory; `-` writes the CSV form to stdout.
  *
- * @returns the paths written
+ * @returns the files written, each with whether it replaced an existing file (see announceWritten)
  * @throws ConfigError for an extension the command does not write, or a target that cannot be
  *   written (see writeFilesAtomic)
  */
-export function writeOutput(out: string, renderers: Renderers, ctx: OutputContext): string[] {
+export function writeOutput(out: string, renderers: Renderers, ctx: OutputContext): WrittenFile[] {
   const provenance = buildProvenance(ctx);
   const path = out === '-' ? out : resolve(ctx.io.cwd, out);
   if (path === '-') {
@@ -71,9 +72,25 @@ export function writeOutput(out: string, renderers: Renderers, ctx: OutputContex
   }
   const files = [{ path, content: render(provenance) }];
   if (ext === '.csv') files.push({ path: path.slice(0, -ext.length) + '.meta.json', content: JSON.stringify({ ...provenance, ...ctx.sidecar }, null, 2) + '\n' });
+  const existed = files.map((f) => existsSync(f.path));
   // The table and its sidecar land together or not at all: a CSV without its provenance is not written.
   writeFilesAtomic(files, { inputs: ctx.inputs });
-  return files.map((f) => f.path);
+  return files.map((f, i) => ({ path: f.path, replaced: existed[i] }));
+}
+
+/** A file {@link writeOutput} wrote, and whether it took the place of an existing one. */
+export interface WrittenFile {
+  path: string;
+  replaced: boolean;
+}
+
+/**
+ * Says on stderr what was written, one line per file, naming a file that replaced an existing one
+ * so that an overwrite is never silent.
+ * @example announceWritten([{ path: '/w/out.csv', replaced: true }], io) // stderr: 'wrote /w/out.csv (replaced the existing file)'
+ */
+export function announceWritten(written: readonly WrittenFile[], io: CliIo): void {
+  for (const w of written) io.stderr(`wrote ${w.path}${w.replaced ? ' (replaced the existing file)' : ''}\n`);
 }
 
 /** What a yearly table's files carry besides the table (an ensemble's headlines). */

@@ -5,7 +5,7 @@ import { projectPathway, type Projection } from '../projection/index.js';
 import { thresholdBaselineNote } from '../report/index.js';
 import type { CliIo } from './cli-io.js';
 import { addModelOptions, baselineOption, type ModelOptions, numberOption, pathwayArg, resolveModelParams, yearOption } from './options.js';
-import { clipProjection, pathwayInputs, projectionTable, tableRenderers, writeOutput } from './output.js';
+import { announceWritten, clipProjection, pathwayInputs, projectionTable, tableRenderers, writeOutput } from './output.js';
 import { printProjectionSummary } from './summary.js';
 
 /** The pathway `warmcast run` uses when none is given. */
@@ -76,7 +76,7 @@ export function runCommand(io: CliIo): Command {
           notes: [...projection.provenance.notes, ...projection.notes, ...runNotes],
           io,
         });
-        for (const w of written) io.stderr(`wrote ${w}\n`);
+        announceWritten(written, io);
       }
       for (const { projection, whole } of projections) {
         printProjectionSummary(projection, { write: report, color: opts.out === '-' ? io.stderrIsTTY : io.stdoutIsTTY, chart: opts.chart, from: opts.from, notes: runNotes, whole });

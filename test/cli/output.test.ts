@@ -56,3 +56,18 @@ describe('writeOutput: a CSV and its .meta.json sidecar are written all-or-nothi
     expect(readdirSync(dir)).toEqual(['x.meta.json']);
   });
 });
+
+describe('an output file that replaces an existing one', () => {
+  it('run --out says which files replaced existing ones, and says nothing extra for new files', async () => {
+    const dir = tmp();
+    const out = join(dir, 'mine.csv');
+    const first = captureIo();
+    expect(await main(['run', 'swift', '--out', out, '--no-chart'], first)).toBe(0);
+    expect(first.err).toBe(`wrote ${out}\nwrote ${join(dir, 'mine.meta.json')}\n`);
+    writeFileSync(out, 'my own table\n');
+    const again = captureIo();
+    expect(await main(['run', 'swift', '--out', out, '--no-chart'], again)).toBe(0);
+    expect(again.err).toBe(`wrote ${out} (replaced the existing file)\nwrote ${join(dir, 'mine.meta.json')} (replaced the existing file)\n`);
+  });
+});
+
