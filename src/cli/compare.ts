@@ -158,11 +158,13 @@ function ensembleThreadsFor(memberYears: number, emissionDriven: boolean): Ensem
 
 /**
  * The milestone years given with --years, ascending and each once.
- * @throws ConfigError for a year that no pathway covers
+ * @throws ConfigError for a year that is not whole or that no pathway covers
  */
 function chosenYears(years: readonly number[], spans: readonly Float64Array[]): number[] {
   const first = Math.min(...spans.map((y) => y[0]));
   const last = Math.max(...spans.map((y) => y[y.length - 1]));
+  const fractional = years.filter((y) => !Number.isInteger(y));
+  if (fractional.length > 0) throw new ConfigError(`--years must be whole years, such as 2030,2050,2100; got ${fractional.join(', ')}`, 'years');
   const outside = years.filter((y) => y < first || y > last);
   if (outside.length > 0) throw new ConfigError(`--years ${outside.join(', ')} must lie within the years the pathways cover, ${first}-${last}`, 'years');
   return [...new Set(years)].sort((a, b) => a - b);

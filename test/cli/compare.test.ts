@@ -97,6 +97,9 @@ describe('warmcast compare', () => {
     const bad = captureIo();
     expect(await main(['compare', 'steady', 'swift', '--years', '2200,2050'], bad)).toBe(2);
     expect(bad.err).toMatch(/--years 2200 must lie within the years the pathways cover, 1750-2150/);
+    const half = captureIo();
+    expect(await main(['compare', 'steady', 'swift', '--years', '2030,2035.5'], half)).toBe(2);
+    expect(half.err).toMatch(/--years must be whole years, such as 2030,2050,2100; got 2035\.5/);
   });
 
   it('with --members refuses --ecs, --tcr and --params (each member draws its own) instead of ignoring them', async () => {
