@@ -37,9 +37,9 @@ function ensembleParts(p: PathwayComparison, level: (thresholdK: number) => stri
   const parts = [`median peaks at ${kelvin(p.peak.value)} K in ${p.peak.year}${p.stillRising ? ' (still rising)' : ''}`];
   for (const { thresholdK, odds } of p.crossings) {
     if (!odds) continue;
-    const by = odds.byYear.map((b, i) => `${percent(b.probability)}${i === 0 ? ' of members cross it' : ''} by ${b.year}`);
-    by.push(odds.medianYear === null ? `fewer than half by ${p.lastYear}` : `half by ${odds.medianYear}`);
-    parts.push(`${level(thresholdK)}: ${by.join(', ')}`);
+    const by = odds.byYear.map((b) => `${percent(b.probability)} by ${b.year}`).join(', ');
+    const median = odds.medianYear === null ? `fewer than half of the members cross it by ${p.lastYear}` : `median crossing year ${odds.medianYear}`;
+    parts.push(`${level(thresholdK)}: probability of crossing ${by}, ${median}`);
   }
   const last = p.keyYears.filter((k) => Number.isFinite(k.warmingK)).at(-1);
   if (last) parts.push(`median ${kelvin(last.warmingK)} K in ${last.year}`);

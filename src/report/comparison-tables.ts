@@ -74,7 +74,7 @@ export function comparisonTables(c: Comparison, options: ComparisonTableOptions 
   if (withOdds.length > 0) {
     summaryNotes.push(
       `With an ensemble (${withOdds.map((p) => p.label).join(', ')}): the peak is that of the median line, and "Reaches" is the year by ` +
-        'which half of the members have crossed the level by the same rule; the table of chances gives the shares.',
+        'which half of the members have crossed the level by the same rule (the median crossing year); the table of probabilities gives the shares.',
     );
   }
   if (netZero) {
@@ -120,7 +120,7 @@ function oddsTable(c: Comparison, withOdds: PathwayComparison[]): TextTable {
     return row;
   });
   return {
-    caption: 'Chance of crossing each warming level (share of ensemble members)',
+    caption: 'Probability of crossing each warming level (share of ensemble members)',
     columns,
     rows,
     numeric: columns.map((_, j) => j > 0),

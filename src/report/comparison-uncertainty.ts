@@ -6,16 +6,20 @@ import type { Comparison } from '../metrics/compare-pathways.js';
  * range is shown).
  *
  * @param c the comparison
+ * @param where `terminal` for text without shaded charts (the ranges are then in brackets only); default `files`
  * @example
  * comparisonUncertainty(c) // 'Ranges (shaded; 5-95 % in brackets) are shown for delayed: ...'
  */
-export function comparisonUncertainty(c: Comparison): string | undefined {
+export function comparisonUncertainty(c: Comparison, where: 'files' | 'terminal' = 'files'): string | undefined {
   const withRange = c.pathways.filter((p) => p.range).map((p) => p.label);
   if (withRange.length === 0) return undefined;
   const without = c.pathways.filter((p) => !p.range).map((p) => p.label);
   return (
-    `Ranges are shown for ${withRange.join(', ')}: the 5-95 % (very likely) range in brackets and shaded, and the 17-83 % (likely) ` +
-    'range shaded darker, across the sampled model parameters. They cover parameter uncertainty only; uncertainty in the pathway ' +
+    `Ranges are shown for ${withRange.join(', ')}: ` +
+    (where === 'terminal'
+      ? 'the 5-95 % (very likely) range in brackets (the 17-83 % likely range is in the files --out writes), '
+      : 'the 5-95 % (very likely) range in brackets and shaded, and the 17-83 % (likely) range shaded darker, ') +
+    'across the sampled model parameters. They cover parameter uncertainty only; uncertainty in the pathway ' +
     'itself and in the model structure comes on top. The parameters are drawn to the IPCC AR6 assessed ranges and are not ' +
     'constrained by observed warming, so the ranges show what those assessed ranges imply rather than a projection narrowed by the historical record.' +
     (without.length > 0 ? ` ${without.join(', ')}: single central estimates, no range.` : '')

@@ -80,12 +80,12 @@ describe('warmcast compare', () => {
     expect(await main(['ensemble', 'swift', '--members', '300', '--seed', '5', '--no-chart'], ens)).toBe(0);
     for (const level of ['1.5', '2']) {
       const e = new RegExp(`^  ${level.replace('.', '\\.')} K \\(20-year mean\\): probability of crossing by 2050 ([<>]?\\d+) %, by 2100 ([<>]?\\d+) %; (?:median crossing year (\\d+)|fewer than half)`, 'm').exec(ens.out)!;
-      const c = new RegExp(`Swift transition: .*${level.replace('.', '\\.')} K: ([<>]?\\d+) % of members cross it by 2050, ([<>]?\\d+) % by 2100, (?:half by (\\d+)|fewer than half)`).exec(cmp.out)!;
+      const c = new RegExp(`Swift transition: .*${level.replace('.', '\\.')} K: probability of crossing ([<>]?\\d+) % by 2050, ([<>]?\\d+) % by 2100, (?:median crossing year (\\d+)|fewer than half)`).exec(cmp.out)!;
       expect(e, ens.out).not.toBeNull();
       expect(c, cmp.out).not.toBeNull();
       expect(c.slice(1)).toEqual(e.slice(1));
     }
-    expect(cmp.out).toMatch(/Chance of crossing each warming level/);
+    expect(cmp.out).toMatch(/Probability of crossing each warming level/);
     expect(cmp.out).toMatch(/^  note: all ensembles: .*unphysical/m);
     expect(cmp.out).toMatch(/^  caution: .*not constrained by observed warming/m);
   });

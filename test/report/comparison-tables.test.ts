@@ -65,7 +65,7 @@ describe('comparisonTables', () => {
     expect(rows[1][6]).toBe('n/a'); // 2100 lies beyond the data
   });
 
-  it('with crossing odds, "Reaches" is the year by which half of the members crossed, and a table of chances parses back to the odds', () => {
+  it('with crossing odds, "Reaches" is the year by which half of the members crossed, and a table of probabilities parses back to the odds', () => {
     const co = oddsComparison();
     const t = comparisonTables(co);
     expect(t.summary.rows.map((r) => r.slice(3, 5))).toEqual([

@@ -10,4 +10,10 @@ describe('comparisonUncertainty', () => {
     expect(text).toMatch(/steady, swift: single central estimates, no range\.$/);
     expect(comparisonUncertainty({ ...c, pathways: c.pathways.filter((p) => !p.range) })).toBeUndefined();
   });
+
+  it('comparisonUncertainty for the terminal speaks of brackets only, as the terminal chart has no shading', () => {
+    const text = comparisonUncertainty(fixtureComparison(), 'terminal')!;
+    expect(text).toMatch(/^Ranges are shown for delayed: the 5-95 % \(very likely\) range in brackets \(the 17-83 % likely range is in the files --out writes\)/);
+    expect(text).not.toMatch(/shaded/);
+  });
 });
