@@ -31,7 +31,12 @@ export async function main(argv: string[], io: CliIo): Promise<number> {
     program.addCommand(make(io));
   }
   const configure = (cmd: Command) => {
-    cmd.exitOverride().configureOutput({ writeOut: (s) => io.stdout(s), writeErr: (s) => io.stderr(s) });
+    cmd.exitOverride().configureOutput({
+      writeOut: (s) => io.stdout(s),
+      writeErr: (s) => io.stderr(s),
+      // Option and usage errors start like every other error of the tool.
+      outputError: (s, write) => write(s.replace(/^error: /, 'warmcast: ')),
+    });
     for (const sub of cmd.commands) configure(sub);
   };
   configure(program);

@@ -67,8 +67,8 @@ export function comparisonTables(c: Comparison, options: ComparisonTableOptions 
     return row;
   });
   const summaryNotes = [
-    `Peak: highest annual warming (K relative to ${baseline}). Reaches: the middle year of the first ${c.windowYears}-year period whose mean ` +
-      `warming exceeds the level, ${baseline === '1850-1900' ? 'the IPCC AR6 WG1 convention for global warming levels' : `the IPCC AR6 WG1 20-year-mean rule applied to warming relative to ${baseline} (so not AR6 levels)`} (of the two middle years, the earlier); ` +
+    `Peak: highest annual warming (K relative to ${baseline}). Reaches: the middle year (the earlier of the two) of the first ${c.windowYears}-year ` +
+      `period whose mean warming exceeds the level, ${baseline === '1850-1900' ? 'the IPCC AR6 WG1 convention for global warming levels' : `the IPCC AR6 WG1 20-year-mean rule applied to warming relative to ${baseline}, so these are not AR6 levels`}; ` +
       `"or earlier" when the first complete ${c.windowYears}-year period of the data is already above it.`,
   ];
   if (withOdds.length > 0) {

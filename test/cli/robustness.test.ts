@@ -241,3 +241,14 @@ describe('warmcast compare with two files of the same name', () => {
     expect(named.out).toContain('Plan B');
   });
 });
+
+describe('option and usage errors', () => {
+  it('an unknown option and a bad option value start with "warmcast:" like every other error, and exit 2', async () => {
+    for (const argv of [['run', 'swift', '--bogus'], ['run', 'swift', '--method', 'euler'], ['frobnicate']]) {
+      const r = await run(argv);
+      expect(r.code, argv.join(' ')).toBe(2);
+      expect(r.err, argv.join(' ')).toMatch(/^warmcast: /);
+    }
+  });
+});
+
