@@ -28,7 +28,7 @@ export interface GasCycle {
  * s = 1 - 9.1 / 11.8 = 0.229; the 9.1 yr refers to the about 1800 ppb of 2010 (from memory);
  * 2.75 Mt per ppb ({@link MT_CH4_PER_PPB}). The lifetime lengthens with the burden as OH is used up.
  * Emission-driven runs use {@link withConstantLifetime} of it unless asked otherwise: extrapolated
- * back to 1750 the burden dependence gives a 7.4 yr lifetime, 271 Mt/yr of implied natural emissions
+ * back to 1750 the burden dependence gives a 7.4 yr lifetime, 271 Mt CH4 yr-1 of implied natural emissions
  * and present-day anthropogenic emissions 15 % below inventories (src/carbon/README.md).
  */
 export const CH4_CYCLE: GasCycle = {

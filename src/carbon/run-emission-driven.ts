@@ -275,14 +275,14 @@ function assemble(
     feedback
       ? 'carbon-climate feedback on uptake: on (sinks weaken with warming and cumulative uptake, Millar et al. 2017)'
       : 'carbon-climate feedback on uptake: off (fixed Joos et al. 2013 response)',
-    ...gasNotes(plans.co2, years, (gtc) => `${gtcToGtco2(gtc).toFixed(2)} Gt CO2/yr`),
-    ...gasNotes(plans.ch4, years, (mt) => `${mt.toFixed(1)} Mt CH4/yr`),
-    ...gasNotes(plans.n2o, years, (mt) => `${mt.toFixed(2)} Mt N2O/yr`),
+    ...gasNotes(plans.co2, years, (gtc) => `${gtcToGtco2(gtc).toFixed(2)} Gt CO2 yr-1`),
+    ...gasNotes(plans.ch4, years, (mt) => `${mt.toFixed(1)} Mt CH4 yr-1`),
+    ...gasNotes(plans.n2o, years, (mt) => `${mt.toFixed(2)} Mt N2O yr-1`),
   ];
   if (plans.ch4.lastConcentration < n - 1) {
-    notes.push(`CH4 natural emissions ${natural.ch4.toFixed(1)} Mt/yr (implied by the steady state at the start); lifetime ${ch4LifetimeFeedback ? 'lengthening with the burden (11.8 yr perturbation lifetime)' : 'constant 9.1 yr'}`);
+    notes.push(`CH4 natural emissions ${natural.ch4.toFixed(1)} Mt CH4 yr-1 (implied by the steady state at the start); lifetime ${ch4LifetimeFeedback ? 'lengthening with the burden (11.8 yr perturbation lifetime)' : 'constant 9.1 yr'}`);
   }
-  if (plans.n2o.lastConcentration < n - 1) notes.push(`N2O natural emissions ${natural.n2o.toFixed(2)} Mt/yr (implied by the steady state at the start)`);
+  if (plans.n2o.lastConcentration < n - 1) notes.push(`N2O natural emissions ${natural.n2o.toFixed(2)} Mt N2O yr-1 (implied by the steady state at the start)`);
 
   const co2 = plans.co2;
   return {

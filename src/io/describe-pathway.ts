@@ -1,6 +1,6 @@
 import { COLUMN_UNITS, FORCING_COLUMNS, GASES, PATHWAY_COLUMNS, type Gas, type Pathway } from '../pathway.js';
 import type { ParsedPathway } from './parse-pathway.js';
-import { describeTimeSteps, isAnnualGrid } from './time-steps.js';
+import { describeTimeSteps, formatDecimalYear, isAnnualGrid } from './time-steps.js';
 
 /**
  * What `warmcast check` prints about one pathway: the file, its name, the rows read and their years,
@@ -22,14 +22,21 @@ export function describePathway(parsed: ParsedPathway, pathway: Pathway): string
   const n = t.length;
   const lines = [`file: ${parsed.file}`, `name: ${parsed.name}`];
   if (parsed.metadata.description) lines.push(`description: ${parsed.metadata.description}`);
-  lines.push(`rows read: ${n} (lines ${parsed.rowLines[0]}-${parsed.rowLines[n - 1]})`);
+  lines.push(n === 1
+    ? `rows read: 1 (line ${parsed.rowLines[0]})`
+    : `rows read: ${n} (lines ${parsed.rowLines[0]}-${parsed.rowLines[n - 1]})`);
   lines.push(parsed.timeColumn === 'year'
     ? 'time column: year'
     : 'time column: date (ISO 8601; 1 or 2 July labels its whole year)');
-  lines.push(`years in file: ${formatYear(t[0])} to ${formatYear(t[n - 1])}`);
-  lines.push(isAnnualGrid(t)
-    ? 'steps: 1-year steps on whole years (no interpolation)'
-    : `steps: ${describeTimeSteps(t)}, interpolated to annual`);
+  lines.push(n === 1
+    ? `year in file: ${formatDecimalYear(t[0])}`
+    : `years in file: ${formatDecimalYear(t[0])} to ${formatDecimalYear(t[n - 1])}`);
+  // A single row has no steps; a note says if it lies off the whole year it stands for.
+  if (n > 1) {
+    lines.push(isAnnualGrid(t)
+      ? 'steps: 1-year steps on whole years (no interpolation)'
+      : `steps: ${describeTimeSteps(t)}, interpolated to annual`);
+  }
 
   lines.push('columns:');
   for (const column of PATHWAY_COLUMNS) {
@@ -41,7 +48,7 @@ export function describePathway(parsed: ParsedPathway, pathway: Pathway): string
       if (x < lo) lo = x;
       if (x > hi) hi = x;
     }
-    lines.push(`  ${column} (${COLUMN_UNITS[column]}): ${lo} to ${hi}`);
+    lines.push(`  ${column} (${COLUMN_UNITS[column]}): ${lo === hi ? lo : `${lo} to ${hi}`}`);
   }
 
   const years = pathway.years;
@@ -63,8 +70,4 @@ export function describePathway(parsed: ParsedPathway, pathway: Pathway): string
   const zeroForcing = FORCING_COLUMNS.filter((c) => pathway.series[c] === undefined);
   if (zeroForcing.length > 0) lines.push(`forcing not given (taken as zero): ${zeroForcing.join(', ')}`);
   return lines;
-}
-
-function formatYear(t: number): string {
-  return Number.isInteger(t) ? String(t) : t.toFixed(3);
 }

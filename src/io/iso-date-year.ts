@@ -30,7 +30,7 @@ const REDUCED_PRECISION = /^[+-]?\d{4}(-?\d{2})?$|^\d{4}-?W\d{2}$/i;
  * @example
  * isoDateToYear('2030-07-01') // { ok: true, year: 2030 }
  * isoDateToYear('2032-07-02') // { ok: true, year: 2032 }
- * isoDateToYear('2030-02-30') // { ok: false, reason: 'you specified 30 (of type number) as a day, which is invalid' }
+ * isoDateToYear('2030-02-30') // { ok: false, reason: '2030-02-30 is not a calendar date (February 2030 has 28 days)' }
  */
 export function isoDateToYear(text: string): IsoDateYear {
   const trimmed = text.trim();
@@ -39,13 +39,51 @@ export function isoDateToYear(text: string): IsoDateYear {
   }
   // The calendar day as written (in its own offset), for the mid-year rule.
   const written = DateTime.fromISO(trimmed, { zone: 'utc', setZone: true });
-  if (!written.isValid) {
-    return { ok: false, reason: written.invalidExplanation ?? written.invalidReason ?? 'not an ISO 8601 date' };
-  }
+  if (!written.isValid) return { ok: false, reason: invalidDateReason(trimmed, written.invalidReason) };
   if (written.month === 7 && (written.day === 1 || written.day === 2)) return { ok: true, year: written.year };
   const instant = (/t/i.test(trimmed) ? written : written.plus({ hours: 12 })).toUTC();
   const y = instant.year;
   const start = DateTime.utc(y, 1, 1).toMillis();
   const end = DateTime.utc(y + 1, 1, 1).toMillis();
   return { ok: true, year: y + (instant.toMillis() - start) / (end - start) - 0.5 };
+}
+
+const MONTHS = ['January', 'February', 'March', 'April', 'May', 'June', 'July', 'August', 'September', 'October', 'November', 'December'];
+
+/** Calendar (2030-02-30), ordinal (2030-366) and week (2030-W54-1) dates, with or without hyphens, before any time. */
+const CALENDAR = /^([+-]?\d{4})-?(\d{2})-?(\d{2})(?:T|$)/i;
+const ORDINAL = /^([+-]?\d{4})-?(\d{3})(?:T|$)/i;
+const WEEK = /^([+-]?\d{4})-?W(\d{2})(?:-?\d)?(?:T|$)/i;
+
+/**
+ * Why luxon refused a date, in plain words (luxon's own explanation names its internals: "you
+ * specified 30 (of type number) as a day").
+ */
+function invalidDateReason(text: string, luxonReason: string | null): string {
+  if (luxonReason !== 'unit out of range') {
+    return `${text} cannot be read as one (write year-month-day with hyphens, such as 2030-07-01; a time of day follows a T)`;
+  }
+  const calendar = CALENDAR.exec(text);
+  if (calendar) {
+    const [year, month, day] = [Number(calendar[1]), Number(calendar[2]), Number(calendar[3])];
+    if (month < 1 || month > 12) return `${text} is not a calendar date (there is no month ${calendar[2]})`;
+    const days = DateTime.utc(year, month, 1).daysInMonth ?? 31;
+    if (day < 1) return `${text} is not a calendar date (there is no day ${calendar[3]})`;
+    if (day > days) return `${text} is not a calendar date (${MONTHS[month - 1]} ${year} has ${days} days)`;
+  }
+  const ordinal = ORDINAL.exec(text);
+  if (ordinal) {
+    const year = Number(ordinal[1]);
+    const days = DateTime.utc(year, 1, 1).daysInYear;
+    const day = Number(ordinal[2]);
+    if (day < 1 || day > days) return `${text} is not a date (day ${ordinal[2]} of a year with ${days} days)`;
+  }
+  const week = WEEK.exec(text);
+  if (week) {
+    const year = Number(week[1]);
+    const weeks = DateTime.fromObject({ weekYear: year, weekNumber: 1, weekday: 1 }, { zone: 'utc' }).weeksInWeekYear;
+    const number = Number(week[2]);
+    if (number < 1 || number > weeks) return `${text} is not a date (week ${week[2]} of a year with ${weeks} ISO weeks)`;
+  }
+  return `${text} has a time of day or an offset out of range (hours 0-23, minutes and seconds 0-59)`;
 }

@@ -1,6 +1,7 @@
 import type { CalibrationTargets } from '../climate/calibrate.js';
 import { PARAM_KEYS, type ClimateParamsJson } from '../climate/params.js';
 import { InputError, type InputProblem } from '../errors.js';
+import { jsonSyntaxError } from './json-syntax-error.js';
 import { nearestName } from './nearest-name.js';
 
 const NUMBER_KEYS = Object.keys(PARAM_KEYS).filter((k) => k !== 'co2_formula') as Exclude<keyof ClimateParamsJson, 'co2_formula'>[];
@@ -8,7 +9,8 @@ const FORMULAS = ['ar6', 'log'] as const;
 
 /**
  * Reads a parameters JSON file (the keys of DESIGN.md, any subset; the rest take their defaults).
- * Every problem is collected: invalid JSON (with its line and column), a top level that is not an
+ * Every problem is collected: invalid JSON (its line and column and what is wrong, in plain words:
+ * see jsonSyntaxError), a top level that is not an
  * object, unknown keys (with the nearest known key suggested), values of the wrong type.
  * Physical plausibility (positive heat capacities, TCR below ECS) is checked by `calibrate`.
  *
@@ -20,13 +22,21 @@ const FORMULAS = ['ar6', 'log'] as const;
  */
 export function parseParams(text: string, file: string): CalibrationTargets {
   let data: unknown;
+  const json = text.replace(/^\uFEFF/, '');
   try {
-    data = JSON.parse(text.replace(/^\uFEFF/, ''));
+    data = JSON.parse(json);
   } catch (e) {
+    const expected = 'a JSON object such as {"ecs_k": 3.0, "tcr_k": 1.8}';
+    const syntax = jsonSyntaxError(json);
+    if (syntax) {
+      // The message says what was expected there; the whole-file example would only repeat it.
+      throw new InputError([{ file, line: syntax.line, code: 'input.bad-json', message: `is not valid JSON at column ${syntax.column}: ${syntax.message}` }]);
+    }
+    // Not expected: the engine refused what the scanner accepts. Its own words are the best there are.
     const message = (e as Error).message;
     const pos = /position (\d+)/.exec(message);
-    const line = pos ? lineOf(text, Number(pos[1])) : undefined;
-    throw new InputError([{ file, line, code: 'input.bad-json', message: 'is not valid JSON', value: message, expected: 'a JSON object such as {"ecs_k": 3.0, "tcr_k": 1.8}' }]);
+    const line = pos ? lineOf(json, Number(pos[1])) : undefined;
+    throw new InputError([{ file, line, code: 'input.bad-json', message: 'is not valid JSON', value: message, expected }]);
   }
   if (typeof data !== 'object' || data === null || Array.isArray(data)) {
     throw new InputError([{ file, line: 1, code: 'input.bad-json', message: 'must hold one JSON object', expected: 'an object such as {"ecs_k": 3.0}' }]);

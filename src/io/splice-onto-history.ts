@@ -1,5 +1,14 @@
 import { InputError } from '../errors.js';
-import { EMISSION_COLUMNS, GASES, PATHWAY_COLUMNS, type Pathway, type PathwayColumn } from '../pathway.js';
+import {
+  COLUMN_UNITS,
+  CONCENTRATION_COLUMNS,
+  EMISSION_COLUMNS,
+  FORCING_COLUMNS,
+  GASES,
+  PATHWAY_COLUMNS,
+  type Pathway,
+  type PathwayColumn,
+} from '../pathway.js';
 
 /**
  * Joins a pathway that starts after the history's first year onto that history, so that a run
@@ -23,6 +32,10 @@ import { EMISSION_COLUMNS, GASES, PATHWAY_COLUMNS, type Pathway, type PathwayCol
  *   history's year-H value to the pathway's year-F value, column by column; an emission column
  *   whose gas the history gives as a concentration is held at its year-F value over the gap instead
  *   (the carbon cycle joins it to the history), and a note says so.
+ * - when F is at most one year after H, a concentration or forcing column that both give and that
+ *   steps at the join (the file's year-F value against the history's value for F, or for H when the
+ *   file starts the year after it) by more than 2 % (concentrations) or 0.1 W m-2 (forcing) is noted
+ *   with both values; the values are used as given.
  *
  * A pathway starting at or before the history's first year is returned as it is.
  *
@@ -109,12 +122,13 @@ export function spliceOntoHistory(future: Pathway, history: Pathway): Pathway {
   const fromHistory = history.provenance.source.startsWith('bundled:');
   const notes = [
     ...future.provenance.notes,
-    `spliced onto ${fromHistory ? 'bundled ' : ''}history at ${f0} (${h0}-${Math.min(f0 - 1, hLast)} from ${historyFile(history)})`,
+    `spliced onto ${fromHistory ? 'bundled ' : ''}history at ${f0} (${yearSpan(h0, Math.min(f0 - 1, hLast))} from ${historyFile(history)})`,
   ];
   if (bridgedColumns.length > 0) {
-    notes.push(`${hLast + 1}-${f0 - 1} bridged linearly from the history's ${hLast} value to the file's ${f0} value `
+    notes.push(`${yearSpan(hLast + 1, f0 - 1)} bridged linearly from the history's ${hLast} value to the file's ${f0} value `
       + `(${bridgedColumns.join(', ')})`);
   }
+  if (!bridged) notes.push(...joinSteps(future, history));
   if (fLast <= hLast) {
     const all = PATHWAY_COLUMNS.filter((c) => held.includes(c) || heldAtMean.includes(c));
     if (all.length > 0) notes.push(`${all.join(', ')} not in file: taken from history`);
@@ -125,8 +139,7 @@ export function spliceOntoHistory(future: Pathway, history: Pathway): Pathway {
     }
   }
   if (backfilled.length > 0) {
-    const gap = f0 - 1 > hLast + 1 ? `${hLast + 1}-${f0 - 1}` : `${hLast + 1}`;
-    notes.push(`${backfilled.join(', ')} held at the file's ${f0} value over ${gap}: the history gives `
+    notes.push(`${backfilled.join(', ')} held at the file's ${f0} value over ${yearSpan(hLast + 1, f0 - 1)}: the history gives `
       + `that gas as a concentration, which cannot be bridged linearly to an emission rate`);
   }
   for (const [given, replaced] of switched) {
@@ -147,6 +160,54 @@ export function spliceOntoHistory(future: Pathway, history: Pathway): Pathway {
     metadata: future.metadata,
     provenance: { source: future.provenance.source, spliceYear: f0, notes },
   };
+}
+
+/**
+ * Largest step at the join, relative to the history's value, that a concentration column takes
+ * without a note: 2 % (common practice, no source; CO2 has grown by under 1 % a year in the record,
+ * so a larger step says the file and the history disagree rather than that the gas changed).
+ */
+const JOIN_STEP_RELATIVE = 0.02;
+
+/** Largest step at the join that a prescribed forcing column takes without a note, W m-2 (common practice, no source). */
+const JOIN_STEP_FORCING_WM2 = 0.1;
+
+/**
+ * Notes on concentration and forcing columns that both the file and the history give and that step
+ * at the join by more than JOIN_STEP_RELATIVE (concentrations) or JOIN_STEP_FORCING_WM2 (forcing):
+ * the file's first value against the history's in the same year, or, when the file starts the year
+ * after the history ends, in the history's last year. Emission columns are left to the carbon cycle,
+ * which notes the rates either side of its own join.
+ */
+function joinSteps(future: Pathway, history: Pathway): string[] {
+  const f0 = future.years[0];
+  const h0 = history.years[0];
+  const at = Math.min(f0, history.years[history.years.length - 1]);
+  const notes: string[] = [];
+  for (const column of [...CONCENTRATION_COLUMNS, ...FORCING_COLUMNS]) {
+    const fs = future.series[column];
+    const hs = history.series[column];
+    if (!fs || !hs) continue;
+    const given = fs[0];
+    const before = hs[at - h0];
+    const isConcentration = (CONCENTRATION_COLUMNS as readonly PathwayColumn[]).includes(column);
+    const step = isConcentration ? (given - before) / before : given - before;
+    if (!(Math.abs(step) > (isConcentration ? JOIN_STEP_RELATIVE : JOIN_STEP_FORCING_WM2))) continue;
+    const unit = COLUMN_UNITS[column];
+    const digits = isConcentration ? 2 : 3;
+    const values = `the history gives ${before.toFixed(digits)} ${unit} for ${at}, the file ${given.toFixed(digits)} ${unit}`
+      + (at === f0 ? '' : ` for ${f0}`);
+    const size = isConcentration
+      ? `${Math.abs(100 * step).toFixed(1)} % ${step > 0 ? 'higher' : 'lower'}; a step of more than ${100 * JOIN_STEP_RELATIVE} % is noted`
+      : `${Math.abs(step).toFixed(3)} ${unit} ${step > 0 ? 'higher' : 'lower'}; a step of more than ${JOIN_STEP_FORCING_WM2} ${unit} is noted`;
+    notes.push(`${column} steps at the join: ${values} (${size})`);
+  }
+  return notes;
+}
+
+/** `2025-2029`, or `2025` for a single year. */
+function yearSpan(first: number, last: number): string {
+  return first === last ? String(first) : `${first}-${last}`;
 }
 
 /** The other column of the same gas (`co2_ppm` <-> `co2_gtco2`), or undefined for forcing columns. */

@@ -1,7 +1,7 @@
 import { InputError } from '../errors.js';
 import { PATHWAY_COLUMNS, type Pathway, type PathwayColumn } from '../pathway.js';
 import type { ParsedPathway } from './parse-pathway.js';
-import { describeTimeSteps, isAnnualGrid } from './time-steps.js';
+import { describeTimeSteps, formatStepLength, isAnnualGrid } from './time-steps.js';
 
 /**
  * How far (in years) a first or last row may sit inside a whole year and still give that year its
@@ -16,7 +16,9 @@ const END_TOLERANCE_YEARS = 1 / 365;
  * (each end widened by one day, see above), every column interpolated linearly between the two
  * neighbouring rows. A year on a row takes the row's value exactly; an end year at most a day
  * outside the rows takes the end row's value. A file already on consecutive whole years is copied
- * unchanged; otherwise a provenance note says what was interpolated.
+ * unchanged; otherwise a provenance note says what was interpolated, and another when rows lie less
+ * than 0.9 years apart (monthly or seasonal values are still read as annual means centred on their
+ * dates, not averaged over each year: the numbers do not change, the note says so).
  *
  * @param parsed - a validated pathway from parsePathway (times strictly ascending)
  * @returns the annual Pathway; `provenance.source` is the parsed file
@@ -54,8 +56,12 @@ export function toAnnual(parsed: ParsedPathway): Pathway {
   }
 
   const notes: string[] = [];
-  if (!isAnnualGrid(t)) {
-    notes.push(`interpolated linearly from ${n} rows (${describeTimeSteps(t)}) to ${count} annual values`);
+  if (n === 1) {
+    if (!isAnnualGrid(t)) notes.push(`the single row lies within a day of the middle of ${firstYear} and gives that year's values`);
+  } else if (!isAnnualGrid(t)) {
+    notes.push(`interpolated linearly from ${n} rows (${describeTimeSteps(t)}) to ${count} annual value${count === 1 ? '' : 's'}`);
+    const short = subAnnualNote(parsed);
+    if (short) notes.push(short);
   }
   return {
     name: parsed.name,
@@ -64,6 +70,36 @@ export function toAnnual(parsed: ParsedPathway): Pathway {
     metadata: { ...parsed.metadata },
     provenance: { source: parsed.file, notes },
   };
+}
+
+/**
+ * Rows closer together than this many years are taken to be sub-annual values (monthly, seasonal)
+ * rather than annual means (common practice, no source: 0.9 leaves room for annual means whose dates
+ * wander by a few weeks from year to year).
+ */
+const SUB_ANNUAL_STEP_YEARS = 0.9;
+
+/** A note when rows are less than SUB_ANNUAL_STEP_YEARS apart: they are read as annual means all the same. */
+function subAnnualNote(parsed: ParsedPathway): string | undefined {
+  const t = parsed.times;
+  let count = 0;
+  let shortest = 0;
+  for (let i = 1; i < t.length; i++) {
+    const d = t[i] - t[i - 1];
+    if (d < SUB_ANNUAL_STEP_YEARS) {
+      if (count === 0 || d < t[shortest] - t[shortest - 1]) shortest = i;
+      count++;
+    }
+  }
+  if (count === 0) return undefined;
+  const steps = t.length - 1;
+  const which = count === steps
+    ? `rows are less than a year apart (${describeTimeSteps(t)})`
+    : `${count} of the ${steps} steps between rows ${count === 1 ? 'is' : 'are'} under ${SUB_ANNUAL_STEP_YEARS} years (the shortest, `
+      + `${formatStepLength(t[shortest] - t[shortest - 1])}, between lines ${parsed.rowLines[shortest - 1]} and ${parsed.rowLines[shortest]})`;
+  return `${which}: each row is read as an annual mean centred on its ${parsed.timeColumn === 'date' ? 'date' : 'year value'} and each `
+    + 'year takes the value interpolated between the rows either side of its middle, not the average of the rows within it; '
+    + 'if these are monthly or seasonal values, give one annual mean per year instead';
 }
 
 /** Piecewise-linear values of (t, v) at ascending `at`, held at the end values outside [t0, tN]. */

@@ -212,7 +212,15 @@ function cannotWrite(path: string, e: unknown, folder: string, stage: 'create' |
       break;
     case 'ENOENT':
     case 'ENOTDIR':
-      reason = `the folder ${folder} does not exist (any more)`;
+      // Also what a folder that exists answers when its file system takes no new files (/proc, /sys).
+      if (!isFolder(folder)) reason = `the folder ${folder} does not exist (any more)`;
+      else if (stage === 'create') {
+        reason = `the folder ${folder} exists but takes no new files (the system answered "no such file or directory", `
+          + 'as virtual file systems such as /proc and /sys do); choose a folder on a disk';
+      } else {
+        reason = `the new file could not be moved into place in ${folder} (the system answered "no such file or directory": `
+          + 'the file or its temporary copy was removed while writing)';
+      }
       break;
     case 'EISDIR':
       reason = 'it is a folder';
@@ -227,6 +235,14 @@ function cannotWrite(path: string, e: unknown, folder: string, stage: 'create' |
     }
   }
   return new ConfigError(`cannot write ${path}: ${reason}`, 'out', 'config.cannot-write');
+}
+
+function isFolder(path: string): boolean {
+  try {
+    return statSync(path).isDirectory();
+  } catch {
+    return false;
+  }
 }
 
 /** `.<name>.<kind>-<pid>-<random>` in the same folder as `path`. */

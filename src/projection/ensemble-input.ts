@@ -5,6 +5,7 @@ import { forcingByAgent } from '../forcing/agents.js';
 import { PREINDUSTRIAL } from '../forcing/constants.js';
 import { EMISSION_COLUMNS, GASES, type Pathway } from '../pathway.js';
 import { projectPathway } from './project-pathway.js';
+import { startFromRestNote } from './start-from-rest-note.js';
 
 /**
  * The forcing an ensemble perturbs for a pathway: ERF by agent with the CO2 formula's own doubling
@@ -13,7 +14,8 @@ import { projectPathway } from './project-pathway.js';
  * (annual steps of the Joos et al. 2013 boxes with the Millar et al. 2017 feedback) driven by its
  * own warming and a sampled multiplier on the pre-industrial iIRF100; the pathway's history
  * concentrations, its emissions and the CH4 and N2O of one central run (gases without a climate
- * feedback in the model) are passed to the members. The central run also checks the pathway.
+ * feedback in the model) are passed to the members. The central run also checks the pathway. A
+ * pathway starting after 1750 gets a note that each member starts from rest then (startFromRestNote).
  *
  * @param pathway annual pathway (spliced onto history as a run would be)
  * @param params central parameters (used for the CH4 and N2O of emission pathways and the formula)
@@ -56,6 +58,9 @@ export function ensembleInput(pathway: Pathway, params: ClimateParams): { input:
       );
     }
   }
+  // Members scale the forcing differently, so the note gives no one value for it.
+  const fromRest = startFromRestNote(pathway, { subject: 'each member' });
+  if (fromRest) notes.push(fromRest);
   const forcing = forcingByAgent(n, { ...gases, prescribed: s }, { co2Formula: params.co2Formula });
   return { input: { years: pathway.years, forcing, co2Formula: params.co2Formula, ...(carbon ? { carbon } : {}) }, notes };
 }

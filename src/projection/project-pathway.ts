@@ -6,6 +6,7 @@ import { FORCING_AGENTS, forcingByAgent, type ForcingAgent, type ForcingOptions 
 import { PREINDUSTRIAL } from '../forcing/constants.js';
 import { DEFAULT_TOLERANCES, type OdeTolerances } from '../numerics/integrate-steps.js';
 import { EMISSION_COLUMNS, FORCING_COLUMNS, GASES, type Pathway, type PathwayProvenance } from '../pathway.js';
+import { startFromRestNote } from './start-from-rest-note.js';
 
 /** Options of {@link projectPathway}. */
 export interface ProjectionOptions {
@@ -67,7 +68,8 @@ export interface Projection {
  * energy balance integrated by odex from rest at the first year (T = T_d = 0, the pre-industrial
  * equilibrium, whatever that year's forcing: a pathway starting after 1750 without the history
  * splice misses the warming already reached by then) -> warming relative to the baseline mean.
- * Notes name the gases held at their 1750 values and the forcing columns taken as zero.
+ * Notes name the gases held at their 1750 values and the forcing columns taken as zero, and, for a
+ * first year after 1750, what the run starts from (startFromRestNote).
  *
  * @param pathway annual pathway (concentrations and prescribed forcing)
  * @param options parameters, baseline, method
@@ -103,6 +105,8 @@ export function projectPathway(pathway: Pathway, options: ProjectionOptions): Pr
       n2o_ppb: r.n2oPpb,
     };
     for (const a of FORCING_AGENTS) columns[`forcing_${a}_wm2`] = r.forcing.byAgent[a as ForcingAgent];
+    const fromRest = startFromRestNote(pathway, { subject: 'the run', forcingWm2: r.forcing.total[0] });
+    if (fromRest) notes.push(fromRest);
     columns.co2_gtco2 = r.co2EmissionsGtco2;
     columns.ch4_mt = r.ch4EmissionsMt;
     columns.n2o_mt = r.n2oEmissionsMt;
@@ -113,6 +117,8 @@ export function projectPathway(pathway: Pathway, options: ProjectionOptions): Pr
 
   const forcing = forcingByAgent(n, { co2Ppm: s.co2_ppm, ch4Ppb: s.ch4_ppb, n2oPpb: s.n2o_ppb, prescribed: s }, forcingOptions);
   const eb = energyBalance(params, forcing.total, options.method ?? 'odex', tolerances);
+  const fromRest = startFromRestNote(pathway, { subject: 'the run', forcingWm2: forcing.total[0] });
+  if (fromRest) notes.push(fromRest);
 
   const columns: Record<string, Float64Array> = {
     warming_k: rebase(years, eb.surfaceK, baseline, pathway.name),

@@ -86,6 +86,8 @@ describe('runEmissionDriven against analytic solutions', () => {
     expectClose(150 / Math.log(d(20) / d(170)), 109, 1e-4);
     expectAllClose(base.n2oPpb, filled(n, () => 270.1), 1e-8, 'steady state');
     expectMassConserved(pulsed);
+    // The natural emissions are said in the project's unit style, naming the gas (Mt N2O yr-1, not Mt/yr).
+    expect(base.notes).toContain(`N2O natural emissions ${base.naturalEmissionsMt.n2o.toFixed(2)} Mt N2O yr-1 (implied by the steady state at the start)`);
   });
 });
 
@@ -151,6 +153,9 @@ describe('runEmissionDriven joining history and a future emission pathway', () =
     const reference = runEmissionDriven(full, params, options);
     expect(run.diagnosedUntil).toBe(2024);
     expect(run.notes.some((note) => note.startsWith('CO2 emissions at the join'))).toBe(true);
+    // Units in the project's one style (W m-2, Gt CO2 yr-1), never "/yr".
+    expect(run.notes.find((note) => note.startsWith('CO2 emissions at the join'))).toMatch(/^CO2 emissions at the join: -?\d+\.\d\d Gt CO2 yr-1 diagnosed for 2024, -?\d+\.\d\d Gt CO2 yr-1 given for 2025$/);
+    expect(run.notes.filter((note) => note.includes('/yr'))).toEqual([]);
     // Up to 2024 both runs diagnose the same emissions from the same record.
     for (let k = 0; k < hn; k++) expect(run.carbonBudget.emittedGtc[k]).toBeCloseTo(reference.carbonBudget.emittedGtc[k], 6);
     // From 2024 on they differ only in what was emitted: the join year ramps from the rate diagnosed

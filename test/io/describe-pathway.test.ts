@@ -36,6 +36,22 @@ describe('describePathway', () => {
     ]);
   });
 
+  it('describePathway of a one-row file says "line 4" and "year in file", gives no steps and one value per column', () => {
+    writeFileSync(join(dir, 'single.csv'), '# one row\n\nyear,co2_ppm\n2023,415\n');
+    const { parsed, pathway } = readPathway(join(dir, 'single.csv'), { pathwaysDir: dir });
+    const lines = describePathway(parsed, pathway);
+    expect(lines).toContain('rows read: 1 (line 4)');
+    expect(lines).toContain('year in file: 2023');
+    expect(lines.filter((l) => l.startsWith('steps:'))).toEqual([]);
+    expect(lines).toContain('  co2_ppm (ppm): 415');
+  });
+
+  it('describePathway gives decimal years with at most two decimals (2025.5 to 2030.5, not 2030.499)', () => {
+    writeFileSync(join(dir, 'dated.csv'), 'date,co2_ppm\n2025-12-31,420\n2030-12-31,430\n');
+    const { parsed, pathway } = readPathway(join(dir, 'dated.csv'), { pathwaysDir: dir });
+    expect(describePathway(parsed, pathway)).toContain('years in file: 2025.5 to 2030.5');
+  });
+
   it('describePathway says "no interpolation" and "splice: none" for an annual file read without splicing', () => {
     const { parsed, pathway } = readPathway('history', { pathwaysDir: dir, splice: false });
     const lines = describePathway(parsed, pathway);

@@ -78,4 +78,22 @@ describe('isoDateToYear', () => {
   it('isoDateToYear refuses impossible and non-ISO dates', () => {
     for (const text of ['2030-13-01', '2031-02-29', '02/07/2030', 'soon', '']) expect(isoDateToYear(text).ok).toBe(false);
   });
+
+  it('isoDateToYear says in plain words why a date is refused, with the days of that month or year (Gregorian calendar)', () => {
+    const reason = (text: string) => {
+      const r = isoDateToYear(text);
+      return r.ok ? expect.fail(`accepted ${text}`) : r.reason;
+    };
+    expect(reason('2030-02-30')).toBe('2030-02-30 is not a calendar date (February 2030 has 28 days)');
+    expect(reason('2032-02-30')).toBe('2032-02-30 is not a calendar date (February 2032 has 29 days)');
+    expect(reason('2030-04-31')).toBe('2030-04-31 is not a calendar date (April 2030 has 30 days)');
+    expect(reason('2040-13-01')).toBe('2040-13-01 is not a calendar date (there is no month 13)');
+    expect(reason('2030-02-00')).toBe('2030-02-00 is not a calendar date (there is no day 00)');
+    expect(reason('2030-366')).toBe('2030-366 is not a date (day 366 of a year with 365 days)');
+    // 2030 has 52 ISO weeks (it starts on a Tuesday and is not a leap year).
+    expect(reason('2030-W53-1')).toBe('2030-W53-1 is not a date (week 53 of a year with 52 ISO weeks)');
+    expect(reason('2030-07-01T25:00')).toMatch(/^2030-07-01T25:00 has a time of day or an offset out of range/);
+    expect(reason('2050/07/01')).toBe('2050/07/01 cannot be read as one (write year-month-day with hyphens, such as 2030-07-01; a time of day follows a T)');
+    for (const text of ['2030-02-30', '2040-13-01', '2050/07/01', '2030-07-01T12:61']) expect(reason(text)).not.toMatch(/you specified|of type|can't be parsed/);
+  });
 });

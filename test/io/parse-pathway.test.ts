@@ -112,8 +112,8 @@ const badCases: [fixture: string, problem: Expected][] = [
   }],
   ['bad-date.csv', {
     code: 'input.bad-date', line: 3, column: 'date', value: '2030-02-30',
-    // The reason is luxon's own explanation of the invalid day.
-    message: 'must be an ISO 8601 date: you specified 30 (of type number) as a day, which is invalid',
+    // In plain words, not luxon's explanation ("you specified 30 (of type number) as a day").
+    message: 'must be an ISO 8601 date: 2030-02-30 is not a calendar date (February 2030 has 28 days)',
     expected: 'a full date such as 2030-07-01 (1 or 2 July means that whole year)',
   }],
   ['partial-date.csv', {

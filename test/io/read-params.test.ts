@@ -24,6 +24,12 @@ describe('parseParams', () => {
     );
   });
 
+  it('parseParams says where invalid JSON breaks (line and column) and what is wrong in plain words, not the engine\'s message', () => {
+    expect(messageOf('{"ecs_k": "3"\n')).toBe('p.json:2: is not valid JSON at column 1: the text ends inside the object opened at line 1, column 1: a } is missing');
+    expect(messageOf('\uFEFF{\n  "ecs_k": 3\n  "tcr_k": 1.8\n}\n')).toBe('p.json:3: is not valid JSON at column 3: expected , or } after the value of "ecs_k"');
+    expect(messageOf('{"ecs_k": 3,}')).not.toMatch(/position|Expected/);
+  });
+
   it('parseParams shows a wrong value as the JSON it is: got "3.0" for text, got null, got true, never doubled quotes', () => {
     expect(messageOf('{"ecs_k": "3.0"}')).toBe('p.json:1: key "ecs_k": must be a number (got "3.0"; expected a number such as 3.0)');
     expect(messageOf('{"deep_efficacy": null}')).toContain('key "deep_efficacy": must be a number (got null;');

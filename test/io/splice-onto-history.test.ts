@@ -79,7 +79,40 @@ describe('spliceOntoHistory', () => {
     const s = spliceOntoHistory(future, history);
     expect(Array.from(s.years)).toEqual([2000, 2001, 2002]);
     expect(values(s, 'solar_wm2')).toEqual([0.1, 0.2, 0.3]);
-    expect(s.provenance.notes[1]).toBe('aerosol_wm2, solar_wm2 not in file: taken from history');
+    expect(s.provenance.notes).toContain('aerosol_wm2, solar_wm2 not in file: taken from history');
+  });
+
+  it('spliceOntoHistory notes a concentration that steps by more than 2 % at the join, with the history\'s and the file\'s value for the same year', () => {
+    // 400 against the history's 371 ppm for 2001: 29 / 371 = 7.8 % higher.
+    const s = spliceOntoHistory(pathway(2001, { co2_ppm: [400, 401] }, 'plan.csv'), history);
+    expect(s.provenance.notes).toContain(
+      'co2_ppm steps at the join: the history gives 371.00 ppm for 2001, the file 400.00 ppm (7.8 % higher; a step of more than 2 % is noted)',
+    );
+    expect(values(s, 'co2_ppm')).toEqual([370, 400, 401]);
+  });
+
+  it('spliceOntoHistory compares a file starting the year after the history with the history\'s last year', () => {
+    // 360 in 2005 against 374 ppm in 2004: 14 / 374 = 3.7 % lower.
+    const s = spliceOntoHistory(pathway(2005, { co2_ppm: [360, 361] }, 'plan.csv'), history);
+    expect(s.provenance.notes).toContain(
+      'co2_ppm steps at the join: the history gives 374.00 ppm for 2004, the file 360.00 ppm for 2005 (3.7 % lower; a step of more than 2 % is noted)',
+    );
+  });
+
+  it('spliceOntoHistory says nothing of steps within 2 % (concentrations) or 0.1 W m-2 (forcing), nor across a bridged gap', () => {
+    // 380 against 374 ppm is 1.6 %; -1.45 against -1.4 W m-2 is 0.05 W m-2.
+    const near = spliceOntoHistory(pathway(2005, { co2_ppm: [380, 381], aerosol_wm2: [-1.45, -1.4] }, 'plan.csv'), history);
+    expect(near.provenance.notes.filter((n) => n.includes('at the join'))).toEqual([]);
+    // 2005-2006 are bridged from 374 to 400 ppm: a slope, not a step.
+    const gap = spliceOntoHistory(pathway(2007, { co2_ppm: [400, 401] }, 'plan.csv'), history);
+    expect(gap.provenance.notes.filter((n) => n.includes('at the join'))).toEqual([]);
+  });
+
+  it('spliceOntoHistory notes a forcing column that steps by more than 0.1 W m-2 at the join', () => {
+    const s = spliceOntoHistory(pathway(2005, { co2_ppm: [380, 381], aerosol_wm2: [-0.5, -0.4] }, 'plan.csv'), history);
+    expect(s.provenance.notes).toContain(
+      'aerosol_wm2 steps at the join: the history gives -1.400 W m-2 for 2004, the file -0.500 W m-2 for 2005 (0.900 W m-2 higher; a step of more than 0.1 W m-2 is noted)',
+    );
   });
 
   it('spliceOntoHistory returns a future starting at or before the history unchanged', () => {
@@ -103,6 +136,13 @@ describe('spliceOntoHistory', () => {
     // From (2004, 374) to (2007, 383): 3 ppm per year, so 377 and 380 in 2005 and 2006.
     expect(values(s, 'co2_ppm')).toEqual([370, 371, 372, 373, 374, 377, 380, 383, 384]);
     expect(s.provenance.notes).toContain("2005-2006 bridged linearly from the history's 2004 value to the file's 2007 value (co2_ppm)");
+  });
+
+  it('spliceOntoHistory names a one-year bridge by its year alone (2005, not 2005-2005)', () => {
+    const s = spliceOntoHistory(pathway(2006, { co2_ppm: [380, 381] }, 'plan.csv'), history);
+    expect(s.provenance.notes).toContain("2005 bridged linearly from the history's 2004 value to the file's 2006 value (co2_ppm)");
+    const emissions = spliceOntoHistory(pathway(2006, { co2_gtco2: [40, 38] }, 'plan.csv'), history);
+    expect(emissions.provenance.notes.some((n) => n.startsWith("co2_gtco2 held at the file's 2006 value over 2005: "))).toBe(true);
   });
 
   it('spliceOntoHistory holds emissions at their first value over a gap after a concentration history (the carbon cycle joins them)', () => {

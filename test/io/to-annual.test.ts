@@ -3,6 +3,7 @@ import { fileURLToPath } from 'node:url';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { InputError } from '../../src/errors.js';
+import { isoDateToYear } from '../../src/io/iso-date-year.js';
 import { parsePathway } from '../../src/io/parse-pathway.js';
 import { toAnnual } from '../../src/io/to-annual.js';
 import { expectAllClose, expectClose } from '../asserts.js';
@@ -106,5 +107,46 @@ describe('toAnnual', () => {
     const p = toAnnual(parsePathway('year,co2_ppm\n2030,440\n', 'one.csv'));
     expect(Array.from(p.years)).toEqual([2030]);
     expect(Array.from(p.series.co2_ppm!)).toEqual([440]);
+  });
+
+  it('toAnnual says "1 annual value" in the singular, and a single row a day off mid-year in words of its own', () => {
+    const two = toAnnual(parsePathway('year,co2_ppm\n2029.6,440\n2030.4,441\n', 'two.csv'));
+    expect(two.provenance.notes[0]).toBe('interpolated linearly from 2 rows (steps of 0.8 years) to 1 annual value');
+    const one = toAnnual(parsePathway('date,co2_ppm\n2030-07-03,440\n', 'one.csv'));
+    expect(Array.from(one.years)).toEqual([2030]);
+    expect(one.provenance.notes).toEqual(["the single row lies within a day of the middle of 2030 and gives that year's values"]);
+  });
+});
+
+describe('toAnnual of rows less than a year apart', () => {
+  const monthly = Array.from({ length: 24 }, (_, i) => {
+    const year = 2025 + Math.floor(i / 12);
+    const month = String((i % 12) + 1).padStart(2, '0');
+    return `${year}-${month}-15,${420 + 0.2 * i}`;
+  });
+
+  it('toAnnual of monthly dates says each row is read as an annual mean centred on its date, and keeps the interpolated numbers', () => {
+    const p = toAnnual(parsePathway(`date,co2_ppm\n${monthly.join('\n')}\n`, 'monthly.csv'));
+    expect(p.provenance.notes).toContain(
+      'rows are less than a year apart (irregular steps of 28 to 31 days): each row is read as an annual mean centred on its date '
+      + 'and each year takes the value interpolated between the rows either side of its middle, not the average of the rows within it; '
+      + 'if these are monthly or seasonal values, give one annual mean per year instead',
+    );
+    // The numbers are as before the note: 2026 (its middle) lies between 2026-06-15 (423.4) and 2026-07-15 (423.6).
+    const t0 = (isoDateToYear('2026-06-15') as { year: number }).year;
+    const t1 = (isoDateToYear('2026-07-15') as { year: number }).year;
+    expectClose(p.series.co2_ppm![p.years.indexOf(2026)], 423.4 + (0.2 * (2026 - t0)) / (t1 - t0), 1e-9, '2026');
+  });
+
+  it('toAnnual names the shortest step and its lines when only some rows are less than 0.9 years apart', () => {
+    const p = toAnnual(parsePathway('# two rows in one year\nyear,co2_ppm\n2030,440\n2030.5,441\n2035,445\n2040,450\n', 'part.csv'));
+    expect(p.provenance.notes[1]).toMatch(
+      /^1 of the 3 steps between rows is under 0\.9 years \(the shortest, 0\.5 years, between lines 3 and 4\): each row is read as an annual mean centred on its year value/,
+    );
+  });
+
+  it('toAnnual adds no such note for steps of 0.9 years or more', () => {
+    const p = toAnnual(parsePathway('year,co2_ppm\n2030,440\n2030.9,441\n2032,445\n', 'ok.csv'));
+    expect(p.provenance.notes.filter((n) => n.includes('less than a year') || n.includes('under 0.9'))).toEqual([]);
   });
 });

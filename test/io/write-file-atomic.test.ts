@@ -151,6 +151,22 @@ describe('writeFileAtomic', () => {
     expect(fs.readdirSync(folder)).toEqual([]);
   });
 
+  it('writeFileAtomic told "no such file or directory" in a folder that exists says the folder takes no new files, not that it is missing', () => {
+    const target = join(folder, 'x.csv');
+    vi.mocked(fs.openSync).mockImplementationOnce(((p: string) => {
+      throw systemError('ENOENT', `ENOENT: no such file or directory, open '${p}'`);
+    }) as unknown as typeof fs.openSync);
+    const e = configErrorOf(() => writeFileAtomic(target, 'x'));
+    expect(e.message).toBe(`cannot write ${target}: the folder ${realFs.realpathSync(folder)} exists but takes no new files `
+      + '(the system answered "no such file or directory", as virtual file systems such as /proc and /sys do); choose a folder on a disk');
+  });
+
+  it.runIf(process.platform === 'linux' && fs.existsSync('/proc/self'))('writeFileAtomic("/proc/x.csv") does not claim that /proc does not exist', () => {
+    const e = configErrorOf(() => writeFileAtomic('/proc/warmcast-test-x.csv', 'x'));
+    expect(e.message).toMatch(/^cannot write \/proc\/warmcast-test-x\.csv: /);
+    expect(e.message).not.toMatch(/does not exist/);
+  });
+
   it.skipIf(process.getuid?.() === 0)('writeFileAtomic into a real read-only folder refuses before writing (not testable as root)', () => {
     fs.chmodSync(folder, 0o555);
     try {

@@ -45,6 +45,34 @@ describe('projectPathway', () => {
     expect(all.notes.filter((note) => note.includes('taken as zero'))).toEqual([]);
   });
 
+  it('notes that a run from 2030 starts from rest, with the forcing and the start concentrations the run really uses', () => {
+    const later = Array.from({ length: 41 }, (_, i) => 2030 + i);
+    const n = later.length;
+    const emissions = projectPathway(
+      pathway(later, { co2_gtco2: new Float64Array(n).fill(35), ch4_ppb: new Float64Array(n).fill(1900), n2o_mt: new Float64Array(n).fill(10) }),
+      { params, baseline: [2030, 2040] },
+    );
+    const note = emissions.notes.find((text) => text.startsWith('the run starts from rest in 2030'));
+    expect(note).toBeDefined();
+    expect(emissions.carbon!.surfaceK[0]).toBe(0);
+    expect(emissions.carbon!.deepK[0]).toBe(0);
+    expect(note).toContain(`whatever that year's forcing (${emissions.columns.forcing_wm2[0].toFixed(2)} W m-2)`);
+    // The values the note names are the run's own first-year concentrations (AR6 1750 values, forcing/constants.ts).
+    expect(note).toContain(`(CO2 ${emissions.columns.co2_ppm[0]} ppm, N2O ${emissions.columns.n2o_ppb[0]} ppb)`);
+    expect(emissions.columns.ch4_ppb[0]).toBe(1900);
+
+    const concentrations = projectPathway(pathway(later, { co2_ppm: new Float64Array(n).fill(440) }), { params, baseline: [2030, 2040] });
+    expect(concentrations.notes).toContain(
+      `the run starts from rest in 2030: zero warming at the surface and in the deep ocean, as in 1750, whatever that year's forcing (${concentrations.columns.forcing_wm2[0].toFixed(2)} W m-2), `
+      + 'so any warming reached before 2030 is missing; spliced onto the history, the run would start from the record in 1750 instead',
+    );
+  });
+
+  it('adds no starting note to a run from 1750', () => {
+    const run = projectPathway(pathway(years, { co2_ppm: new Float64Array(years.length).fill(300) }), { params });
+    expect(run.notes.filter((text) => text.includes('starts from rest'))).toEqual([]);
+  });
+
   it('throws ConfigError when the baseline lies outside the years', () => {
     const short = years.filter((y) => y >= 1950);
     expect(() => projectPathway(pathway(short, { co2_ppm: new Float64Array(short.length).fill(400) }), { params })).toThrow(ConfigError);
