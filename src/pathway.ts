@@ -45,6 +45,8 @@ export interface PathwayProvenance {
   source: string;
   /** First year taken from the file when it was spliced onto the bundled history, else undefined. */
   spliceYear?: number;
+  /** With a splice: the last year taken from the history (years between it and `spliceYear` are bridged). */
+  historyLastYear?: number;
   /** Human-readable notes: interpolation, splice, columns held at pre-industrial values. */
   notes: string[];
 }

@@ -5,7 +5,7 @@ import { readPathway } from '../io/load-pathway.js';
 import { comparePathways, milestoneYears, type PathwayWarming } from '../metrics/index.js';
 import { defaultWorkerCount, runEnsemble, startEnsembleThreads, type EnsembleThreads } from '../ensemble/index.js';
 import { ensembleInput, projectPathway } from '../projection/index.js';
-import { comparisonCharts, comparisonHtml, comparisonJson, comparisonLongTable, comparisonMarkdown, comparisonText, comparisonUncertainty, scopedNotes, standardCautions, thresholdBaselineNote, type ScopedNote } from '../report/index.js';
+import { comparisonCharts, comparisonHtml, comparisonJson, comparisonLongTable, comparisonSummary, comparisonMarkdown, comparisonText, comparisonUncertainty, scopedNotes, standardCautions, thresholdBaselineNote, type ScopedNote } from '../report/index.js';
 import type { CliIo } from './cli-io.js';
 import { addModelOptions, baselineOption, type ModelOptions, numberListOption, pathwayArg, resolveModelParams, thresholdsOption, wholeNumberOption } from './options.js';
 import { notesAndCautions } from './notes-and-cautions.js';
@@ -47,6 +47,9 @@ export function compareCommand(io: CliIo): Command {
     .action(async (args: string[], opts: CompareOptions) => {
       if (opts.members !== undefined) {
         const given = (['ecs', 'tcr', 'params'] as const).filter((k) => opts[k] !== undefined).map((k) => `--${k}`);
+        if (!opts.carbonFeedback) {
+          throw new ConfigError('with --members every member runs the carbon-climate feedback on uptake, so --no-carbon-feedback would be ignored: leave it out, or compare without --members', 'carbonFeedback');
+        }
         if (given.length > 0) {
           throw new ConfigError(`with --members each member draws its own ECS, TCR, 2xCO2 and aerosol forcing, so ${given.join(', ')} would be ignored: leave ${given.length > 1 ? 'them' : 'it'} out, or compare without --members`, given[0].slice(2));
         }
@@ -79,7 +82,7 @@ export function compareCommand(io: CliIo): Command {
             continue;
           }
           // With an ensemble, the line is its median and the ranges its percentiles (same seed per pathway).
-          const { input, notes: inputNotes } = ensembleInput(pathway, params);
+          const { input, notes: inputNotes } = ensembleInput(pathway, params, { baseline: opts.baseline });
           const e = await runEnsemble(input, { members: opts.members, seed: opts.seed, thresholds: opts.thresholds, baseline: opts.baseline, ...(threads ? { threads } : {}) });
           scoped.push(...[...inputNotes, ...e.notes].map((text) => ({ pathway: p.name, ensemble: true, text })));
           shared ??= ensembleParameters(e.config);
@@ -136,7 +139,17 @@ export function compareCommand(io: CliIo): Command {
             '.svg': () => comparisonCharts(c, { fromYear, baseline })[0],
             '.html': (p) => comparisonHtml(c, { provenance: p, assumptions, baseline, fromYear }),
           },
-          { inputs, params, ...(shared ? { parameters: shared } : {}), baseline: opts.baseline, notes, io, ...(opts.members !== undefined ? { seed: opts.seed } : {}) },
+          {
+            inputs,
+            params,
+            ...(shared ? { parameters: shared } : {}),
+            baseline: opts.baseline,
+            notes,
+            io,
+            ...(opts.members !== undefined ? { seed: opts.seed } : {}),
+            // Beside the long CSV, which holds only annual series: peaks, crossings and their odds.
+            sidecar: { comparison: comparisonSummary(c) },
+          },
         );
         announceWritten(written, io);
       }

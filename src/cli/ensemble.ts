@@ -93,7 +93,7 @@ export function ensembleCommand(io: CliIo): Command {
       // Central parameters: the CO2 formula, and the CH4 and N2O of an emission pathway's central run.
       const { params } = resolveModelParams({ co2Formula: opts.co2Formula }, io);
       const read = readPathway(pathwayArg(arg, io), { splice: opts.splice });
-      const { input, notes } = ensembleInput(read.pathway, params);
+      const { input, notes } = ensembleInput(read.pathway, params, { baseline: opts.baseline });
       const inputs = pathwayInputs(read);
       const years = input.years.length;
       const emissionDriven = input.carbon !== undefined;

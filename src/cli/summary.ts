@@ -40,7 +40,15 @@ export function printProjectionSummary(
     `  ECS ${p.params.ecsK.toFixed(2)} K, TCR ${p.params.tcrK.toFixed(2)} K, CO2 forcing ${p.params.co2Formula}; ` +
       `warming relative to the ${p.baseline[0]}-${p.baseline[1]} mean`,
   );
-  if (p.provenance.spliceYear !== undefined) lines.push(`  history spliced in: years before ${p.provenance.spliceYear} come from the bundled history`);
+  const { spliceYear, historyLastYear } = p.provenance;
+  if (spliceYear !== undefined) {
+    const bridge = historyLastYear !== undefined && historyLastYear < spliceYear - 1 ? historyLastYear : undefined;
+    lines.push(
+      bridge === undefined
+        ? `  history spliced in: years before ${spliceYear} come from the bundled history`
+        : `  history spliced in: years to ${bridge} come from the bundled history, ${bridge + 1 === spliceYear - 1 ? bridge + 1 : `${bridge + 1}-${spliceYear - 1}`} bridged to the file's first year, ${spliceYear}`,
+    );
+  }
   lines.push('');
 
   const splice = p.provenance.spliceYear;

@@ -109,6 +109,33 @@ export function startEnsembleThreads(size: number): EnsembleThreads {
 }
 
 /**
+ * The largest block of member rows handed to worker threads, bytes. Node 20 passes a typed array on
+ * a SharedArrayBuffer of 2^32 bytes or more to a worker with its length wrapped modulo 2^32
+ * (measured: a 4294967304-byte view arrives as 8 bytes), so the workers' writes past the wrapped
+ * end would vanish without an error. A larger block is run in the calling thread, which gives the
+ * same numbers, only more slowly.
+ */
+export const MAX_SHARED_BLOCK_BYTES = 2 ** 32 - 1;
+
+/**
+ * How many threads run `count` members whose rows take `rowBytes`: the threads asked for, at most
+ * one per member and the pool's size; 1 when worker threads are unavailable or the rows exceed
+ * {@link MAX_SHARED_BLOCK_BYTES}.
+ *
+ * @param threads threads asked for (at least 1)
+ * @param count members to run
+ * @param rowBytes bytes of the members' shared rows
+ * @param poolSize size of a started pool, if one is used
+ * @example memberThreads(2, 10_000, 2 ** 33) // 1: the rows would not reach the workers whole
+ */
+export function memberThreads(threads: number, count: number, rowBytes: number, poolSize?: number): number {
+  let size = Math.max(1, Math.min(threads, count));
+  if (poolSize !== undefined) size = Math.min(size, poolSize);
+  if (!workerThreadsAvailable() || poolSize === 0 || rowBytes > MAX_SHARED_BLOCK_BYTES) size = 1;
+  return size;
+}
+
+/**
  * Runs members [from, to) on up to `threads` threads and computes the member-year statistics for
  * `thresholds`: percentiles per year and exceedance counts. Concentration-driven members stream
  * through blocks of years and only a few years of all members are held at a time, unless `keep`
@@ -138,9 +165,7 @@ export async function runMembersParallel(
   const n = task.otherWm2.length;
   const kept = keep || task.carbon !== undefined;
   const rowCount = streamRows(n, kept);
-  let size = Math.max(1, Math.min(threads, count));
-  if (pool) size = Math.min(size, pool.size);
-  if (!workerThreadsAvailable() || (pool && pool.size === 0)) size = 1;
+  const size = memberThreads(threads, count, rowCount * count * 8, pool?.size);
   const shared = size > 1;
   const buffer = (bytes: number) => (shared ? new SharedArrayBuffer(bytes) : new ArrayBuffer(bytes));
   const rows = new Float64Array(buffer(rowCount * count * 8));

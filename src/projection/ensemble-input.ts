@@ -19,16 +19,18 @@ import { startFromRestNote } from './start-from-rest-note.js';
  *
  * @param pathway annual pathway (spliced onto history as a run would be)
  * @param params central parameters (used for the CH4 and N2O of emission pathways and the formula)
+ * @param options `baseline` of the central run (default 1850-1900; a pathway run without the history
+ *   splice needs one inside its own years)
  * @returns the ensemble input and the notes to carry into provenance
  */
-export function ensembleInput(pathway: Pathway, params: ClimateParams): { input: EnsembleInput; notes: string[] } {
+export function ensembleInput(pathway: Pathway, params: ClimateParams, options: { baseline?: [number, number] } = {}): { input: EnsembleInput; notes: string[] } {
   const s = pathway.series;
   const n = pathway.years.length;
   const notes: string[] = [];
   let gases = { co2Ppm: s.co2_ppm, ch4Ppb: s.ch4_ppb, n2oPpb: s.n2o_ppb };
   let carbon: EnsembleInput['carbon'];
   if (EMISSION_COLUMNS.some((c) => s[c] !== undefined)) {
-    const central = projectPathway(pathway, { params });
+    const central = projectPathway(pathway, { params, ...(options.baseline ? { baseline: options.baseline } : {}) });
     gases = { co2Ppm: central.columns.co2_ppm, ch4Ppb: central.columns.ch4_ppb, n2oPpb: central.columns.n2o_ppb };
     const emissions = s[GASES.co2.emission];
     if (emissions) {

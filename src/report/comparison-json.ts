@@ -22,10 +22,30 @@ import type { Comparison } from '../metrics/compare-pathways.js';
  * JSON.parse(comparisonJson(c, { version: '0.1.0' })).pathways[0].peak // { year: 2100, warming_k: 2.7, still_rising: true }
  */
 export function comparisonJson(c: Comparison, provenance: object): string {
+  const doc = { provenance, ...comparisonDocument(c, true) };
+  // Put each list of plain values on one line. JSON strings never hold a raw line break, so only
+  // the layout whitespace between items is touched.
+  const text = JSON.stringify(doc, null, 2).replace(/\[([^\[\]{}]*)\]/g, (whole, inner: string) =>
+    inner.includes('\n') ? `[${inner.trim().replace(/,\n\s*/g, ', ')}]` : whole,
+  );
+  return text + '\n';
+}
+
+/**
+ * The figures of a comparison without its annual series, as {@link comparisonJson} writes them:
+ * settings, then per pathway its peak, crossings (with the members' odds), key years, milestones and
+ * net zero. For the `.meta.json` beside a comparison's long CSV, which holds the annual series.
+ *
+ * @example comparisonSummary(c).pathways[0].peak // { year: 2100, warming_k: 2.7, still_rising: true }
+ */
+export function comparisonSummary(c: Comparison): object {
+  return comparisonDocument(c, false);
+}
+
+function comparisonDocument(c: Comparison, annual: boolean) {
   const num = (v: number) => (Number.isFinite(v) ? v : null);
   const list = (a: ArrayLike<number>) => Array.from(a, num);
-  const doc = {
-    provenance,
+  return {
     reference: c.reference,
     window_years: c.windowYears,
     thresholds_k: c.thresholdsK,
@@ -77,7 +97,7 @@ export function comparisonJson(c: Comparison, provenance: object): string {
             },
           }
         : {}),
-      annual: {
+      ...(annual ? { annual: {
         years: list(p.years),
         warming_k: list(p.warmingK),
         difference_k: list(Array.from(p.years, (y) => {
@@ -89,13 +109,7 @@ export function comparisonJson(c: Comparison, provenance: object): string {
           : {}),
         ...Object.fromEntries(p.crossings.flatMap(({ thresholdK, odds }) => (odds ? [[probAboveColumn(thresholdK), list(odds.shareAbove)]] : []))),
         ...(p.co2Gtco2 ? { co2_gtco2: list(p.co2Gtco2) } : {}),
-      },
+      } } : {}),
     })),
   };
-  // Put each list of plain values on one line. JSON strings never hold a raw line break, so only
-  // the layout whitespace between items is touched.
-  const text = JSON.stringify(doc, null, 2).replace(/\[([^\[\]{}]*)\]/g, (whole, inner: string) =>
-    inner.includes('\n') ? `[${inner.trim().replace(/,\n\s*/g, ', ')}]` : whole,
-  );
-  return text + '\n';
 }

@@ -3,7 +3,7 @@ export type { ComparisonChartOptions } from './comparison-charts.js';
 export { comparisonHeadlines } from './comparison-headlines.js';
 export { comparisonHtml } from './comparison-html.js';
 export type { ComparisonHtmlOptions } from './comparison-html.js';
-export { comparisonJson } from './comparison-json.js';
+export { comparisonJson, comparisonSummary } from './comparison-json.js';
 export { comparisonLongTable } from './comparison-long-table.js';
 export type { LongTable } from './comparison-long-table.js';
 export { comparisonMarkdown } from './comparison-markdown.js';

@@ -23,6 +23,11 @@ describe('warmcast compare', () => {
     const io = captureIo();
     expect(await main(['compare', 'steady', 'swift', '--out', join(dir, 'c.csv')], io)).toBe(0);
     expect(readdirSync(dir).sort()).toEqual(['c.csv', 'c.meta.json']);
+    // The sidecar carries the per-pathway figures the long table has no room for.
+    const meta = JSON.parse(readFileSync(join(dir, 'c.meta.json'), 'utf8'));
+    expect(meta.comparison.pathways.map((p: { pathway: string }) => p.pathway)).toEqual(['Steady growth', 'Swift transition']);
+    expect(meta.comparison.pathways[0].crossings[0]).toMatchObject({ threshold_k: 1.5 });
+    expect(meta.comparison.pathways[0].annual).toBeUndefined();
     const rows = Papa.parse<Record<string, string>>(readFileSync(join(dir, 'c.csv'), 'utf8').trim(), { header: true }).data;
     const ref = new Map<number, number>();
     for (const r of rows.filter((r) => r.pathway === 'Steady growth')) {
@@ -107,5 +112,8 @@ describe('warmcast compare', () => {
     expect(await main(['compare', 'steady', 'swift', '--members', '50', '--ecs', '4', '--tcr', '2'], io)).toBe(2);
     expect(io.err).toMatch(/with --members each member draws its own ECS.*--ecs, --tcr would be ignored/);
     expect(await main(['compare', 'steady', 'swift', '--members', '50', '--co2-formula', 'log', '--no-chart'], captureIo())).toBe(0);
+    const feedback = captureIo();
+    expect(await main(['compare', 'swift-emissions', '--members', '50', '--no-carbon-feedback'], feedback)).toBe(2);
+    expect(feedback.err).toMatch(/--no-carbon-feedback would be ignored/);
   });
 });

@@ -247,4 +247,13 @@ describe('warmcast ensemble and merge', () => {
     expect(await main(['ensemble', 'swift', '--members', '100000000', '--shard', '1/1'], io)).toBe(2);
     expect(io.err).toMatch(/--shard writes a shard file: give --out NAME\.json/);
   });
+
+  it('an emission file run without the history splice takes its --baseline in the ensemble too (as run does)', async () => {
+    const dir = mkdtempSync(join(tmpdir(), 'warmcast-ens-'));
+    const file = join(dir, 'em.csv');
+    writeFileSync(file, '# name: My emissions\nyear,co2_gtco2\n2025,40\n2050,0\n2100,-5\n');
+    const io = captureIo();
+    expect(await main(['ensemble', file, '--no-splice', '--baseline', '2025-2030', '--members', '20', '--no-chart'], io), io.err).toBe(0);
+    expect(io.out).toMatch(/warming relative to 2025-2030/);
+  });
 });

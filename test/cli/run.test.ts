@@ -316,6 +316,20 @@ describe('warmcast run --from/--to', () => {
   });
 });
 
+describe('the splice line of run\'s heading', () => {
+  it('run FILE starting in 2030 says which years come from the history and which are bridged (the history ends in 2024)', async () => {
+    const dir = tmp();
+    const file = join(dir, 'late.csv');
+    writeFileSync(file, 'year,co2_ppm\n2030,440\n2050,470\n');
+    const io = captureIo();
+    expect(await main(['run', file, '--no-chart'], io)).toBe(0);
+    expect(io.out).toMatch(/^  history spliced in: years to 2024 come from the bundled history, 2025-2029 bridged to the file's first year, 2030$/m);
+    const next = captureIo();
+    expect(await main(['run', 'delayed', '--no-chart'], next)).toBe(0);
+    expect(next.out).toMatch(/^  history spliced in: years before 2025 come from the bundled history$/m);
+  });
+});
+
 describe('warmcast run --no-splice', () => {
   it('run FILE --no-splice notes the forcing columns taken as zero, beside the gases held at 1750', async () => {
     const dir = tmp();

@@ -8,6 +8,7 @@ import { dirname, join, resolve } from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { runEnsemble, workerThreadsAvailable } from '../../src/ensemble/index.js';
+import { memberThreads } from '../../src/ensemble/run-members-parallel.js';
 import { canonical } from './canonical.js';
 import { syntheticInput } from './synthetic-input.js';
 
@@ -128,4 +129,15 @@ describe('runMembersParallel', () => {
     expect(here.workersUsed).toBe(1);
     expect(canonical(here)).toBe(one.text);
   }, 120_000);
+});
+
+describe('memberThreads', () => {
+  it('memberThreads keeps rows of 2^32 bytes or more in the calling thread (Node 20 wraps the length of larger shared arrays sent to workers)', () => {
+    const usual = workerThreadsAvailable() ? 2 : 1;
+    expect(memberThreads(2, 1000, 2 ** 32 - 8)).toBe(usual);
+    expect(memberThreads(2, 1000, 2 ** 32)).toBe(1);
+    expect(memberThreads(2, 1, 8)).toBe(1);
+    expect(memberThreads(4, 1000, 8, 2)).toBe(usual);
+    expect(memberThreads(4, 1000, 8, 0)).toBe(1);
+  });
 });

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { comparisonJson } from '../../src/report/comparison-json.js';
+import { comparisonJson, comparisonSummary } from '../../src/report/comparison-json.js';
 import { fixtureComparison, oddsComparison, provenance, years } from './comparison-fixture.js';
 
 describe('comparisonJson', () => {
@@ -51,5 +51,13 @@ describe('comparisonJson', () => {
     const share = oddsComparison().pathways[1].crossings[0].odds!.shareAbove;
     expect(doc.pathways[1].annual['prob_above_1.5']).toEqual(Array.from(share, (v) => (Number.isFinite(v) ? v : null)));
     expect(doc.pathways[0].annual['prob_above_1.5']).toBeUndefined();
+  });
+
+  it('comparisonSummary is comparisonJson without the provenance and the annual series', () => {
+    const c = fixtureComparison();
+    const full = JSON.parse(comparisonJson(c, provenance));
+    delete full.provenance;
+    for (const p of full.pathways) delete p.annual;
+    expect(JSON.parse(JSON.stringify(comparisonSummary(c)))).toEqual(full);
   });
 });
