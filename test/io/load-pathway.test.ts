@@ -35,6 +35,7 @@ describe('loadPathway', () => {
     expect(p.provenance).toEqual({
       source: 'bundled:calm',
       spliceYear: 2023,
+      historyLastYear: 2022,
       notes: [
         'interpolated linearly from 2 rows (10-year steps) to 11 annual values',
         'spliced onto bundled history at 2023 (2020-2022 from history.csv)',
