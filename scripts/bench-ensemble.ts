@@ -56,7 +56,7 @@ const s = pathway.series;
 const n = pathway.years.length;
 const forcing = forcingByAgent(n, { co2Ppm: s.co2_ppm, ch4Ppb: s.ch4_ppb, n2oPpb: s.n2o_ppb, prescribed: s }, { co2Formula: 'ar6' });
 const input: EnsembleInput = { years: pathway.years, forcing, co2Formula: 'ar6' };
-const options: EnsembleOptions = { members: MEMBERS, seed: 7, thresholds: [1.5, 2, 3], baseline: [1850, 1900] };
+const options = { members: MEMBERS, seed: 7, thresholds: [1.5, 2, 3], baseline: [1850, 1900] as const } satisfies EnsembleOptions;
 const memberYears = MEMBERS * n;
 const rate = (years: number, ms: number) => `${((years / ms) * 1000 / 1e6).toFixed(1)} M member-years/s`;
 

@@ -34,10 +34,10 @@ export interface EnsembleOptions {
   members: number;
   /** Random seed, integer in [0, 2^32). */
   seed: number;
-  /** Warming levels, K, for exceedance probabilities and crossing years. */
-  thresholds: number[];
-  /** Baseline period, inclusive years (IPCC AR6: 1850-1900). */
-  baseline: readonly [number, number];
+  /** Warming levels, K, for exceedance probabilities and crossing years (default 1.5, 2 and 3). */
+  thresholds?: number[];
+  /** Baseline period, inclusive years (default 1850-1900, the IPCC AR6 reference for warming levels). */
+  baseline?: readonly [number, number];
   /** Run only the index-th (1-based) of `count` equal slices of the members. */
   shard?: { index: number; count: number };
   /**
@@ -114,7 +114,9 @@ export function shardRange(members: number, shard?: { index: number; count: numb
 }
 
 function ensembleConfig(input: EnsembleInput, options: EnsembleOptions, sampling: EnsembleSampling): EnsembleConfig {
-  const { members, seed, thresholds, baseline, shard, workers } = options;
+  const { members, seed, shard, workers } = options;
+  const thresholds = options.thresholds ?? [1.5, 2, 3];
+  const baseline = options.baseline ?? [1850, 1900];
   const milestones = options.milestones ?? [2050, 2100];
   if (!(Number.isInteger(members) && members >= 1)) throw new ConfigError(`members must be a whole number of at least 1, got ${members}`, 'members');
   if (!(Number.isInteger(seed) && seed >= 0 && seed < 2 ** 32)) throw new ConfigError(`seed must be a whole number from 0 to 4294967295, got ${seed}`, 'seed');
