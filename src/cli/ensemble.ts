@@ -267,7 +267,7 @@ function ensembleSummary(r: EnsembleResult, h: EnsembleHeadlines, name: string):
   for (const y of [2030, 2050, 2100]) {
     const i = y - years[0];
     if (i >= 0 && i < years.length) {
-      lines.push(`  ${y}: median ${p.p50[i].toFixed(2)} K, likely (17-83 %) ${p.p17[i].toFixed(2)}-${p.p83[i].toFixed(2)} K, very likely (5-95 %) ${p.p05[i].toFixed(2)}-${p.p95[i].toFixed(2)} K`);
+      lines.push(`  ${y}: median ${p.p50[i].toFixed(2)} K, likely (17-83 %) ${p.p17[i].toFixed(2)} to ${p.p83[i].toFixed(2)} K, very likely (5-95 %) ${p.p05[i].toFixed(2)} to ${p.p95[i].toFixed(2)} K`);
     }
   }
   lines.push(...thresholds);

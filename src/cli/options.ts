@@ -44,7 +44,7 @@ export function wholeNumberOption(name: string, min: number) {
   return (text: string): number => {
     const v = decimalValue(text);
     if (!Number.isSafeInteger(v) || v < min) {
-      throw new InvalidArgumentError(`${name} must be a whole number of at least ${min} in decimal digits, such as 2000 or 1e6; got "${text}"`);
+      throw new InvalidArgumentError(`${name} must be a whole number of at least ${min} in decimal digits (exponent form such as 1e6 allowed); got "${text}"`);
     }
     return v;
   };

@@ -20,7 +20,7 @@ export function clipProjection(p: Projection, from?: number, to?: number): Proje
   const lo = from ?? first;
   const hi = to ?? last;
   if (lo < first || hi > last || lo > hi) {
-    throw new ConfigError(`--from/--to (${lo}-${hi}) must lie within ${p.name}'s years ${first}-${last}`, 'from');
+    throw new ConfigError(`--from/--to (${lo}-${hi}) must lie within the years of ${p.name}, ${first}-${last}`, 'from');
   }
   const a = lo - first;
   const b = hi - first + 1;

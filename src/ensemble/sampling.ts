@@ -111,12 +111,12 @@ export function validateSampling(s: EnsembleSampling): void {
 export function describeSampling(s: EnsembleSampling, carbon = false): string[] {
   const five = (r: AssessedRange, unit: string) => `${[r.p05, r.p17, r.p50, r.p83, r.p95].map((v) => +v.toPrecision(4)).join(' / ')}${unit} (5 / 17 / 50 / 83 / 95 %)`;
   return [
-    `ECS: ${five(s.ecsK, ' K')}`,
-    `TCR: ${five(s.tcrK, ' K')}`,
-    `2xCO2 ERF multiplier: ${five(s.forcing2xScale, '')}`,
-    `aerosol ERF multiplier: ${five(s.aerosolScale, '')}`,
-    ...(carbon ? [`carbon-cycle pre-industrial iIRF100 multiplier: ${five(s.irf100Scale, '')}`] : []),
-    `ECS-TCR normal-score correlation: ${s.ecsTcrCorrelation}`,
-    `fixed: upper heat capacity ${s.upperHeatCapacity}, deep heat capacity ${s.deepHeatCapacity} W yr m-2 K-1, deep efficacy ${s.deepEfficacy}; gamma solved per member from its TCR`,
+    `sampled ECS: ${five(s.ecsK, ' K')}`,
+    `sampled TCR: ${five(s.tcrK, ' K')}`,
+    `sampled 2xCO2 ERF multiplier: ${five(s.forcing2xScale, '')}`,
+    `sampled aerosol ERF multiplier: ${five(s.aerosolScale, '')}`,
+    ...(carbon ? [`sampled carbon-cycle pre-industrial iIRF100 multiplier: ${five(s.irf100Scale, '')}`] : []),
+    `ECS-TCR normal-score correlation the draws aim at: ${s.ecsTcrCorrelation} (the members' own Pearson correlation is in the headline figures)`,
+    `fixed for every member: upper heat capacity ${s.upperHeatCapacity}, deep heat capacity ${s.deepHeatCapacity} W yr m-2 K-1, deep efficacy ${s.deepEfficacy}; gamma solved per member from its TCR`,
   ];
 }

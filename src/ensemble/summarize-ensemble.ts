@@ -295,7 +295,7 @@ function ensembleNotes(members: EnsembleMemberParameters): string[] {
     'warming_pXX_k: percentiles across members of each year\'s warming, by linear interpolation between order statistics (Hyndman & Fan 1996, definition 7)',
     `prob_above_<t>: share of members whose 20-year mean warming (years y-${before} to y+${after}) exceeds t K, the IPCC AR6 convention for reaching a warming level; empty where the 20-year window leaves the run`,
     'crossing year: the labelled year of the first 20-year mean above the level; median crossing year: the first year by which at least half of the members have crossed',
-    ...describeSampling(c.sampling, c.emissionDriven).map((line) => `sampled ${line}`),
+    ...describeSampling(c.sampling, c.emissionDriven),
   ];
 }
 

@@ -143,7 +143,7 @@ export function rebase(years: Float64Array, values: Float64Array, baseline: read
   const last = years[years.length - 1];
   if (!(from <= to) || from < first || to > last) {
     throw new ConfigError(
-      `baseline ${from}-${to} must lie within ${name}'s years ${first}-${last}; give --baseline with years the run covers`,
+      `baseline ${from}-${to} must lie within the years of ${name}, ${first}-${last}; give --baseline with years the run covers`,
       'baseline',
     );
   }

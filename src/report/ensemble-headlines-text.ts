@@ -42,7 +42,7 @@ export function medianCrossingText(t: ThresholdHeadline, h: EnsembleHeadlines): 
  * @example ensembleHeadlineLines(h)[0] // '  sampled ECS 3.00 K [2.00-5.00], TCR 1.80 K [1.20-2.40] (median [5-95 %]); ECS-TCR correlation 0.64'
  */
 export function ensembleHeadlineLines(h: EnsembleHeadlines): { sampled: string[]; thresholds: string[] } {
-  const range = (q: { p05: number; p50: number; p95: number }, unit = '') => `${q.p50.toFixed(2)}${unit} [${q.p05.toFixed(2)}-${q.p95.toFixed(2)}]`;
+  const range = (q: { p05: number; p50: number; p95: number }, unit = '') => `${q.p50.toFixed(2)}${unit} [${q.p05.toFixed(2)} to ${q.p95.toFixed(2)}]`;
   const { ecs_k: ecs, tcr_k: tcr, irf100_scale: carbon } = h.sampled;
   const correlation = h.ecs_tcr_correlation === null ? 'n/a (fewer than 3 members)' : h.ecs_tcr_correlation.toFixed(2);
   const sampled = [`  sampled ECS ${range(ecs, ' K')}, TCR ${range(tcr, ' K')} (median [5-95 %]); ECS-TCR correlation ${correlation}`];

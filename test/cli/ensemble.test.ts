@@ -5,6 +5,7 @@ import Papa from 'papaparse';
 import { describe, expect, it } from 'vitest';
 import { captureIo } from '../../src/cli/cli-io.js';
 import { main } from '../../src/cli/main.js';
+import { percentText } from '../../src/report/ensemble-headlines-text.js';
 
 const tmp = () => mkdtempSync(join(tmpdir(), 'warmcast-ens-'));
 
@@ -144,7 +145,7 @@ describe('warmcast ensemble and merge', () => {
   it('an emission ensemble prints the 5-95 % range of its carbon-cycle multiplier, and its caution names the multiplier as the README does (on the pre-industrial iIRF100 r0)', async () => {
     const io = captureIo();
     expect(await main(['ensemble', 'swift-emissions', '--members', '200', '--seed', '3', '--no-chart'], io)).toBe(0);
-    const line = /\n  sampled carbon-cycle multiplier on the pre-industrial iIRF100 r0 (\d\.\d\d) \[(\d\.\d\d)-(\d\.\d\d)\] \(median \[5-95 %\]\)\n/.exec(io.out);
+    const line = /\n  sampled carbon-cycle multiplier on the pre-industrial iIRF100 r0 (\d\.\d\d) \[(\d\.\d\d) to (\d\.\d\d)\] \(median \[5-95 %\]\)\n/.exec(io.out);
     expect(line, io.out).not.toBeNull();
     const [p50, p05, p95] = line!.slice(1).map(Number);
     // Drawn with median 1 and 5-95 % 0.765-1.235 (src/ensemble/sampling.ts); 200 members land near it.
@@ -172,9 +173,9 @@ describe('warmcast ensemble and merge', () => {
     expect(h.thresholds.map((t: { threshold_k: number }) => t.threshold_k)).toEqual([1.5, 2, 3]);
     // The same figures as the terminal: 1.5 K crossed by 2050 and 2100, and its median crossing year.
     const t15 = h.thresholds[0];
-    const pct = (v: number) => `${(100 * v).toFixed(0)} %`;
+    const pct = percentText;
     expect(io.out).toContain(`1.5 K (20-year mean): probability of crossing by 2050 ${pct(t15.probability_crossed_by['2050'])}, by 2100 ${pct(t15.probability_crossed_by['2100'])}; median crossing year ${t15.median_crossing_year}`);
-    expect(io.out).toContain(`sampled ECS ${h.sampled.ecs_k.p50.toFixed(2)} K [${h.sampled.ecs_k.p05.toFixed(2)}-${h.sampled.ecs_k.p95.toFixed(2)}]`);
+    expect(io.out).toContain(`sampled ECS ${h.sampled.ecs_k.p50.toFixed(2)} K [${h.sampled.ecs_k.p05.toFixed(2)} to ${h.sampled.ecs_k.p95.toFixed(2)}]`);
     expect(Object.keys(h.sampled)).toEqual(['ecs_k', 'tcr_k']);
     expect(JSON.parse(readFileSync(join(dir, 'e.meta.json'), 'utf8')).headlines).toEqual(h);
     expect(readFileSync(join(dir, 'e.csv'), 'utf8').split('\n')[0]).toMatch(/^year,warming_p05_k,/);

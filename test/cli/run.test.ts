@@ -284,7 +284,7 @@ describe('warmcast run --from/--to', () => {
   it('run delayed --to 1700 (before the run) still names the run\'s years', async () => {
     const io = captureIo();
     expect(await main(['run', 'delayed', '--to', '1700'], io)).toBe(2);
-    expect(io.err).toMatch(/must lie within Delayed action's years 1750-2150/);
+    expect(io.err).toMatch(/must lie within the years of Delayed action, 1750-2150/);
   });
 
   it('run delayed --from 2000 starts the short table at 2000, before the 2025 splice year', async () => {

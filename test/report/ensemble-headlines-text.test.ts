@@ -5,7 +5,7 @@ import { headlinesFixture } from './ensemble-headlines-fixture.js';
 describe('ensembleHeadlineLines', () => {
   it('ensembleHeadlineLines states per level the crossing probabilities by milestone and the median crossing, or that half are above at the start', () => {
     const { sampled, thresholds } = ensembleHeadlineLines(headlinesFixture());
-    expect(sampled).toEqual(['  sampled ECS 3.00 K [2.00-4.00], TCR 1.80 K [0.80-2.80] (median [5-95 %]); ECS-TCR correlation 0.64']);
+    expect(sampled).toEqual(['  sampled ECS 3.00 K [2.00 to 4.00], TCR 1.80 K [0.80 to 2.80] (median [5-95 %]); ECS-TCR correlation 0.64']);
     expect(thresholds).toEqual([
       '  1.5 K (20-year mean): probability of crossing by 2050 81 %, by 2100 97 %; median crossing year 2031',
       '  0.05 K (20-year mean): probability of crossing by 2050 100 %, by 2100 100 %; median crossing year 1915; 30 % of members already above it at the start (1750-1769)',
@@ -19,7 +19,7 @@ describe('ensembleHeadlineLines', () => {
     h.sampled.irf100_scale = { p05: 0.77, p17: 0.88, p50: 1, p83: 1.12, p95: 1.23 };
     const { sampled } = ensembleHeadlineLines(h);
     expect(sampled[0]).toMatch(/ECS-TCR correlation n\/a \(fewer than 3 members\)$/);
-    expect(sampled[1]).toBe('  sampled carbon-cycle multiplier on the pre-industrial iIRF100 r0 1.00 [0.77-1.23] (median [5-95 %])');
+    expect(sampled[1]).toBe('  sampled carbon-cycle multiplier on the pre-industrial iIRF100 r0 1.00 [0.77 to 1.23] (median [5-95 %])');
   });
 
   it('percentText rounds to whole percent, never rounds a share that is neither none nor all to 0 % or 100 %, and says why for null', () => {
