@@ -168,7 +168,8 @@ function configDifferences(c: EnsembleConfig, ref: EnsembleConfig): string[] {
     out.push('the pathway (another file, or its contents differ)');
   }
   option('milestones', 'the milestone years of the crossing probabilities', (x) => x.milestones.join(','));
-  if (differ('scheme') || differ('sampling')) out.push('the parameter sampling (the shards come from different warmcast versions or sampling settings)');
+  // An emission-driven ensemble also samples the carbon cycle: that is the kind of pathway, said above.
+  if (differ('scheme') || (differ('sampling') && !differ('emissionDriven'))) out.push('the parameter sampling (the shards come from different warmcast versions or sampling settings)');
   return out;
 }
 

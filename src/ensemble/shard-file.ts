@@ -88,7 +88,7 @@ export function shardToJson(members: EnsembleMembers): string {
 export function shardFromJson(text: string, file: string): EnsembleMembers {
   const problems: InputProblem[] = [];
   const problem = (field: string, message: string, expected?: string) =>
-    problems.push({ file, column: field, code: 'input.bad-shard', message, ...(expected ? { expected } : {}) });
+    problems.push({ file, key: field, code: 'input.bad-shard', message, ...(expected ? { expected } : {}) });
   let doc: Record<string, unknown>;
   try {
     doc = JSON.parse(text) as Record<string, unknown>;

@@ -37,8 +37,8 @@ describe('shardToJson / shardFromJson', () => {
     expect(shardFromJson(text, 'o.json').origin).toEqual(origin);
     expect(shardFromJson(shardToJson(members), 'plain.json').origin).toBeUndefined();
     const doc = JSON.parse(text);
-    expect(() => shardFromJson(JSON.stringify({ ...doc, pathway: { ...doc.pathway, inputs: [{ path: 'a.csv', sha256: 'xyz' }] } }), 'p.json')).toThrow(/p\.json: column "pathway": must be \{ "name": text/);
-    expect(() => shardFromJson(JSON.stringify({ ...doc, pathway: 'swift' }), 'q.json')).toThrow(/column "pathway"/);
+    expect(() => shardFromJson(JSON.stringify({ ...doc, pathway: { ...doc.pathway, inputs: [{ path: 'a.csv', sha256: 'xyz' }] } }), 'p.json')).toThrow(/p\.json: key "pathway": must be \{ "name": text/);
+    expect(() => shardFromJson(JSON.stringify({ ...doc, pathway: 'swift' }), 'q.json')).toThrow(/key "pathway"/);
   });
 
   it('shardFromJson rejects what is not a shard file, with InputError naming the file and the field', () => {
@@ -46,8 +46,8 @@ describe('shardToJson / shardFromJson', () => {
     expect(() => shardFromJson('{"format":"other"}', 'a.json')).toThrow(/a\.json: must be a warmcast ensemble shard file/);
     const doc = JSON.parse(shardToJson(members));
     expect(() => shardFromJson(JSON.stringify({ ...doc, version: 9 }), 'b.json')).toThrow(/must be shard format version 2/);
-    expect(() => shardFromJson(JSON.stringify({ ...doc, warming_k: doc.warming_k.slice(0, 400) }), 'c.json')).toThrow(/column "warming_k": must hold 10530 Float64 values/);
-    expect(() => shardFromJson(JSON.stringify({ ...doc, member_count: -1 }), 'd.json')).toThrow(/column "member_count": must be a whole number/);
+    expect(() => shardFromJson(JSON.stringify({ ...doc, warming_k: doc.warming_k.slice(0, 400) }), 'c.json')).toThrow(/key "warming_k": must hold 10530 Float64 values/);
+    expect(() => shardFromJson(JSON.stringify({ ...doc, member_count: -1 }), 'd.json')).toThrow(/key "member_count": must be a whole number/);
     expect(() => shardFromJson(JSON.stringify({ ...doc, config: { ...doc.config, seed: 'x' } }), 'e.json')).toThrow(/config\.seed/);
     expect(doc.format).toBe(SHARD_FORMAT);
   });
