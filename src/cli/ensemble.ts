@@ -12,6 +12,7 @@ import { baselineOption, pathwayArg, refuseOptions, resolveModelParams, threshol
 import { announceWritten, pathwayInputs, tableRenderers, writeOutput } from './output.js';
 import { allocationError, checkEnsembleMemory, checkMergeMemory } from './memory-check.js';
 import { progressBar } from './progress.js';
+import { unreadableReason } from './unreadable-reason.js';
 import { ensembleParameters, sha256File } from './provenance.js';
 
 interface EnsembleCliOptions {
@@ -153,7 +154,7 @@ export function mergeCommand(io: CliIo): Command {
           try {
             text = readFileSync(resolve(io.cwd, file), 'utf8');
           } catch (e) {
-            throw new InputError([{ file, code: 'input.unreadable', message: `shard file cannot be read (${(e as NodeJS.ErrnoException).code})`, expected: 'a shard file written by `warmcast ensemble --shard K/N`' }]);
+            throw new InputError([{ file, code: 'input.unreadable', message: `shard file ${unreadableReason(e)}`, expected: 'a shard file written by `warmcast ensemble --shard K/N`' }]);
           }
           const members = shardFromJson(text, file);
           if (!checked && members.shard) {

@@ -7,6 +7,7 @@ import { ConfigError, InputError } from '../errors.js';
 import { AR6_REFERENCE_PERIOD } from '../report/index.js';
 import { parseParams } from '../io/read-params.js';
 import type { CliIo } from './cli-io.js';
+import { unreadableReason } from './unreadable-reason.js';
 
 /**
  * A number written in decimal: optional sign, digits with an optional point, optional exponent
@@ -188,9 +189,7 @@ export function resolveModelParams(
     try {
       text = readFileSync(paramsFile, 'utf8');
     } catch (e) {
-      const code = (e as NodeJS.ErrnoException).code;
-      const why = code === 'ENOENT' ? 'does not exist' : code === 'EISDIR' ? 'is a directory, not a file' : `cannot be read (${code})`;
-      throw new InputError([{ file: opts.params, code: 'input.unreadable', message: `parameters file ${why}`, expected: 'a JSON file of model parameters' }]);
+      throw new InputError([{ file: opts.params, code: 'input.unreadable', message: `parameters file ${unreadableReason(e)}`, expected: 'a JSON file of model parameters' }]);
     }
     fromFile = parseParams(text, opts.params);
   }

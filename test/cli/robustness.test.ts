@@ -83,7 +83,7 @@ describe('warmcast run with a path that is not a readable file', () => {
     expect(a.err).toContain(`${missing}: parameters file does not exist`);
     const b = await run(['run', 'swift', '--params', dir]);
     expect(b.code).toBe(2);
-    expect(b.err).toContain(`${dir}: parameters file is a directory`);
+    expect(b.err).toContain(`${dir}: parameters file is a folder, not a file`);
   });
 });
 
