@@ -11,6 +11,7 @@ import type { CliIo } from './cli-io.js';
 import { baselineOption, pathwayArg, refuseOptions, resolveModelParams, thresholdsOption, wholeNumberOption, type RefusedOption } from './options.js';
 import { announceWritten, pathwayInputs, tableRenderers, writeOutput } from './output.js';
 import { allocationError, checkEnsembleMemory, checkMergeMemory } from './memory-check.js';
+import { notesAndCautions } from './notes-and-cautions.js';
 import { progressBar } from './progress.js';
 import { unreadableReason } from './unreadable-reason.js';
 import { ensembleParameters, sha256File } from './provenance.js';
@@ -232,7 +233,7 @@ function emitEnsemble(
     announceWritten(written, io);
   }
   const write = ctx.out === '-' ? io.stderr : io.stdout;
-  write(ensembleSummary(result, headlines, name) + (baselineNote ? `  note: ${baselineNote}\n` : ''));
+  write(ensembleSummary(result, headlines, name));
   if (ctx.chart) {
     const { years, percentiles: p } = result;
     const i0 = Math.max(0, Math.min(1850, years[years.length - 1]) - years[0]);
@@ -252,7 +253,9 @@ function emitEnsemble(
         '\n',
     );
   }
-  write('\n' + [standardCautions()[0], uncertaintyText(result), standardCautions()[2]].map((c) => `  caution: ${c}`).join('\n') + '\n\n');
+  // The few-members warning already stands under the headline figures.
+  const terminalNotes = notes.filter((n) => !n.startsWith('warning: '));
+  write(notesAndCautions(terminalNotes, [standardCautions()[0], uncertaintyText(result), standardCautions()[2]]));
 }
 
 /** The headline lines of an ensemble: members, seed, redraws, sampled ranges, warming at milestones, crossing probabilities. */

@@ -257,4 +257,13 @@ describe('warmcast ensemble and merge', () => {
     expect(await main(['ensemble', file, '--no-splice', '--baseline', '2025-2030', '--members', '20', '--no-chart'], io), io.err).toBe(0);
     expect(io.out).toMatch(/warming relative to 2025-2030/);
   });
+
+  it('the terminal ends with the notes on how the pathway was read and sampled, then the cautions, the few-members warning said once', async () => {
+    const io = captureIo();
+    expect(await main(['ensemble', 'swift', '--members', '20', '--no-chart'], io)).toBe(0);
+    expect(io.out).toMatch(/^  note: spliced onto bundled history at 2025/m);
+    expect(io.out).toMatch(/^  note: sampled ECS: /m);
+    expect(io.out.match(/only 20 members/g)).toHaveLength(1);
+    expect(io.out.trimEnd().split('\n').at(-1)).toMatch(/^  caution: For decisions, defer to the official assessments/);
+  });
 });
