@@ -67,7 +67,10 @@ export interface MemberSampler {
 const MAX_ATTEMPTS = 1000;
 /**
  * TCR draws tried for one ECS before the member is drawn anew. Only an ECS deep in its low tail
- * (below about 0.7 K for AR6_SAMPLING, probability below 1e-4) leaves so little room.
+ * leaves so little room: below about 0.7 K for AR6_SAMPLING, which the linear tail of the assessed
+ * range below its 5th percentile gives a probability of about 2.9e-4 (z = -3.44). Each such member
+ * adds about 103 discarded draws, so the redraw count of a small ensemble jumps by about 100 when
+ * one member lands there (measured: 8 whole-member redraws in 20,000 members, 4e-4).
  */
 const TCR_ATTEMPTS = 100;
 
