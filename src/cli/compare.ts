@@ -149,6 +149,7 @@ export function compareCommand(io: CliIo): Command {
             ...(opts.members !== undefined ? { seed: opts.seed } : {}),
             // Beside the long CSV, which holds only annual series: peaks, crossings and their odds.
             sidecar: { comparison: comparisonSummary(c) },
+            caution: standardCautions(comparisonUncertainty(c)).join(' '),
           },
         );
         announceWritten(written, io);

@@ -61,7 +61,7 @@ export function comparisonTables(c: Comparison, options: ComparisonTableOptions 
     if (netZero) {
       const z = p.netZero;
       if (!z) row.push('n/a (concentration-driven)', MISSING);
-      else if (z.year === undefined) row.push(`${Math.round(z.total)} to ${z.toYear}`, `not reached by ${p.lastYear}`);
+      else if (z.year === undefined) row.push(`${Math.round(z.total)} (through ${z.toYear})`, `not reached by ${p.lastYear}`);
       else row.push(String(Math.round(z.total)), String(z.year));
     }
     return row;

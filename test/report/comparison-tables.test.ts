@@ -77,4 +77,12 @@ describe('comparisonTables', () => {
     expect(odds.rows).toEqual([['ensemble', '62 %', 'n/a', '30 %', 'n/a']]);
     expect(comparisonTables(fixtureComparison()).odds).toBeUndefined();
   });
+
+  it('CO2 to net zero that is not reached reads as a total through the last year, not as a range', () => {
+    const years = Float64Array.from({ length: 11 }, (_, i) => 2020 + i);
+    const cc = comparePathways([{ label: 'e', years, warmingK: years.map(() => 1), co2Gtco2: years.map(() => 10) }], { milestoneYears: [], cumulativeFromYear: 2020 });
+    // 10 Gt CO2 a year over the 11 years 2020-2030 (analytic).
+    expect(comparisonTables(cc).summary.rows[0].slice(-2)).toEqual(['110 (through 2030)', 'not reached by 2030']);
+  });
 });
+
