@@ -11,8 +11,8 @@ export interface ComparisonTableOptions {
 /**
  * The two tables of a comparison, as formatted cells:
  *
- * - `milestones`: one row per milestone year; per pathway its warming (K, 2 decimals, with the
- *   5-95 % ensemble range in brackets when there is one) and, after the reference, its difference
+ * - `milestones`: one row per milestone year; per pathway its warming (K, 2 decimals; with an
+ *   ensemble the median, its 17-83 % range in parentheses and its 5-95 % range in brackets) and, after the reference, its difference
  *   from the reference (K, signed).
  * - `summary`: one row per pathway: peak warming and its year (marked "still rising" when the peak
  *   is the last year), the crossing year of each threshold under the AR6 20-year-mean rule ("not
@@ -44,7 +44,9 @@ export function comparisonTables(c: Comparison, options: ComparisonTableOptions 
     return row;
   });
   const milestoneNotes = [`Warming in K relative to ${baseline}. Differences are each pathway minus the reference, ${ref.label}.`];
-  if (anyRange) milestoneNotes.push('Brackets: the 5-95 % (very likely) range of the ensemble; the number before them is the ensemble median.');
+  if (anyRange) {
+    milestoneNotes.push('With an ensemble: the median, then in parentheses the 17-83 % (likely) range and in brackets the 5-95 % (very likely) range of its members.');
+  }
 
   const netZero = c.pathways.some((p) => p.netZero);
   const sColumns = ['Pathway', 'Peak (K)', 'Peak year'];
@@ -104,7 +106,7 @@ function warmingCell(p: PathwayComparison, m: number): string {
   const v = p.milestones[m];
   const central = kelvin(v.warmingK);
   if (!v.range || central === MISSING) return central;
-  return `${central} [${kelvin(v.range.p05)} to ${kelvin(v.range.p95)}]`;
+  return `${central} (${kelvin(v.range.p17)} to ${kelvin(v.range.p83)}) [${kelvin(v.range.p05)} to ${kelvin(v.range.p95)}]`;
 }
 
 /** The chance of crossing each threshold by each milestone year, for the pathways with an ensemble. */

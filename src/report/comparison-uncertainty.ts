@@ -6,7 +6,7 @@ import type { Comparison } from '../metrics/compare-pathways.js';
  * range is shown).
  *
  * @param c the comparison
- * @param where `terminal` for text without shaded charts (the ranges are then in brackets only); default `files`
+ * @param where `terminal` for text without shaded charts; default `files` (whose charts shade the ranges)
  * @example
  * comparisonUncertainty(c) // 'Ranges (shaded; 5-95 % in brackets) are shown for delayed: ...'
  */
@@ -16,9 +16,8 @@ export function comparisonUncertainty(c: Comparison, where: 'files' | 'terminal'
   const without = c.pathways.filter((p) => !p.range).map((p) => p.label);
   return (
     `Ranges are shown for ${withRange.join(', ')}: ` +
-    (where === 'terminal'
-      ? 'the 5-95 % (very likely) range in brackets (the 17-83 % likely range is in the files --out writes), '
-      : 'the 5-95 % (very likely) range in brackets and shaded, and the 17-83 % (likely) range shaded darker, ') +
+    'the 17-83 % (likely) range in parentheses and the 5-95 % (very likely) range in brackets' +
+    (where === 'terminal' ? ', ' : ', shaded in the charts (the likely range darker), ') +
     'across the sampled model parameters. They cover parameter uncertainty only; uncertainty in the pathway ' +
     'itself and in the model structure comes on top. The parameters are drawn to the IPCC AR6 assessed ranges and are not ' +
     'constrained by observed warming, so the ranges show what those assessed ranges imply rather than a projection narrowed by the historical record.' +

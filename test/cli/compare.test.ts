@@ -59,7 +59,7 @@ describe('warmcast compare', () => {
     const dir = tmp();
     const io = captureIo();
     expect(await main(['compare', 'steady', 'swift', '--members', '100', '--seed', '5', '--years', '2050,2100', '--out', join(dir, 'c.json')], io)).toBe(0);
-    expect(io.out).toMatch(/\d\.\d\d \[\d\.\d\d to \d\.\d\d\]/);
+    expect(io.out).toMatch(/\d\.\d\d \(\d\.\d\d to \d\.\d\d\) \[\d\.\d\d to \d\.\d\d\]/);
     const doc = JSON.parse(readFileSync(join(dir, 'c.json'), 'utf8'));
     expect(doc.provenance.seed).toBe(5);
     // No single parameter set was used: provenance records what the members share, not ECS 3 / TCR 1.8.

@@ -23,10 +23,13 @@ describe('comparisonTables', () => {
         expectClose(first(r[col]), v.warmingK, 0.005, `${c.pathways[p].label} ${r[0]}`);
         expectClose(first(r[col + 1]), v.differenceK, 0.005, `${c.pathways[p].label} difference ${r[0]}`);
       }
-      // The ensemble range of delayed, 5-95 %, in brackets.
+      // The ensemble ranges of delayed: 17-83 % in parentheses, 5-95 % in brackets.
       const [, lo, hi] = /\[(\S+) to (\S+)\]/.exec(r[2])!.map(Number);
       expectClose(lo, c.pathways[1].milestones[m].range!.p05, 0.005);
       expectClose(hi, c.pathways[1].milestones[m].range!.p95, 0.005);
+      const [, lo17, hi83] = /\((\S+) to (\S+)\)/.exec(r[2])!.map(Number);
+      expectClose(lo17, c.pathways[1].milestones[m].range!.p17, 0.005);
+      expectClose(hi83, c.pathways[1].milestones[m].range!.p83, 0.005);
     });
   });
 
