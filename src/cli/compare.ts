@@ -92,6 +92,7 @@ export function compareCommand(io: CliIo): Command {
             byYear: x.byMilestone,
             medianYear: x.medianYear,
             withinRun: x.probabilityWithinRun,
+            lastWindowYear: x.byLastWindow.year,
             shareAbove: e.probAbove[j],
           }));
           pathways.push({ ...base, warmingK: pc.p50, range: { p05: pc.p05, p17: pc.p17, p83: pc.p83, p95: pc.p95 }, crossingOdds });

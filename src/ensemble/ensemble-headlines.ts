@@ -28,6 +28,11 @@ export interface ThresholdHeadline {
    * counted as crossing in its labelled year, they may have been above before it.
    */
   above_at_start: number;
+  /**
+   * Share of members that have crossed by `last_window_year`, the last year the run can say anything
+   * about: the figure to quote for a milestone whose `probability_crossed_by` is null.
+   */
+  probability_crossed_by_last_window: number;
 }
 
 /** The figures an ensemble's outputs lead with, as JSON (snake_case keys, shares from 0 to 1). */
@@ -42,6 +47,8 @@ export interface EnsembleHeadlines {
   first_window: string;
   /** Last year of the run. */
   last_year: number;
+  /** Last year with a complete 20-year window: crossings after it cannot be seen (the run's end less 10 years). */
+  last_window_year: number;
   /** One entry per threshold, in the ensemble's order. */
   thresholds: ThresholdHeadline[];
   /**
@@ -76,6 +83,7 @@ export function ensembleHeadlines(result: EnsembleResult): EnsembleHeadlines {
     baseline: `${c.baseline[0]}-${c.baseline[1]}`,
     first_window: `${first}-${windowEnd}`,
     last_year: last,
+    last_window_year: last - RUNNING_MEAN_WINDOW.after,
     thresholds: result.crossings.map((x): ThresholdHeadline => {
       const median: MedianCrossing = 2 * x.aboveAtStart >= 1 ? 'already-above-at-start' : x.medianYear === null ? 'fewer-than-half-cross' : 'crosses';
       return {
@@ -84,6 +92,7 @@ export function ensembleHeadlines(result: EnsembleResult): EnsembleHeadlines {
         median_crossing: median,
         median_crossing_year: median === 'crosses' ? x.medianYear : null,
         above_at_start: x.aboveAtStart,
+        probability_crossed_by_last_window: x.byLastWindow.probability,
       };
     }),
     sampled: {

@@ -31,6 +31,12 @@ export interface ThresholdCrossing {
    * is at least one half, `medianYear` is that first labelled year and says only "at the start".
    */
   aboveAtStart: number;
+  /**
+   * The last year with a complete 20-year window in the run (the run's end less 10 years) and the
+   * share of members that have crossed by then: what can be said for a milestone the run does not
+   * cover (a run ending in 2100 covers crossings up to 2090).
+   */
+  byLastWindow: { year: number; probability: number };
 }
 
 /** Summary quantiles of one sampled parameter across members. */
@@ -135,7 +141,14 @@ export function summarizeEnsemble(members: EnsembleMembers | EnsembleMemberParam
       const k = year - config.firstYear;
       return { year, probability: k >= first && k <= last ? cumulative[k] / m : null };
     });
-    return { thresholdK, byMilestone, medianYear, probabilityWithinRun: total / m, aboveAtStart: first <= last ? crossedAt[first] / m : 0 };
+    return {
+      thresholdK,
+      byMilestone,
+      medianYear,
+      probabilityWithinRun: total / m,
+      aboveAtStart: first <= last ? crossedAt[first] / m : 0,
+      byLastWindow: { year: years[Math.max(first, last)], probability: total / m },
+    };
   });
 
   const parameters = Object.fromEntries(MEMBER_PARAMETERS.map((name) => [name, summarizeValues(members.parameters[name])])) as Record<

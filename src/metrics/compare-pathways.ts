@@ -28,6 +28,8 @@ export interface CrossingOdds {
   medianYear: number | null;
   /** Share of members that cross within the run (0-1). */
   withinRun: number;
+  /** The last year with a complete 20-year window, by which `withinRun` have crossed (what can be said for a milestone the run does not cover). */
+  lastWindowYear: number;
   /** Per year, the share of members whose 20-year mean warming around that year exceeds the level (NaN where the window leaves the run). */
   shareAbove: Float64Array;
 }

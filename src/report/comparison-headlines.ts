@@ -37,7 +37,9 @@ function ensembleParts(p: PathwayComparison, level: (thresholdK: number) => stri
   const parts = [`median peaks at ${kelvin(p.peak.value)} K in ${p.peak.year}${p.stillRising ? ' (still rising)' : ''}`];
   for (const { thresholdK, odds } of p.crossings) {
     if (!odds) continue;
-    const by = odds.byYear.map((b) => `${percent(b.probability)} by ${b.year}`).join(', ');
+    const by = odds.byYear
+      .map((b) => (b.probability === null ? `n/a by ${b.year} (the run ends before its 20-year window; ${percent(odds.withinRun)} by ${odds.lastWindowYear})` : `${percent(b.probability)} by ${b.year}`))
+      .join(', ');
     const median = odds.medianYear === null ? `fewer than half of the members cross it by ${p.lastYear}` : `median crossing year ${odds.medianYear}`;
     parts.push(`${level(thresholdK)}: probability of crossing ${by}, ${median}`);
   }

@@ -74,6 +74,7 @@ function comparisonDocument(c: Comparison, annual: boolean) {
           odds: {
             by_year: odds.byYear.map((b) => ({ year: b.year, probability: b.probability })),
             within_run: odds.withinRun,
+            last_window_year: odds.lastWindowYear,
           },
           median_line: first20,
         };

@@ -1,4 +1,4 @@
-import type { Comparison, PathwayComparison } from '../metrics/compare-pathways.js';
+import type { Comparison, CrossingOdds, PathwayComparison } from '../metrics/compare-pathways.js';
 import { kelvin, MISSING, percent, signedKelvin } from './format-numbers.js';
 import type { TextTable } from './text-table.js';
 
@@ -117,7 +117,7 @@ function oddsTable(c: Comparison, withOdds: PathwayComparison[]): TextTable {
   const rows = withOdds.map((p) => {
     const row = [p.label];
     for (const { odds } of p.crossings) {
-      for (const y of years) row.push(percent(odds?.byYear.find((b) => b.year === y)?.probability ?? null));
+      for (const y of years) row.push(oddsCell(odds, y));
     }
     return row;
   });
@@ -128,7 +128,15 @@ function oddsTable(c: Comparison, withOdds: PathwayComparison[]): TextTable {
     numeric: columns.map((_, j) => j > 0),
     notes: [
       `The share of members whose ${c.windowYears}-year mean warming has exceeded the level by the given year (a member counts ` +
-        `once it has crossed, even if it later falls back). n/a: the run does not cover the ${c.windowYears}-year window around that year.`,
+        `once it has crossed, even if it later falls back). n/a: the run does not cover the ${c.windowYears}-year window around that year; ` +
+        'the share crossed by the last year it can see (its end less 10 years) is given instead.',
     ],
   };
+}
+
+/** The share crossed by `year`, or for a year the run cannot see, `n/a (by LAST: share)`. */
+function oddsCell(odds: CrossingOdds | undefined, year: number): string {
+  const p = odds?.byYear.find((b) => b.year === year)?.probability ?? null;
+  if (p !== null || !odds) return percent(p);
+  return `n/a (by ${odds.lastWindowYear}: ${percent(odds.withinRun)})`;
 }

@@ -20,11 +20,14 @@ export function ensembleHeadlinesMarkdown(h: EnsembleHeadlines): string {
     columns: ['warming level', ...milestones.map((y) => `crossed by ${y}`), 'median crossing year', ...(atStart ? [`above at the start (${h.first_window})`] : [])],
     rows: h.thresholds.map((t) => [
       `${t.threshold_k} K`,
-      ...milestones.map((y) => percentText(t.probability_crossed_by[y])),
+      ...milestones.map((y) => (t.probability_crossed_by[y] === null ? `n/a (by ${h.last_window_year}: ${percentText(t.probability_crossed_by_last_window)})` : percentText(t.probability_crossed_by[y]))),
       medianCrossingText(t, h),
       ...(atStart ? [percentText(t.above_at_start)] : []),
     ]),
     numeric: [true, ...milestones.map(() => true), false, ...(atStart ? [true] : [])],
+    ...(h.thresholds.some((t) => Object.values(t.probability_crossed_by).includes(null))
+      ? { notes: [`n/a: the run ends in ${h.last_year}, so its last 20-year mean is centred on ${h.last_window_year}; the share crossed by then is given instead.`] }
+      : {}),
   });
   const sampled = markdownTable({
     columns: ['sampled', '5 %', '17 %', '50 %', '83 %', '95 %'],

@@ -24,6 +24,14 @@ export function percentText(v: number | null): string {
 }
 
 /**
+ * What can be said for a milestone the run does not cover: the share crossed by the last year with a
+ * complete 20-year window, e.g. `n/a (the run ends in 2100; by 2090, its last 20-year mean: 52 %)`.
+ */
+export function notCovered(t: ThresholdHeadline, h: EnsembleHeadlines): string {
+  return `n/a (the run ends in ${h.last_year}; by ${h.last_window_year}, its last 20-year mean: ${percentText(t.probability_crossed_by_last_window)})`;
+}
+
+/**
  * The median crossing of a warming level in words: the year, "already above at the start (the first
  * 20-year mean, 1750-1769)", or "fewer than half of the members cross it by 2150".
  */
@@ -49,7 +57,7 @@ export function ensembleHeadlineLines(h: EnsembleHeadlines): { sampled: string[]
   if (carbon) sampled.push(`  sampled ${sampledName('irf100_scale')} ${range(carbon)} (median [5-95 %])`);
   const [from, to] = h.baseline.split('-').map(Number);
   const thresholds = h.thresholds.map((t) => {
-    const by = Object.entries(t.probability_crossed_by).map(([year, p]) => `by ${year} ${percentText(p)}`).join(', ');
+    const by = Object.entries(t.probability_crossed_by).map(([year, p]) => `by ${year} ${p === null ? notCovered(t, h) : percentText(p)}`).join(', ');
     const median = t.median_crossing === 'crosses' ? `median crossing year ${t.median_crossing_year}` : t.median_crossing === 'already-above-at-start' ? `median crossing: ${medianCrossingText(t, h)}` : medianCrossingText(t, h);
     const some = t.median_crossing !== 'already-above-at-start' && t.above_at_start > 0 ? `; ${percentText(t.above_at_start)} of members already above it at the start (${h.first_window})` : '';
     return `  ${thresholdName(t.threshold_k, [from, to])} (20-year mean): probability of crossing ${by}; ${median}${some}`;

@@ -266,4 +266,15 @@ describe('warmcast ensemble and merge', () => {
     expect(io.out.match(/only 20 members/g)).toHaveLength(1);
     expect(io.out.trimEnd().split('\n').at(-1)).toMatch(/^  caution: For decisions, defer to the official assessments/);
   });
+
+  it('for a pathway ending in 2100, "by 2100" is n/a and the share crossed by 2090 (the last 20-year mean) is given instead', async () => {
+    const dir = mkdtempSync(join(tmpdir(), 'warmcast-ens-'));
+    const file = join(dir, 'to2100.csv');
+    writeFileSync(file, '# name: Ends in 2100\nyear,co2_ppm\n2030,440\n2060,500\n2100,560\n');
+    const io = captureIo();
+    expect(await main(['ensemble', file, '--members', '200', '--no-chart', '--out', join(dir, 'e.md')], io)).toBe(0);
+    expect(io.out).toMatch(/^  2 K \(20-year mean\): probability of crossing by 2050 [<>]?\d+ %, by 2100 n\/a \(the run ends in 2100; by 2090, its last 20-year mean: [<>]?\d+ %\)/m);
+    expect(readFileSync(join(dir, 'e.md'), 'utf8')).toMatch(/n\/a \(by 2090: [<>]?\d+ %\)/);
+  });
 });
+

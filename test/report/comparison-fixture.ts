@@ -51,8 +51,8 @@ export function oddsComparison() {
         warmingK: line,
         range: { p05: line.map((v) => v - 0.4), p17: line.map((v) => v - 0.2), p83: line.map((v) => v + 0.2), p95: line.map((v) => v + 0.4) },
         crossingOdds: [
-          { thresholdK: 2, byYear: [{ year: 2050, probability: 0.3 }, { year: 2100, probability: null }], medianYear: null, withinRun: 0.45, shareAbove: shareAbove(2) },
-          { thresholdK: 1.5, byYear: [{ year: 2050, probability: 0.62 }, { year: 2100, probability: null }], medianYear: 2046, withinRun: 0.97, shareAbove: shareAbove(1.5) },
+          { thresholdK: 2, byYear: [{ year: 2050, probability: 0.3 }, { year: 2100, probability: null }], medianYear: null, withinRun: 0.45, lastWindowYear: 2090, shareAbove: shareAbove(2) },
+          { thresholdK: 1.5, byYear: [{ year: 2050, probability: 0.62 }, { year: 2100, probability: null }], medianYear: 2046, withinRun: 0.97, lastWindowYear: 2090, shareAbove: shareAbove(1.5) },
         ],
       },
     ],

@@ -25,8 +25,9 @@ describe('comparisonHeadlines', () => {
     // (1.504 K), labelled 2061; the last window's mean, 1.742 K, stays below 2 K (analytic).
     expect(comparisonHeadlines(oddsComparison())).toEqual([
       'single: peak 1.82 K in 2100 (still rising); reaches 1.5 K in 2061; 2 K not crossed by 2100; 1.41 K in 2050.',
-      'ensemble: median peaks at 1.82 K in 2100 (still rising); 1.5 K: probability of crossing 62 % by 2050, n/a by 2100, median crossing year 2046; ' +
-        '2 K: probability of crossing 30 % by 2050, n/a by 2100, fewer than half of the members cross it by 2100; median 1.41 K in 2050.',
+      'ensemble: median peaks at 1.82 K in 2100 (still rising); 1.5 K: probability of crossing 62 % by 2050, ' +
+        'n/a by 2100 (the run ends before its 20-year window; 97 % by 2090), median crossing year 2046; 2 K: probability of crossing 30 % by 2050, ' +
+        'n/a by 2100 (the run ends before its 20-year window; 45 % by 2090), fewer than half of the members cross it by 2100; median 1.41 K in 2050.',
     ]);
   });
 

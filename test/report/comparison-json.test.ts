@@ -42,7 +42,7 @@ describe('comparisonJson', () => {
     expect(doc.pathways.map((p: { central_estimate: string }) => p.central_estimate)).toEqual(['single run', 'ensemble median']);
     const [c15, c2] = doc.pathways[1].crossings;
     expect(c15.year).toBe(2046);
-    expect(c15.odds).toEqual({ by_year: [{ year: 2050, probability: 0.62 }, { year: 2100, probability: null }], within_run: 0.97 });
+    expect(c15.odds).toEqual({ by_year: [{ year: 2050, probability: 0.62 }, { year: 2100, probability: null }], within_run: 0.97, last_window_year: 2090 });
     // The median line (1 + 0.0082 (y - 2000) K) has its own first 20-year period above 1.5 K: 2052-2071, labelled 2061.
     expect(c15.median_line).toMatchObject({ year: 2061, period_first_year: 2052, period_last_year: 2071 });
     expect(c2.year).toBeNull();
