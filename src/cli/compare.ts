@@ -7,7 +7,7 @@ import { defaultWorkerCount, runEnsemble, startEnsembleThreads, type EnsembleThr
 import { ensembleInput, projectPathway } from '../projection/index.js';
 import { comparisonCharts, comparisonHtml, comparisonJson, comparisonLongTable, comparisonSummary, comparisonMarkdown, comparisonText, comparisonUncertainty, scopedNotes, standardCautions, thresholdBaselineNote, type ScopedNote } from '../report/index.js';
 import type { CliIo } from './cli-io.js';
-import { addModelOptions, baselineOption, type ModelOptions, numberListOption, pathwayArg, resolveModelParams, thresholdsOption, wholeNumberOption } from './options.js';
+import { addModelOptions, baselineOption, type ModelOptions, numberListOption, pathwayArg, resolveModelParams, thresholdsOption, wholeNumberOption, yearOption } from './options.js';
 import { notesAndCautions } from './notes-and-cautions.js';
 import { announceWritten, pathwayInputs, writeOutput } from './output.js';
 import { ensembleParameters } from './provenance.js';
@@ -23,6 +23,7 @@ interface CompareOptions extends ModelOptions {
   splice: boolean;
   chart: boolean;
   carbonFeedback: boolean;
+  from?: number;
 }
 
 /** `warmcast compare <pathway...>`: pathways side by side against the first, as tables, charts and reports. */
@@ -38,6 +39,7 @@ export function compareCommand(io: CliIo): Command {
     .option('--no-carbon-feedback', 'emission-driven runs: switch off the carbon-climate feedback on uptake')
     .option('--members <count>', 'also run a parameter ensemble of this many members per pathway: ranges in tables and shaded in charts, median as the line', wholeNumberOption('--members', 2))
     .option('--seed <integer>', 'random seed of the ensembles (with --members)', wholeNumberOption('--seed', 0), 1)
+    .option('--from <year>', 'first year of the charts (default 1850, or the first year of the pathways); the tables and files keep every year', yearOption)
     .option('--no-chart', 'omit the terminal chart');
   addModelOptions(cmd)
     .addHelpText(
@@ -111,7 +113,11 @@ export function compareCommand(io: CliIo): Command {
         cumulativeFromYear: firstFuture,
       });
       const baseline = `${opts.baseline[0]}-${opts.baseline[1]}`;
-      const fromYear = Math.max(ref.years[0], Math.min(1850, last));
+      const firstAny = Math.min(...runs.map((r) => r.projection.years[0]));
+      if (opts.from !== undefined && !(opts.from >= firstAny && opts.from < last)) {
+        throw new ConfigError(`--from ${opts.from} must lie within the years of the pathways and before their end, ${firstAny}-${last - 1}`, 'from');
+      }
+      const fromYear = opts.from ?? Math.max(ref.years[0], Math.min(1850, last));
       if (opts.out !== undefined) {
         const inputs = [...files, ...(paramsFile ? [paramsFile] : [])];
         const assumptions: Record<string, string> = {

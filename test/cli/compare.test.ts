@@ -118,4 +118,20 @@ describe('warmcast compare', () => {
     expect(await main(['compare', 'swift-emissions', '--members', '50', '--no-carbon-feedback'], feedback)).toBe(2);
     expect(feedback.err).toMatch(/--no-carbon-feedback would be ignored/);
   });
+
+  it('--from starts the charts (terminal and SVG) at that year, and a year outside the pathways is refused', async () => {
+    const dir = tmp();
+    const io = captureIo();
+    expect(await main(['compare', 'steady', 'swift', '--from', '2000', '--out', join(dir, 'c.svg')], io)).toBe(0);
+    // The year axis: the line of tick labels under the chart.
+    const axis = /^\s+(\d{4})(\s+\d{4})+\s*$/m.exec(io.out)!;
+    expect(Number(axis[1])).toBe(2000);
+    const svg = readFileSync(join(dir, 'c.svg'), 'utf8');
+    expect(svg).not.toMatch(/>1900</);
+    expect(svg).toMatch(/>2000</);
+    const bad = captureIo();
+    expect(await main(['compare', 'steady', 'swift', '--from', '2150'], bad)).toBe(2);
+    expect(bad.err).toMatch(/--from 2150 must lie within the years of the pathways and before their end, 1750-2149/);
+  });
 });
+
