@@ -3,7 +3,7 @@ import { comparisonHeadlines } from './comparison-headlines.js';
 import { comparisonTables } from './comparison-tables.js';
 import { comparisonUncertainty } from './comparison-uncertainty.js';
 import { markdownTable } from './markdown-table.js';
-import { provenanceEntries } from './provenance-entries.js';
+import { provenanceMarkdown } from './provenance-entries.js';
 import { standardCautions } from './standard-cautions.js';
 
 /** Options of {@link comparisonMarkdown}. */
@@ -44,7 +44,7 @@ export function comparisonMarkdown(c: Comparison, options: ComparisonMarkdownOpt
     '',
     '## Provenance',
     '',
-    ...provenanceEntries(options.provenance).map(([k, v]) => `- ${inline(k)}: ${inline(v)}`),
+    ...provenanceMarkdown(options.provenance),
   ];
   return out.join('\n') + '\n';
 }

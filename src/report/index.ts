@@ -20,7 +20,7 @@ export { htmlReport } from './html-report.js';
 export type { HtmlReportOptions } from './html-report.js';
 export { markdownTable } from './markdown-table.js';
 export { plainTable } from './plain-table.js';
-export { provenanceEntries } from './provenance-entries.js';
+export { provenanceEntries, provenanceMarkdown } from './provenance-entries.js';
 export { standardCautions } from './standard-cautions.js';
 export { svgChart } from './svg-chart.js';
 export { AR6_REFERENCE_PERIOD, isAr6Baseline, thresholdBaselineNote } from './threshold-baseline-note.js';
