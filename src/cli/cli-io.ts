@@ -8,6 +8,8 @@ export interface CliIo {
   stdoutIsTTY: boolean;
   /** Whether standard error is a terminal (progress bars). */
   stderrIsTTY: boolean;
+  /** Width of the terminal standard output writes to, in columns; undefined when it is not a terminal (no wrapping). */
+  stdoutColumns?: number;
   /** Working directory that relative paths resolve against. */
   cwd: string;
 }
@@ -41,6 +43,7 @@ export function processIo(): CliIo {
     stderr: quietOnClosedPipe(process.stderr),
     stdoutIsTTY: Boolean(process.stdout.isTTY),
     stderrIsTTY: Boolean(process.stderr.isTTY),
+    ...(process.stdout.isTTY && process.stdout.columns ? { stdoutColumns: process.stdout.columns } : {}),
     cwd: process.cwd(),
   };
 }

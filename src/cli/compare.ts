@@ -163,7 +163,7 @@ export function compareCommand(io: CliIo): Command {
       }
       const write = opts.out === '-' ? io.stderr : io.stdout;
       write(comparisonText(c, { color: opts.out === '-' ? io.stderrIsTTY : io.stdoutIsTTY, fromYear, baseline, noChart: !opts.chart }));
-      write(notesAndCautions(notes, standardCautions(comparisonUncertainty(c, 'terminal'))));
+      write(notesAndCautions(notes, standardCautions(comparisonUncertainty(c, 'terminal')), opts.out === '-' ? undefined : io.stdoutColumns));
     });
   return cmd;
 }

@@ -255,7 +255,7 @@ function emitEnsemble(
   }
   // The few-members warning already stands under the headline figures.
   const terminalNotes = notes.filter((n) => !n.startsWith('warning: '));
-  write(notesAndCautions(terminalNotes, [standardCautions()[0], uncertaintyText(result), standardCautions()[2]]));
+  write(notesAndCautions(terminalNotes, [standardCautions()[0], uncertaintyText(result), standardCautions()[2]], ctx.out === '-' ? undefined : io.stdoutColumns));
 }
 
 /** The headline lines of an ensemble: members, seed, redraws, sampled ranges, warming at milestones, crossing probabilities. */

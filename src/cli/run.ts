@@ -79,7 +79,7 @@ export function runCommand(io: CliIo): Command {
         announceWritten(written, io);
       }
       for (const { projection, whole } of projections) {
-        printProjectionSummary(projection, { write: report, color: opts.out === '-' ? io.stderrIsTTY : io.stdoutIsTTY, chart: opts.chart, from: opts.from, notes: runNotes, whole });
+        printProjectionSummary(projection, { write: report, color: opts.out === '-' ? io.stderrIsTTY : io.stdoutIsTTY, chart: opts.chart, from: opts.from, notes: runNotes, whole, width: opts.out === '-' ? undefined : io.stdoutColumns });
       }
     });
   return cmd;

@@ -2,6 +2,7 @@ import { crossingPeriod, peak, valueAtYear } from '../metrics/index.js';
 import type { Projection } from '../projection/index.js';
 import { isAr6Baseline, plainTable, terminalChart, thresholdName } from '../report/index.js';
 import { standardCautions } from '../report/standard-cautions.js';
+import { notesAndCautions } from './notes-and-cautions.js';
 
 /** Years whose warming the summary always states, where the run covers them. */
 const HEADLINE_YEARS = [2030, 2050, 2100];
@@ -28,7 +29,7 @@ const TABLE_COLUMNS = [
  */
 export function printProjectionSummary(
   p: Projection,
-  out: { write: (s: string) => void; color: boolean; chart: boolean; from?: number; notes?: readonly string[]; whole?: Projection },
+  out: { write: (s: string) => void; color: boolean; chart: boolean; from?: number; notes?: readonly string[]; whole?: Projection; width?: number },
 ): void {
   const { years, columns } = p;
   const first = years[0];
@@ -106,7 +107,5 @@ export function printProjectionSummary(
         '\n',
     );
   }
-  const notes = [...p.provenance.notes, ...p.notes, ...(out.notes ?? [])];
-  if (notes.length > 0) out.write('\n' + notes.map((n) => `  note: ${n}`).join('\n') + '\n');
-  out.write('\n' + standardCautions().map((c) => `  caution: ${c}`).join('\n') + '\n\n');
+  out.write(notesAndCautions([...p.provenance.notes, ...p.notes, ...(out.notes ?? [])], standardCautions(), out.width));
 }
