@@ -4,7 +4,7 @@ export type { EnsembleConfig, EnsembleMembers, EnsembleOrigin } from './ensemble
 export { ensembleHeadlines } from './ensemble-headlines.js';
 export { ensembleMemory, mergeMemory } from './ensemble-memory.js';
 export type { MemoryEstimate } from './ensemble-memory.js';
-export type { EnsembleHeadlines, MedianCrossing, ThresholdHeadline } from './ensemble-headlines.js';
+export type { EnsembleHeadlines, MedianCrossing, PeakHeadline, ThresholdHeadline } from './ensemble-headlines.js';
 export { ensembleTable, probAboveColumn } from './ensemble-table.js';
 export type { EnsembleTable } from './ensemble-table.js';
 export { EXCHANGE_RANGE, exchangeForTcr, solverTransientResponse, tcrSolver } from './exchange-for-tcr.js';
