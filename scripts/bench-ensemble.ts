@@ -11,7 +11,7 @@
 //   (c) the odex path (energyBalance 'odex') on 100 of the members;
 // the ratios a/b, and where the time of (a) goes on one thread (the same code run in parts: drawing
 // members with their gamma solve and baseline pass, stepping them through the years with the
-// exceedance counts, the percentiles of every year). Worker threads need the compiled build, so run it
+// exceedance counts and peaks, the percentiles of every year). Worker threads need the compiled build, so run it
 // from dist/.
 import { availableParallelism } from 'node:os';
 import { energyBalance } from '../src/climate/energy-balance.js';
@@ -28,6 +28,7 @@ import {
   type EnsembleOptions,
   type MemberTask,
 } from '../src/ensemble/index.js';
+import { emptyMemberPeaks } from '../src/ensemble/member-peaks.js';
 import { MemberStream, STREAM_BLOCK_YEARS, streamRows } from '../src/ensemble/member-stream.js';
 import { emptyParameters } from '../src/ensemble/sample-members.js';
 import { YearPercentiles } from '../src/ensemble/summarize-ensemble.js';
@@ -130,7 +131,7 @@ const rowCount = streamRows(n, false);
 const rows = new Float64Array(rowCount * MEMBERS);
 const parts = { draw: Infinity, advance: Infinity, percentiles: Infinity };
 for (let rep = 0; rep < 3; rep++) {
-  const stream = new MemberStream(task, 0, MEMBERS, 0, MEMBERS, rows, rowCount, emptyParameters(MEMBERS), options.thresholds);
+  const stream = new MemberStream(task, 0, MEMBERS, 0, MEMBERS, rows, rowCount, emptyParameters(MEMBERS), options.thresholds, emptyMemberPeaks(MEMBERS));
   const years = new YearPercentiles(MEMBERS);
   const out = PERCENTILES.map(() => new Float64Array(n));
   parts.draw = Math.min(parts.draw, (await timed(() => stream.draw())).ms);
@@ -150,7 +151,7 @@ for (let rep = 0; rep < 3; rep++) {
 }
 console.log(
   `    (a) on 1 thread in parts: drawing members (gamma solves, propagators, baseline pass) ${parts.draw.toFixed(1)} ms, ` +
-    `stepping them with the exceedance counts ${parts.advance.toFixed(1)} ms, percentiles of every year ${parts.percentiles.toFixed(1)} ms; ` +
+    `stepping them with the exceedance counts and peaks ${parts.advance.toFixed(1)} ms, percentiles of every year ${parts.percentiles.toFixed(1)} ms; ` +
     `rows held ${((rowCount * MEMBERS * 8) / 1e6).toFixed(1)} MB (every year would be ${((n * MEMBERS * 8) / 1e6).toFixed(0)} MB)`,
 );
 

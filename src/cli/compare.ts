@@ -97,7 +97,8 @@ export function compareCommand(io: CliIo): Command {
             lastWindowYear: x.byLastWindow.year,
             shareAbove: e.probAbove[j],
           }));
-          pathways.push({ ...base, warmingK: pc.p50, range: { p05: pc.p05, p17: pc.p17, p83: pc.p83, p95: pc.p95 }, crossingOdds });
+          const membersPeak = { warmingK: e.peak.warmingK, year: e.peak.year, stillRising: e.peak.stillRising };
+          pathways.push({ ...base, warmingK: pc.p50, range: { p05: pc.p05, p17: pc.p17, p83: pc.p83, p95: pc.p95 }, crossingOdds, membersPeak });
         }
       } finally {
         await threads?.close();

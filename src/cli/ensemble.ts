@@ -265,7 +265,7 @@ function ensembleSummary(r: EnsembleResult, h: EnsembleHeadlines, name: string):
   lines.push(`${name}: ${r.memberCount} member${r.memberCount === 1 ? '' : 's'}, seed ${c.seed}; ${r.redraws} unphysical draws redrawn; warming relative to ${c.baseline.join('-')}`);
   const few = fewMembersWarning(r.memberCount);
   if (few) lines.push(`  warning: ${few}`);
-  const { sampled, thresholds } = ensembleHeadlineLines(h);
+  const { sampled, thresholds, peak } = ensembleHeadlineLines(h);
   lines.push(...sampled);
   const { years, percentiles: p } = r;
   for (const y of [2030, 2050, 2100]) {
@@ -274,6 +274,6 @@ function ensembleSummary(r: EnsembleResult, h: EnsembleHeadlines, name: string):
       lines.push(`  ${y}: median ${p.p50[i].toFixed(2)} K, likely (17-83 %) ${p.p17[i].toFixed(2)} to ${p.p83[i].toFixed(2)} K, very likely (5-95 %) ${p.p05[i].toFixed(2)} to ${p.p95[i].toFixed(2)} K`);
     }
   }
-  lines.push(...thresholds);
+  lines.push(...thresholds, peak);
   return lines.join('\n') + '\n';
 }

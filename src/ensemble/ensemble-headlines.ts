@@ -35,6 +35,16 @@ export interface ThresholdHeadline {
   probability_crossed_by_last_window: number;
 }
 
+/** The members' own peaks: each member's highest annual warming and its year, summarised across members. */
+export interface PeakHeadline {
+  /** Percentiles across members of each member's peak warming, K relative to the baseline. */
+  warming_k: Record<PercentileName, number>;
+  /** Percentiles across members of each member's peak year (may fall between two years). */
+  year: Record<PercentileName, number>;
+  /** Share of members whose peak is the run's last year (`last_year`): still rising at the end. */
+  still_rising: number;
+}
+
 /** The figures an ensemble's outputs lead with, as JSON (snake_case keys, shares from 0 to 1). */
 export interface EnsembleHeadlines {
   /** Members summarised. */
@@ -51,6 +61,8 @@ export interface EnsembleHeadlines {
   last_window_year: number;
   /** One entry per threshold, in the ensemble's order. */
   thresholds: ThresholdHeadline[];
+  /** The members' own peaks (not the peak of the median line). */
+  peak: PeakHeadline;
   /**
    * Percentiles across members of the sampled ECS and TCR (K) and, for emission-driven ensembles,
    * the carbon-cycle multiplier on the pre-industrial iIRF100 (`irf100_scale`).
@@ -63,7 +75,8 @@ export interface EnsembleHeadlines {
 /**
  * The headline figures of an ensemble: per warming level the probability of crossing it by each
  * milestone year, the median crossing year (or that half of the members are above it at the start,
- * or that fewer than half cross) and the share above it at the start; the percentiles of the sampled
+ * or that fewer than half cross) and the share above it at the start; the percentiles of the members'
+ * own peak warming and peak year with the share still rising at the end; the percentiles of the sampled
  * ECS, TCR (and carbon-cycle multiplier); the ECS-TCR correlation. One source for the terminal
  * summary and for the `headlines` of the output files, so they always agree.
  *
@@ -95,6 +108,7 @@ export function ensembleHeadlines(result: EnsembleResult): EnsembleHeadlines {
         probability_crossed_by_last_window: x.byLastWindow.probability,
       };
     }),
+    peak: { warming_k: { ...result.peak.warmingK }, year: { ...result.peak.year }, still_rising: result.peak.stillRising },
     sampled: {
       ecs_k: percentiles('ecsK'),
       tcr_k: percentiles('tcrK'),

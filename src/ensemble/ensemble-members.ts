@@ -1,4 +1,5 @@
 import type { Co2Formula } from '../forcing/co2.js';
+import type { MemberPeaks } from './member-peaks.js';
 import type { MemberParameter } from './sample-members.js';
 import type { EnsembleSampling } from './sampling.js';
 
@@ -67,6 +68,11 @@ export interface EnsembleMembers {
   warmingK: Float64Array;
   /** Each member's parameters. */
   parameters: Record<MemberParameter, Float64Array>;
+  /**
+   * Each member's peak (highest annual warming and its year index), as the run found it; absent for
+   * merged shards (shard files do not hold it), whose summary finds it in `warmingK`, bit for bit the same.
+   */
+  peaks?: MemberPeaks;
   /** Unphysical draws discarded while drawing these members. */
   redraws: number;
   /** What the ensemble was made from, when known (recorded in shard files; absent in older ones). */

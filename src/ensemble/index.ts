@@ -4,12 +4,14 @@ export type { EnsembleConfig, EnsembleMembers, EnsembleOrigin } from './ensemble
 export { ensembleHeadlines } from './ensemble-headlines.js';
 export { ensembleMemory, mergeMemory } from './ensemble-memory.js';
 export type { MemoryEstimate } from './ensemble-memory.js';
-export type { EnsembleHeadlines, MedianCrossing, ThresholdHeadline } from './ensemble-headlines.js';
+export type { EnsembleHeadlines, MedianCrossing, PeakHeadline, ThresholdHeadline } from './ensemble-headlines.js';
 export { ensembleTable, probAboveColumn } from './ensemble-table.js';
 export type { EnsembleTable } from './ensemble-table.js';
 export { EXCHANGE_RANGE, exchangeForTcr, solverTransientResponse, tcrSolver } from './exchange-for-tcr.js';
 export type { TcrSolver } from './exchange-for-tcr.js';
 export { MEMBER_STREAM_SCHEME, memberGenerators, memberState } from './member-generators.js';
+export { emptyMemberPeaks, memberPeaksInto } from './member-peaks.js';
+export type { MemberPeaks } from './member-peaks.js';
 export { mergeShards, shardMerger } from './merge-shards.js';
 export { emptyTwoBoxPropagator, modalTwoBoxPropagatorInto } from './modal-propagator.js';
 export type { ShardInput, ShardMerger } from './merge-shards.js';
@@ -29,4 +31,4 @@ export { AR6_SAMPLING, describeSampling, validateSampling } from './sampling.js'
 export type { EnsembleSampling } from './sampling.js';
 export { SHARD_FORMAT, SHARD_VERSION, shardFileBytes, shardFromJson, shardToJson } from './shard-file.js';
 export { exceedanceCountsLength, FEW_MEMBERS, fewMembersWarning, PERCENTILE_NAMES, PERCENTILES, summarizeEnsemble } from './summarize-ensemble.js';
-export type { EnsembleResult, ParameterSummary, PercentileName, ThresholdCrossing } from './summarize-ensemble.js';
+export type { EnsembleResult, ParameterSummary, PeakSummary, PercentileName, ThresholdCrossing } from './summarize-ensemble.js';

@@ -1,4 +1,5 @@
 import { ExceedanceCounter } from './exceedance-counter.js';
+import { emptyMemberPeaks, type MemberPeaks } from './member-peaks.js';
 import { drawMembers } from './member-stage.js';
 import type { MemberTask } from './run-members.js';
 import { RUNNING_MEAN_WINDOW } from './running-mean.js';
@@ -27,7 +28,8 @@ export function streamRows(n: number, keep: boolean): number {
  * {@link MemberStream.advance} steps every member through the next block of years and writes its
  * warming, relative to its own baseline mean, into `rows` (year-major, one row of `width` member
  * columns per year, year k in row k mod rowCount), counting each member's threshold exceedances on
- * the way. Between blocks the caller computes the percentiles of the finished rows. Memory is the
+ * the way, and its peak (highest warming so far and its year). Between blocks the caller computes the
+ * percentiles of the finished rows. Memory is the
  * rows plus a few values per member, whatever the number of years, and the rows are read while they
  * are still in cache.
  *
@@ -72,6 +74,7 @@ export class MemberStream {
    * @param rowCount rows held (streamRows)
    * @param parameters receives each member's parameters at its column
    * @param thresholds warming levels, K
+   * @param peaks receives each member's peak at its column (memberPeaksInto's result on its rows, bit for bit)
    */
   constructor(
     private readonly task: MemberTask,
@@ -83,6 +86,7 @@ export class MemberStream {
     private readonly rowCount: number,
     private readonly parameters: Record<MemberParameter, Float64Array>,
     thresholds: readonly number[],
+    private readonly peaks: MemberPeaks,
   ) {
     const count = (this.count = to - from);
     this.n = task.otherWm2.length;
@@ -110,7 +114,7 @@ export class MemberStream {
 
   /**
    * Draws every member's parameters (drawMembers, as whole-member runs draw them), stores them,
-   * builds its propagator and computes its baseline mean.
+   * builds its propagator, computes its baseline mean and sets its peak to "no year seen yet".
    * @returns unphysical draws discarded
    */
   draw(): number {
@@ -129,6 +133,8 @@ export class MemberStream {
       this.aerosolScale[i] = draw.aerosolScale;
     });
     for (let i = 0; i < count; i += 2) this.baselineMeans(i, i + 1 < count ? i + 1 : i);
+    this.peaks.warmingK.fill(-Infinity, this.column, this.column + count);
+    this.peaks.yearIndex.fill(-1, this.column, this.column + count);
     return redraws;
   }
 
@@ -202,7 +208,8 @@ export class MemberStream {
    * writing its rebased warming into the rows and, on the way, advancing its 20-year sum and
    * recording changes of its level: the sum of years k-19..k is the 20-year mean that stands for
    * year k - 10 (as ExceedanceCounter.addMember has it). The level test compares the sum with
-   * ExceedanceCounter.sumBounds, which is the same as comparing the mean with the thresholds.
+   * ExceedanceCounter.sumBounds, which is the same as comparing the mean with the thresholds. Each
+   * member's peak moves only on a strictly higher value, so ties keep the first year (memberPeaksInto).
    */
   advance(y0: number, y1: number): void {
     const { rowCount, offsets, count, column } = this;
@@ -215,6 +222,7 @@ export class MemberStream {
     const sumBounds = counter.sumBounds;
     const { co2Wm2, aerosolWm2, otherWm2 } = this.task;
     const { p00, p01, p10, p11, g0t, g0d, g1t, g1d, co2Scale, aerosolScale, mean, surface, deep, sum, level, reached } = this;
+    const { warmingK: peakK, yearIndex: peakYear } = this.peaks;
     // Members go two at a time, side by side: the two-box step is a chain of dependent
     // multiplications, so a second, independent chain in the same loop nearly doubles the throughput
     // of member-years, and the two members' values share cache lines of the rows. An odd last member
@@ -256,6 +264,10 @@ export class MemberStream {
       let lb = level[b];
       let bBelow = sumBounds[lb];
       let bAbove = sumBounds[lb + 1];
+      let pa = peakK[column + a];
+      let ya = peakYear[column + a];
+      let pb = peakK[column + b];
+      let yb = peakYear[column + b];
       let fa = aCo2 * co2Wm2[y0] + aAer * aerosolWm2[y0] + otherWm2[y0];
       let fb = bCo2 * co2Wm2[y0] + bAer * aerosolWm2[y0] + otherWm2[y0];
       for (let k = y0; k < y1; k++) {
@@ -264,6 +276,14 @@ export class MemberStream {
         const out = offsets[k - y0 + WINDOW];
         rows[out + a] = wa;
         rows[out + b] = wb;
+        if (wa > pa) {
+          pa = wa;
+          ya = k;
+        }
+        if (wb > pb) {
+          pb = wb;
+          yb = k;
+        }
         if (k < WINDOW) {
           sa += wa;
           sb += wb;
@@ -311,10 +331,14 @@ export class MemberStream {
       deep[b] = db;
       sum[b] = sb;
       level[b] = lb;
+      peakK[column + b] = pb;
+      peakYear[column + b] = yb;
       surface[a] = ta;
       deep[a] = da;
       sum[a] = sa;
       level[a] = la;
+      peakK[column + a] = pa;
+      peakYear[column + a] = ya;
     }
   }
 
@@ -335,7 +359,7 @@ export class MemberStream {
     delete primer.carbon;
     const members = 3;
     const rows = new Float64Array(n * members);
-    const stream = new MemberStream(primer, 0, members, 0, members, rows, n, emptyParameters(members), [0.5, 1.5]);
+    const stream = new MemberStream(primer, 0, members, 0, members, rows, n, emptyParameters(members), [0.5, 1.5], emptyMemberPeaks(members));
     stream.draw();
     for (let y0 = 0; y0 < n; y0 += STREAM_BLOCK_YEARS) stream.advance(y0, Math.min(n, y0 + STREAM_BLOCK_YEARS));
   }

@@ -98,6 +98,7 @@ export async function runEnsemble(input: EnsembleInput, options: EnsembleOptions
     memberCount: to - from,
     ...(run.warmingK ? { warmingK: run.warmingK } : {}),
     parameters: run.parameters,
+    peaks: run.peaks,
     redraws: run.redraws,
   };
   return summarizeEnsemble(members, run.workersUsed, run.statistics);

@@ -11,6 +11,7 @@
 import { availableParallelism } from 'node:os';
 import { Worker } from 'node:worker_threads';
 import { ConfigError, NumericalError, WarmcastError } from '../errors.js';
+import { emptyMemberPeaks, type MemberPeaks } from './member-peaks.js';
 import { streamRows } from './member-stream.js';
 import type { MemberTask } from './run-members.js';
 import { abandonRun, RunAbandoned, runThreadShare, type ThreadJob } from './run-thread-share.js';
@@ -32,6 +33,8 @@ export interface MemberRun {
   warmingK?: Float64Array;
   /** Each member's parameters. */
   parameters: Record<MemberParameter, Float64Array>;
+  /** Each member's peak: highest annual warming and its year index. */
+  peaks: MemberPeaks;
   /** Unphysical draws discarded. */
   redraws: number;
   /** Threads that did the work (1 = this thread only). */
@@ -137,7 +140,7 @@ export function memberThreads(threads: number, count: number, rowBytes: number, 
 
 /**
  * Runs members [from, to) on up to `threads` threads and computes the member-year statistics for
- * `thresholds`: percentiles per year and exceedance counts. Concentration-driven members stream
+ * `thresholds`: percentiles per year and exceedance counts, and each member's peak. Concentration-driven members stream
  * through blocks of years and only a few years of all members are held at a time, unless `keep`
  * asks for every member's yearly warming (emission-driven members are always kept).
  *
@@ -170,6 +173,7 @@ export async function runMembersParallel(
   const buffer = (bytes: number) => (shared ? new SharedArrayBuffer(bytes) : new ArrayBuffer(bytes));
   const rows = new Float64Array(buffer(rowCount * count * 8));
   const parameters = emptyParameters(count, buffer);
+  const peaks = emptyMemberPeaks(count, buffer);
   const percentiles = new Float64Array(buffer(PERCENTILES.length * n * 8));
   const sync = new Int32Array(buffer(4 * (2 + size)));
   const jobs = Array.from({ length: size }, (_, w): ThreadJob => ({
@@ -185,6 +189,7 @@ export async function runMembersParallel(
     rows,
     rowCount,
     parameters,
+    peaks,
     percentiles,
     sync,
   }));
@@ -218,6 +223,7 @@ export async function runMembersParallel(
   return {
     ...(kept ? { warmingK: rows } : {}),
     parameters,
+    peaks,
     redraws,
     workersUsed: size,
     statistics: { percentiles: PERCENTILES.map((_, j) => percentiles.subarray(j * n, (j + 1) * n)), counts },

@@ -1,6 +1,7 @@
 import { ConfigError } from '../errors.js';
 import { QuantileSelector } from '../numerics/quantiles.js';
 import { ExceedanceCounter } from './exceedance-counter.js';
+import { memberPeaksInto, type MemberPeaks } from './member-peaks.js';
 import { MemberStream, STREAM_BLOCK_YEARS } from './member-stream.js';
 import { runMembersInto, type MemberTask } from './run-members.js';
 import type { MemberParameter } from './sample-members.js';
@@ -29,6 +30,8 @@ export interface ThreadJob {
   rowCount: number;
   /** Receives each member's parameters at its column. */
   parameters: Record<MemberParameter, Float64Array>;
+  /** Receives each member's peak (highest warming and its year) at its column. */
+  peaks: MemberPeaks;
   /** Receives percentile j of year k at j * years + k. */
   percentiles: Float64Array;
   /**
@@ -54,7 +57,8 @@ export class RunAbandoned extends Error {
  * - emission-driven members (task.carbon) run whole, one after another (runMembersInto), into rows
  *   that hold every year; after all threads are done, each computes the percentiles of its slice of
  *   the years.
- * Exceedances are counted as each member's values are written.
+ * Exceedances are counted as each member's values are written; each member's peak is tracked as its
+ * values are written (streamed) or found in its kept row once it has run (emission-driven).
  *
  * @param job the share
  * @param onProgress called as members (or their equivalent in member-years) finish
@@ -83,6 +87,7 @@ export function runThreadShare(job: ThreadJob, onProgress?: () => void): { redra
     const block = { blockStart: job.blockStart, memberCount: m, warmingK: rows, parameters: job.parameters };
     redraws = runMembersInto(task, from, to, block, report, counter);
     counter.addCountsTo(counts);
+    memberPeaksInto(rows, m, n, from - job.blockStart, to - job.blockStart, job.peaks);
     arrive(sync, threads, ++generation);
     percentilesOf(...slice(0, n));
     return { redraws, counts };
@@ -90,7 +95,7 @@ export function runThreadShare(job: ThreadJob, onProgress?: () => void): { redra
 
   QuantileSelector.prime();
   MemberStream.prime(task);
-  const stream = new MemberStream(task, from, to, from - job.blockStart, m, rows, rowCount, job.parameters, job.thresholds);
+  const stream = new MemberStream(task, from, to, from - job.blockStart, m, rows, rowCount, job.parameters, job.thresholds, job.peaks);
   redraws = stream.draw();
   for (let y0 = 0; y0 < n; y0 += STREAM_BLOCK_YEARS) {
     const y1 = Math.min(n, y0 + STREAM_BLOCK_YEARS);

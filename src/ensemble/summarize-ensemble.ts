@@ -1,6 +1,7 @@
 import { ConfigError } from '../errors.js';
 import { QuantileSelector, quantilesInPlace } from '../numerics/quantiles.js';
 import { ExceedanceCounter } from './exceedance-counter.js';
+import { emptyMemberPeaks, memberPeaksInto, type MemberPeaks } from './member-peaks.js';
 import type { EnsembleConfig, EnsembleMemberParameters, EnsembleMembers } from './ensemble-members.js';
 import { RUNNING_MEAN_WINDOW } from './running-mean.js';
 import { MEMBER_PARAMETERS, type MemberParameter } from './sample-members.js';
@@ -42,6 +43,22 @@ export interface ThresholdCrossing {
 /** Summary quantiles of one sampled parameter across members. */
 export type ParameterSummary = Record<PercentileName, number> & { mean: number };
 
+/**
+ * The members' own peaks across the ensemble: not the peak of the median line, but the percentiles
+ * of every member's highest annual warming and of the year it comes in.
+ */
+export interface PeakSummary {
+  /** Percentiles across members of each member's peak warming, K relative to the baseline. */
+  warmingK: Record<PercentileName, number>;
+  /**
+   * Percentiles across members of each member's peak year (Hyndman & Fan 1996 definition 7 over
+   * whole years, so a percentile may fall between two years).
+   */
+  year: Record<PercentileName, number>;
+  /** Share of members whose peak is the run's last year: still rising (or flat) at the end (0-1). */
+  stillRising: number;
+}
+
 /** The statistics of an ensemble (or of one shard of it), per year and overall. */
 export interface EnsembleResult {
   /** Annual grid. */
@@ -67,6 +84,8 @@ export interface EnsembleResult {
   parameters: Record<MemberParameter, ParameterSummary>;
   /** Pearson correlation of the members' ECS and TCR. */
   ecsTcrCorrelation: number;
+  /** Percentiles of the members' own peak warming and peak year, and the share still rising at the end. */
+  peak: PeakSummary;
   /** How the numbers were made, one sentence each, for the provenance of an output. */
   notes: string[];
   /**
@@ -74,8 +93,8 @@ export interface EnsembleResult {
    * statistics); only when they were kept (runEnsemble with keepMembers or a shard, or merged shards).
    */
   members?: EnsembleMembers;
-  /** Each member's parameters (and which members these are). */
-  memberParameters: EnsembleMemberParameters;
+  /** Each member's parameters and peak (and which members these are). */
+  memberParameters: EnsembleMemberParameters & { peaks: MemberPeaks };
   /** Threads that ran the members (1 when run in the calling thread, or for merged shards). */
   workersUsed: number;
 }
@@ -95,7 +114,8 @@ export interface MemberStatistics {
  * Computes an ensemble's statistics from its members: per year the warming percentiles (one
  * selection per year over the members, Hyndman & Fan 1996 definition 7) and the share of members
  * whose 20-year mean exceeds each threshold; per threshold the probability of having crossed by
- * each milestone year and the median crossing year; the spread of the parameters. A deterministic
+ * each milestone year and the median crossing year; the spread of the parameters and of the members'
+ * own peaks (taken from `members.peaks`, else found in their yearly warming). A deterministic
  * function of the members in order, so merged shards give exactly what one run gives.
  *
  * @param members raw members of a run or of merged shards
@@ -117,6 +137,12 @@ export function summarizeEnsemble(members: EnsembleMembers | EnsembleMemberParam
     exceedanceCountsInto(warmingK, m, n, thresholds, 0, m, stats.counts);
   }
   const percentiles = Object.fromEntries(PERCENTILE_NAMES.map((name, j) => [name, stats.percentiles[j]])) as Record<PercentileName, Float64Array>;
+  let peaks = members.peaks;
+  if (!peaks) {
+    if (!warmingK) throw new ConfigError('summarizeEnsemble needs the members\' yearly warming or their peaks', 'members');
+    peaks = emptyMemberPeaks(m);
+    memberPeaksInto(warmingK, m, n, 0, m, peaks);
+  }
 
   const first = RUNNING_MEAN_WINDOW.before;
   const last = n - 1 - RUNNING_MEAN_WINDOW.after;
@@ -167,9 +193,10 @@ export function summarizeEnsemble(members: EnsembleMembers | EnsembleMemberParam
     redraws: members.redraws,
     parameters,
     ecsTcrCorrelation: pearson(members.parameters.ecsK, members.parameters.tcrK),
+    peak: summarizePeaks(peaks, config.firstYear, n),
     notes: ensembleNotes(members),
-    ...(warmingK ? { members: { ...members, warmingK } } : {}),
-    memberParameters: members,
+    ...(warmingK ? { members: { ...members, warmingK, peaks } } : {}),
+    memberParameters: { ...members, peaks },
     workersUsed,
   };
 }
@@ -308,8 +335,26 @@ function ensembleNotes(members: EnsembleMemberParameters): string[] {
     'warming_pXX_k: percentiles across members of each year\'s warming, by linear interpolation between order statistics (Hyndman & Fan 1996, definition 7)',
     `prob_above_<t>: share of members whose 20-year mean warming (years y-${before} to y+${after}) exceeds t K, the IPCC AR6 convention for reaching a warming level; empty where the 20-year window leaves the run`,
     'crossing year: the labelled year of the first 20-year mean above the level; median crossing year: the first year by which at least half of the members have crossed',
+    'peak warming (members\' own): each member\'s highest annual warming over the whole run and its year (the first such year on ties), then their percentiles across members; a member whose peak is the last year is still rising',
     ...describeSampling(c.sampling, c.emissionDriven),
   ];
+}
+
+/**
+ * The percentiles of the members' peak warming and peak year (first year + index), and the share
+ * whose peak is the last of the n years.
+ */
+function summarizePeaks(peaks: MemberPeaks, firstYear: number, n: number): PeakSummary {
+  const m = peaks.warmingK.length;
+  const years = Float64Array.from(peaks.yearIndex, (k) => firstYear + k);
+  let rising = 0;
+  for (let r = 0; r < m; r++) if (peaks.yearIndex[r] === n - 1) rising++;
+  const percentilesOf = (values: Float64Array) => {
+    const q = new Float64Array(PERCENTILES.length);
+    quantilesInPlace(values, PERCENTILES, q);
+    return Object.fromEntries(PERCENTILE_NAMES.map((name, j) => [name, q[j]])) as Record<PercentileName, number>;
+  };
+  return { warmingK: percentilesOf(peaks.warmingK), year: percentilesOf(years), stillRising: m > 0 ? rising / m : NaN };
 }
 
 function summarizeValues(values: Float64Array): ParameterSummary {

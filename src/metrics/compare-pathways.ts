@@ -34,6 +34,28 @@ export interface CrossingOdds {
   shareAbove: Float64Array;
 }
 
+/** Five percentiles (5, 17, 50, 83, 95 %) of one quantity across an ensemble's members. */
+export interface MemberPercentiles {
+  p05: number;
+  p17: number;
+  p50: number;
+  p83: number;
+  p95: number;
+}
+
+/**
+ * The members' own peaks of an ensemble: each member's highest annual warming over the run and its
+ * year, summarised across members (not the peak of the median line, which is lower and smoother).
+ */
+export interface MembersPeak {
+  /** Percentiles of the members' peak warming, K relative to the baseline. */
+  warmingK: MemberPercentiles;
+  /** Percentiles of the members' peak years (may fall between two years). */
+  year: MemberPercentiles;
+  /** Share of members whose peak is the run's last year: still rising at its end (0-1). */
+  stillRising: number;
+}
+
 /** One pathway's projected warming, as a comparison takes it. */
 export interface PathwayWarming {
   /** Display name; names in one comparison must be distinct. */
@@ -50,6 +72,8 @@ export interface PathwayWarming {
    * from the members rather than from the median line.
    */
   crossingOdds?: CrossingOdds[];
+  /** The members' own peaks, when an ensemble was run; reports then give them as the pathway's peak. */
+  membersPeak?: MembersPeak;
   /** Net CO2 emissions, Gt CO2 per year, when the run is emission-driven. */
   co2Gtco2?: Float64Array;
 }
@@ -84,7 +108,7 @@ export interface PathwayComparison extends PathwayWarming {
   /** Warming minus the reference's, K, on the years both cover. */
   differenceK: Series;
   milestones: MilestoneValue[];
-  /** Highest annual warming, K, and its year. */
+  /** Highest annual warming of `warmingK` (the median line of an ensemble), K, and its year. */
   peak: Peak;
   /** True when the peak is the last year: warming is still rising (or flat) at the end of the data. */
   stillRising: boolean;

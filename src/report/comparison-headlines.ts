@@ -1,12 +1,14 @@
-import type { Comparison, PathwayComparison } from '../metrics/compare-pathways.js';
+import type { Comparison, MembersPeak, PathwayComparison } from '../metrics/compare-pathways.js';
 import { kelvin, percent } from './format-numbers.js';
 import { thresholdName } from './threshold-name.js';
 
 /**
  * One plain sentence per pathway for the top of a report: its peak warming and year, when it
  * reaches each threshold (AR6 20-year-mean rule), and its warming in the last key year. For a
- * pathway with an ensemble the sentence speaks of the median line and, per threshold, of the share
- * of members that have crossed it by each milestone year and the year by which half have.
+ * pathway with an ensemble the sentence gives the members' own peak (their median peak warming with
+ * its 5-95 % range, their median peak year and the share still rising at the end) and, per
+ * threshold, the share of members that have crossed it by each milestone year and the year by which
+ * half have, then the median line's warming in the last key year.
  *
  * @param c the comparison
  * @param baseline the baseline period the warming is relative to, as printed (default `1850-1900`);
@@ -34,7 +36,7 @@ function singleParts(p: PathwayComparison, level: (thresholdK: number) => string
 }
 
 function ensembleParts(p: PathwayComparison, level: (thresholdK: number) => string): string[] {
-  const parts = [`median peaks at ${kelvin(p.peak.value)} K in ${p.peak.year}${p.stillRising ? ' (still rising)' : ''}`];
+  const parts = [p.membersPeak ? membersPeakText(p.membersPeak, p.lastYear) : `median peaks at ${kelvin(p.peak.value)} K in ${p.peak.year}${p.stillRising ? ' (still rising)' : ''}`];
   for (const { thresholdK, odds } of p.crossings) {
     if (!odds) continue;
     const by = odds.byYear
@@ -46,6 +48,14 @@ function ensembleParts(p: PathwayComparison, level: (thresholdK: number) => stri
   const last = p.keyYears.filter((k) => Number.isFinite(k.warmingK)).at(-1);
   if (last) parts.push(`median ${kelvin(last.warmingK)} K in ${last.year}`);
   return parts;
+}
+
+/** "members' median peak 1.98 K [1.45 to 2.70] in 2079 (31 % still rising in 2150)". */
+function membersPeakText(peak: MembersPeak, lastYear: number): string {
+  const w = peak.warmingK;
+  const year = Number.isFinite(peak.year.p50) ? String(Math.round(peak.year.p50)) : 'n/a';
+  const rising = peak.stillRising > 0 ? ` (${percent(peak.stillRising)} still rising in ${lastYear})` : '';
+  return `members' median peak ${kelvin(w.p50)} K [${kelvin(w.p05)} to ${kelvin(w.p95)}] in ${year}${rising}`;
 }
 
 /** `a`, `a and b`, `a, b and c`. */

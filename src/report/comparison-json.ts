@@ -7,7 +7,9 @@ import type { Comparison } from '../metrics/compare-pathways.js';
  * warming at key years, milestones with differences from the reference, cumulative CO2 to net zero
  * when emission-driven) and its annual series (`years`, `warming_k`, `difference_k`, and the
  * ensemble percentiles, `prob_above_<t>` and `co2_gtco2` when present). A pathway with an ensemble
- * says so in `central_estimate` ("ensemble median": its peak is that of the median line); per
+ * says so in `central_estimate` ("ensemble median": its `peak` is that of the median line) and gives
+ * the members' own peaks in `members_peak` (percentiles of their peak warming and peak years, and
+ * the share still rising at the end); per
  * crossing its `year` is then the first year by which half of the members have crossed (as in the
  * tables), `odds` gives the share crossed by each milestone year and within the run, and
  * `median_line` the median line's own first 20-year period above the level.
@@ -33,7 +35,7 @@ export function comparisonJson(c: Comparison, provenance: object): string {
 
 /**
  * The figures of a comparison without its annual series, as {@link comparisonJson} writes them:
- * settings, then per pathway its peak, crossings (with the members' odds), key years, milestones and
+ * settings, then per pathway its peak (and the members' own peaks), crossings (with the members' odds), key years, milestones and
  * net zero. For the `.meta.json` beside a comparison's long CSV, which holds the annual series.
  *
  * @example comparisonSummary(c).pathways[0].peak // { year: 2100, warming_k: 2.7, still_rising: true }
@@ -57,6 +59,9 @@ function comparisonDocument(c: Comparison, annual: boolean) {
       last_year: p.lastYear,
       central_estimate: p.crossingOdds ? 'ensemble median' : 'single run',
       peak: { year: num(p.peak.year), warming_k: num(p.peak.value), still_rising: p.stillRising },
+      ...(p.membersPeak
+        ? { members_peak: { warming_k: { ...p.membersPeak.warmingK }, year: { ...p.membersPeak.year }, still_rising: p.membersPeak.stillRising } }
+        : {}),
       crossings: p.crossings.map(({ thresholdK, period, odds }) => {
         const first20 = {
           year: period ? period.year : null,

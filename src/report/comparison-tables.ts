@@ -1,4 +1,4 @@
-import type { Comparison, CrossingOdds, PathwayComparison } from '../metrics/compare-pathways.js';
+import type { Comparison, CrossingOdds, MembersPeak, PathwayComparison } from '../metrics/compare-pathways.js';
 import { kelvin, MISSING, percent, signedKelvin } from './format-numbers.js';
 import type { TextTable } from './text-table.js';
 
@@ -18,8 +18,10 @@ export interface ComparisonTableOptions {
  *   is the last year), the crossing year of each threshold under the AR6 20-year-mean rule ("not
  *   crossed by END" when none), warming at the key years and, when any pathway is emission-driven,
  *   cumulative CO2 emissions to net zero (Gt CO2, whole numbers) and the net-zero year. For a
- *   pathway with an ensemble the peak is that of its median line, and a crossing year is the year
- *   by which half of its members have crossed ("fewer than half by END" when they have not).
+ *   pathway with an ensemble the peak is the members' own: the median of their peak warming with its
+ *   5-95 % range in brackets, and the median of their peak years with the share still rising at the
+ *   end; a crossing year is the year by which half of its members have crossed ("fewer than half by
+ *   END" when they have not).
  * - `odds`, only when some pathway has an ensemble: one row per such pathway, the share of its
  *   members that have crossed each threshold by each of the ensemble's milestone years.
  *
@@ -54,7 +56,7 @@ export function comparisonTables(c: Comparison, options: ComparisonTableOptions 
   sColumns.push(...c.keyYears.map((y) => `${y} (K)`));
   if (netZero) sColumns.push('CO2 to net zero (Gt CO2)', 'Net-zero year');
   const sRows = c.pathways.map((p) => {
-    const row = [p.label, kelvin(p.peak.value), Number.isFinite(p.peak.year) ? `${p.peak.year}${p.stillRising ? ' (still rising)' : ''}` : MISSING];
+    const row = p.membersPeak ? [p.label, ...membersPeakCells(p.membersPeak)] : [p.label, kelvin(p.peak.value), Number.isFinite(p.peak.year) ? `${p.peak.year}${p.stillRising ? ' (still rising)' : ''}` : MISSING];
     for (const { period, odds } of p.crossings) {
       if (odds) row.push(odds.medianYear === null ? `fewer than half by ${p.lastYear}` : String(odds.medianYear));
       else row.push(period === undefined ? `not crossed by ${p.lastYear}` : period.atStart ? `${period.year} or earlier` : String(period.year));
@@ -75,7 +77,9 @@ export function comparisonTables(c: Comparison, options: ComparisonTableOptions 
   ];
   if (withOdds.length > 0) {
     summaryNotes.push(
-      `With an ensemble (${withOdds.map((p) => p.label).join(', ')}): the peak is that of the median line, and "Reaches" is the year by ` +
+      `With an ensemble (${withOdds.map((p) => p.label).join(', ')}): the peak is the members' own, not the median line's: Peak (K) is the median ` +
+        'of each member\'s highest annual warming with the 5-95 % range of members in brackets, Peak year the median of their peak years, with the ' +
+        'share of members still rising at the end (their peak is the run\'s last year, so only the highest so far); "Reaches" is the year by ' +
         'which half of the members have crossed the level by the same rule (the median crossing year); the table of probabilities gives the shares.',
     );
   }
@@ -107,6 +111,17 @@ function warmingCell(p: PathwayComparison, m: number): string {
   const central = kelvin(v.warmingK);
   if (!v.range || central === MISSING) return central;
   return `${central} (${kelvin(v.range.p17)} to ${kelvin(v.range.p83)}) [${kelvin(v.range.p05)} to ${kelvin(v.range.p95)}]`;
+}
+
+/**
+ * The Peak (K) and Peak year cells of a pathway with an ensemble: the members' median peak with its
+ * 5-95 % range, and their median peak year (whole year) with the share still rising in the last year.
+ */
+function membersPeakCells(peak: MembersPeak): [string, string] {
+  const w = peak.warmingK;
+  const year = Number.isFinite(peak.year.p50) ? String(Math.round(peak.year.p50)) : MISSING;
+  const rising = peak.stillRising > 0 ? ` (${percent(peak.stillRising)} still rising)` : '';
+  return [`${kelvin(w.p50)} [${kelvin(w.p05)} to ${kelvin(w.p95)}]`, `${year}${rising}`];
 }
 
 /** The chance of crossing each threshold by each milestone year, for the pathways with an ensemble. */

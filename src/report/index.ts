@@ -14,7 +14,7 @@ export { comparisonText } from './comparison-text.js';
 export { comparisonUncertainty } from './comparison-uncertainty.js';
 export type { ComparisonTextOptions } from './comparison-text.js';
 export { ensembleHeadlinesMarkdown } from './ensemble-headlines-markdown.js';
-export { ensembleHeadlineLines, medianCrossingText, percentText, sampledName } from './ensemble-headlines-text.js';
+export { ensembleHeadlineLines, medianCrossingText, peakText, peakYearText, percentText, sampledName } from './ensemble-headlines-text.js';
 export { escapeMarkup } from './escape-markup.js';
 export { htmlReport } from './html-report.js';
 export type { HtmlReportOptions } from './html-report.js';

@@ -5,6 +5,7 @@ import Papa from 'papaparse';
 import { describe, expect, it } from 'vitest';
 import { captureIo } from '../../src/cli/cli-io.js';
 import { main } from '../../src/cli/main.js';
+import { percentText } from '../../src/report/ensemble-headlines-text.js';
 
 const tmp = () => mkdtempSync(join(tmpdir(), 'warmcast-compare-'));
 
@@ -95,6 +96,24 @@ describe('warmcast compare', () => {
     expect(cmp.out).toMatch(/Probability of crossing each warming level/);
     expect(cmp.out).toMatch(/^  note: all ensembles: .*unphysical/m);
     expect(cmp.out).toMatch(/^  caution: .*not constrained by observed warming/m);
+  });
+
+  it('with --members the peak is the members\' own, as `warmcast ensemble` gives it for the same seed: in the headline, the table and the JSON', async () => {
+    const dir = tmp();
+    const cmp = captureIo();
+    expect(await main(['compare', 'steady', 'swift', '--members', '150', '--seed', '5', '--no-chart'], cmp)).toBe(0);
+    const ens = captureIo();
+    expect(await main(['ensemble', 'swift', '--members', '150', '--seed', '5', '--no-chart', '--out', join(dir, 'e.json')], ens)).toBe(0);
+    const peak = JSON.parse(readFileSync(join(dir, 'e.json'), 'utf8')).headlines.peak;
+    const k = (v: number) => v.toFixed(2);
+    const rising = peak.still_rising > 0 ? ` \\(${percentText(peak.still_rising)} still rising in 2150\\)` : '';
+    expect(cmp.out).toMatch(new RegExp(`Swift transition: members' median peak ${k(peak.warming_k.p50)} K \\[${k(peak.warming_k.p05)} to ${k(peak.warming_k.p95)}\\] in ${Math.round(peak.year.p50)}${rising}; `));
+    expect(cmp.out).not.toMatch(/median peaks at/);
+    expect(cmp.out).toMatch(new RegExp(`^  Swift transition +${k(peak.warming_k.p50)} \\[${k(peak.warming_k.p05)} to ${k(peak.warming_k.p95)}\\] +${Math.round(peak.year.p50)}`, 'm'));
+    expect(cmp.out).toMatch(/the peak is the members' own, not the median line's/);
+    expect(await main(['compare', 'steady', 'swift', '--members', '150', '--seed', '5', '--no-chart', '--out', join(dir, 'c.json')], captureIo())).toBe(0);
+    const doc = JSON.parse(readFileSync(join(dir, 'c.json'), 'utf8'));
+    expect(doc.pathways[1].members_peak).toEqual(peak);
   });
 
   it('--years are put in order once each, and a year no pathway covers is refused with exit 2', async () => {

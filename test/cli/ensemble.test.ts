@@ -41,6 +41,41 @@ describe('warmcast ensemble and merge', () => {
     expect(readFileSync(join(dir, 'm.csv')).equals(a)).toBe(true);
   });
 
+  it('ensemble prints the members\' own peak (median, likely and very likely, median year, share still rising), and the JSON, .meta.json and merged shards carry the same figures', async () => {
+    const dir = tmp();
+    const run = (args: string[], io = captureIo()) => main(['ensemble', 'delayed', '--members', '120', '--seed', '5', '--no-chart', ...args], io);
+    const io = captureIo();
+    expect(await run(['--out', join(dir, 'e.csv')], io)).toBe(0);
+    const line = /^  peak warming \(members' own\): median (\d+\.\d\d) K \(likely (\d+\.\d\d) to (\d+\.\d\d), very likely (\d+\.\d\d) to (\d+\.\d\d)\), in (\d{4}) \(likely (\d{4}) to (\d{4})\); ([<>]?\d+) % of members still rising in 2150$/m.exec(io.out);
+    expect(line, io.out).not.toBeNull();
+    const peak = JSON.parse(readFileSync(join(dir, 'e.meta.json'), 'utf8')).headlines.peak;
+    expect(line!.slice(1, 6).map(Number)).toEqual([peak.warming_k.p50, peak.warming_k.p17, peak.warming_k.p83, peak.warming_k.p05, peak.warming_k.p95].map((v: number) => +v.toFixed(2)));
+    expect(line!.slice(6, 9).map(Number)).toEqual([peak.year.p50, peak.year.p17, peak.year.p83].map(Math.round));
+    expect(line![9]).toBe(percentText(peak.still_rising).replace(' %', ''));
+    // Ordered percentiles; peak years within the run.
+    const w = peak.warming_k;
+    expect(w.p05 <= w.p17 && w.p17 <= w.p50 && w.p50 <= w.p83 && w.p83 <= w.p95).toBe(true);
+    expect(peak.year.p05).toBeGreaterThanOrEqual(1750);
+    expect(peak.year.p95).toBeLessThanOrEqual(2150);
+    // The JSON output carries the same headlines; merged shards (which find the peaks in the kept warming) give them bit for bit.
+    expect(await run(['--out', join(dir, 'e.json')])).toBe(0);
+    expect(JSON.parse(readFileSync(join(dir, 'e.json'), 'utf8')).headlines.peak).toEqual(peak);
+    for (const k of [1, 2]) expect(await run(['--shard', `${k}/2`, '--out', join(dir, `s${k}.json`)])).toBe(0);
+    const merged = captureIo();
+    expect(await main(['merge', join(dir, 's2.json'), join(dir, 's1.json'), '--out', join(dir, 'm.csv'), '--no-chart'], merged)).toBe(0);
+    expect(JSON.parse(readFileSync(join(dir, 'm.meta.json'), 'utf8')).headlines.peak).toEqual(peak);
+    expect(merged.out).toContain(line![0]);
+  });
+
+  it('ensemble --out x.md has a table of the members\' own peak: peak warming and peak year at 5/17/50/83/95 %, and the share still rising', async () => {
+    const dir = tmp();
+    expect(await main(['ensemble', 'swift', '--members', '60', '--seed', '2', '--no-chart', '--out', join(dir, 'e.md')], captureIo())).toBe(0);
+    const md = readFileSync(join(dir, 'e.md'), 'utf8');
+    expect(md).toContain("**Peak warming (members' own): each member's highest annual warming and its year, across members**");
+    expect(md).toMatch(/\n\| peak warming \(K\) +(\| +\d\.\d\d ){5}\|\n\| peak year +(\| +\d{4} ){5}\|\n/);
+    expect(md).toMatch(/\n\d+ % of members still rising in 2150 /);
+  });
+
   it('ensemble --baseline 1995-2014 names thresholds "above the 1995-2014 mean" and carries the baseline note on the terminal and in the files', async () => {
     const dir = tmp();
     const io = captureIo();

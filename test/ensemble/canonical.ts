@@ -1,4 +1,4 @@
-// A byte-exact rendering of everything an ensemble reports, for same-output comparisons. JSON
+// A byte-exact rendering of everything an ensemble reports (with every member's peak), for same-output comparisons. JSON
 // writes each number as the shortest text that reads back to the same double, so equal strings
 // mean bit-identical numbers (NaN and the incomplete 20-year windows appear as null).
 import { ensembleTable, type EnsembleResult } from '../../src/ensemble/index.js';
@@ -11,6 +11,8 @@ export function canonical(r: EnsembleResult): string {
     crossings: r.crossings,
     parameters: r.parameters,
     ecsTcrCorrelation: r.ecsTcrCorrelation,
+    peak: r.peak,
+    memberPeaks: [Array.from(r.memberParameters.peaks.warmingK), Array.from(r.memberParameters.peaks.yearIndex)],
     redraws: r.redraws,
     memberCount: r.memberCount,
     notes: r.notes,

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { ExceedanceCounter, exceedanceCountsLength, runMembersInto, type MemberBlock } from '../../src/ensemble/index.js';
+import { emptyMemberPeaks, memberPeaksInto } from '../../src/ensemble/member-peaks.js';
 import { MemberStream, STREAM_BLOCK_YEARS, streamRows } from '../../src/ensemble/member-stream.js';
 import { emptyParameters, MEMBER_PARAMETERS } from '../../src/ensemble/sample-members.js';
 import { syntheticTask } from './synthetic-input.js';
@@ -26,7 +27,8 @@ function streamed(from: number, to: number, rowCount: number) {
   const count = to - from;
   const rows = new Float64Array(rowCount * count);
   const parameters = emptyParameters(count);
-  const stream = new MemberStream(task, from, to, 0, count, rows, rowCount, parameters, thresholds);
+  const peaks = emptyMemberPeaks(count);
+  const stream = new MemberStream(task, from, to, 0, count, rows, rowCount, parameters, thresholds, peaks);
   const redraws = stream.draw();
   const seen: Float64Array[] = [];
   for (let y0 = 0; y0 < n; y0 += STREAM_BLOCK_YEARS) {
@@ -36,7 +38,7 @@ function streamed(from: number, to: number, rowCount: number) {
   }
   const counts = new Float64Array(exceedanceCountsLength(thresholds.length, n));
   stream.addCountsTo(counts);
-  return { seen, counts, parameters, redraws };
+  return { seen, counts, parameters, redraws, peaks };
 }
 
 describe('MemberStream', () => {
@@ -52,6 +54,23 @@ describe('MemberStream', () => {
       expect(Array.from(s.counts)).toEqual(Array.from(reference.counts));
       for (const p of MEMBER_PARAMETERS) expect(Array.from(s.parameters[p])).toEqual(Array.from(reference.block.parameters[p]));
       expect(s.redraws).toBe(reference.redraws);
+    }
+  });
+
+  it('MemberStream tracks each member\'s peak as it steps: bit for bit memberPeaksInto over the kept warming of runMembersInto, whether it holds every year or a ring of rows', () => {
+    const m = to - from;
+    const kept = emptyMemberPeaks(m);
+    memberPeaksInto(reference.block.warmingK, m, n, 0, m, kept);
+    for (const rowCount of [n, streamRows(n, false)]) {
+      const s = streamed(from, to, rowCount);
+      expect(Array.from(s.peaks.warmingK), `${rowCount} rows`).toEqual(Array.from(kept.warmingK));
+      expect(Array.from(s.peaks.yearIndex), `${rowCount} rows`).toEqual(Array.from(kept.yearIndex));
+    }
+    // Every member's peak is one of its own values and no year exceeds it.
+    for (let r = 0; r < m; r++) {
+      const k = kept.yearIndex[r];
+      expect(kept.warmingK[r]).toBe(reference.block.warmingK[k * m + r]);
+      for (let j = 0; j < n; j++) expect(reference.block.warmingK[j * m + r]).toBeLessThanOrEqual(kept.warmingK[r]);
     }
   });
 

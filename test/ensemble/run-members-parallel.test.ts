@@ -29,7 +29,8 @@ function runBuilt(workers: number): { text: string; workersUsed: number } {
       { ...raw.options, workers: ${workers} });
     const t = ensembleTable(r);
     const text = JSON.stringify({ columns: t.columns, values: t.columns.map((c) => Array.from(t.values[c])), crossings: r.crossings, parameters: r.parameters,
-      ecsTcrCorrelation: r.ecsTcrCorrelation, redraws: r.redraws, memberCount: r.memberCount, notes: r.notes });
+      ecsTcrCorrelation: r.ecsTcrCorrelation, peak: r.peak, memberPeaks: [Array.from(r.memberParameters.peaks.warmingK), Array.from(r.memberParameters.peaks.yearIndex)],
+      redraws: r.redraws, memberCount: r.memberCount, notes: r.notes });
     process.stdout.write(JSON.stringify({ text, workersUsed: r.workersUsed }));`;
   const scriptFile = join(buildDir, `run-${workers}.mjs`);
   writeFileSync(scriptFile, script);
@@ -60,7 +61,8 @@ describe('runMembersParallel', () => {
       const raw = JSON.parse(readFileSync(${JSON.stringify(inputFile)}, 'utf8'));
       const byAgent = Object.fromEntries(Object.entries(raw.byAgent).map(([k, v]) => [k, Float64Array.from(v)]));
       const input = { years: Float64Array.from(raw.years), forcing: { total: Float64Array.from(raw.total), byAgent }, co2Formula: 'ar6' };
-      const text = (r) => { const t = ensembleTable(r); return JSON.stringify({ values: t.columns.map((c) => Array.from(t.values[c])), crossings: r.crossings, redraws: r.redraws }); };
+      const text = (r) => { const t = ensembleTable(r); return JSON.stringify({ values: t.columns.map((c) => Array.from(t.values[c])), crossings: r.crossings, redraws: r.redraws,
+        peak: r.peak, memberPeaks: [Array.from(r.memberParameters.peaks.warmingK), Array.from(r.memberParameters.peaks.yearIndex)] }); };
       const threads = startEnsembleThreads(2);
       const one = text(await runEnsemble(input, { ...raw.options, workers: 1 }));
       const first = await runEnsemble(input, { ...raw.options, threads });
@@ -107,7 +109,8 @@ describe('runMembersParallel', () => {
       const { ensembleInput } = await import(url('projection/ensemble-input.js'));
       const { input } = ensembleInput(loadPathway('swift-emissions'), calibrate());
       const options = { members: 301, seed: 4, thresholds: [1.5, 2], baseline: [1850, 1900], keepMembers: true };
-      const text = (r) => { const t = ensembleTable(r); return JSON.stringify({ values: t.columns.map((c) => Array.from(t.values[c])), crossings: r.crossings, members: shardToJson(r.members) }); };
+      const text = (r) => { const t = ensembleTable(r); return JSON.stringify({ values: t.columns.map((c) => Array.from(t.values[c])), crossings: r.crossings, members: shardToJson(r.members),
+        peak: r.peak, memberPeaks: [Array.from(r.memberParameters.peaks.warmingK), Array.from(r.memberParameters.peaks.yearIndex)] }); };
       const one = await runEnsemble(input, { ...options, workers: 1 });
       const two = await runEnsemble(input, { ...options, workers: 2 });
       process.stdout.write(JSON.stringify({ same: text(one) === text(two), used: [one.workersUsed, two.workersUsed] }));`;

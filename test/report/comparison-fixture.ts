@@ -36,7 +36,8 @@ export function fixtureComparison() {
 /**
  * Two pathways over 2000-2100 for the writers' handling of ensemble crossing odds: `single`, one
  * run that crosses 1.5 K but not 2 K, and `ensemble`, a median line with hand-set odds (2 K: 30 %
- * of members by 2050, 45 % by 2100, fewer than half within the run).
+ * of members by 2050, 45 % by 2100, fewer than half within the run) and hand-set members' own peaks
+ * (median 1.95 K [1.52 to 2.61] in 2087.6, 40 % still rising in 2100).
  */
 export function oddsComparison() {
   const y = Float64Array.from({ length: 101 }, (_, i) => 2000 + i);
@@ -54,6 +55,7 @@ export function oddsComparison() {
           { thresholdK: 2, byYear: [{ year: 2050, probability: 0.3 }, { year: 2100, probability: null }], medianYear: null, withinRun: 0.45, lastWindowYear: 2090, shareAbove: shareAbove(2) },
           { thresholdK: 1.5, byYear: [{ year: 2050, probability: 0.62 }, { year: 2100, probability: null }], medianYear: 2046, withinRun: 0.97, lastWindowYear: 2090, shareAbove: shareAbove(1.5) },
         ],
+        membersPeak: { warmingK: { p05: 1.52, p17: 1.7, p50: 1.95, p83: 2.3, p95: 2.61 }, year: { p05: 2061, p17: 2072.3, p50: 2087.6, p83: 2100, p95: 2100 }, stillRising: 0.4 },
       },
     ],
     { milestoneYears: [2050], keyYears: [2050] },

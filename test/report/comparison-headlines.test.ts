@@ -20,15 +20,21 @@ describe('comparisonHeadlines', () => {
     ]);
   });
 
-  it('comparisonHeadlines speaks of the median line and the members\' odds for a pathway with an ensemble, and of the line for one without', () => {
+  it('comparisonHeadlines speaks of the members\' own peak, the members\' odds and the median line for a pathway with an ensemble, and of the line for one without', () => {
     // single: 1 + 0.0082 (y - 2000) K; the window s..s+19 has mean 1 + 0.0082 (s + 9.5 - 2000), above 1.5 K first for s = 2052
     // (1.504 K), labelled 2061; the last window's mean, 1.742 K, stays below 2 K (analytic).
     expect(comparisonHeadlines(oddsComparison())).toEqual([
       'single: peak 1.82 K in 2100 (still rising); reaches 1.5 K in 2061; 2 K not crossed by 2100; 1.41 K in 2050.',
-      'ensemble: median peaks at 1.82 K in 2100 (still rising); 1.5 K: probability of crossing 62 % by 2050, ' +
+      "ensemble: members' median peak 1.95 K [1.52 to 2.61] in 2088 (40 % still rising in 2100); 1.5 K: probability of crossing 62 % by 2050, " +
         'n/a by 2100 (the run ends before its 20-year window; 97 % by 2090), median crossing year 2046; 2 K: probability of crossing 30 % by 2050, ' +
         'n/a by 2100 (the run ends before its 20-year window; 45 % by 2090), fewer than half of the members cross it by 2100; median 1.41 K in 2050.',
     ]);
+  });
+
+  it('comparisonHeadlines falls back to the median line\'s peak for an ensemble pathway given without its members\' peaks', () => {
+    const c = oddsComparison();
+    delete c.pathways[1].membersPeak;
+    expect(comparisonHeadlines(c)[1]).toMatch(/^ensemble: median peaks at 1\.82 K in 2100 \(still rising\); /);
   });
 
   it('comparisonHeadlines names each level with the baseline when it is not 1850-1900', () => {

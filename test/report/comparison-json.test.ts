@@ -51,6 +51,13 @@ describe('comparisonJson', () => {
     const share = oddsComparison().pathways[1].crossings[0].odds!.shareAbove;
     expect(doc.pathways[1].annual['prob_above_1.5']).toEqual(Array.from(share, (v) => (Number.isFinite(v) ? v : null)));
     expect(doc.pathways[0].annual['prob_above_1.5']).toBeUndefined();
+    // The members' own peaks beside the median line's.
+    expect(doc.pathways[1].members_peak).toEqual({
+      warming_k: { p05: 1.52, p17: 1.7, p50: 1.95, p83: 2.3, p95: 2.61 },
+      year: { p05: 2061, p17: 2072.3, p50: 2087.6, p83: 2100, p95: 2100 },
+      still_rising: 0.4,
+    });
+    expect(doc.pathways[0].members_peak).toBeUndefined();
   });
 
   it('comparisonSummary is comparisonJson without the provenance and the annual series', () => {

@@ -75,6 +75,12 @@ describe('comparisonTables', () => {
       ['2061', 'not crossed by 2100'],
       ['2046', 'fewer than half by 2100'],
     ]);
+    // The ensemble's peak cells are the members' own (median [5-95 %], median year, share still rising); the single run's its line's.
+    expect(t.summary.rows.map((r) => r.slice(1, 3))).toEqual([
+      ['1.82', '2100 (still rising)'],
+      ['1.95 [1.52 to 2.61]', '2088 (40 % still rising)'],
+    ]);
+    expect(t.summary.notes!.join(' ')).toContain("the peak is the members' own, not the median line's");
     const [odds] = readGfmTables(markdownTable(t.odds!));
     expect(odds.header).toEqual(['Pathway', '1.5 K by 2050', '1.5 K by 2100', '2 K by 2050', '2 K by 2100']);
     // 2100 lies beyond the run's last 20-year window (centred on 2090): the share crossed by 2090 is given.

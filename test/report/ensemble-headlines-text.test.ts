@@ -14,6 +14,12 @@ describe('ensembleHeadlineLines', () => {
     ]);
   });
 
+  it('ensembleHeadlineLines gives the members\' own peak: median peak warming with likely and very likely ranges, median peak year with its likely range, share still rising', () => {
+    expect(ensembleHeadlineLines(headlinesFixture()).peak).toBe(
+      "  peak warming (members' own): median 1.98 K (likely 1.70 to 2.35, very likely 1.45 to 2.70), in 2079 (likely 2065 to 2150); 31 % of members still rising in 2150",
+    );
+  });
+
   it('ensembleHeadlineLines prints a missing correlation as n/a and the carbon-cycle multiplier when sampled', () => {
     const h = headlinesFixture({ ecs_tcr_correlation: null });
     h.sampled.irf100_scale = { p05: 0.77, p17: 0.88, p50: 1, p83: 1.12, p95: 1.23 };
