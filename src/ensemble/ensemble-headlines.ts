@@ -39,7 +39,7 @@ export interface ThresholdHeadline {
 export interface PeakHeadline {
   /** Percentiles across members of each member's peak warming, K relative to the baseline. */
   warming_k: Record<PercentileName, number>;
-  /** Percentiles across members of each member's peak year (may fall between two years). */
+  /** Percentiles across members of each member's peak year, each a year some member peaks in (Hyndman & Fan 1996 definition 1). */
   year: Record<PercentileName, number>;
   /** Share of members whose peak is the run's last year (`last_year`): still rising at the end. */
   still_rising: number;

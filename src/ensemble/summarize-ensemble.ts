@@ -51,8 +51,8 @@ export interface PeakSummary {
   /** Percentiles across members of each member's peak warming, K relative to the baseline. */
   warmingK: Record<PercentileName, number>;
   /**
-   * Percentiles across members of each member's peak year (Hyndman & Fan 1996 definition 7 over
-   * whole years, so a percentile may fall between two years).
+   * Percentiles across members of each member's peak year by the inverse empirical distribution
+   * (Hyndman & Fan 1996 definition 1), so each is a year some member peaks in.
    */
   year: Record<PercentileName, number>;
   /** Share of members whose peak is the run's last year: still rising (or flat) at the end (0-1). */
@@ -354,7 +354,13 @@ function summarizePeaks(peaks: MemberPeaks, firstYear: number, n: number): PeakS
     quantilesInPlace(values, PERCENTILES, q);
     return Object.fromEntries(PERCENTILE_NAMES.map((name, j) => [name, q[j]])) as Record<PercentileName, number>;
   };
-  return { warmingK: percentilesOf(peaks.warmingK), year: percentilesOf(years), stillRising: m > 0 ? rising / m : NaN };
+  // Years by the inverse empirical distribution (Hyndman & Fan 1996, definition 1): each percentile
+  // is a year some member peaks in. Interpolating between members (definition 7) puts the median of
+  // an ensemble split between a mid-century peak and still rising at the end in a year no member peaks in.
+  years.sort();
+  const yearAt = (p: number) => (m > 0 ? years[Math.max(0, Math.ceil(p * m) - 1)] : NaN);
+  const yearPercentiles = Object.fromEntries(PERCENTILE_NAMES.map((name, j) => [name, yearAt(PERCENTILES[j])])) as Record<PercentileName, number>;
+  return { warmingK: percentilesOf(peaks.warmingK), year: yearPercentiles, stillRising: m > 0 ? rising / m : NaN };
 }
 
 function summarizeValues(values: Float64Array): ParameterSummary {

@@ -50,7 +50,7 @@ export interface MemberPercentiles {
 export interface MembersPeak {
   /** Percentiles of the members' peak warming, K relative to the baseline. */
   warmingK: MemberPercentiles;
-  /** Percentiles of the members' peak years (may fall between two years). */
+  /** Percentiles of the members' peak years, each a year some member peaks in. */
   year: MemberPercentiles;
   /** Share of members whose peak is the run's last year: still rising at its end (0-1). */
   stillRising: number;

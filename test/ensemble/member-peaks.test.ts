@@ -86,3 +86,12 @@ describe('members\' own peaks in runEnsemble', () => {
     expect(r.peak.year.p05).toBe(2050);
   });
 });
+
+describe('the percentiles of the members\' peak years', () => {
+  it('runEnsemble gives every peak-year percentile as a year some member peaks in (Hyndman & Fan 1996, definition 1)', async () => {
+    const pathway = syntheticPathway();
+    const result = await runEnsemble(ensembleInputOf(pathway), { members: 200, seed: 11, keepMembers: true });
+    const peakYears = new Set(Array.from(result.memberParameters.peaks!.yearIndex, (k) => result.years[0] + k));
+    for (const [name, year] of Object.entries(result.peak.year)) expect(peakYears.has(year), `${name} ${year}`).toBe(true);
+  });
+});
