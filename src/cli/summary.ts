@@ -86,7 +86,7 @@ export function printProjectionSummary(
     const name = thresholdName(level, p.baseline);
     lines.push(
       c === undefined
-        ? `  ${name}: not crossed by ${wholeLast} (its last 20-year mean, ${wholeLast - 19}-${wholeLast}, is not above it; a crossing after ${wholeLast - 10} could not be seen yet)`
+        ? `  ${name}: not crossed by ${wholeLast - 10} (the run ends in ${wholeLast}, so its last 20-year mean, ${wholeLast - 19}-${wholeLast}, stands for ${wholeLast - 10})`
         : `  ${name}: first reached in ${c.year}${c.atStart ? ' or earlier' : ''} (mean of ${c.firstYear}-${c.lastYear} is ${c.mean.toFixed(2)} K; ${rule})`,
     );
   }

@@ -29,7 +29,7 @@ function singleParts(p: PathwayComparison, level: (thresholdK: number) => string
   const reached = p.crossings.filter((x) => x.period).map((x) => `${level(x.thresholdK)} in ${x.period!.atStart ? `${x.period!.year} or earlier` : x.period!.year}`);
   const missed = p.crossings.filter((x) => !x.period).map((x) => level(x.thresholdK));
   if (reached.length > 0) parts.push(`reaches ${series(reached)}`);
-  if (missed.length > 0) parts.push(`${series(missed)} not crossed by ${p.lastYear}`);
+  if (missed.length > 0) parts.push(`${series(missed)} not crossed by ${lastSeen(p)}`);
   const last = p.keyYears.filter((k) => Number.isFinite(k.warmingK)).at(-1);
   if (last) parts.push(`${kelvin(last.warmingK)} K in ${last.year}`);
   return parts;
@@ -40,9 +40,9 @@ function ensembleParts(p: PathwayComparison, level: (thresholdK: number) => stri
   for (const { thresholdK, odds } of p.crossings) {
     if (!odds) continue;
     const by = odds.byYear
-      .map((b) => (b.probability === null ? `n/a by ${b.year} (the run ends before its 20-year window; ${percent(odds.withinRun)} by ${odds.lastWindowYear})` : `${percent(b.probability)} by ${b.year}`))
+      .map((b) => (b.probability === null ? `by ${b.year} n/a (the run ends in ${p.lastYear}; by ${odds.lastWindowYear}, its last 20-year mean: ${percent(odds.withinRun)})` : `${percent(b.probability)} by ${b.year}`))
       .join(', ');
-    const median = odds.medianYear === null ? `fewer than half of the members cross it by ${p.lastYear}` : `median crossing year ${odds.medianYear}`;
+    const median = odds.medianYear === null ? `fewer than half of the members cross it by ${odds.lastWindowYear}` : `median crossing year ${odds.medianYear}`;
     parts.push(`${level(thresholdK)}: probability of crossing ${by}, ${median}`);
   }
   const last = p.keyYears.filter((k) => Number.isFinite(k.warmingK)).at(-1);
@@ -62,3 +62,12 @@ function membersPeakText(peak: MembersPeak, lastYear: number): string {
 function series(items: string[]): string {
   return items.length < 2 ? items.join('') : `${items.slice(0, -1).join(', ')} and ${items[items.length - 1]}`;
 }
+
+/**
+ * The last year whose 20-year window a pathway's data cover: a crossing labelled later (the window's
+ * middle year) cannot be seen yet.
+ */
+export function lastSeen(p: { lastYear: number }, windowYears = 20): number {
+  return p.lastYear - Math.ceil((windowYears - 1) / 2);
+}
+

@@ -1,4 +1,5 @@
 import type { Comparison, CrossingOdds, MembersPeak, PathwayComparison } from '../metrics/compare-pathways.js';
+import { lastSeen } from './comparison-headlines.js';
 import { kelvin, MISSING, percent, signedKelvin } from './format-numbers.js';
 import type { TextTable } from './text-table.js';
 
@@ -58,8 +59,8 @@ export function comparisonTables(c: Comparison, options: ComparisonTableOptions 
   const sRows = c.pathways.map((p) => {
     const row = p.membersPeak ? [p.label, ...membersPeakCells(p.membersPeak)] : [p.label, kelvin(p.peak.value), Number.isFinite(p.peak.year) ? `${p.peak.year}${p.stillRising ? ' (still rising)' : ''}` : MISSING];
     for (const { period, odds } of p.crossings) {
-      if (odds) row.push(odds.medianYear === null ? `fewer than half by ${p.lastYear}` : String(odds.medianYear));
-      else row.push(period === undefined ? `not crossed by ${p.lastYear}` : period.atStart ? `${period.year} or earlier` : String(period.year));
+      if (odds) row.push(odds.medianYear === null ? `fewer than half by ${odds.lastWindowYear}` : String(odds.medianYear));
+      else row.push(period === undefined ? `not crossed by ${lastSeen(p, c.windowYears)}` : period.atStart ? `${period.year} or earlier` : String(period.year));
     }
     for (const k of p.keyYears) row.push(kelvin(k.warmingK));
     if (netZero) {
@@ -73,7 +74,8 @@ export function comparisonTables(c: Comparison, options: ComparisonTableOptions 
   const summaryNotes = [
     `Peak: highest annual warming (K relative to ${baseline}). Reaches: the middle year (the earlier of the two) of the first ${c.windowYears}-year ` +
       `period whose mean warming exceeds the level, ${baseline === '1850-1900' ? 'the IPCC AR6 WG1 convention for global warming levels' : `the IPCC AR6 WG1 20-year-mean rule applied to warming relative to ${baseline}, so these are not AR6 levels`}; ` +
-      `"or earlier" when the first complete ${c.windowYears}-year period of the data is already above it.`,
+      `"or earlier" when the first complete ${c.windowYears}-year period of the data is already above it; "not crossed by" names the last ` +
+      `year whose ${c.windowYears}-year period the data cover, 10 years before they end.`,
   ];
   if (withOdds.length > 0) {
     summaryNotes.push(

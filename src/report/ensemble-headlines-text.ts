@@ -37,7 +37,7 @@ export function notCovered(t: ThresholdHeadline, h: EnsembleHeadlines): string {
  */
 export function medianCrossingText(t: ThresholdHeadline, h: EnsembleHeadlines): string {
   if (t.median_crossing === 'already-above-at-start') return `already above at the start (the first 20-year mean, ${h.first_window})`;
-  if (t.median_crossing === 'fewer-than-half-cross') return `fewer than half of the members cross it by ${h.last_year}`;
+  if (t.median_crossing === 'fewer-than-half-cross') return `fewer than half of the members cross it by ${h.last_window_year}`;
   return String(t.median_crossing_year);
 }
 

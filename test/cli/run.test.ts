@@ -99,13 +99,13 @@ describe('warmcast run thresholds and the baseline', () => {
     expect(io.out).not.toContain('global warming levels');
   });
 
-  it('run says "not crossed by END" (the README\'s wording) for a threshold the run never crosses', async () => {
+  it('run says "not crossed by" the last year a 20-year mean of the run stands for, for a threshold the run never crosses', async () => {
     const io = captureIo();
     expect(await main(['run', 'swift', '--no-chart'], io)).toBe(0);
-    expect(io.out).toMatch(/^  2 K: not crossed by 2150 \(its last 20-year mean, 2131-2150, is not above it; a crossing after 2140 could not be seen yet\)$/m);
+    expect(io.out).toMatch(/^  2 K: not crossed by 2140 \(the run ends in 2150, so its last 20-year mean, 2131-2150, stands for 2140\)$/m);
     const other = captureIo();
     expect(await main(['run', 'swift', '--baseline', '1995-2014', '--no-chart'], other)).toBe(0);
-    expect(other.out).toMatch(/^  2 K above the 1995-2014 mean: not crossed by 2150 \(/m);
+    expect(other.out).toMatch(/^  2 K above the 1995-2014 mean: not crossed by 2140 \(/m);
   });
 });
 

@@ -16,7 +16,7 @@ describe('comparisonHeadlines', () => {
     // steady passes 1.5 K at 2035 and 2 K at 2060 (linear trend; see crossingPeriod).
     expect(comparisonHeadlines(c)).toEqual([
       'steady: peak 2.80 K in 2100 (still rising); reaches 1.5 K in 2035 and 2 K in 2060; 2.80 K in 2100.',
-      'swift: peak 1.45 K in 2100 (still rising); 1.5 K and 2 K not crossed by 2100; 1.45 K in 2100.',
+      'swift: peak 1.45 K in 2100 (still rising); 1.5 K and 2 K not crossed by 2090; 1.45 K in 2100.',
     ]);
   });
 
@@ -24,10 +24,10 @@ describe('comparisonHeadlines', () => {
     // single: 1 + 0.0082 (y - 2000) K; the window s..s+19 has mean 1 + 0.0082 (s + 9.5 - 2000), above 1.5 K first for s = 2052
     // (1.504 K), labelled 2061; the last window's mean, 1.742 K, stays below 2 K (analytic).
     expect(comparisonHeadlines(oddsComparison())).toEqual([
-      'single: peak 1.82 K in 2100 (still rising); reaches 1.5 K in 2061; 2 K not crossed by 2100; 1.41 K in 2050.',
+      'single: peak 1.82 K in 2100 (still rising); reaches 1.5 K in 2061; 2 K not crossed by 2090; 1.41 K in 2050.',
       "ensemble: members' median peak 1.95 K [1.52 to 2.61] in 2088 (40 % still rising in 2100); 1.5 K: probability of crossing 62 % by 2050, " +
-        'n/a by 2100 (the run ends before its 20-year window; 97 % by 2090), median crossing year 2046; 2 K: probability of crossing 30 % by 2050, ' +
-        'n/a by 2100 (the run ends before its 20-year window; 45 % by 2090), fewer than half of the members cross it by 2100; median 1.41 K in 2050.',
+        'by 2100 n/a (the run ends in 2100; by 2090, its last 20-year mean: 97 %), median crossing year 2046; 2 K: probability of crossing 30 % by 2050, ' +
+        'by 2100 n/a (the run ends in 2100; by 2090, its last 20-year mean: 45 %), fewer than half of the members cross it by 2090; median 1.41 K in 2050.',
     ]);
   });
 
@@ -39,7 +39,7 @@ describe('comparisonHeadlines', () => {
 
   it('comparisonHeadlines names each level with the baseline when it is not 1850-1900', () => {
     expect(comparisonHeadlines(oddsComparison(), '1995-2014')[0]).toBe(
-      'single: peak 1.82 K in 2100 (still rising); reaches 1.5 K above the 1995-2014 mean in 2061; 2 K above the 1995-2014 mean not crossed by 2100; 1.41 K in 2050.',
+      'single: peak 1.82 K in 2100 (still rising); reaches 1.5 K above the 1995-2014 mean in 2061; 2 K above the 1995-2014 mean not crossed by 2090; 1.41 K in 2050.',
     );
   });
 });

@@ -53,7 +53,7 @@ describe('comparisonTables', () => {
     expect(t.rows[0][7]).toBe('n/a (concentration-driven)');
   });
 
-  it('comparisonTables writes "not crossed by END", "or earlier" and "still rising" where they apply', () => {
+  it('comparisonTables writes "not crossed by" the last year the data can show, "or earlier" and "still rising" where they apply', () => {
     const years = Float64Array.from({ length: 41 }, (_, i) => 2020 + i);
     const cc = comparePathways(
       [
@@ -63,8 +63,9 @@ describe('comparisonTables', () => {
       { milestoneYears: [2030] },
     );
     const rows = comparisonTables(cc).summary.rows;
-    expect(rows[0].slice(2, 5)).toEqual(['2020', '2029 or earlier', 'not crossed by 2060']);
-    expect(rows[1].slice(2, 5)).toEqual(['2060 (still rising)', 'not crossed by 2060', 'not crossed by 2060']);
+    // Data to 2060: the last 20-year period, 2041-2060, stands for 2050, the last crossing year that can be seen.
+    expect(rows[0].slice(2, 5)).toEqual(['2020', '2029 or earlier', 'not crossed by 2050']);
+    expect(rows[1].slice(2, 5)).toEqual(['2060 (still rising)', 'not crossed by 2050', 'not crossed by 2050']);
     expect(rows[1][6]).toBe('n/a'); // 2100 lies beyond the data
   });
 
@@ -72,8 +73,8 @@ describe('comparisonTables', () => {
     const co = oddsComparison();
     const t = comparisonTables(co);
     expect(t.summary.rows.map((r) => r.slice(3, 5))).toEqual([
-      ['2061', 'not crossed by 2100'],
-      ['2046', 'fewer than half by 2100'],
+      ['2061', 'not crossed by 2090'],
+      ['2046', 'fewer than half by 2090'],
     ]);
     // The ensemble's peak cells are the members' own (median [5-95 %], median year, share still rising); the single run's its line's.
     expect(t.summary.rows.map((r) => r.slice(1, 3))).toEqual([

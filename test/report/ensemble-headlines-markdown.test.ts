@@ -13,7 +13,7 @@ describe('ensembleHeadlinesMarkdown', () => {
       ['1.5 K', '81 %', '97 %', '2031', '0 %'],
       ['0.05 K', '100 %', '100 %', '1915', '30 %'],
       ['0.001 K', '100 %', '100 %', 'already above at the start (the first 20-year mean, 1750-1769)', '60 %'],
-      ['3 K', '<1 %', 'n/a (by 2140: 4 %)', 'fewer than half of the members cross it by 2150', '0 %'],
+      ['3 K', '<1 %', 'n/a (by 2140: 4 %)', 'fewer than half of the members cross it by 2140', '0 %'],
     ]);
     expect(peak.header).toEqual(['', '5 %', '17 %', '50 %', '83 %', '95 %']);
     // Peak years are percentiles of whole years, shown rounded.

@@ -10,7 +10,7 @@ describe('ensembleHeadlineLines', () => {
       '  1.5 K (20-year mean): probability of crossing by 2050 81 %, by 2100 97 %; median crossing year 2031',
       '  0.05 K (20-year mean): probability of crossing by 2050 100 %, by 2100 100 %; median crossing year 1915; 30 % of members already above it at the start (1750-1769)',
       '  0.001 K (20-year mean): probability of crossing by 2050 100 %, by 2100 100 %; median crossing: already above at the start (the first 20-year mean, 1750-1769)',
-      '  3 K (20-year mean): probability of crossing by 2050 <1 %, by 2100 n/a (the run ends in 2150; by 2140, its last 20-year mean: 4 %); fewer than half of the members cross it by 2150',
+      '  3 K (20-year mean): probability of crossing by 2050 <1 %, by 2100 n/a (the run ends in 2150; by 2140, its last 20-year mean: 4 %); fewer than half of the members cross it by 2140',
     ]);
   });
 
