@@ -157,14 +157,14 @@ export function compareCommand(io: CliIo): Command {
             ...(opts.members !== undefined ? { seed: opts.seed } : {}),
             // Beside the long CSV, which holds only annual series: peaks, crossings and their odds.
             sidecar: { comparison: comparisonSummary(c) },
-            caution: standardCautions(comparisonUncertainty(c)).join(' '),
+            caution: standardCautions(comparisonUncertainty(c, 'text')).join(' '),
           },
         );
         announceWritten(written, io);
       }
       const write = opts.out === '-' ? io.stderr : io.stdout;
       write(comparisonText(c, { color: opts.out === '-' ? io.stderrIsTTY : io.stdoutIsTTY, fromYear, baseline, noChart: !opts.chart }));
-      write(notesAndCautions(notes, standardCautions(comparisonUncertainty(c, 'terminal')), opts.out === '-' ? undefined : io.stdoutColumns));
+      write(notesAndCautions(notes, standardCautions(comparisonUncertainty(c, 'text')), opts.out === '-' ? undefined : io.stdoutColumns));
     });
   return cmd;
 }

@@ -116,7 +116,7 @@ export function describeSampling(s: EnsembleSampling, carbon = false): string[] 
     `sampled 2xCO2 ERF multiplier: ${five(s.forcing2xScale, '')}`,
     `sampled aerosol ERF multiplier: ${five(s.aerosolScale, '')}`,
     ...(carbon ? [`sampled carbon-cycle pre-industrial iIRF100 multiplier: ${five(s.irf100Scale, '')}`] : []),
-    `ECS-TCR normal-score correlation the draws aim at: ${s.ecsTcrCorrelation} (the members' own Pearson correlation is in the headline figures)`,
+    `ECS-TCR normal-score correlation the draws aim at: ${s.ecsTcrCorrelation}`,
     `fixed for every member: upper heat capacity ${s.upperHeatCapacity}, deep heat capacity ${s.deepHeatCapacity} W yr m-2 K-1, deep efficacy ${s.deepEfficacy}; gamma solved per member from its TCR`,
   ];
 }

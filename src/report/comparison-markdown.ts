@@ -40,7 +40,7 @@ export function comparisonMarkdown(c: Comparison, options: ComparisonMarkdownOpt
     ...(tables.odds ? [markdownTable(tables.odds)] : []),
     '## Cautions',
     '',
-    ...standardCautions(options.uncertainty ?? comparisonUncertainty(c)).map((l) => `- ${l}`),
+    ...standardCautions(options.uncertainty ?? comparisonUncertainty(c, 'text')).map((l) => `- ${l}`),
     '',
     '## Provenance',
     '',

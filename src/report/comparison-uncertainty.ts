@@ -6,21 +6,26 @@ import type { Comparison } from '../metrics/compare-pathways.js';
  * range is shown).
  *
  * @param c the comparison
- * @param where `terminal` for text without shaded charts; default `files` (whose charts shade the ranges)
+ * @param where `with-charts` (default) for a report whose charts shade the ranges (HTML), `text` for
+ *   one without charts (the terminal, Markdown, the provenance of every file)
  * @example
  * comparisonUncertainty(c) // 'Ranges (shaded; 5-95 % in brackets) are shown for delayed: ...'
  */
-export function comparisonUncertainty(c: Comparison, where: 'files' | 'terminal' = 'files'): string | undefined {
+export function comparisonUncertainty(c: Comparison, where: 'with-charts' | 'text' = 'with-charts'): string | undefined {
   const withRange = c.pathways.filter((p) => p.range).map((p) => p.label);
   if (withRange.length === 0) return undefined;
   const without = c.pathways.filter((p) => !p.range).map((p) => p.label);
   return (
     `Ranges are shown for ${withRange.join(', ')}: ` +
     'the 17-83 % (likely) range in parentheses and the 5-95 % (very likely) range in brackets' +
-    (where === 'terminal' ? ', ' : ', shaded in the charts (the likely range darker), ') +
+    (where === 'text' ? ', ' : ', shaded in the charts (the likely range darker), ') +
     'across the sampled model parameters. They cover parameter uncertainty only; uncertainty in the pathway ' +
     'itself and in the model structure comes on top. The parameters are drawn to the IPCC AR6 assessed ranges and are not ' +
     'constrained by observed warming, so the ranges show what those assessed ranges imply rather than a projection narrowed by the historical record.' +
+    (c.pathways.some((p) => p.range && p.co2Gtco2)
+      ? ' Each member of an emission-driven pathway also runs its own CO2 cycle, responding to its own warming, with a sampled multiplier on the ' +
+        'pre-industrial iIRF100 of the carbon-cycle feedback (the Joos et al. 2013 spread); CH4 and N2O follow one central run.'
+      : '') +
     (without.length > 0 ? ` ${without.join(', ')}: single central estimates, no range.` : '')
   );
 }

@@ -11,7 +11,7 @@ describe('comparisonMarkdown', () => {
   it('comparisonMarkdown holds both tables, the cautions with the ensemble sentence, and the provenance with each input hash', () => {
     expect(md.startsWith('# Pathway comparison\n')).toBe(true);
     expect(readGfmTables(md).map((t) => t.rows.length)).toEqual([c.milestoneYears.length, c.pathways.length]);
-    expect(md).toContain(`- ${comparisonUncertainty(c)}`);
+    expect(md).toContain(`- ${comparisonUncertainty(c, 'text')}`);
     expect(md).toContain('defer to the official assessments');
     expect(md).toContain(`- inputs: path /data/steady.csv, sha256 ${'0f'.repeat(32)}`);
     expect(md).toContain('- seed: 42');
