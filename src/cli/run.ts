@@ -7,6 +7,7 @@ import type { CliIo } from './cli-io.js';
 import { addModelOptions, baselineOption, type ModelOptions, numberOption, pathwayArg, resolveModelParams, yearOption } from './options.js';
 import { announceWritten, clipProjection, pathwayInputs, projectionTable, tableRenderers, writeOutput } from './output.js';
 import { printProjectionSummary } from './summary.js';
+import { runHeadlines, runHeadlinesMarkdown } from './run-headlines.js';
 
 /** The pathway `warmcast run` uses when none is given. */
 export const DEFAULT_PATHWAY = 'delayed';
@@ -67,9 +68,12 @@ export function runCommand(io: CliIo): Command {
       }
       const report = opts.out === '-' ? io.stderr : io.stdout;
       if (opts.out !== undefined) {
-        const { projection, files } = projections[0];
+        const { projection, whole, files } = projections[0];
         const inputs = [...files, ...(paramsFile ? [paramsFile] : [])];
-        const written = writeOutput(opts.out, tableRenderers(projectionTable(projection)), {
+        const headlines = runHeadlines(projection, whole);
+        const renderers = tableRenderers(projectionTable(projection), { json: { headlines }, markdownBefore: runHeadlinesMarkdown(headlines) });
+        const written = writeOutput(opts.out, renderers, {
+          sidecar: { headlines },
           inputs,
           params,
           baseline: opts.baseline,

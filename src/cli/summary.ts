@@ -1,11 +1,9 @@
-import { crossingPeriod, peak, valueAtYear } from '../metrics/index.js';
+import { valueAtYear } from '../metrics/index.js';
 import type { Projection } from '../projection/index.js';
-import { isAr6Baseline, plainTable, terminalChart, thresholdName } from '../report/index.js';
+import { plainTable, terminalChart } from '../report/index.js';
 import { standardCautions } from '../report/standard-cautions.js';
 import { notesAndCautions } from './notes-and-cautions.js';
-
-/** Years whose warming the summary always states, where the run covers them. */
-const HEADLINE_YEARS = [2030, 2050, 2100];
+import { runHeadlineLines, runHeadlines } from './run-headlines.js';
 
 /** Columns of the short yearly table the summary prints. */
 const TABLE_COLUMNS = [
@@ -70,26 +68,8 @@ export function printProjectionSummary(
   );
   lines.push('');
 
-  const headline = HEADLINE_YEARS.filter((y) => y >= first && y <= last).map((y) => `${y}: ${valueAtYear(years, w, y).toFixed(2)} K`);
-  if (headline.length > 0) lines.push(`  warming in ${headline.join(', ')}`);
   const whole = out.whole ?? p;
-  const wholeLast = whole.years[whole.years.length - 1];
-  const clipped = whole.years[0] !== first || wholeLast !== last;
-  const top = peak(years, w);
-  const rising = top.year === last ? (last === wholeLast ? ' (the last year: still rising)' : ' (the last year shown: still rising)') : '';
-  const atPeak = `${top.value.toFixed(2)} K in ${top.year}${rising}`;
-  lines.push(clipped ? `  highest warming in ${first}-${last}: ${atPeak}` : `  peak warming ${atPeak}`);
-  // On another baseline the threshold is named with it, and the rule is not called AR6's levels.
-  const rule = isAr6Baseline(p.baseline) ? 'the IPCC AR6 20-year-mean rule' : '20-year-mean rule';
-  for (const level of [1.5, 2]) {
-    const c = crossingPeriod(whole.years, whole.columns.warming_k, level);
-    const name = thresholdName(level, p.baseline);
-    lines.push(
-      c === undefined
-        ? `  ${name}: not crossed by ${wholeLast - 10} (the run ends in ${wholeLast}, so its last 20-year mean, ${wholeLast - 19}-${wholeLast}, stands for ${wholeLast - 10})`
-        : `  ${name}: first reached in ${c.year}${c.atStart ? ' or earlier' : ''} (mean of ${c.firstYear}-${c.lastYear} is ${c.mean.toFixed(2)} K; ${rule})`,
-    );
-  }
+  lines.push(...runHeadlineLines(runHeadlines(p, whole), whole.years[0]));
   out.write(lines.join('\n') + '\n');
 
   if (out.chart) {

@@ -316,6 +316,27 @@ describe('warmcast run --from/--to', () => {
   });
 });
 
+describe('run\'s headline figures in its files', () => {
+  it('run --out .json, .csv (+ .meta.json) and .md carry the headlines the terminal prints: warming at 2030/2050/2100, the peak, the crossings', async () => {
+    const dir = tmp();
+    const io = captureIo();
+    expect(await main(['run', 'steady', '--out', join(dir, 'r.json'), '--no-chart'], io)).toBe(0);
+    const h = JSON.parse(readFileSync(join(dir, 'r.json'), 'utf8')).headlines;
+    expect(Object.keys(h.warming_k)).toEqual(['2030', '2050', '2100']);
+    expect(io.out).toContain(`  warming in 2030: ${h.warming_k['2030'].toFixed(2)} K`);
+    expect(io.out).toContain(`  1.5 K: first reached in ${h.thresholds[0].first_reached} `);
+    expect(io.out).toContain(`  peak warming ${h.peak.warming_k.toFixed(2)} K in ${h.peak.year}`);
+    expect(await main(['run', 'steady', '--out', join(dir, 'r.csv'), '--no-chart'], captureIo())).toBe(0);
+    expect(JSON.parse(readFileSync(join(dir, 'r.meta.json'), 'utf8')).headlines).toEqual(h);
+    expect(readFileSync(join(dir, 'r.csv'), 'utf8').split('\n')[0]).toMatch(/^year,warming_k,/);
+    expect(await main(['run', 'steady', '--out', join(dir, 'r.md'), '--no-chart'], captureIo())).toBe(0);
+    const md = readFileSync(join(dir, 'r.md'), 'utf8');
+    expect(md).toContain('**Headlines: warming relative to the 1850-1900 mean**');
+    expect(md).toContain(`| 1.5 K first reached`);
+    expect(md).toContain(`${h.thresholds[0].first_reached} |`);
+  });
+});
+
 describe('the splice line of run\'s heading', () => {
   it('run FILE starting in 2030 says which years come from the history and which are bridged (the history ends in 2024)', async () => {
     const dir = tmp();
