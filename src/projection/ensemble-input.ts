@@ -51,12 +51,12 @@ export function ensembleInput(pathway: Pathway, params: ClimateParams, options: 
       notes.push(
         'emission-driven pathway: each member runs its own carbon cycle (Joos et al. 2013 boxes with the Millar et al. 2017 uptake feedback, stepped a year at a time with the feedback frozen over each year) ' +
           'driven by its own warming and a sampled multiplier on the pre-industrial iIRF100 (median 1, 5-95 % 0.77-1.23, from the multi-model spread of Joos et al. 2013); ' +
-          `CH4 and N2O concentrations come from one run with the central parameters (ECS ${params.ecsK} K, TCR ${params.tcrK.toFixed(2)} K), as they have no climate feedback in the model`,
+          `CH4 and N2O concentrations come from one run with the central parameters (ECS ${params.ecsK.toFixed(2)} K, TCR ${params.tcrK.toFixed(2)} K), as they have no climate feedback in the model`,
       );
     } else {
       notes.push(
         'CH4 and N2O emissions: concentrations come from one run with the central parameters ' +
-          `(ECS ${params.ecsK} K, TCR ${params.tcrK.toFixed(2)} K); they have no climate feedback in the model, so the members share them`,
+          `(ECS ${params.ecsK.toFixed(2)} K, TCR ${params.tcrK.toFixed(2)} K); they have no climate feedback in the model, so the members share them`,
       );
     }
   }
