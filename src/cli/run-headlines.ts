@@ -15,8 +15,8 @@ export interface RunHeadlines {
   baseline: string;
   /** Warming at 2030, 2050 and 2100, where the reported years cover them, K. */
   warming_k: Record<string, number>;
-  /** The highest annual warming in the reported years (`from_year`-`to_year`) and its year. */
-  peak: { from_year: number; to_year: number; warming_k: number; year: number; still_rising: boolean; run_ends: number };
+  /** The highest annual warming in the reported years (`from_year`-`to_year`) and its year; the whole run spans `run_starts`-`run_ends`. */
+  peak: { from_year: number; to_year: number; warming_k: number; year: number; still_rising: boolean; run_starts: number; run_ends: number };
   /** Per level: the first 20-year period above it in the whole run (the AR6 rule), or null with the last year the run can show. */
   thresholds: {
     threshold_k: number;
@@ -44,7 +44,7 @@ export function runHeadlines(shown: Projection, whole: Projection = shown): RunH
   return {
     baseline: `${shown.baseline[0]}-${shown.baseline[1]}`,
     warming_k: Object.fromEntries(HEADLINE_YEARS.filter((y) => y >= first && y <= last).map((y) => [String(y), valueAtYear(years, w, y)])),
-    peak: { from_year: first, to_year: last, warming_k: top.value, year: top.year, still_rising: top.year === last, run_ends: wholeLast },
+    peak: { from_year: first, to_year: last, warming_k: top.value, year: top.year, still_rising: top.year === last, run_starts: whole.years[0], run_ends: wholeLast },
     thresholds: LEVELS_K.map((level) => {
       const c = crossingPeriod(whole.years, whole.columns.warming_k, level);
       return {
@@ -63,12 +63,12 @@ export function runHeadlines(shown: Projection, whole: Projection = shown): RunH
  * the peak (or the highest warming of the reported years when `--from`/`--to` clipped them), and per
  * level its first 20-year period above it or the last year the run can show.
  */
-export function runHeadlineLines(h: RunHeadlines, wholeFirst: number): string[] {
+export function runHeadlineLines(h: RunHeadlines): string[] {
   const lines: string[] = [];
   const at = Object.entries(h.warming_k).map(([y, v]) => `${y}: ${v.toFixed(2)} K`);
   if (at.length > 0) lines.push(`  warming in ${at.join(', ')}`);
   const p = h.peak;
-  const clipped = wholeFirst !== p.from_year || p.run_ends !== p.to_year;
+  const clipped = p.run_starts !== p.from_year || p.run_ends !== p.to_year;
   const rising = p.still_rising ? (p.to_year === p.run_ends ? ' (the last year: still rising)' : ' (the last year shown: still rising)') : '';
   const atPeak = `${p.warming_k.toFixed(2)} K in ${p.year}${rising}`;
   lines.push(clipped ? `  highest warming in ${p.from_year}-${p.to_year}: ${atPeak}` : `  peak warming ${atPeak}`);

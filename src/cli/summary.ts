@@ -69,7 +69,7 @@ export function printProjectionSummary(
   lines.push('');
 
   const whole = out.whole ?? p;
-  lines.push(...runHeadlineLines(runHeadlines(p, whole), whole.years[0]));
+  lines.push(...runHeadlineLines(runHeadlines(p, whole)));
   out.write(lines.join('\n') + '\n');
 
   if (out.chart) {

@@ -73,3 +73,16 @@ export function crossingPeriod(years: Float64Array, values: ArrayLike<number>, t
 export function crossingYear(years: Float64Array, values: ArrayLike<number>, threshold: number, window = 20): number | undefined {
   return crossingPeriod(years, values, threshold, window)?.year;
 }
+
+/**
+ * The last year a crossing can be labelled with in data ending in `lastYear`: the middle year (as
+ * {@link crossingPeriod} labels it) of the last complete `window`-year period. A level first
+ * exceeded later cannot be seen yet; with 20-year periods, data to 2100 show crossings up to 2090.
+ *
+ * @param lastYear last year of the data
+ * @param window period length in years, default 20
+ * @example lastCrossingYear(2100) // 2090
+ */
+export function lastCrossingYear(lastYear: number, window = 20): number {
+  return lastYear - (window - 1 - Math.floor((window - 1) / 2));
+}

@@ -1,6 +1,6 @@
 export { comparePathways } from './compare-pathways.js';
 export type { Comparison, ComparisonOptions, CrossingOdds, MemberPercentiles, MembersPeak, MilestoneValue, PathwayComparison, PathwayWarming, WarmingRange } from './compare-pathways.js';
-export { crossingPeriod, crossingYear } from './crossing-year.js';
+export { crossingPeriod, crossingYear, lastCrossingYear } from './crossing-year.js';
 export type { CrossingPeriod } from './crossing-year.js';
 export { cumulativeToNetZero } from './cumulative-to-net-zero.js';
 export type { NetZero } from './cumulative-to-net-zero.js';

@@ -1,4 +1,5 @@
 import type { Comparison, MembersPeak, PathwayComparison } from '../metrics/compare-pathways.js';
+import { lastCrossingYear } from '../metrics/crossing-year.js';
 import { kelvin, percent } from './format-numbers.js';
 import { thresholdName } from './threshold-name.js';
 
@@ -21,15 +22,15 @@ import { thresholdName } from './threshold-name.js';
 export function comparisonHeadlines(c: Comparison, baseline = '1850-1900'): string[] {
   const [from, to] = baseline.split('-').map(Number);
   const level = (thresholdK: number) => thresholdName(+thresholdK.toPrecision(6), [from, to]);
-  return c.pathways.map((p) => `${p.label}: ${(p.crossings.some((x) => x.odds) ? ensembleParts(p, level) : singleParts(p, level)).join('; ')}.`);
+  return c.pathways.map((p) => `${p.label}: ${(p.crossings.some((x) => x.odds) ? ensembleParts(p, level) : singleParts(p, level, c.windowYears)).join('; ')}.`);
 }
 
-function singleParts(p: PathwayComparison, level: (thresholdK: number) => string): string[] {
+function singleParts(p: PathwayComparison, level: (thresholdK: number) => string, windowYears: number): string[] {
   const parts = [`peak ${kelvin(p.peak.value)} K in ${p.peak.year}${p.stillRising ? ' (still rising)' : ''}`];
   const reached = p.crossings.filter((x) => x.period).map((x) => `${level(x.thresholdK)} in ${x.period!.atStart ? `${x.period!.year} or earlier` : x.period!.year}`);
   const missed = p.crossings.filter((x) => !x.period).map((x) => level(x.thresholdK));
   if (reached.length > 0) parts.push(`reaches ${series(reached)}`);
-  if (missed.length > 0) parts.push(`${series(missed)} not crossed by ${lastSeen(p)}`);
+  if (missed.length > 0) parts.push(`${series(missed)} not crossed by ${lastCrossingYear(p.lastYear, windowYears)}`);
   const last = p.keyYears.filter((k) => Number.isFinite(k.warmingK)).at(-1);
   if (last) parts.push(`${kelvin(last.warmingK)} K in ${last.year}`);
   return parts;
@@ -62,12 +63,3 @@ function membersPeakText(peak: MembersPeak, lastYear: number): string {
 function series(items: string[]): string {
   return items.length < 2 ? items.join('') : `${items.slice(0, -1).join(', ')} and ${items[items.length - 1]}`;
 }
-
-/**
- * The last year whose 20-year window a pathway's data cover: a crossing labelled later (the window's
- * middle year) cannot be seen yet.
- */
-export function lastSeen(p: { lastYear: number }, windowYears = 20): number {
-  return p.lastYear - Math.ceil((windowYears - 1) / 2);
-}
-

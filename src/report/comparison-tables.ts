@@ -1,5 +1,5 @@
 import type { Comparison, CrossingOdds, MembersPeak, PathwayComparison } from '../metrics/compare-pathways.js';
-import { lastSeen } from './comparison-headlines.js';
+import { lastCrossingYear } from '../metrics/crossing-year.js';
 import { kelvin, MISSING, percent, signedKelvin } from './format-numbers.js';
 import type { TextTable } from './text-table.js';
 
@@ -60,7 +60,7 @@ export function comparisonTables(c: Comparison, options: ComparisonTableOptions 
     const row = p.membersPeak ? [p.label, ...membersPeakCells(p.membersPeak)] : [p.label, kelvin(p.peak.value), Number.isFinite(p.peak.year) ? `${p.peak.year}${p.stillRising ? ' (still rising)' : ''}` : MISSING];
     for (const { period, odds } of p.crossings) {
       if (odds) row.push(odds.medianYear === null ? `fewer than half by ${odds.lastWindowYear}` : String(odds.medianYear));
-      else row.push(period === undefined ? `not crossed by ${lastSeen(p, c.windowYears)}` : period.atStart ? `${period.year} or earlier` : String(period.year));
+      else row.push(period === undefined ? `not crossed by ${lastCrossingYear(p.lastYear, c.windowYears)}` : period.atStart ? `${period.year} or earlier` : String(period.year));
     }
     for (const k of p.keyYears) row.push(kelvin(k.warmingK));
     if (netZero) {

@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { crossingPeriod, crossingYear } from '../../src/metrics/crossing-year.js';
+import { crossingPeriod, crossingYear, lastCrossingYear } from '../../src/metrics/crossing-year.js';
 
 const span = (from: number, to: number) => Float64Array.from({ length: to - from + 1 }, (_, i) => from + i);
 
@@ -58,3 +58,16 @@ describe('crossingYear', () => {
     );
   });
 });
+
+describe('lastCrossingYear', () => {
+  it('lastCrossingYear is the label crossingPeriod gives the last complete period: 2090 for data to 2100 (20-year periods), also for odd windows', () => {
+    expect(lastCrossingYear(2100)).toBe(2090);
+    for (const window of [20, 21, 5]) {
+      const years = Float64Array.from({ length: 60 }, (_, i) => 2041 + i);
+      // A step above 1 K in the last year only: the first period above 0 K is the last one.
+      const values = years.map((y) => (y === 2100 ? 1 : 0));
+      expect(crossingPeriod(years, values, 0, window)!.year, `window ${window}`).toBe(lastCrossingYear(2100, window));
+    }
+  });
+});
+
