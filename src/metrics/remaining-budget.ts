@@ -13,10 +13,27 @@ export interface BudgetMember {
    * Runs the member with net CO2 emissions `futureCo2Gtco2` (calendar-year totals, Gt CO2, one per
    * year from the budget's first year to the run's last) and returns its warming, K above the
    * baseline, one value per year of the whole run (`years` of {@link RemainingBudgetOptions}).
-   * With `co2Only`, also the part of that warming due to CO2 alone (for the zero-emissions
-   * commitment); members that cannot split it return undefined there.
    */
-  warming(futureCo2Gtco2: Float64Array): { warmingK: Float64Array; co2WarmingK?: Float64Array };
+  warming(futureCo2Gtco2: Float64Array): Float64Array;
+}
+
+/**
+ * A one-parameter family of future net CO2 paths, cumulative CO2 rising with the parameter x (the
+ * years of a straight-line decline, or the stretch of a user's own shape).
+ */
+export interface Co2PathFamily {
+  /** Annual totals, Gt CO2, for years fromYear.. (length years). */
+  path(x: number, length: number): Float64Array;
+  /** Cumulative net CO2 to net zero from 1 January of fromYear, Gt CO2. */
+  cumulativeGtco2(x: number): number;
+  /** Calendar year in which net CO2 reaches zero. */
+  netZeroYear(x: number): number;
+  /** Smallest x searched (the earliest net zero the family has). */
+  min: number;
+  /** Largest x the run lets us see a peak after (the caller's bound, clamped to the run). */
+  max: number;
+  /** Bisection stops when x is known to this (default 0.01). */
+  tolerance: number;
 }
 
 /** Options of {@link remainingBudget}. */
@@ -25,27 +42,17 @@ export interface RemainingBudgetOptions {
   years: Float64Array;
   /** First calendar year counted in the budget (counted from 1 January of it). */
   fromYear: number;
-  /** Net CO2 emission rate at the start of `fromYear`, Gt CO2 yr-1 (the straight line starts here); > 0. */
-  currentRateGtco2: number;
   /** Warming limits, K. */
   limits: number[];
   /** Chances of staying at or below each limit, in (0, 1). */
   chances: number[];
-  /**
-   * Longest decline searched, years: a member that still stays below the limit when net zero comes
-   * this late has a budget of at least currentRate x maxDeclineYears / 2. Default: as long as the run
-   * allows with a 20-year window and 50 years after net zero to see the peak.
-   */
-  maxDeclineYears?: number;
-  /** Bisection stops when the net-zero time is known to this many years (default 0.01). */
-  toleranceYears?: number;
 }
 
 /** What one member allows for one limit. */
 export interface MemberBudget {
-  /** Largest cumulative net CO2 from 1 January of fromYear along the straight-line family, Gt CO2. */
-  budgetGtco2: number;
-  /** `exceeded`: even an immediate stop peaks above the limit; `beyond`: the longest decline searched stays below; else `found`. */
+  /** Largest family parameter x whose peak stays at or below the limit (-Infinity: none; max: at least max). */
+  x: number;
+  /** `exceeded`: even the smallest x peaks above the limit; `beyond`: the largest x stays below; else `found`. */
   status: 'found' | 'exceeded' | 'beyond';
 }
 
@@ -54,26 +61,21 @@ export interface BudgetRow {
   limitK: number;
   /** Chance of keeping peak warming at or below the limit, in (0, 1). */
   chance: number;
-  /**
-   * Remaining budget, Gt CO2 from 1 January of fromYear: the (1 - chance) quantile of the members'
-   * budgets. NaN when the limit cannot be held with that chance (`met` false).
-   */
+  /** Cumulative net CO2 to net zero from 1 January of fromYear, Gt CO2; NaN when `met` is false. */
   budgetGtco2: number;
-  /** Calendar year in which the straight-line decline from the current rate that spends the budget reaches zero. */
+  /** Calendar year net CO2 reaches zero along the family member that spends the budget; NaN when not met. */
   netZeroYear: number;
-  /** False when more than 1 - chance of the members exceed the limit even if net CO2 stopped at once. */
+  /** False when more than 1 - chance of the members exceed the limit even with the family's earliest net zero. */
   met: boolean;
-  /** True when the budget is a lower bound: enough members stay below the limit with the longest decline searched. */
+  /** True when the figures are lower bounds: enough members stay below the limit with the latest net zero searched. */
   atLeast: boolean;
 }
 
 /** Result of {@link remainingBudget}. */
 export interface RemainingBudget {
   rows: BudgetRow[];
-  /** Per limit (in the order given), each member's budget. */
+  /** Per limit (in the order given), each member's result. */
   members: MemberBudget[][];
-  /** Longest decline searched, years. */
-  maxDeclineYears: number;
 }
 
 /**
@@ -98,10 +100,70 @@ export function straightLineDecline(rate: number, declineYears: number, length: 
 }
 
 /**
+ * The straight-line family: net CO2 from `rate` on 1 January of `fromYear` down to zero after x
+ * years, then zero; cumulative CO2 rate x / 2.
+ * @param maxYears the longest decline searched
+ */
+export function straightLineFamily(rate: number, fromYear: number, maxYears: number): Co2PathFamily {
+  if (!(rate > 0)) throw new ConfigError(`the current net CO2 rate must be positive to fall to net zero, got ${rate} Gt CO2 per year`, 'rate');
+  return {
+    path: (x, length) => straightLineDecline(rate, x, length),
+    cumulativeGtco2: (x) => (rate * x) / 2,
+    netZeroYear: (x) => Math.floor(fromYear + x),
+    min: 0,
+    max: maxYears,
+    tolerance: 0.01,
+  };
+}
+
+/**
+ * A user's own net CO2 shape stretched or compressed in time by a factor x: the rate in year t after
+ * 1 January of fromYear is the shape's rate at t / x (each year of the shape a constant rate, its
+ * annual total), so cumulative CO2 to net zero and the time to net zero both scale with x.
+ *
+ * @param shape annual totals from fromYear on, Gt CO2; must reach net zero (a value <= 0)
+ * @param fromYear first year of `shape`
+ * @param xRange smallest and largest stretch searched
+ * @throws ConfigError when the shape never reaches net zero or starts at or below it
+ */
+export function stretchedShapeFamily(shape: ArrayLike<number>, fromYear: number, xRange: [number, number]): Co2PathFamily {
+  let zero = -1;
+  for (let i = 0; i < shape.length; i++) if (shape[i] <= 0) { zero = i; break; }
+  if (zero < 1) {
+    throw new ConfigError(
+      zero === 0 ? `the pathway's net CO2 is already at or below zero in ${fromYear}: there is no decline to stretch` : 'the pathway\'s net CO2 never reaches zero: --shape needs a pathway that reaches net zero',
+      'shape',
+    );
+  }
+  let total = 0;
+  for (let i = 0; i < zero; i++) total += shape[i];
+  const rateAt = (tau: number) => (tau < shape.length ? shape[Math.floor(tau)] : shape[shape.length - 1]);
+  return {
+    path(x, length) {
+      // Integral of rateAt(t / x) over [i, i + 1] = x times the integral of rateAt over [i / x, (i + 1) / x].
+      const out = new Float64Array(length);
+      for (let i = 0; i < length; i++) {
+        const a = i / x;
+        const b = (i + 1) / x;
+        let sum = 0;
+        for (let k = Math.floor(a); k < b; k++) sum += rateAt(k) * (Math.min(b, k + 1) - Math.max(a, k));
+        out[i] = x * sum;
+      }
+      return out;
+    },
+    cumulativeGtco2: (x) => x * total,
+    netZeroYear: (x) => Math.floor(fromYear + x * zero),
+    min: xRange[0],
+    max: xRange[1],
+    tolerance: 1e-4,
+  };
+}
+
+/**
  * The highest 20-year mean warming (the IPCC AR6 warming-level convention) over the windows labelled
  * from `fromIndex` on whose years all lie in the run.
  */
-export function peakWindowMean(warmingK: Float64Array, fromIndex: number): number {
+export function peakWindowMean(warmingK: ArrayLike<number>, fromIndex: number): number {
   const means = runningMean(warmingK, WARMING_LEVEL_WINDOW_YEARS);
   let best = -Infinity;
   for (let i = Math.max(0, fromIndex); i < means.length; i++) if (means[i] > best) best = means[i];
@@ -110,81 +172,76 @@ export function peakWindowMean(warmingK: Float64Array, fromIndex: number): numbe
 
 /**
  * Remaining CO2 budgets: for each member, the largest cumulative net CO2 from 1 January of
- * `fromYear` along a family of pathways (net CO2 falling in a straight line from the current rate to
- * net zero, then zero; the members' non-CO2 path fixed) for which the member's peak warming (the
- * highest 20-year mean, AR6 convention) stays at or below the limit; found by bisection on the
- * net-zero time, peak warming rising with it. The budget at chance p is the (1 - p) quantile of the
- * members' budgets (linear between order statistics, Hyndman & Fan 1996 definition 7), so that a
- * share p of the members stays at or below the limit with it.
+ * `fromYear` along a family of pathways (by default net CO2 falling in a straight line from the
+ * current rate to net zero, then zero; the members' non-CO2 path fixed) for which the member's peak
+ * warming (the highest 20-year mean, AR6 convention) stays at or below the limit; found by bisection
+ * on the family's parameter, peak warming rising with it. The budget at chance p is the (1 - p)
+ * quantile of the members' parameters (linear between order statistics, Hyndman & Fan 1996
+ * definition 7), mapped to cumulative CO2, so that a share p of the members stays at or below the
+ * limit with it.
  *
- * @throws ConfigError when the rate is not positive, a chance is not in (0, 1), a limit not positive,
+ * @throws ConfigError when a chance is not in (0, 1), a limit is not positive, there are no members,
  *   or the run is too short to see a peak after fromYear
  * @example
- * // members whose peak is 1.1 K + 0.00045 K per Gt CO2 (TCRE 0.45 K per 1000 Gt CO2):
- * remainingBudget(members, { years, fromYear: 2025, currentRateGtco2: 40, limits: [1.5], chances: [0.5] }).rows[0].budgetGtco2 // ≈ 889
+ * // members whose warming is 1.1 K + 0.00045 K per Gt CO2 (TCRE 0.45 K per 1000 Gt CO2):
+ * remainingBudget(members, straightLineFamily(40, 2025, 200), { years, fromYear: 2025, limits: [1.5], chances: [0.5] }).rows[0].budgetGtco2 // ≈ 889
  */
-export function remainingBudget(members: readonly BudgetMember[], options: RemainingBudgetOptions): RemainingBudget {
-  const { years, fromYear, currentRateGtco2: rate, limits, chances } = options;
-  if (!(rate > 0)) throw new ConfigError(`the current net CO2 rate must be positive to fall to net zero, got ${rate} Gt CO2 per year`, 'rate');
+export function remainingBudget(members: readonly BudgetMember[], family: Co2PathFamily, options: RemainingBudgetOptions): RemainingBudget {
+  const { years, fromYear, limits, chances } = options;
   for (const c of chances) if (!(c > 0 && c < 1)) throw new ConfigError(`a chance must lie between 0 and 1 (or 0 and 100 %), got ${c}`, 'chance');
   for (const l of limits) if (!(l > 0)) throw new ConfigError(`a warming limit must be positive, got ${l} K`, 'limit');
   if (members.length === 0) throw new ConfigError('a budget needs at least one member', 'members');
   const fromIndex = fromYear - years[0];
   const futureLength = years.length - fromIndex;
-  const room = futureLength - WARMING_LEVEL_WINDOW_YEARS - 50;
-  if (fromIndex < 0 || room < 10) {
-    throw new ConfigError(`the run (${years[0]}-${years[years.length - 1]}) must reach at least 80 years past ${fromYear} to see the peak of a budget pathway`, 'from');
+  if (fromIndex < 0 || futureLength < WARMING_LEVEL_WINDOW_YEARS + 10) {
+    throw new ConfigError(`the run (${years[0]}-${years[years.length - 1]}) must reach well past ${fromYear} to see the peak of a budget pathway`, 'from');
   }
-  const maxDecline = Math.min(options.maxDeclineYears ?? room, room);
-  const tolerance = options.toleranceYears ?? 0.01;
 
   const perLimit: MemberBudget[][] = limits.map(() => []);
   for (const member of members) {
-    const peakFor = (d: number) => peakWindowMean(member.warming(straightLineDecline(rate, d, futureLength)).warmingK, fromIndex);
-    const atStop = peakFor(0);
-    const atMax = peakFor(maxDecline);
+    const peakFor = (x: number) => peakWindowMean(member.warming(family.path(x, futureLength)), fromIndex);
+    const atMin = peakFor(family.min);
+    const atMax = peakFor(family.max);
     limits.forEach((limit, li) => {
-      if (atStop > limit) perLimit[li].push({ budgetGtco2: -Infinity, status: 'exceeded' });
-      else if (atMax <= limit) perLimit[li].push({ budgetGtco2: (rate * maxDecline) / 2, status: 'beyond' });
+      if (atMin > limit) perLimit[li].push({ x: -Infinity, status: 'exceeded' });
+      else if (atMax <= limit) perLimit[li].push({ x: family.max, status: 'beyond' });
       else {
-        let lo = 0;
-        let hi = maxDecline;
-        while (hi - lo > tolerance) {
+        let lo = family.min;
+        let hi = family.max;
+        while (hi - lo > family.tolerance) {
           const mid = 0.5 * (lo + hi);
           if (peakFor(mid) <= limit) lo = mid;
           else hi = mid;
         }
-        perLimit[li].push({ budgetGtco2: (rate * lo) / 2, status: 'found' });
+        perLimit[li].push({ x: lo, status: 'found' });
       }
     });
   }
 
   const rows: BudgetRow[] = [];
   limits.forEach((limitK, li) => {
-    const sorted = perLimit[li].map((m) => m.budgetGtco2).sort((a, b) => a - b);
-    const beyondCap = (rate * maxDecline) / 2;
+    const sorted = perLimit[li].map((m) => m.x).sort((a, b) => a - b);
     for (const chance of chances) {
-      const q = budgetQuantile(sorted, 1 - chance);
-      const met = q > -Infinity;
-      const budgetGtco2 = met ? q : NaN;
+      const x = quantileOrMinusInfinity(sorted, 1 - chance);
+      const met = x > -Infinity;
       rows.push({
         limitK,
         chance,
-        budgetGtco2,
-        netZeroYear: met ? Math.floor(fromYear + (2 * budgetGtco2) / rate) : NaN,
+        budgetGtco2: met ? family.cumulativeGtco2(x) : NaN,
+        netZeroYear: met ? family.netZeroYear(x) : NaN,
         met,
-        atLeast: met && budgetGtco2 >= beyondCap,
+        atLeast: met && x >= family.max,
       });
     }
   });
-  return { rows, members: perLimit, maxDeclineYears: maxDecline };
+  return { rows, members: perLimit };
 }
 
 /**
- * The q quantile of sorted budgets (definition 7): -Infinity when either order statistic it rests on
+ * The q quantile of sorted values (definition 7): -Infinity when either order statistic it rests on
  * is -Infinity (too many members exceed the limit at once), else linear between them.
  */
-function budgetQuantile(sorted: number[], q: number): number {
+function quantileOrMinusInfinity(sorted: number[], q: number): number {
   const h = (sorted.length - 1) * q;
   const lo = Math.floor(h);
   const hi = Math.ceil(h);
