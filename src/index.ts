@@ -12,6 +12,6 @@ export { DEFAULT_TOLERANCES } from './numerics/integrate-steps.js';
 export type { OdeTolerances } from './numerics/integrate-steps.js';
 export * from './carbon/index.js';
 export * from './metrics/index.js';
-export { ensembleHeadlines, ensembleTable, mergeShards, runEnsemble, shardFromJson, shardToJson, startEnsembleThreads, summarizeEnsemble, AR6_SAMPLING } from './ensemble/index.js';
-export type { EnsembleHeadlines, EnsembleInput, EnsembleOptions, EnsembleResult, EnsembleSampling, EnsembleThreads } from './ensemble/index.js';
+export { ensembleHeadlines, ensembleTable, mergeShards, runEnsemble, shardFromJson, shardToJson, summarizeEnsemble, AR6_SAMPLING, ar6Members } from './ensemble/index.js';
+export type { EnsembleHeadlines, EnsembleInput, EnsembleOptions, EnsembleResult, EnsembleSampling, MemberParameters, MemberSource } from './ensemble/index.js';
 export { comparisonHtml, comparisonMarkdown, svgChart, terminalChart, htmlReport, standardCautions } from './report/index.js';
