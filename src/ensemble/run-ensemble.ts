@@ -105,7 +105,7 @@ export function rebaseMembersInPlace(warmingK: Float64Array, m: number, from: nu
   const mean = new Float64Array(m);
   for (let k = from; k <= to; k++) for (let r = 0; r < m; r++) mean[r] += warmingK[k * m + r];
   for (let r = 0; r < m; r++) mean[r] /= to - from + 1;
-  for (let i = 0; i < warmingK.length; i++) warmingK[i] -= mean[i % m];
+  for (let k = 0; k * m < warmingK.length; k++) for (let r = 0; r < m; r++) warmingK[k * m + r] -= mean[r];
 }
 
 /**

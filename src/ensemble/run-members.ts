@@ -3,7 +3,7 @@ import { GTC_PER_PPM } from '../carbon/units.js';
 import { emptyTwoBoxSteps, stepTwoBoxInto, twoBoxStepsInto, type TwoBoxSteps } from '../climate/two-box-step.js';
 import { FORCING_AGENTS, ghgForcingFunction, type ForcingAgent } from '../forcing/agents.js';
 import type { Co2Formula } from '../forcing/co2.js';
-import { forcingScaleKey, type MemberParameters } from './member-parameters.js';
+import { forcingScaleKey, sliceMemberParameters, type MemberParameters } from './member-parameters.js';
 
 /**
  * What each member of an emission-driven ensemble needs to run its own carbon cycle, as plain data.
@@ -35,77 +35,92 @@ export interface MemberTask {
   carbon?: MemberCarbonTask;
 }
 
-/** Years between two progress reports. */
-const PROGRESS_YEARS = 25;
-
 /** The greenhouse gases an emission-driven member computes itself. */
 const OWN_GASES: readonly ForcingAgent[] = ['co2', 'ch4', 'n2o'];
 
 /**
- * Runs every member of a block from rest through the years: year by year, each member's forcing is
- * the sum over agents of its `scale_<agent>` times the agent's series (members of an emission-driven
- * run first step their own carbon cycle, see {@link MemberTask}), then the one two-box step of
- * src/climate/two-box-step.ts advances all members together.
+ * Members stepped together through all the years before the next ones start: their step
+ * coefficients, state and forcing (about 14 values each, 56 kB) then stay in the processor's cache.
+ */
+const BLOCK_MEMBERS = 512;
+
+/**
+ * Runs every member from rest through the years: year by year, each member's forcing is the sum over
+ * agents of its `scale_<agent>` times the agent's series (members of an emission-driven run first
+ * step their own carbon cycle, see {@link MemberTask}), then the one two-box step of
+ * src/climate/two-box-step.ts advances the members together. Members go in blocks of 512.
  *
  * @param task the forcing the members share
- * @param members the block's parameters (two-box keys, scale_<agent>, `irf100_scale` for carbon)
- * @param onProgress called now and then with the member-equivalents done (members x share of years)
+ * @param members the members' parameters (two-box keys, scale_<agent>, `irf100_scale` for carbon)
+ * @param onProgress called after each block with the members done
  * @returns the surface temperature anomaly from rest, K, year-major: year k of member r at k * count + r
- * @example runMembers(task, block)[k * block.count + r] // member r in year k
+ * @example runMembers(task, members)[k * members.count + r] // member r in year k
  */
 export function runMembers(task: MemberTask, members: MemberParameters, onProgress?: (done: number) => void): Float64Array {
   const m = members.count;
   const n = task.forcing.co2.length;
-  const v = members.values;
-  const steps = twoBoxStepsInto(
-    {
-      feedbackWm2K: v.feedback_wm2k,
-      upperHeatCapacity: v.upper_heat_capacity,
-      deepHeatCapacity: v.deep_heat_capacity,
-      exchangeWm2K: v.exchange_wm2k,
-      deepEfficacy: v.deep_efficacy,
-    },
-    emptyTwoBoxSteps(m),
+  const surfaceK = new Float64Array(m * n);
+  for (let r0 = 0; r0 < m; r0 += BLOCK_MEMBERS) {
+    const r1 = Math.min(m, r0 + BLOCK_MEMBERS);
+    const block = sliceMemberParameters(members, r0, r1);
+    // Year k of the block's member j goes to k * m + r0 + j.
+    const store = (k: number, t: Float64Array) => surfaceK.set(t, k * m + r0);
+    if (task.carbon) runWithCarbon(task, block, store);
+    else runBlock(task, block, store);
+    onProgress?.(r1);
+  }
+  return surfaceK;
+}
+
+/** The block's two-box step coefficients. */
+function blockSteps(block: MemberParameters): TwoBoxSteps {
+  const v = block.values;
+  return twoBoxStepsInto(
+    { feedbackWm2K: v.feedback_wm2k, upperHeatCapacity: v.upper_heat_capacity, deepHeatCapacity: v.deep_heat_capacity, exchangeWm2K: v.exchange_wm2k, deepEfficacy: v.deep_efficacy },
+    emptyTwoBoxSteps(block.count),
   );
-  const own = task.carbon ? OWN_GASES : [];
-  // Agents without a scale add the same to every member: one sum per year. The rest are scaled per member.
+}
+
+/**
+ * The forcing of the block's members in year k, into `out`: agents without a scale add the same to
+ * every member (one sum per year, made once); the others are scaled member by member. Agents in
+ * `skip` are left out (the gases emission-driven members compute themselves).
+ */
+function blockForcing(task: MemberTask, block: MemberParameters, skip: readonly ForcingAgent[]): (k: number, out: Float64Array) => void {
+  const n = task.forcing.co2.length;
   const shared = new Float64Array(n);
   const scaled: { series: Float64Array; scale: Float64Array }[] = [];
   for (const agent of FORCING_AGENTS) {
-    if (own.includes(agent)) continue;
-    const scale = v[forcingScaleKey(agent)];
+    if (skip.includes(agent)) continue;
+    const scale = block.values[forcingScaleKey(agent)];
     if (scale) scaled.push({ series: task.forcing[agent], scale });
     else for (let k = 0; k < n; k++) shared[k] += task.forcing[agent][k];
   }
-  const forcingInto = (k: number, out: Float64Array) => {
+  return (k, out) => {
     out.fill(shared[k]);
     for (const { series, scale } of scaled) {
       const f = series[k];
-      for (let r = 0; r < m; r++) out[r] += scale[r] * f;
+      for (let r = 0; r < out.length; r++) out[r] += scale[r] * f;
     }
   };
-  const surfaceK = new Float64Array(m * n);
-  if (n === 0) return surfaceK;
-  const yearDone = (k: number) => {
-    if (onProgress && ((k + 1) % PROGRESS_YEARS === 0 || k + 2 === n)) onProgress(Math.round((m * (k + 2)) / n));
-  };
-  if (task.carbon) {
-    runWithCarbon(task.carbon, task.co2Formula, members, steps, forcingInto, surfaceK, yearDone);
-    return surfaceK;
-  }
-  let start = new Float64Array(m);
-  let end = new Float64Array(m);
-  const t = new Float64Array(m);
-  const d = new Float64Array(m);
+}
+
+/** The year loop of concentration-driven members: forcing, then the two-box step. */
+function runBlock(task: MemberTask, block: MemberParameters, store: (k: number, t: Float64Array) => void): void {
+  const n = task.forcing.co2.length;
+  const steps = blockSteps(block);
+  const forcingInto = blockForcing(task, block, []);
+  let start = new Float64Array(block.count);
+  let end = new Float64Array(block.count);
+  const t = new Float64Array(block.count);
+  const d = new Float64Array(block.count);
   forcingInto(0, start);
   for (let k = 0; k + 1 < n; k++) {
     forcingInto(k + 1, end);
     stepTwoBoxInto(steps, start, end, t, d);
-    surfaceK.set(t, (k + 1) * m);
+    store(k + 1, t);
     [start, end] = [end, start];
-    yearDone(k);
   }
-  return surfaceK;
 }
 
 /**
@@ -117,22 +132,17 @@ export function runMembers(task: MemberTask, members: MemberParameters, onProgre
  * nodes); the year after the last concentration node uses the mean of the last diagnosed rate and
  * the first given one, as runEmissionDriven joins them.
  */
-function runWithCarbon(
-  carbon: MemberCarbonTask,
-  co2Formula: Co2Formula,
-  members: MemberParameters,
-  steps: TwoBoxSteps,
-  otherForcingInto: (k: number, out: Float64Array) => void,
-  surfaceOut: Float64Array,
-  yearDone: (k: number) => void,
-): void {
-  const m = members.count;
+function runWithCarbon(task: MemberTask, block: MemberParameters, store: (k: number, t: Float64Array) => void): void {
+  const carbon = task.carbon!;
+  const m = block.count;
   const n = carbon.co2Ppm.length;
-  const v = members.values;
+  const v = block.values;
+  const steps = blockSteps(block);
+  const otherForcingInto = blockForcing(task, block, OWN_GASES);
   const ones = new Float64Array(m).fill(1);
   const irf100 = v.irf100_scale ?? ones;
   const [co2Scale, ch4Scale, n2oScale] = OWN_GASES.map((a) => v[forcingScaleKey(a)] ?? ones);
-  const ghg = ghgForcingFunction({ co2Formula });
+  const ghg = ghgForcingFunction({ co2Formula: task.co2Formula });
   const { co2Ppm: given, co2EmissionGtcPerYr: emission, co2StartPpm, ch4Ppb, n2oPpb } = carbon;
   const states = Array.from({ length: m }, () => annualCarbonState());
   const lastRate = new Float64Array(m);
@@ -162,8 +172,7 @@ function runWithCarbon(
     }
     forcingInto(k + 1, end);
     stepTwoBoxInto(steps, start, end, t, d);
-    surfaceOut.set(t, (k + 1) * m);
+    store(k + 1, t);
     [start, end] = [end, start];
-    yearDone(k);
   }
 }

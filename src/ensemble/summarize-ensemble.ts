@@ -240,6 +240,7 @@ export function exceedanceCountsInto(warmingK: Float64Array, m: number, n: numbe
   if (n < width) return;
   const t = thresholds.length;
   const sum = new Float64Array(m);
+  const mean = new Float64Array(m);
   const crossed = thresholds.map(() => new Uint8Array(m));
   for (let k = 0; k < width; k++) for (let r = 0; r < m; r++) sum[r] += warmingK[k * m + r];
   for (let c = before; c + after < n; c++) {
@@ -248,13 +249,14 @@ export function exceedanceCountsInto(warmingK: Float64Array, m: number, n: numbe
       const leave = (c - before - 1) * m;
       for (let r = 0; r < m; r++) sum[r] += warmingK[enter + r] - warmingK[leave + r];
     }
+    for (let r = 0; r < m; r++) mean[r] = sum[r] / width;
     for (let j = 0; j < t; j++) {
       const level = thresholds[j];
       const first = crossed[j];
       let above = 0;
       let firsts = 0;
       for (let r = 0; r < m; r++) {
-        if (sum[r] / width > level) {
+        if (mean[r] > level) {
           above++;
           if (first[r] === 0) {
             first[r] = 1;

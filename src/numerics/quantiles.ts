@@ -1,5 +1,3 @@
-import { quickselect } from 'd3-array';
-
 /**
  * Sample quantiles by linear interpolation between order statistics: with the n values sorted
  * ascending as x[0..n-1] and h = (n - 1) p, Q(p) = x[floor h] + (h - floor h)(x[floor h + 1] - x[floor h]).
@@ -24,9 +22,9 @@ export function quantileSorted(sorted: ArrayLike<number>, p: number): number {
 
 /**
  * Several sample quantiles (definition 7, as {@link quantileSorted} and d3-array's `quantile`) of
- * `values`, found without a full sort: the order statistics they need are placed by d3-array's
- * `quickselect` (Floyd & Rivest 1975, Algorithm 489), the middle one first so that each further
- * selection searches only the part between two already placed. `values` is reordered.
+ * `values`, found without a full sort: the order statistics they need are placed by quickselect
+ * ({@link selectInPlace}), the middle one first so that each further selection searches only the
+ * part between two already placed. `values` is reordered.
  *
  * @param values the sample (reordered in place; no NaN)
  * @param probabilities ascending probabilities in [0, 1]
@@ -61,7 +59,56 @@ function placeRanks(values: Float64Array, ranks: number[], from: number, to: num
   if (from > to) return;
   const mid = (from + to) >> 1;
   const k = ranks[mid];
-  quickselect(values, k, left, right);
+  selectInPlace(values, k, left, right);
   placeRanks(values, ranks, from, mid - 1, left, k - 1);
   placeRanks(values, ranks, mid + 1, to, k + 1, right);
+}
+
+/**
+ * Rearranges a[left..right] so that a[k] holds the value it would have if that part were sorted,
+ * with no larger value before it and no smaller one after: Floyd & Rivest's SELECT (1975, CACM 18,
+ * 173, Algorithm 489) as d3-array's `quickselect` codes it, on a Float64Array with `<` in place of
+ * d3's comparator (which handles NaN and undefined, and costs about seven times as much here).
+ *
+ * @param a values (no NaN), reordered
+ * @param k the rank to place, left <= k <= right
+ * @example selectInPlace(Float64Array.of(3, 1, 2), 1, 0, 2) // a[1] === 2
+ */
+export function selectInPlace(a: Float64Array, k: number, left: number, right: number): void {
+  while (right > left) {
+    if (right - left > 600) {
+      // Select within a sample around k first, so that the pivot lands close to rank k.
+      const n = right - left + 1;
+      const m = k - left + 1;
+      const z = Math.log(n);
+      const s = 0.5 * Math.exp((2 * z) / 3);
+      const sd = 0.5 * Math.sqrt((z * s * (n - s)) / n) * (m - n / 2 < 0 ? -1 : 1);
+      selectInPlace(a, k, Math.max(left, Math.floor(k - (m * s) / n + sd)), Math.min(right, Math.floor(k + ((n - m) * s) / n + sd)));
+    }
+    const t = a[k];
+    let i = left;
+    let j = right;
+    swap(a, left, k);
+    if (a[right] > t) swap(a, left, right);
+    while (i < j) {
+      swap(a, i, j);
+      i++;
+      j--;
+      while (a[i] < t) i++;
+      while (a[j] > t) j--;
+    }
+    if (a[left] === t) swap(a, left, j);
+    else {
+      j++;
+      swap(a, j, right);
+    }
+    if (j <= k) left = j + 1;
+    if (k <= j) right = j - 1;
+  }
+}
+
+function swap(a: Float64Array, i: number, j: number): void {
+  const t = a[i];
+  a[i] = a[j];
+  a[j] = t;
 }
