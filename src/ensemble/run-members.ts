@@ -53,10 +53,11 @@ const BLOCK_MEMBERS = 512;
  * @param task the forcing the members share
  * @param members the members' parameters (two-box keys, scale_<agent>, `irf100_scale` for carbon)
  * @param onProgress called after each block with the members done
+ * @param co2Out emission-driven runs: receives each member's CO2, ppm, in the same layout (optional)
  * @returns the surface temperature anomaly from rest, K, year-major: year k of member r at k * count + r
  * @example runMembers(task, members)[k * members.count + r] // member r in year k
  */
-export function runMembers(task: MemberTask, members: MemberParameters, onProgress?: (done: number) => void): Float64Array {
+export function runMembers(task: MemberTask, members: MemberParameters, onProgress?: (done: number) => void, co2Out?: Float64Array): Float64Array {
   const m = members.count;
   const n = task.forcing.co2.length;
   const surfaceK = new Float64Array(m * n);
@@ -65,7 +66,7 @@ export function runMembers(task: MemberTask, members: MemberParameters, onProgre
     const block = sliceMemberParameters(members, r0, r1);
     // Year k of the block's member j goes to k * m + r0 + j.
     const store = (k: number, t: Float64Array) => surfaceK.set(t, k * m + r0);
-    if (task.carbon) runWithCarbon(task, block, store);
+    if (task.carbon) runWithCarbon(task, block, store, co2Out && ((k, ppm) => co2Out.set(ppm, k * m + r0)));
     else runBlock(task, block, store);
     onProgress?.(r1);
   }
@@ -132,7 +133,12 @@ function runBlock(task: MemberTask, block: MemberParameters, store: (k: number, 
  * nodes); the year after the last concentration node uses the mean of the last diagnosed rate and
  * the first given one, as runEmissionDriven joins them.
  */
-function runWithCarbon(task: MemberTask, block: MemberParameters, store: (k: number, t: Float64Array) => void): void {
+function runWithCarbon(
+  task: MemberTask,
+  block: MemberParameters,
+  store: (k: number, t: Float64Array) => void,
+  storeCo2?: (k: number, ppm: Float64Array) => void,
+): void {
   const carbon = task.carbon!;
   const m = block.count;
   const n = carbon.co2Ppm.length;
@@ -159,6 +165,7 @@ function runWithCarbon(task: MemberTask, block: MemberParameters, store: (k: num
   const t = new Float64Array(m);
   const d = new Float64Array(m);
   forcingInto(0, start);
+  storeCo2?.(0, ppm);
   for (let k = 0; k + 1 < n; k++) {
     for (let r = 0; r < m; r++) {
       if (!Number.isNaN(given[k + 1])) {
@@ -170,6 +177,7 @@ function runWithCarbon(task: MemberTask, block: MemberParameters, store: (k: num
         ppm[r] = co2StartPpm + atmosphericGtc(states[r]) / GTC_PER_PPM;
       }
     }
+    storeCo2?.(k + 1, ppm);
     forcingInto(k + 1, end);
     stepTwoBoxInto(steps, start, end, t, d);
     store(k + 1, t);
