@@ -14,4 +14,6 @@ export * from './carbon/index.js';
 export * from './metrics/index.js';
 export { ensembleHeadlines, ensembleTable, mergeShards, runEnsemble, shardFromJson, shardToJson, summarizeEnsemble, AR6_SAMPLING, ar6Members } from './ensemble/index.js';
 export type { EnsembleHeadlines, EnsembleInput, EnsembleOptions, EnsembleResult, EnsembleSampling, MemberParameters, MemberSource } from './ensemble/index.js';
+export { PUBLISHED_CHECKS, runPublishedChecks } from './verify/index.js';
+export type { PublishedCheck, VerificationRow } from './verify/index.js';
 export { comparisonHtml, comparisonMarkdown, svgChart, terminalChart, htmlReport, standardCautions } from './report/index.js';
