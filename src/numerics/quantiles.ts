@@ -22,9 +22,10 @@ export function quantileSorted(sorted: ArrayLike<number>, p: number): number {
 
 /**
  * Several sample quantiles (definition 7, as {@link quantileSorted} and d3-array's `quantile`) of
- * `values`, found without a full sort: the order statistics they need are placed by quickselect
- * ({@link selectInPlace}), the middle one first so that each further selection searches only the
- * part between two already placed. `values` is reordered.
+ * `values`, found without a full sort: the order statistic floor(h) each quantile needs is placed
+ * by quickselect ({@link selectInPlace}), the middle one first so that each further selection
+ * searches only the part between two already placed; the next order statistic, floor(h) + 1, is
+ * then the smallest value between floor(h) and the next placed one. `values` is reordered.
  *
  * @param values the sample (reordered in place; no NaN)
  * @param probabilities ascending probabilities in [0, 1]
@@ -39,18 +40,21 @@ export function quantilesInPlace(values: Float64Array, probabilities: readonly n
     out.fill(NaN, 0, probabilities.length);
     return;
   }
-  const ranks: number[] = [];
-  for (const p of probabilities) {
-    const lo = Math.floor((n - 1) * Math.min(1, Math.max(0, p)));
-    ranks.push(lo, Math.min(lo + 1, n - 1));
-  }
-  const sorted = [...new Set(ranks)].sort((a, b) => a - b);
-  placeRanks(values, sorted, 0, sorted.length - 1, 0, n - 1);
-  probabilities.forEach((p, j) => {
-    const h = (n - 1) * Math.min(1, Math.max(0, p));
+  const positions = probabilities.map((p) => (n - 1) * Math.min(1, Math.max(0, p)));
+  const ranks = [...new Set(positions.map(Math.floor))].sort((a, b) => a - b);
+  placeRanks(values, ranks, 0, ranks.length - 1, 0, n - 1);
+  positions.forEach((h, j) => {
     const lo = Math.floor(h);
     const x0 = values[lo];
-    out[j] = lo + 1 < n ? x0 + (values[lo + 1] - x0) * (h - lo) : x0;
+    if (h === lo) {
+      out[j] = x0;
+      return;
+    }
+    // Everything from lo + 1 up to the next placed rank lies between the two placed values.
+    const next = ranks.find((r) => r > lo) ?? n - 1;
+    let x1 = values[lo + 1];
+    for (let i = lo + 2; i <= next; i++) if (values[i] < x1) x1 = values[i];
+    out[j] = x0 + (x1 - x0) * (h - lo);
   });
 }
 
