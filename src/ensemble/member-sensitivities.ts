@@ -1,12 +1,12 @@
-import { transientResponse } from '../climate/calibrate.js';
 import { forcingOfDoubling, type Co2Formula } from '../forcing/co2.js';
+import { solverTransientResponse, tcrSolver } from './exchange-for-tcr.js';
 import type { MemberParameters } from './member-parameters.js';
 
 /**
  * Each member's ECS and TCR, K, from its two-box parameters and its CO2 forcing multiplier:
  * ECS = F2x x scale_co2 / lambda (the model's equilibrium), TCR = the mean warming over years 61-80
- * of its own 1 %/yr CO2 run (transientResponse). Members whose source already carries `ecs_k` and
- * `tcr_k` keep them.
+ * of its own 1 %/yr CO2 run (as transientResponse defines it, evaluated from the step's modes by
+ * solverTransientResponse). Members whose source already carries `ecs_k` and `tcr_k` keep them.
  *
  * @param members the members' parameters
  * @param co2Formula formula whose own 2xCO2 forcing `scale_co2` multiplies
@@ -17,6 +17,7 @@ export function memberSensitivities(members: MemberParameters, co2Formula: Co2Fo
   const v = members.values;
   if (v.ecs_k && v.tcr_k) return { ecs_k: v.ecs_k, tcr_k: v.tcr_k };
   const f2x = forcingOfDoubling(co2Formula);
+  const solver = tcrSolver(co2Formula);
   const ecs = new Float64Array(members.count);
   const tcr = new Float64Array(members.count);
   for (let r = 0; r < members.count; r++) {
@@ -29,7 +30,7 @@ export function memberSensitivities(members: MemberParameters, co2Formula: Co2Fo
       deepEfficacy: v.deep_efficacy[r],
     };
     ecs[r] = forcing2xWm2 / p.feedbackWm2K;
-    tcr[r] = transientResponse({ ...p, co2Formula, forcing2xWm2 });
+    tcr[r] = solverTransientResponse(solver, p, forcing2xWm2);
   }
   return { ecs_k: ecs, tcr_k: tcr };
 }
