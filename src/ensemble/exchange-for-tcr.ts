@@ -61,7 +61,7 @@ export function tcrSolver(formula: Co2Formula): TcrSolver {
  * CO2 run (IPCC AR6 WG1 glossary), defined exactly as `transientResponse` in src/climate defines it
  * (annual means (T[k] + T[k+1]) / 2 of the exact one-year propagation, k = 60..79), but evaluated
  * from the model's two modes: the surface warming is the sum of the modes (the first row of the
- * eigenvector matrix V of modal-propagator.ts is [1, 1]), each mode is a first-order recursive
+ * eigenvector matrix V of climate/two-box-step.ts is [1, 1]), each mode is a first-order recursive
  * filter of the forcing, and its 20-year mean is a fixed polynomial in the mode's decay factor
  * (from {@link tcrSolver}), evaluated by Horner's rule.
  *
