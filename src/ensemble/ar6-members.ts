@@ -1,6 +1,7 @@
+import { AEROSOL_AGENTS } from '../forcing/agents.js';
 import type { Co2Formula } from '../forcing/co2.js';
 import { memberGenerators, MEMBER_STREAM_SCHEME } from './member-generators.js';
-import { emptyMemberParameters, type MemberSource } from './member-parameters.js';
+import { emptyMemberParameters, forcingScaleKey, type MemberSource } from './member-parameters.js';
 import { drawMember, emptyDraw, memberSampler } from './sample-members.js';
 import { describeSampling, validateSampling, type EnsembleSampling } from './sampling.js';
 
@@ -10,13 +11,14 @@ const DRAW_LAYOUT = 'draws in turn: ECS, 2xCO2 ERF, aerosol, TCR given ECS, each
 const CARBON_DRAW_LAYOUT = 'then the carbon-cycle iIRF100 multiplier, redrawn alone until positive; annual carbon step v1';
 
 /** Keys the AR6-range members carry beyond the two-box ones. */
-const AR6_KEYS = ['scale_co2', 'scale_aerosol', 'ecs_k', 'tcr_k', 'forcing_2x_wm2', 'irf100_scale'] as const;
+const AR6_KEYS = ['scale_co2', ...AEROSOL_AGENTS.map(forcingScaleKey), 'ecs_k', 'tcr_k', 'forcing_2x_wm2', 'irf100_scale'];
 
 /**
  * Members drawn from assessed ranges of ECS, TCR, 2xCO2 forcing and aerosol forcing (AR6_SAMPLING
  * by default; see sampling.ts and drawMember): lambda = F2x / ECS, gamma solved per member for its
  * TCR, heat capacities and efficacy as the sampling fixes them. The 2xCO2 multiplier becomes
- * `scale_co2` and the aerosol multiplier `scale_aerosol`; `ecs_k`, `tcr_k` and `forcing_2x_wm2`
+ * `scale_co2` and the aerosol multiplier the scale of both aerosol agents (`scale_aerosol_ari`,
+ * `scale_aerosol_aci`); `ecs_k`, `tcr_k` and `forcing_2x_wm2`
  * are carried as diagnostics, `irf100_scale` for emission-driven runs (1 otherwise).
  *
  * @param sampling the ranges (validated here)
@@ -45,7 +47,7 @@ export function ar6Members(sampling: EnsembleSampling, co2Formula: Co2Formula, c
         v.deep_heat_capacity[r] = sampling.deepHeatCapacity;
         v.deep_efficacy[r] = sampling.deepEfficacy;
         v.scale_co2[r] = draw.forcing2xScale;
-        v.scale_aerosol[r] = draw.aerosolScale;
+        for (const agent of AEROSOL_AGENTS) v[forcingScaleKey(agent)][r] = draw.aerosolScale;
         v.ecs_k[r] = draw.ecsK;
         v.tcr_k[r] = draw.tcrK;
         v.forcing_2x_wm2[r] = draw.forcing2xWm2;

@@ -5,7 +5,8 @@ import { ConfigError } from '../errors.js';
 import { FORCING_AGENTS, forcingByAgent, type ForcingAgent, type ForcingOptions } from '../forcing/agents.js';
 import { PREINDUSTRIAL } from '../forcing/constants.js';
 import { DEFAULT_TOLERANCES, type OdeTolerances } from '../numerics/integrate-steps.js';
-import { EMISSION_COLUMNS, FORCING_COLUMNS, GASES, type Pathway, type PathwayProvenance } from '../pathway.js';
+import { forcingColumnsNotGiven } from '../forcing/lumped-forcing.js';
+import { EMISSION_COLUMNS, GASES, type Pathway, type PathwayProvenance } from '../pathway.js';
 import { startFromRestNote } from './start-from-rest-note.js';
 
 /** Options of {@link projectPathway}. */
@@ -37,6 +38,7 @@ export const PROJECTION_COLUMNS = [
   'ch4_ppb',
   'n2o_ppb',
   ...FORCING_AGENTS.map((a) => `forcing_${a}_wm2` as const),
+  'forcing_aerosol_wm2',
 ] as const;
 
 /** A year-by-year warming projection for one pathway. */
@@ -87,7 +89,7 @@ export function projectPathway(pathway: Pathway, options: ProjectionOptions): Pr
     if (!s[cols.concentration] && !s[cols.emission]) notes.push(`${gas.toUpperCase()} not given: held at its 1750 value`);
   }
   // forcingByAgent adds nothing for an absent forcing column; say so, as for the gases above.
-  const zeroForcing = FORCING_COLUMNS.filter((c) => !s[c]);
+  const zeroForcing = forcingColumnsNotGiven(s);
   if (zeroForcing.length > 0) notes.push(`${zeroForcing.join(', ')} not given: taken as zero`);
   const forcingOptions: ForcingOptions = { co2Formula: params.co2Formula, forcing2xWm2: params.forcing2xWm2, aerosolScale: options.aerosolScale };
   const tolerances = options.tolerances ?? DEFAULT_TOLERANCES;
@@ -105,6 +107,7 @@ export function projectPathway(pathway: Pathway, options: ProjectionOptions): Pr
       n2o_ppb: r.n2oPpb,
     };
     for (const a of FORCING_AGENTS) columns[`forcing_${a}_wm2`] = r.forcing.byAgent[a as ForcingAgent];
+    columns.forcing_aerosol_wm2 = r.forcing.aerosol;
     const fromRest = startFromRestNote(pathway, { subject: 'the run', forcingWm2: r.forcing.total[0] });
     if (fromRest) notes.push(fromRest);
     columns.co2_gtco2 = r.co2EmissionsGtco2;
@@ -130,6 +133,7 @@ export function projectPathway(pathway: Pathway, options: ProjectionOptions): Pr
     n2o_ppb: s.n2o_ppb ?? new Float64Array(n).fill(PREINDUSTRIAL.n2oPpb),
   };
   for (const a of FORCING_AGENTS) columns[`forcing_${a}_wm2`] = forcing.byAgent[a as ForcingAgent];
+  columns.forcing_aerosol_wm2 = forcing.aerosol;
   return { name: pathway.name, provenance: pathway.provenance, params, baseline, years, columns, notes };
 }
 
