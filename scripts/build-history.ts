@@ -8,9 +8,9 @@
  * - CO2 (ppm), CH4 and N2O (ppb): the observed annual means of the instrumental records (Mauna Loa CO2
  *   from 1959, NOAA global means of CO2 from 1979, CH4 from 1984, N2O from 2001). Before each record
  *   starts, the concentration that gives AR6's ERF of that gas through warmcast's AR6 formulas
- *   (src/forcing), found by inverting the three formulas together. The Law Dome ice-core spline the
- *   history used before put CO2 forcing up to 0.054 W m-2 away from AR6's (1808), because AR6's
- *   series follows its own ice-core reconstruction; the inversion is AR6's own record in ppm.
+ *   (src/forcing), found by inverting the three formulas together: AR6's own record in ppm. (An
+ *   ice-core spline read directly, Law Dome, puts CO2 forcing up to 0.054 W m-2 away from AR6's in
+ *   1808, as AR6 follows its own merged reconstruction; the issue's tolerance is 0.03.)
  * - Every other agent as its own column (W m-2): AR6's best estimate, 1750-2019, as in the record, and
  *   2020-2024 by a rule per agent (EXTENSION_RULES below). Volcanic and solar keep AR6's convention:
  *   relative to long pre-industrial means, so volcanic forcing is positive between eruptions.

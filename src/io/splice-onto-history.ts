@@ -216,10 +216,21 @@ function joinSteps(future: Pathway, history: Pathway): string[] {
     const size = isConcentration
       ? `${Math.abs(100 * step).toFixed(1)} % ${step > 0 ? 'higher' : 'lower'}; a step of more than ${100 * JOIN_STEP_RELATIVE} % is noted`
       : `${Math.abs(step).toFixed(3)} ${unit} ${step > 0 ? 'higher' : 'lower'}; a step of more than ${JOIN_STEP_FORCING_WM2} ${unit} is noted`;
-    notes.push(`${column} steps at the join: ${values} (${size})`);
+    notes.push(`${column} steps at the join: ${values} (${size})${CONVENTION_HINT[column] ?? ''}`);
   }
   return notes;
 }
+
+/**
+ * What a step in a natural forcing column most often means: a file written in another convention.
+ * IPCC AR6 (and the history) measure both from long pre-industrial means, so a quiet stratosphere
+ * reads about +0.2 W m-2, not 0 (pathways/records/README.md).
+ */
+const CONVENTION_HINT: Partial<Record<PathwayColumn, string>> = {
+  volcanic_wm2: '; the history follows IPCC AR6, where volcanic forcing is relative to the long pre-industrial mean: '
+    + `about +0.2 W m-2 in years without eruptions, ${NATURAL_BACKGROUND_WM2.volcanic_wm2.toFixed(3)} for eruptions at the 1850-1900 rate, not 0`,
+  solar_wm2: '; the history follows IPCC AR6, where solar forcing is relative to the Sun\'s long-term mean',
+};
 
 /** `2025-2029`, or `2025` for a single year. */
 function yearSpan(first: number, last: number): string {

@@ -56,6 +56,15 @@ describe('spliceOntoHistory', () => {
     expect(s.provenance.notes[0]).toMatch(/^aerosol_wm2 split over aerosol_ari_wm2 \(20\.4 %\), aerosol_aci_wm2 \(79\.6 %\)/);
   });
 
+  it('spliceOntoHistory notes a volcanic column in the quiet-stratosphere convention (0 between eruptions) with the AR6 convention the history follows', () => {
+    const quiet = pathway(2000, { co2_ppm: [370, 371, 372, 373, 374], volcanic_wm2: [0.2, 0.2, 0.2, 0.2, 0.2] }, 'bundled:history');
+    const s = spliceOntoHistory(pathway(2005, { co2_ppm: [380, 381], volcanic_wm2: [0, 0] }, 'plan.csv'), quiet);
+    expect(s.provenance.notes).toContain(
+      'volcanic_wm2 steps at the join: the history gives 0.200 W m-2 for 2004, the file 0.000 W m-2 for 2005 (0.200 W m-2 lower; a step of more than 0.1 W m-2 is noted); '
+        + 'the history follows IPCC AR6, where volcanic forcing is relative to the long pre-industrial mean: about +0.2 W m-2 in years without eruptions, 0.035 for eruptions at the 1850-1900 rate, not 0',
+    );
+  });
+
   it('spliceOntoHistory keeps both forms when the future gives CO2 emissions and history concentrations', () => {
     const future = pathway(2005, { co2_gtco2: [40, 38, 36] }, 'plan.csv');
     const s = spliceOntoHistory(future, history);
