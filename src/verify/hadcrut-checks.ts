@@ -5,11 +5,16 @@ import { projectPathway } from '../projection/project-pathway.js';
 import type { PublishedCheck, VerificationRow } from './published-check.js';
 
 const SOURCE = 'HadCRUT5 (Morice et al. 2021, JGR 126, e2019JD032361), rebased to 1850-1900';
+/** Largest difference of a period mean, K, and largest decadal RMS difference, K (see hadcrut5Fit). */
+const PERIOD_TOLERANCE_K = 0.15;
+const DECADAL_RMS_K = 0.15;
 
 /**
  * The central run of the bundled history against HadCRUT5 (pathways/records/), both relative to
- * 1850-1900: the 1995-2014 and 2011-2020 means within 0.05 K and the decadal means 1850-2019 within
- * 0.08 K RMS (warmcast's targets for its central run: tolerances of ours, not published).
+ * 1850-1900, as test/reference/hadcrut5.test.ts checks it: the 1995-2014 and 2011-2020 means within
+ * 0.15 K and the decadal means 1850-2019 within 0.15 K RMS (tolerances of ours, common practice, no
+ * source: about the AR6 likely range's half-width, and decadal internal variability plus the
+ * record's early uncertainty).
  */
 export const hadcrut5Fit: PublishedCheck = {
   id: 'hadcrut5-fit',
@@ -36,8 +41,8 @@ export const hadcrut5Fit: PublishedCheck = {
         source: SOURCE,
         published: `${o.toFixed(3)} K`,
         warmcast: `${m.toFixed(3)} K`,
-        tolerance: '±0.05 K (warmcast target)',
-        pass: Math.abs(m - o) <= 0.05,
+        tolerance: `±${PERIOD_TOLERANCE_K} K (common practice, no source)`,
+        pass: Math.abs(m - o) <= PERIOD_TOLERANCE_K,
       };
     };
     let ss = 0;
@@ -55,8 +60,8 @@ export const hadcrut5Fit: PublishedCheck = {
         source: SOURCE,
         published: 'the 17 decadal means',
         warmcast: `RMS difference ${rms.toFixed(3)} K`,
-        tolerance: 'RMS at most 0.08 K (warmcast target)',
-        pass: rms <= 0.08,
+        tolerance: `RMS at most ${DECADAL_RMS_K} K (common practice, no source)`,
+        pass: rms <= DECADAL_RMS_K,
       },
     ];
   },

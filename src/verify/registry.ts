@@ -2,13 +2,14 @@ import { calibrationRoundTrip } from './calibration-checks.js';
 import { historicalEmissions, joosPulse, tcre, zeroEmissionsCommitment } from './carbon-checks.js';
 import { ar6GasForcing2019, doublingForcing } from './forcing-checks.js';
 import { erfHistory } from './erf-history-checks.js';
+import { hadcrut5Fit } from './hadcrut-checks.js';
 import { historyObserved } from './history-checks.js';
 import type { PublishedCheck, VerificationRow } from './published-check.js';
 import { twoBoxAnalytic } from './two-box-checks.js';
 
 /**
  * Every published check `warmcast verify` runs, in the order of the table: forcing, the two-box
- * model, calibration, the carbon cycle, the history against the AR6 ERF series and observed warming. Adding a check is adding its entry here.
+ * model, calibration, the carbon cycle, the history against the AR6 ERF series, observed warming and HadCRUT5. Adding a check is adding its entry here.
  */
 export const PUBLISHED_CHECKS: readonly PublishedCheck[] = [
   ar6GasForcing2019,
@@ -21,6 +22,7 @@ export const PUBLISHED_CHECKS: readonly PublishedCheck[] = [
   zeroEmissionsCommitment,
   erfHistory,
   historyObserved,
+  hadcrut5Fit,
 ];
 
 /**
