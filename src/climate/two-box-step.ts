@@ -176,6 +176,25 @@ export function stepTwoBoxInto(s: TwoBoxSteps, forcingStart: Float64Array, forci
 }
 
 /**
+ * The step coefficients of one parameter set (a set of one member), for runs that step a single
+ * model year by year with {@link stepTwoBoxInto} on arrays of length 1.
+ * @example stepTwoBoxInto(twoBoxSteps(params), Float64Array.of(f0), Float64Array.of(f1), t, d)
+ */
+export function twoBoxSteps(p: TwoBoxParams): TwoBoxSteps {
+  const one = (x: number) => [x];
+  return twoBoxStepsInto(
+    {
+      upperHeatCapacity: one(p.upperHeatCapacity),
+      deepHeatCapacity: one(p.deepHeatCapacity),
+      feedbackWm2K: one(p.feedbackWm2K),
+      exchangeWm2K: one(p.exchangeWm2K),
+      deepEfficacy: one(p.deepEfficacy),
+    },
+    emptyTwoBoxSteps(1),
+  );
+}
+
+/**
  * Runs the two-box model for one parameter set from rest (T = T_d = 0 at the first node) through
  * forcing given at annual nodes, linear between them: {@link stepTwoBoxInto} for one member.
  *
@@ -186,16 +205,7 @@ export function stepTwoBoxInto(s: TwoBoxSteps, forcingStart: Float64Array, forci
  * @example propagateTwoBoxInto(params, forcing, surface, deep) // surface[k]: warming at node k
  */
 export function propagateTwoBoxInto(p: TwoBoxParams, forcingWm2: ArrayLike<number>, surfaceOut: Float64Array, deepOut: Float64Array): void {
-  const steps = twoBoxStepsInto(
-    {
-      upperHeatCapacity: [p.upperHeatCapacity],
-      deepHeatCapacity: [p.deepHeatCapacity],
-      feedbackWm2K: [p.feedbackWm2K],
-      exchangeWm2K: [p.exchangeWm2K],
-      deepEfficacy: [p.deepEfficacy],
-    },
-    emptyTwoBoxSteps(1),
-  );
+  const steps = twoBoxSteps(p);
   const f0 = new Float64Array(1);
   const f1 = new Float64Array(1);
   const t = new Float64Array(1);
