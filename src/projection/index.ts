@@ -3,3 +3,5 @@ export type { Projection, ProjectionOptions } from './project-pathway.js';
 export { ensembleInput } from './ensemble-input.js';
 export { attributePathway } from './attribute-pathway.js';
 export type { AttributedProjection } from './attribute-pathway.js';
+export { AR6_ENERGY_BUDGET, EARTH_AREA_M2, OCEAN_SHARE_OF_HEAT_GAIN, energyBudget, energyBudgetNote } from './energy-budget.js';
+export type { EnergyBudget } from './energy-budget.js';
