@@ -174,8 +174,8 @@ export function peakWindowMean(warmingK: ArrayLike<number>, fromIndex: number): 
  * Remaining CO2 budgets: for each member, the largest cumulative net CO2 from 1 January of
  * `fromYear` along a family of pathways (by default net CO2 falling in a straight line from the
  * current rate to net zero, then zero; the members' non-CO2 path fixed) for which the member's peak
- * warming (the highest 20-year mean, AR6 convention) stays at or below the limit; found by bisection
- * on the family's parameter, peak warming rising with it. The budget at chance p is the (1 - p)
+ * warming (the highest 20-year mean, AR6 convention) stays at or below the limit; found by bracketed root finding
+ * (regula falsi, Illinois variant) on the family's parameter, peak warming rising with it. The budget at chance p is the (1 - p)
  * quantile of the members' parameters (linear between order statistics, Hyndman & Fan 1996
  * definition 7), mapped to cumulative CO2, so that a share p of the members stays at or below the
  * limit with it.
@@ -205,16 +205,7 @@ export function remainingBudget(members: readonly BudgetMember[], family: Co2Pat
     limits.forEach((limit, li) => {
       if (atMin > limit) perLimit[li].push({ x: -Infinity, status: 'exceeded' });
       else if (atMax <= limit) perLimit[li].push({ x: family.max, status: 'beyond' });
-      else {
-        let lo = family.min;
-        let hi = family.max;
-        while (hi - lo > family.tolerance) {
-          const mid = 0.5 * (lo + hi);
-          if (peakFor(mid) <= limit) lo = mid;
-          else hi = mid;
-        }
-        perLimit[li].push({ x: lo, status: 'found' });
-      }
+      else perLimit[li].push({ x: largestWithin(peakFor, limit, family, atMin, atMax), status: 'found' });
     });
   }
 
@@ -235,6 +226,39 @@ export function remainingBudget(members: readonly BudgetMember[], family: Co2Pat
     }
   });
   return { rows, members: perLimit };
+}
+
+/**
+ * The largest x in [min, max] with peak(x) <= limit, given peak(min) <= limit < peak(max): the
+ * Illinois variant of regula falsi (Dowell & Jarratt 1971), which keeps a bracket like bisection but
+ * converges in a few evaluations on a smooth, near-linear peak(x); it stops when the bracket is
+ * narrower than the family's tolerance and returns the side that holds the limit.
+ */
+function largestWithin(peak: (x: number) => number, limit: number, family: Co2PathFamily, atMin: number, atMax: number): number {
+  let lo = family.min;
+  let hi = family.max;
+  let flo = atMin - limit;
+  let fhi = atMax - limit;
+  let side = 0;
+  for (let i = 0; i < 100 && hi - lo > family.tolerance; i++) {
+    let x = lo - (flo * (hi - lo)) / (fhi - flo);
+    // Keep the trial point well inside the bracket so the bracket always shrinks.
+    const margin = 0.5 * family.tolerance;
+    x = Math.min(hi - margin, Math.max(lo + margin, x));
+    const fx = peak(x) - limit;
+    if (fx <= 0) {
+      lo = x;
+      flo = fx;
+      if (side === -1) fhi /= 2;
+      side = -1;
+    } else {
+      hi = x;
+      fhi = fx;
+      if (side === 1) flo /= 2;
+      side = 1;
+    }
+  }
+  return lo;
 }
 
 /**
