@@ -17,9 +17,10 @@ export const JOIN_TREND_YEARS = 5;
  *   around it; a path linear between these values has annual means that miss the record's by a
  *   quarter of its second difference, (c_{k+1} - 2 c_k + c_{k-1}) / 4: below 0.05 ppm of CO2 in
  *   smooth years, 0.43 ppm in 1973, whose annual mean stands 0.4 ppm above the line of its neighbours);
- * - b_{last+1} = c_last + s / 2, with s the least-squares slope of the last JOIN_TREND_YEARS annual
- *   means (fewer if the record is shorter; 0 for one year), so the last year of a record, the year
- *   a future emission pathway joins, grows at the recent trend and not at its own noisy rise.
+ * - b_{last+1} = b_last + s, with s the least-squares slope of the last JOIN_TREND_YEARS annual
+ *   means (fewer if the record is shorter; 0 for one year): the last year of a record, the year a
+ *   future emission pathway joins, grows at the recent trend and not at its own noisy rise (nor
+ *   half of it, as the midway rule would give).
  *
  * @param annualMeans concentrations, one annual mean per year (ppm or ppb); only 0..last are read
  * @param last index of the last year given
@@ -31,7 +32,7 @@ export function yearStartConcentrations(annualMeans: ArrayLike<number>, last: nu
   const b = new Float64Array(last + 2);
   b[0] = annualMeans[0];
   for (let k = 1; k <= last; k++) b[k] = 0.5 * (annualMeans[k - 1] + annualMeans[k]);
-  b[last + 1] = annualMeans[last] + 0.5 * trailingSlope(annualMeans, last, JOIN_TREND_YEARS);
+  b[last + 1] = b[last] + trailingSlope(annualMeans, last, JOIN_TREND_YEARS);
   return b;
 }
 
