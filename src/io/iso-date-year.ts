@@ -25,6 +25,10 @@ const REDUCED_PRECISION = /^[+-]?\d{4}(-?\d{2})?$|^\d{4}-?W\d{2}$/i;
  * A year, month or week alone (`2030`, `2030-07`, `2030-W27`) is refused: it names a span, not the
  * centre of one (write a `year` column instead).
  *
+ * This is the label of one date on its own. A file whose dates all fall on the same day of the year
+ * (all 1 January, say) names calendar years instead, and toAnnual reads each row as its date's
+ * calendar year (2030-01-01 is the year 2030).
+ *
  * @param text - an ISO 8601 calendar, ordinal or week date, optionally with a time and offset
  * @returns `{ ok: true, year }` with the decimal year label, or `{ ok: false, reason }`
  * @example
@@ -46,6 +50,23 @@ export function isoDateToYear(text: string): IsoDateYear {
   const start = DateTime.utc(y, 1, 1).toMillis();
   const end = DateTime.utc(y + 1, 1, 1).toMillis();
   return { ok: true, year: y + (instant.toMillis() - start) / (end - start) - 0.5 };
+}
+
+/**
+ * The calendar day an ISO 8601 date names, as written (in its own offset; a time of day is ignored):
+ * its year and its month and day as `MM-DD`. Used to tell a file whose dates all fall on one day of
+ * the year, which names calendar years (toAnnual), from one whose dates vary within years.
+ *
+ * @param text - a date isoDateToYear accepts
+ * @returns the year and `MM-DD`, or undefined when the text is not such a date
+ * @example calendarDay('2030-01-01') // { year: 2030, monthDay: '01-01' }
+ */
+export function calendarDay(text: string): { year: number; monthDay: string } | undefined {
+  const trimmed = text.trim();
+  if (REDUCED_PRECISION.test(trimmed)) return undefined;
+  const written = DateTime.fromISO(trimmed, { zone: 'utc', setZone: true });
+  if (!written.isValid) return undefined;
+  return { year: written.year, monthDay: `${String(written.month).padStart(2, '0')}-${String(written.day).padStart(2, '0')}` };
 }
 
 const MONTHS = ['January', 'February', 'March', 'April', 'May', 'June', 'July', 'August', 'September', 'October', 'November', 'December'];

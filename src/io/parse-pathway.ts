@@ -17,6 +17,8 @@ export interface ParsedPathway {
   timeColumn: 'year' | 'date';
   /** Decimal year label of each row, strictly ascending (dates converted by isoDateToYear). */
   times: Float64Array;
+  /** With a `date` column: each row's date as written (toAnnual reads dates all on one day of the year as calendar years). */
+  dateTexts?: string[];
   /** Data columns present, canonical lower-case names, one value per row in the column's unit. */
   columns: Partial<Record<PathwayColumn, Float64Array>>;
   /** 1-based physical line of each row in the file (comment and blank lines counted). */
@@ -108,6 +110,7 @@ export function parsePathway(text: string, file: string): ParsedPathway {
   let timeRole: Extract<CellRole, { kind: 'time' }> | undefined;
 
   const times: number[] = [];
+  const dateTexts: string[] = [];
   const rowLines: number[] = [];
   const values = new Map<PathwayColumn, number[]>();
   const lineOfTime = new Map<number, number>();
@@ -166,6 +169,7 @@ export function parsePathway(text: string, file: string): ParsedPathway {
       }
     }
     times.push(time);
+    if (timeRole) dateTexts.push(cells[roles.indexOf(timeRole)].trim());
 
     if (timeRole && Number.isFinite(time)) {
       const timeText = cells[roles.indexOf(timeRole)].trim();
@@ -238,6 +242,7 @@ export function parsePathway(text: string, file: string): ParsedPathway {
     metadata,
     timeColumn: timeRole!.name,
     times: Float64Array.from(times),
+    ...(timeRole!.name === 'date' ? { dateTexts } : {}),
     columns,
     rowLines: Int32Array.from(rowLines),
     headerLine,
