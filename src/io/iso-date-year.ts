@@ -26,8 +26,8 @@ const REDUCED_PRECISION = /^[+-]?\d{4}(-?\d{2})?$|^\d{4}-?W\d{2}$/i;
  * centre of one (write a `year` column instead).
  *
  * This is the label of one date on its own. A file whose dates all fall on the same day of the year
- * (all 1 January, say) names calendar years instead, and toAnnual reads each row as its date's
- * calendar year (2030-01-01 is the year 2030).
+ * (all 1 January, say) names calendar years instead: parsePathway labels each row with its date's
+ * calendar year (sameDayCalendarYears; 2030-01-01 is the year 2030).
  *
  * @param text - an ISO 8601 calendar, ordinal or week date, optionally with a time and offset
  * @returns `{ ok: true, year }` with the decimal year label, or `{ ok: false, reason }`
@@ -67,6 +67,32 @@ export function calendarDay(text: string): { year: number; monthDay: string } | 
   const written = DateTime.fromISO(trimmed, { zone: 'utc', setZone: true });
   if (!written.isValid) return undefined;
   return { year: written.year, monthDay: `${String(written.month).padStart(2, '0')}-${String(written.day).padStart(2, '0')}` };
+}
+
+/**
+ * The calendar years named by dates that all fall on one day of the year (all 1 January, all
+ * 31 December ...), or undefined when they do not, or when there are fewer than two (one date cannot
+ * show that a file's dates share a day). Such dates name calendar years: 2030-01-01 is the year 2030.
+ *
+ * @param texts - the dates of a file's rows, each accepted by isoDateToYear
+ * @returns each date's calendar year and the shared day as `MM-DD`
+ * @example sameDayCalendarYears(['2030-01-01', '2040-01-01']) // { years: [2030, 2040], monthDay: '01-01' }
+ */
+export function sameDayCalendarYears(texts: readonly string[]): { years: number[]; monthDay: string } | undefined {
+  if (texts.length < 2) return undefined;
+  const days = texts.map(calendarDay);
+  const first = days[0];
+  if (!first || days.some((d) => d === undefined || d.monthDay !== first.monthDay)) return undefined;
+  return { years: days.map((d) => d!.year), monthDay: first.monthDay };
+}
+
+/**
+ * `01-01` -> `1 January`.
+ * @example dayOfYearName('12-31') // '31 December'
+ */
+export function dayOfYearName(monthDay: string): string {
+  const [month, day] = monthDay.split('-').map(Number);
+  return `${day} ${MONTHS[month - 1]}`;
 }
 
 const MONTHS = ['January', 'February', 'March', 'April', 'May', 'June', 'July', 'August', 'September', 'October', 'November', 'December'];

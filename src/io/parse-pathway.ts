@@ -1,7 +1,7 @@
 import Papa from 'papaparse';
 import { InputError, type InputProblem } from '../errors.js';
 import { GASES, PATHWAY_COLUMNS, type Gas, type PathwayColumn } from '../pathway.js';
-import { isoDateToYear } from './iso-date-year.js';
+import { isoDateToYear, sameDayCalendarYears } from './iso-date-year.js';
 import { nearestName } from './nearest-name.js';
 import { VALUE_BOUNDS } from './value-bounds.js';
 
@@ -15,10 +15,13 @@ export interface ParsedPathway {
   metadata: Record<string, string>;
   /** Which time column the file uses. */
   timeColumn: 'year' | 'date';
-  /** Decimal year label of each row, strictly ascending (dates converted by isoDateToYear). */
+  /**
+   * Decimal year label of each row, strictly ascending: dates converted by isoDateToYear, or, when
+   * every date falls on the same day of the year, each date's calendar year (sameDayCalendarYears).
+   */
   times: Float64Array;
-  /** With a `date` column: each row's date as written (toAnnual reads dates all on one day of the year as calendar years). */
-  dateTexts?: string[];
+  /** With dates all on one day of the year: that day as `MM-DD` (the rows are then calendar years). */
+  datesOnDay?: string;
   /** Data columns present, canonical lower-case names, one value per row in the column's unit. */
   columns: Partial<Record<PathwayColumn, Float64Array>>;
   /** 1-based physical line of each row in the file (comment and blank lines counted). */
@@ -236,13 +239,15 @@ export function parsePathway(text: string, file: string): ParsedPathway {
     const v = values.get(column);
     if (v) columns[column] = Float64Array.from(v);
   }
+  // Dates all on one day of the year name calendar years (DESIGN.md conventions; README).
+  const sameDay = timeRole!.name === 'date' ? sameDayCalendarYears(dateTexts) : undefined;
   return {
     file,
     name: metadata.name || baseName(file),
     metadata,
     timeColumn: timeRole!.name,
-    times: Float64Array.from(times),
-    ...(timeRole!.name === 'date' ? { dateTexts } : {}),
+    times: Float64Array.from(sameDay ? sameDay.years : times),
+    ...(sameDay ? { datesOnDay: sameDay.monthDay } : {}),
     columns,
     rowLines: Int32Array.from(rowLines),
     headerLine,

@@ -1,6 +1,6 @@
 import { InputError } from '../errors.js';
 import { PATHWAY_COLUMNS, type Pathway, type PathwayColumn } from '../pathway.js';
-import { calendarDay } from './iso-date-year.js';
+import { dayOfYearName } from './iso-date-year.js';
 import type { ParsedPathway } from './parse-pathway.js';
 import { describeTimeSteps, formatStepLength, isAnnualGrid } from './time-steps.js';
 
@@ -14,8 +14,8 @@ const END_TOLERANCE_YEARS = 1 / 365;
 
 /**
  * Puts a parsed pathway on the annual grid. A `date` file whose dates all fall on one day of the year
- * names calendar years: each row becomes its date's year (2030-01-01 is 2030) and a note says so;
- * other dates keep isoDateToYear's labels. Then: the whole years from ceil(first time) to floor(last time)
+ * names calendar years (parsePathway labels them so; a note here says so). Then: the whole years
+ * from ceil(first time) to floor(last time)
  * (each end widened by one day, see above), every column interpolated linearly between the two
  * neighbouring rows. A year on a row takes the row's value exactly; an end year at most a day
  * outside the rows takes the end row's value. A file already on consecutive whole years is copied
@@ -33,8 +33,7 @@ const END_TOLERANCE_YEARS = 1 / 365;
  * p.provenance.notes // ['interpolated linearly from 2 rows (5-year steps) to 6 annual values']
  */
 export function toAnnual(parsed: ParsedPathway): Pathway {
-  const sameDay = calendarYearsOfDates(parsed);
-  const t = sameDay?.years ?? parsed.times;
+  const t = parsed.times;
   const n = t.length;
   const firstYear = Math.ceil(t[0] - END_TOLERANCE_YEARS);
   const lastYear = Math.floor(t[n - 1] + END_TOLERANCE_YEARS);
@@ -60,7 +59,8 @@ export function toAnnual(parsed: ParsedPathway): Pathway {
   }
 
   const notes: string[] = [];
-  if (sameDay?.note) notes.push(sameDay.note);
+  const sameDay = sameDayNote(parsed);
+  if (sameDay) notes.push(sameDay);
   if (n === 1) {
     if (!isAnnualGrid(t)) notes.push(`the single row lies within a day of the middle of ${firstYear} and gives that year's values`);
   } else if (!isAnnualGrid(t)) {
@@ -78,31 +78,16 @@ export function toAnnual(parsed: ParsedPathway): Pathway {
 }
 
 /**
- * The calendar years of a `date` file whose dates all fall on one day of the year (all 1 January,
- * all 31 December ...): such dates name calendar years, so each row is its date's year. A note says
- * so unless the day is 1 or 2 July, whose dates already label their whole years (isoDateToYear).
- * Undefined for a `year` file, a single row, or dates that vary within years (those keep
- * isoDateToYear's labels).
+ * The note for a `date` file whose dates all fall on one day of the year (parsePathway then labels
+ * the rows with their calendar years), unless the day is 1 or 2 July, whose dates name their whole
+ * years anyway (isoDateToYear).
  */
-function calendarYearsOfDates(parsed: ParsedPathway): { years: Float64Array; note?: string } | undefined {
-  const texts = parsed.dateTexts;
-  // One row cannot show that the file's dates share a day: it keeps isoDateToYear's label.
-  if (parsed.timeColumn !== 'date' || !texts || texts.length < 2) return undefined;
-  const days = texts.map(calendarDay);
-  const first = days[0];
-  if (!first || days.some((d) => d === undefined || d.monthDay !== first.monthDay)) return undefined;
-  const years = Float64Array.from(days, (d) => d!.year);
-  if (first.monthDay === '07-01' || first.monthDay === '07-02') return { years };
-  const [month, day] = first.monthDay.split('-').map(Number);
-  const example = texts[0];
-  return {
-    years,
-    note: `every date falls on ${day} ${MONTH_NAMES[month - 1]}: each row is read as its calendar year (${example} is the year ${first.year}), `
-      + 'its emissions that year\'s total and its other values that year\'s means',
-  };
+function sameDayNote(parsed: ParsedPathway): string | undefined {
+  const day = parsed.datesOnDay;
+  if (day === undefined || day === '07-01' || day === '07-02') return undefined;
+  return `every date falls on ${dayOfYearName(day)}: each row is read as its calendar year (${parsed.times[0]}-${day} is the year ${parsed.times[0]}), `
+    + 'its emissions that year\'s total and its other values that year\'s means';
 }
-
-const MONTH_NAMES = ['January', 'February', 'March', 'April', 'May', 'June', 'July', 'August', 'September', 'October', 'November', 'December'];
 
 /**
  * Rows closer together than this many years are taken to be sub-annual values (monthly, seasonal)
