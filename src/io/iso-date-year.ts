@@ -27,7 +27,7 @@ const REDUCED_PRECISION = /^[+-]?\d{4}(-?\d{2})?$|^\d{4}-?W\d{2}$/i;
  *
  * This is the label of one date on its own. A file whose dates all fall on the same day of the year
  * (all 1 January, say) names calendar years instead: parsePathway labels each row with its date's
- * calendar year (sameDayCalendarYears; 2030-01-01 is the year 2030).
+ * calendar year (commonDayOfDates; 2030-01-01 is the year 2030).
  *
  * @param text - an ISO 8601 calendar, ordinal or week date, optionally with a time and offset
  * @returns `{ ok: true, year }` with the decimal year label, or `{ ok: false, reason }`
@@ -70,20 +70,25 @@ export function calendarDay(text: string): { year: number; monthDay: string } | 
 }
 
 /**
- * The calendar years named by dates that all fall on one day of the year (all 1 January, all
- * 31 December ...), or undefined when they do not, or when there are fewer than two (one date cannot
- * show that a file's dates share a day). Such dates name calendar years: 2030-01-01 is the year 2030.
+ * The day of the year most of a file's dates fall on, how many do, and the first date that does not:
+ * when every date falls on it (and there are at least two), the dates name calendar years
+ * (2030-01-01 is the year 2030); when most but not all do, a date is probably mistyped.
  *
  * @param texts - the dates of a file's rows, each accepted by isoDateToYear
- * @returns each date's calendar year and the shared day as `MM-DD`
- * @example sameDayCalendarYears(['2030-01-01', '2040-01-01']) // { years: [2030, 2040], monthDay: '01-01' }
+ * @returns the most common day as `MM-DD` (the earliest row's on a tie), its count, each date's
+ *   calendar year, and the index of the first date on another day (-1 when all share it);
+ *   undefined for fewer than two dates
+ * @example commonDayOfDates(['2030-01-01', '2040-01-01']) // { monthDay: '01-01', count: 2, years: [2030, 2040], firstOther: -1 }
  */
-export function sameDayCalendarYears(texts: readonly string[]): { years: number[]; monthDay: string } | undefined {
+export function commonDayOfDates(texts: readonly string[]): { monthDay: string; count: number; years: number[]; firstOther: number } | undefined {
   if (texts.length < 2) return undefined;
   const days = texts.map(calendarDay);
-  const first = days[0];
-  if (!first || days.some((d) => d === undefined || d.monthDay !== first.monthDay)) return undefined;
-  return { years: days.map((d) => d!.year), monthDay: first.monthDay };
+  if (days.some((d) => d === undefined)) return undefined;
+  const counts = new Map<string, number>();
+  for (const d of days) counts.set(d!.monthDay, (counts.get(d!.monthDay) ?? 0) + 1);
+  let monthDay = days[0]!.monthDay;
+  for (const [day, count] of counts) if (count > counts.get(monthDay)!) monthDay = day;
+  return { monthDay, count: counts.get(monthDay)!, years: days.map((d) => d!.year), firstOther: days.findIndex((d) => d!.monthDay !== monthDay) };
 }
 
 /**

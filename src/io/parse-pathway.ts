@@ -1,7 +1,7 @@
 import Papa from 'papaparse';
 import { InputError, type InputProblem } from '../errors.js';
 import { GASES, PATHWAY_COLUMNS, type Gas, type PathwayColumn } from '../pathway.js';
-import { isoDateToYear, sameDayCalendarYears } from './iso-date-year.js';
+import { commonDayOfDates, isoDateToYear } from './iso-date-year.js';
 import { nearestName } from './nearest-name.js';
 import { VALUE_BOUNDS } from './value-bounds.js';
 
@@ -22,6 +22,11 @@ export interface ParsedPathway {
   times: Float64Array;
   /** With dates all on one day of the year: that day as `MM-DD` (the rows are then calendar years). */
   datesOnDay?: string;
+  /**
+   * With at least half of the dates (two or more) on one day of the year but not all: that day, how
+   * many, and the line of the first date on another day (toAnnual notes a probable typo).
+   */
+  datesMostlyOnDay?: { monthDay: string; count: number; otherLine: number };
   /** Data columns present, canonical lower-case names, one value per row in the column's unit. */
   columns: Partial<Record<PathwayColumn, Float64Array>>;
   /** 1-based physical line of each row in the file (comment and blank lines counted). */
@@ -240,7 +245,11 @@ export function parsePathway(text: string, file: string): ParsedPathway {
     if (v) columns[column] = Float64Array.from(v);
   }
   // Dates all on one day of the year name calendar years (DESIGN.md conventions; README).
-  const sameDay = timeRole!.name === 'date' ? sameDayCalendarYears(dateTexts) : undefined;
+  const common = timeRole!.name === 'date' ? commonDayOfDates(dateTexts) : undefined;
+  const sameDay = common && common.firstOther < 0 ? common : undefined;
+  const mostly = common && !sameDay && common.count >= 2 && 2 * common.count >= dateTexts.length
+    ? { monthDay: common.monthDay, count: common.count, otherLine: rowLines[common.firstOther] }
+    : undefined;
   return {
     file,
     name: metadata.name || baseName(file),
@@ -248,6 +257,7 @@ export function parsePathway(text: string, file: string): ParsedPathway {
     timeColumn: timeRole!.name,
     times: Float64Array.from(sameDay ? sameDay.years : times),
     ...(sameDay ? { datesOnDay: sameDay.monthDay } : {}),
+    ...(mostly ? { datesMostlyOnDay: mostly } : {}),
     columns,
     rowLines: Int32Array.from(rowLines),
     headerLine,

@@ -80,9 +80,16 @@ export function toAnnual(parsed: ParsedPathway): Pathway {
 /**
  * The note for a `date` file whose dates all fall on one day of the year (parsePathway then labels
  * the rows with their calendar years), unless the day is 1 or 2 July, whose dates name their whole
- * years anyway (isoDateToYear).
+ * years anyway (isoDateToYear); or for one whose dates mostly do, where one date on another day is
+ * probably a typo that moves every row half a year.
  */
 function sameDayNote(parsed: ParsedPathway): string | undefined {
+  const mostly = parsed.datesMostlyOnDay;
+  if (mostly && mostly.monthDay !== '07-01' && mostly.monthDay !== '07-02') {
+    return `${mostly.count} of the ${parsed.times.length} dates fall on ${dayOfYearName(mostly.monthDay)} but the date on line ${mostly.otherLine} does not, `
+      + 'so every date is read as the centre of an annual mean (a date on 1 January stands half a year before its year\'s middle); '
+      + `if the dates name calendar years, put all of them on ${dayOfYearName(mostly.monthDay)}`;
+  }
   const day = parsed.datesOnDay;
   if (day === undefined || day === '07-01' || day === '07-02') return undefined;
   return `every date falls on ${dayOfYearName(day)}: each row is read as its calendar year (${parsed.times[0]}-${day} is the year ${parsed.times[0]}), `

@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { calendarDay, isoDateToYear } from '../../src/io/iso-date-year.js';
+import { calendarDay, commonDayOfDates, isoDateToYear } from '../../src/io/iso-date-year.js';
 
 /**
  * Independent oracle: the same convention computed with the JavaScript Date's UTC day arithmetic
@@ -105,5 +105,13 @@ describe('calendarDay', () => {
     expect(calendarDay('2030-W01-2')).toEqual({ year: 2030, monthDay: '01-01' });
     expect(calendarDay('2030-07')).toBeUndefined();
     expect(calendarDay('2030-02-30')).toBeUndefined();
+  });
+});
+
+describe('commonDayOfDates', () => {
+  it('finds the shared day and the calendar years, the first date off it, and nothing for one date', () => {
+    expect(commonDayOfDates(['2030-01-01', '2040-01-01'])).toEqual({ monthDay: '01-01', count: 2, years: [2030, 2040], firstOther: -1 });
+    expect(commonDayOfDates(['2030-01-01', '2040-01-02', '2050-01-01'])).toEqual({ monthDay: '01-01', count: 2, years: [2030, 2040, 2050], firstOther: 1 });
+    expect(commonDayOfDates(['2030-01-01'])).toBeUndefined();
   });
 });

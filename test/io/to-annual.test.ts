@@ -172,3 +172,16 @@ describe('toAnnual with dates all on one day of the year (calendar years)', () =
     expect(() => toAnnual(parsePathway('date,co2_ppm\n2030-01-01,440\n', 'one.csv'))).toThrow(InputError);
   });
 });
+
+describe('toAnnual with dates mostly on one day of the year', () => {
+  it('notes the date that breaks the pattern (a probable typo) and keeps every date as the centre of an annual mean', () => {
+    const parsed = parsePathway('date,co2_gtco2\n2030-01-01,40\n2040-01-02,30\n2050-01-01,20\n', 'typo.csv');
+    const p = toAnnual(parsed);
+    expect(parsed.datesOnDay).toBeUndefined();
+    expect(p.years[0]).toBe(2030); // 2029.5014 rounds up to its first whole year
+    expect(p.provenance.notes[0]).toBe(
+      '2 of the 3 dates fall on 1 January but the date on line 3 does not, so every date is read as the centre of an annual mean '
+        + "(a date on 1 January stands half a year before its year's middle); if the dates name calendar years, put all of them on 1 January",
+    );
+  });
+});
