@@ -84,7 +84,7 @@ export interface CoupledModel {
 /**
  * Builds the right-hand side of the coupled system (one state vector, one integrator): the
  * continuous-time statement of the model whose production scheme steps calendar years in closed
- * form (co2YearInto, gasYear, the two-box propagator). Integrated by odex it is the test oracle of
+ * form (co2YearInto, gasYear, the one two-box step). Integrated by odex it is the test oracle of
  * that scheme (test/carbon/coupled-ode-oracle.ts).
  *
  *

@@ -122,10 +122,10 @@ interface GasPlan {
  *   rate at the join). The boxes then hold the carbon-cycle state the record implies, and the
  *   emission years continue from it.
  * - Each year: the CO2 boxes step exactly with the feedback frozen at 1 January and the previous
- *   year's warming (co2YearInto); CH4 and N2O step exactly with their lifetime frozen at 1 January
- *   (gasYear); the year's annual-mean concentrations give its ERF; the two-box model steps from the
- *   previous year with forcing linear between the years' values (the exact propagator, as a
- *   concentration-driven run with the exact method).
+ *   year's warming (co2YearInto); CH4 and N2O step exactly with the lifetime of the year's middle
+ *   concentration (gasYear); the year's annual-mean concentrations give its ERF; the two-box model
+ *   steps from the previous year with forcing linear between the years' values (the one two-box
+ *   step, stepTwoBoxInto, as a concentration-driven run takes).
  * - The start is an equilibrium at the first year's concentrations (pre-industrial for a gas given
  *   as emissions there); natural CH4 and N2O emissions balance the sinks at it.
  *
