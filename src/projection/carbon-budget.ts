@@ -139,7 +139,7 @@ export function carbonBudget(nonCo2: Pathway, options: CarbonBudgetOptions): Car
     const emission = new Float64Array(n).fill(NaN);
     for (let k = joinIndex; k < n; k++) emission[k] = gtco2ToGtc(k < fromIndex ? rate : future[k - fromIndex]);
     const one = sliceMemberParameters(parameters, r, r + 1);
-    const w = runMembers({ ...task, carbon: { ...carbon, co2EmissionGtcPerYr: emission } }, one, undefined, co2Out);
+    const w = runMembers({ ...task, carbon: { ...carbon, co2: { ...carbon.co2, emissionGtc: emission } } }, one, undefined, co2Out);
     return rebased(w, baseline[0] - y0, baseline[1] - y0);
   };
   for (let r = 0; r < parameters.count; r++) members.push({ warming: (future) => runOne(r, future) });
