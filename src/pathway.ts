@@ -49,6 +49,11 @@ export interface PathwayProvenance {
   historyLastYear?: number;
   /** Human-readable notes: interpolation, splice, columns held at pre-industrial values. */
   notes: string[];
+  /**
+   * Assumptions that fill what the file does not give (species following a chosen rule, species
+   * held at present-day emissions): shown in the terminal's headline block and recorded in every file.
+   */
+  assumptions?: string[];
 }
 
 /**
@@ -65,4 +70,9 @@ export interface Pathway {
   /** `# key: value` metadata lines of the file. */
   metadata: Record<string, string>;
   provenance: PathwayProvenance;
+  /**
+   * Set when forcing was computed from emissions (resolveEmissionForcing): from `year` on, ozone and
+   * stratospheric water vapour also respond to the run's CH4 (and N2O) relative to the year before.
+   */
+  responsiveFrom?: { year: number; ozone: boolean; stratH2o: boolean };
 }
