@@ -101,7 +101,7 @@ function main(): void {
       return v;
     };
     out.push(
-      `  { column: '${column}', label: '${label ?? (group === 'pfc' ? row.Formula.replace(/^n-/, '') : row.Acronym || row.Formula)}', name: ${JSON.stringify(row.Name)}, formula: '${row.Formula}', group: '${group}',\n`
+      `  { column: '${column}', acronym: '${row.Acronym}', label: '${label ?? (group === 'pfc' ? row.Formula.replace(/^n-/, '') : row.Acronym || row.Formula)}', name: ${JSON.stringify(row.Name)}, formula: '${row.Formula}', group: '${group}',\n`
       + `    molarMass: ${Number(molarMass.toFixed(3))}, chlorine: ${counts.Cl ?? 0}, bromine: ${counts.Br ?? 0},\n`
       + `    lifetimeYr: ${num('Lifetime (yr)')}, radiativeEfficiency: ${num('Radiative efficiency (W m-2 ppb-1)')}, `
       + `agwp100: ${num('AGWP100 (W m-2 yr kg-1)')}, gwp100: ${num('GWP100')} },`,
@@ -114,7 +114,9 @@ function main(): void {
 export interface HalogenSpecies {
   /** Column stem: \`<column>_kt\` (emissions, kt yr-1) and \`<column>_ppt\` (concentration, ppt). */
   column: HalogenColumn;
-  /** Name as the AR6 table abbreviates it (acronym, else formula). */
+  /** Acronym in the AR6 table ('' when it has none). */
+  acronym: string;
+  /** Display name: the AR6 acronym, else the formula (perfluorocarbons by formula). */
   label: string;
   /** Chemical name in the AR6 table. */
   name: string;

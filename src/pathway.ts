@@ -1,3 +1,5 @@
+import { HALOGEN_COLUMNS } from './carbon/halogen-species.js';
+
 /**
  * The pathway data model shared by every layer: an annual grid of years with named series.
  * Readers in `io/` build it; physics in `carbon/`, `forcing/` and `climate/` consume it.
@@ -9,12 +11,28 @@ export const CONCENTRATION_COLUMNS = ['co2_ppm', 'ch4_ppb', 'n2o_ppb'] as const;
 export const EMISSION_COLUMNS = ['co2_gtco2', 'ch4_mt', 'n2o_mt'] as const;
 /** Prescribed effective radiative forcing columns, W m-2. */
 export const FORCING_COLUMNS = ['aerosol_wm2', 'other_wm2', 'solar_wm2', 'volcanic_wm2'] as const;
+/**
+ * Emissions of the short-lived aerosol and ozone precursors, Mt per year: SO2, black and organic
+ * carbon, NH3, NOx (as NO2), CO, non-methane VOC (anthropogenic, on top of the 1750 background).
+ */
+export const PRECURSOR_COLUMNS = ['so2_mt', 'bc_mt', 'oc_mt', 'nh3_mt', 'nox_mt', 'co_mt', 'nmvoc_mt'] as const;
+/** Halogenated-gas emissions, kt per year, one per gas of HALOGEN_SPECIES (`hfc134a_kt`). */
+export const HALOGEN_EMISSION_COLUMNS = HALOGEN_COLUMNS.map((c) => `${c}_kt` as const);
+/** Halogenated-gas concentrations, ppt, one per gas of HALOGEN_SPECIES (`hfc134a_ppt`). */
+export const HALOGEN_CONCENTRATION_COLUMNS = HALOGEN_COLUMNS.map((c) => `${c}_ppt` as const);
+/**
+ * Columns of the short-lived precursors and halogenated gases (resolveEmissionForcing turns them into
+ * forcing), including `fgas_mtco2e`: HFC, PFC, SF6 and NF3 emissions together, Mt CO2-eq per year
+ * weighted by the AR6 GWP100.
+ */
+export const SPECIES_COLUMNS = [...PRECURSOR_COLUMNS, 'fgas_mtco2e', ...HALOGEN_EMISSION_COLUMNS, ...HALOGEN_CONCENTRATION_COLUMNS] as const;
 /** Every data column a pathway file may hold, in canonical order. */
-export const PATHWAY_COLUMNS = [...CONCENTRATION_COLUMNS, ...EMISSION_COLUMNS, ...FORCING_COLUMNS] as const;
+export const PATHWAY_COLUMNS = [...CONCENTRATION_COLUMNS, ...EMISSION_COLUMNS, ...FORCING_COLUMNS, ...SPECIES_COLUMNS] as const;
 
 export type ConcentrationColumn = (typeof CONCENTRATION_COLUMNS)[number];
 export type EmissionColumn = (typeof EMISSION_COLUMNS)[number];
 export type ForcingColumn = (typeof FORCING_COLUMNS)[number];
+export type SpeciesColumn = (typeof SPECIES_COLUMNS)[number];
 export type PathwayColumn = (typeof PATHWAY_COLUMNS)[number];
 
 /** The three well-mixed gases and their emission/concentration column pair. */
@@ -37,6 +55,18 @@ export const COLUMN_UNITS: Record<PathwayColumn, string> = {
   other_wm2: 'W m-2',
   solar_wm2: 'W m-2',
   volcanic_wm2: 'W m-2',
+  so2_mt: 'Mt SO2 yr-1',
+  bc_mt: 'Mt BC yr-1',
+  oc_mt: 'Mt OC yr-1',
+  nh3_mt: 'Mt NH3 yr-1',
+  nox_mt: 'Mt NO2 yr-1',
+  co_mt: 'Mt CO yr-1',
+  nmvoc_mt: 'Mt NMVOC yr-1',
+  fgas_mtco2e: 'Mt CO2-eq yr-1 (AR6 GWP100)',
+  ...(Object.fromEntries([
+    ...HALOGEN_EMISSION_COLUMNS.map((c) => [c, 'kt yr-1']),
+    ...HALOGEN_CONCENTRATION_COLUMNS.map((c) => [c, 'ppt']),
+  ]) as Record<(typeof HALOGEN_EMISSION_COLUMNS)[number] | (typeof HALOGEN_CONCENTRATION_COLUMNS)[number], string>),
 };
 
 /** Where the values of a pathway came from, carried into every output. */
