@@ -77,9 +77,10 @@ type Series = Record<string, Float64Array | undefined>;
  *   2019 concentrations carried to F (halogen-present-day.ts).
  * - BC on snow: the history's value times the BC emissions relative to F (AR6 7.SM.1.3: linear in BC
  *   emissions; from memory).
- * Species the file does not give within a group it gives are held at their present-day emissions;
- * a group the file gives nothing of (neither emissions nor forcing) follows `options.absent`, and an
- * emission-driven file (one with `co2_gtco2`) that leaves a group out without it is refused.
+ * A group the file gives nothing of (neither emissions nor forcing) follows `options.absent`, and an
+ * emission-driven file (one with `co2_gtco2`) that leaves a group out without it is refused. Species
+ * missing from a group the file does give follow `options.absent` too, or without it are held at
+ * their present-day emissions; either way the assumption is recorded.
  *
  * @param file the file's own annual pathway (before splicing)
  * @param history the history it will be spliced onto, or undefined when it is not spliced
@@ -167,7 +168,9 @@ export function resolveEmissionForcing(file: Pathway, history: Pathway | undefin
   const sources: Record<string, string> = {};
   const ruleFactor = options.absent ? absentEmissionsFactor(options.absent, years, s.co2_gtco2) : undefined;
   const holdFactor = new Float64Array(n).fill(1);
-  const factorFor = (group: keyof typeof groups) => (groups[group] === 'absent' ? ruleFactor! : holdFactor);
+  // A species missing from a group the file gives follows the chosen rule too, or is held without one.
+  const factor = ruleFactor ?? holdFactor;
+  const partialWord = options.absent ? describeAbsentEmissionsRule(options.absent) : 'held at present-day levels';
   if (options.absent && absentGroups.length > 0) {
     const names: Record<string, string> = { aerosol: 'aerosol precursors', ozone: 'ozone precursors', halogens: 'halogenated gases' };
     assumptions.push(`${absentGroups.map((g) => names[g]).join(', ')} not in the file: emissions ${describeAbsentEmissionsRule(options.absent)} (--absent-emissions)`);
@@ -184,11 +187,10 @@ export function resolveEmissionForcing(file: Pathway, history: Pathway | undefin
     }
     const group = (AEROSOL_PRECURSORS as readonly string[]).includes(p) ? 'aerosol' : 'ozone';
     if (groups[group] === 'emissions') heldPrecursors.push(p);
-    const r = factorFor(group);
-    precursorMt[p] = r.map((x) => x * PRECURSOR_PRESENT_DAY[p]);
+    precursorMt[p] = factor.map((x) => x * PRECURSOR_PRESENT_DAY[p]);
   }
   if (heldPrecursors.length > 0) {
-    assumptions.push(`${heldPrecursors.map((p) => `${p}_mt`).join(', ')} not in the file: held at present-day emissions (${heldPrecursors.map((p) => `${PRECURSOR_PRESENT_DAY[p]} Mt`).join(', ')})`);
+    assumptions.push(`${heldPrecursors.map((p) => `${p}_mt`).join(', ')} not in the file: emissions ${partialWord} (present day ${heldPrecursors.map((p) => `${PRECURSOR_PRESENT_DAY[p]} Mt`).join(', ')})`);
   }
   const at = (k: number): PrecursorEmissions => {
     const e = {} as PrecursorEmissions;
@@ -277,13 +279,12 @@ export function resolveEmissionForcing(file: Pathway, history: Pathway | undefin
       if (!emissions) {
         const present = spliced ? Math.max(0, halogenEmissionsKt(g, pd.ppt2019 - pd.preindustrialPpt, pd.trendPptPerYr)) : 0;
         if (groups.halogens === 'emissions') heldGases.push(g.column);
-        const r = factorFor('halogens');
-        emissions = r.map((x) => x * present);
+        emissions = factor.map((x) => x * present);
       }
       halogenPpt[g.column] = halogenAnomalyPpt(g, Math.max(0, startAnomaly), emissions);
     }
     if (heldGases.length > 0) {
-      assumptions.push(`${heldGases.length} halogenated gases not in the file (${heldGases.slice(0, 4).join(', ')}${heldGases.length > 4 ? ', ...' : ''}): held at present-day emissions`);
+      assumptions.push(`${heldGases.length} halogenated gases not in the file (${heldGases.slice(0, 4).join(', ')}${heldGases.length > 4 ? ', ...' : ''}): emissions ${partialWord}`);
     }
     if (groups.halogens !== 'forcing') {
       const base = historyAt('other_ghg_wm2');
@@ -327,6 +328,7 @@ export function resolveEmissionForcing(file: Pathway, history: Pathway | undefin
   const series = { ...file.series } as Series;
   for (const [column, values] of Object.entries(out)) series[column] = values;
   const notes = [...file.provenance.notes];
+  notes.push(...assumptions.map((a) => `assumption: ${a}`));
   if (aerosolScale) notes.push(`aerosol forcing from precursor emissions, anchored at the history's ${anchorYear} value: AR6 aerosol-radiation form x ${aerosolScale.ari.toFixed(2)}, aerosol-cloud form x ${aerosolScale.aci.toFixed(2)}`);
   const pathway: Pathway = {
     ...file,

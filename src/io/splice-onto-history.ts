@@ -158,7 +158,8 @@ export function spliceOntoHistory(future: Pathway, history: Pathway): Pathway {
     years,
     series,
     metadata: future.metadata,
-    provenance: { source: future.provenance.source, spliceYear: f0, historyLastYear: Math.min(hLast, f0 - 1), notes },
+    provenance: { source: future.provenance.source, spliceYear: f0, historyLastYear: Math.min(hLast, f0 - 1), notes, assumptions: future.provenance.assumptions },
+    responsiveFrom: future.responsiveFrom,
   };
 }
 
