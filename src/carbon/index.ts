@@ -10,6 +10,7 @@ export { diagnoseEmissions } from './diagnose-emissions.js';
 export type { DiagnosedEmissions } from './diagnose-emissions.js';
 export {
   CH4_CYCLE,
+  ch4CycleFromJoin,
   gasEmissionsForTendency,
   gasLifetimeYr,
   gasSinkMt,
@@ -41,3 +42,7 @@ export {
 export { irf100Target, MILLAR_2017, uptakeTimescaleScaling } from './uptake-feedback.js';
 export { annualCarbonState, annualCarbonStepForIncreaseInto, annualCarbonStepInto, annualTimescaleScaling, atmosphericGtc } from './annual-carbon-step.js';
 export type { AnnualCarbonState } from './annual-carbon-step.js';
+export { halogenAnomalyPpt, halogenEmissionsKt, halogenForcingWm2, ktPerPpt } from './halogen-cycle.js';
+export { HALOGEN_PRESENT_DAY, HALOGEN_PRESENT_DAY_YEAR } from './halogen-present-day.js';
+export { HALOGEN_COLUMNS, HALOGEN_SPECIES } from './halogen-species.js';
+export type { HalogenColumn, HalogenSpecies } from './halogen-species.js';

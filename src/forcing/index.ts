@@ -5,3 +5,15 @@ export { co2ErfAr6, co2Forcing, co2ForcingLog, co2SarfMeinshausen, forcingOfDoub
 export type { Co2Formula } from './co2.js';
 export { AR6_ERF_OVER_SARF, MEINSHAUSEN_2020, MYHRE_1998_CO2_COEFFICIENT, PREINDUSTRIAL } from './constants.js';
 export { n2oErfAr6 } from './n2o.js';
+export { ABSENT_EMISSIONS_CHOICES, absentEmissionsFactor, describeAbsentEmissionsRule, parseAbsentEmissionsRule } from './absent-emissions.js';
+export type { AbsentEmissionsRule } from './absent-emissions.js';
+export { AR6_ACI, AR6_ARI_PER_MT, aerosolAciWm2, aerosolAriWm2, PRECURSOR_BACKGROUND_1750, PRECURSOR_PRESENT_DAY, PRECURSORS } from './aerosol.js';
+export type { Precursor, PrecursorEmissions } from './aerosol.js';
+export { BROMINE_EFFICIENCY, eescPpt, FRACTIONAL_RELEASE } from './eesc.js';
+export { AEROSOL_PRECURSORS, fluorinatedShares, OZONE_PRECURSORS, resolveEmissionForcing } from './emission-forcing.js';
+export type { EmissionForcing, EmissionForcingOptions } from './emission-forcing.js';
+export { methaneChemistryWm2 } from './methane-chemistry.js';
+export type { ChemistryChange } from './methane-chemistry.js';
+export { AR6_OZONE, ozoneErfChangeWm2 } from './ozone.js';
+export type { OzoneDriverChange } from './ozone.js';
+export { STRAT_H2O_PER_CH4_ERF, stratH2oErfWm2 } from './strat-h2o.js';
