@@ -25,3 +25,24 @@ export function methaneChemistryWm2(ch4Ppb: number, n2oPpb: number, ch4RefPpb: n
     stratH2o: stratH2oErfWm2(ch4ErfAr6(ch4Ppb, n2oPpb) - ch4ErfAr6(ch4RefPpb, n2oRefPpb)),
   };
 }
+
+/** Where a run adds the CH4 and N2O chemistry terms: from `fromIndex` on, relative to the state at `refIndex`. */
+export interface ChemistryAnchor {
+  fromIndex: number;
+  refIndex: number;
+  ozone: boolean;
+  stratH2o: boolean;
+}
+
+/**
+ * The chemistry anchor of a pathway on its years (from `Pathway.responsiveFrom`, set by
+ * resolveEmissionForcing), or undefined when the file gives ozone and strat. H2O itself.
+ * The reference is the year before the first file year (the join), or the first year itself.
+ * @example chemistryAnchor(years1750to2100, { year: 2025, ozone: true, stratH2o: true }) // { fromIndex: 275, refIndex: 274, ... }
+ */
+export function chemistryAnchor(years: Float64Array, responsiveFrom?: { year: number; ozone: boolean; stratH2o: boolean }): ChemistryAnchor | undefined {
+  if (!responsiveFrom || !(responsiveFrom.ozone || responsiveFrom.stratH2o)) return undefined;
+  const fromIndex = Math.max(0, responsiveFrom.year - years[0]);
+  if (fromIndex >= years.length) return undefined;
+  return { fromIndex, refIndex: Math.max(0, fromIndex - 1), ozone: responsiveFrom.ozone, stratH2o: responsiveFrom.stratH2o };
+}
