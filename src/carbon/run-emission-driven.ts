@@ -230,7 +230,7 @@ export function runEmissionDriven(pathway: Pathway, params: ClimateParams, optio
     if (plan.given) for (let k = 0; k <= plan.lastConcentration; k++) plan.emission[k] = gases[gas].emissionMt[k];
   }
 
-  const forcing = forcingByAgent(n, { co2Ppm, ch4Ppb, n2oPpb, prescribed: pathway.series }, options.forcing);
+  const forcing = forcingByAgent(n, { co2Ppm, ch4Ppb, n2oPpb, prescribed: pathway.series, chemistry }, options.forcing);
   const imbalanceWm2 = new Float64Array(n);
   for (let k = 0; k < n; k++) imbalanceWm2[k] = topOfAtmosphereImbalance(params, forcing.total[k], surfaceK[k], deepK[k]);
 

@@ -1,7 +1,7 @@
 import type { AbsentEmissionsRule } from '../forcing/absent-emissions.js';
 import { Command } from 'commander';
 import { InputError, WarmcastError, type InputProblem } from '../errors.js';
-import { describePathway, readPathway } from '../io/index.js';
+import { describeAgentSources, describePathway, readPathway } from '../io/index.js';
 import type { CliIo } from './cli-io.js';
 import { pathwayArg, absentEmissionsOption } from './options.js';
 
@@ -17,8 +17,9 @@ export function checkCommand(io: CliIo): Command {
       const problems: InputProblem[] = [];
       for (const arg of pathways) {
         try {
-          const { parsed, pathway } = readPathway(pathwayArg(arg, io), { splice: opts.splice, absentEmissions: opts.absentEmissions });
-          io.stdout(describePathway(parsed, pathway).join('\n') + '\n\n');
+          const read = readPathway(pathwayArg(arg, io), { splice: opts.splice, absentEmissions: opts.absentEmissions });
+          const lines = [...describePathway(read.parsed, read.pathway), ...describeAgentSources(read.annual, read.pathway, read.emissionForcing)];
+          io.stdout(lines.join('\n') + '\n\n');
         } catch (e) {
           if (e instanceof InputError) problems.push(...e.problems);
           else if (e instanceof WarmcastError) problems.push({ file: arg, code: e.code, message: e.message });

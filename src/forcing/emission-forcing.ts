@@ -236,7 +236,7 @@ export function resolveEmissionForcing(file: Pathway, history: Pathway | undefin
     const how = groups.aerosol === 'emissions' ? "the file's precursor emissions" : `assumed precursor emissions (${describeAbsentEmissionsRule(options.absent!)})`;
     sources.aerosol_ari = `${historyLabel}${how} (AR6 form x ${ariScale.toFixed(2)})`;
     sources.aerosol_aci = `${historyLabel}${how} (AR6 form x ${aciScale.toFixed(2)})`;
-    if (!has('bc_snow_wm2')) {
+    if (!has('bc_snow_wm2') && !has('other_wm2')) {
       const bc0 = precursorMt.bc[0];
       const base = historyAt('bc_snow_wm2');
       out.bc_snow_wm2 = precursorMt.bc.map((e) => (bc0 > 0 ? (base * e) / bc0 : base));
@@ -294,7 +294,7 @@ export function resolveEmissionForcing(file: Pathway, history: Pathway | undefin
         for (let k = 0; k < n; k++) other[k] += halogenForcingWm2(g, d[k] - d[0]);
       }
       out.other_ghg_wm2 = other.map((x) => base + x);
-      sources.other_ghg = `${historyLabel}${groups.halogens === 'emissions' ? "the file's halogenated gases" : `assumed halogenated-gas emissions (${describeAbsentEmissionsRule(options.absent!)})`} (AR6 lifetimes and radiative efficiencies)`;
+      sources.other_ghg = `${historyLabel}${groups.halogens === 'emissions' ? `the file's halogenated gases${heldGases.length > 0 ? ` (${heldGases.length} others assumed)` : ''}` : `assumed halogenated-gas emissions (${describeAbsentEmissionsRule(options.absent!)})`} (AR6 lifetimes and radiative efficiencies)`;
     } else {
       sources.other_ghg = 'the file (forcing)';
     }

@@ -3,6 +3,7 @@ import { join } from 'node:path';
 import { InputError } from '../errors.js';
 import type { AbsentEmissionsRule } from '../forcing/absent-emissions.js';
 import { resolveEmissionForcing, type EmissionForcing } from '../forcing/emission-forcing.js';
+import { splitLumpedForcing } from '../forcing/lumped-forcing.js';
 import type { Pathway } from '../pathway.js';
 import { bundledPathwayNames, bundledPathwaysDir, loadHistory } from './bundled-pathways.js';
 import { parsePathway, type ParsedPathway } from './parse-pathway.js';
@@ -53,8 +54,11 @@ export function readPathway(arg: string, options: LoadPathwayOptions = {}): Read
   if (source !== path) annual = { ...annual, provenance: { ...annual.provenance, source } };
   const splice = options.splice !== false && !isHistoryFile(path, pathwaysDir());
   const history = splice ? loadHistory(pathwaysDir()) : undefined;
+  // Forcing from the file's emissions first (it sees the lumped columns as the user wrote them), then
+  // lumped aerosol_wm2 / other_wm2 become agent columns before the splice, so that the history's
+  // agent columns are replaced by the file's and not added to them.
   const emissionForcing = resolveEmissionForcing(annual, history, { absent: options.absentEmissions });
-  let pathway = emissionForcing.pathway;
+  let pathway = splitLumpedForcing(emissionForcing.pathway);
   if (history) pathway = spliceOntoHistory(pathway, history);
   return { parsed, annual, pathway, emissionForcing };
 }
@@ -62,7 +66,8 @@ export function readPathway(arg: string, options: LoadPathwayOptions = {}): Read
 /**
  * Reads a pathway for a run. `arg` is a file path or the name of a bundled pathway (`swift` or
  * `swift.csv` for `pathways/swift.csv`); an existing file wins over a bundled name. The file is read
- * (at most MAX_PATHWAY_BYTES, UTF-8), validated (parsePathway), put on the annual grid (toAnnual) and,
+ * (at most MAX_PATHWAY_BYTES, UTF-8), validated (parsePathway), put on the annual grid (toAnnual),
+ * its lumped `aerosol_wm2` and `other_wm2` split over their agents (splitLumpedForcing) and,
  * unless `splice: false`, spliced onto the bundled history (spliceOntoHistory) when it starts later
  * than the history. A bundled pathway's provenance source is `bundled:<name>`; a file's is its path.
  *

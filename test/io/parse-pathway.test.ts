@@ -73,6 +73,11 @@ const badCases: [fixture: string, problem: Expected][] = [
     message: 'must give CO2 either as a concentration (co2_ppm) or as emissions (co2_gtco2), not both',
     expected: 'one column per gas: co2_ppm or co2_gtco2',
   }],
+  ['forcing-twice.csv', {
+    code: 'input.forcing-twice', line: 2, column: 'aerosol_wm2', value: 'aerosol_wm2',
+    message: 'must give aerosol_wm2 or its agent columns (aerosol_ari_wm2, aerosol_aci_wm2), not both',
+    expected: 'either aerosol_wm2 alone or agent columns only',
+  }],
   ['duplicate-column.csv', {
     code: 'input.duplicate-column', line: 1, column: 'CO2_ppm', value: 'CO2_ppm',
     message: 'must name each column once: header cells 2 and 3 are both "co2_ppm"', expected: 'each column once',
