@@ -131,13 +131,18 @@ export function resolveEmissionForcing(file: Pathway, history: Pathway | undefin
   const anyEmissions = aerosolGiven.length + ozoneGiven.length + halogenGiven.length > 0 || fgas !== undefined;
   if (!emissionDriven && !anyEmissions) return { pathway: file, sources: {}, assumptions: [] };
 
+  // How each group is given: emissions, forcing, an assumption (the rule), or not at all. A file
+  // without CO2 emissions (concentrations with a few species) leaves an absent group to the history.
+  const absentKind = options.absent ? 'assumed' : emissionDriven ? 'absent' : 'history';
+  const kindOf = (emissions: boolean, forcing: boolean) => (emissions ? 'emissions' : forcing ? 'forcing' : absentKind);
   const groups = {
-    aerosol: aerosolGiven.length > 0 ? 'emissions' : aerosolForcingGiven.length > 0 ? 'forcing' : 'absent',
-    ozone: ozoneGiven.length > 0 ? 'emissions' : ozoneForcingGiven.length > 0 ? 'forcing' : 'absent',
-    halogens: halogenGiven.length > 0 || fgas ? 'emissions' : halogenForcingGiven.length > 0 ? 'forcing' : 'absent',
-  } as const;
+    aerosol: kindOf(aerosolGiven.length > 0, aerosolForcingGiven.length > 0),
+    ozone: kindOf(ozoneGiven.length > 0, ozoneForcingGiven.length > 0),
+    halogens: kindOf(halogenGiven.length > 0 || fgas !== undefined, halogenForcingGiven.length > 0),
+  };
+  const computes = (kind: string) => kind === 'emissions' || kind === 'assumed';
   const absentGroups = (Object.keys(groups) as (keyof typeof groups)[]).filter((g) => groups[g] === 'absent');
-  if (absentGroups.length > 0 && !options.absent) {
+  if (absentGroups.length > 0) {
     const what: Record<string, string> = {
       aerosol: `aerosol precursors (${AEROSOL_PRECURSORS.map((p) => `${p}_mt`).join(', ')}) nor aerosol forcing (aerosol_ari_wm2, aerosol_aci_wm2 or aerosol_wm2)`,
       ozone: `ozone precursors (${OZONE_PRECURSORS.map((p) => `${p}_mt`).join(', ')}) nor ozone forcing (ozone_wm2 or other_wm2)`,
@@ -171,9 +176,10 @@ export function resolveEmissionForcing(file: Pathway, history: Pathway | undefin
   // A species missing from a group the file gives follows the chosen rule too, or is held without one.
   const factor = ruleFactor ?? holdFactor;
   const partialWord = options.absent ? describeAbsentEmissionsRule(options.absent) : 'held at present-day levels';
-  if (options.absent && absentGroups.length > 0) {
+  const assumedGroups = (Object.keys(groups) as (keyof typeof groups)[]).filter((g) => groups[g] === 'assumed');
+  if (options.absent && assumedGroups.length > 0) {
     const names: Record<string, string> = { aerosol: 'aerosol precursors', ozone: 'ozone precursors', halogens: 'halogenated gases' };
-    assumptions.push(`${absentGroups.map((g) => names[g]).join(', ')} not in the file: emissions ${describeAbsentEmissionsRule(options.absent)} (--absent-emissions)`);
+    assumptions.push(`${assumedGroups.map((g) => names[g]).join(', ')} not in the file: emissions ${describeAbsentEmissionsRule(options.absent)} (--absent-emissions)`);
   }
 
   // Precursor emissions, given or filled.
@@ -203,7 +209,7 @@ export function resolveEmissionForcing(file: Pathway, history: Pathway | undefin
 
   // Aerosols, anchored multiplicatively.
   let aerosolScale: EmissionForcing['aerosolScale'];
-  if (groups.aerosol !== 'forcing') {
+  if (computes(groups.aerosol)) {
     const ari0 = aerosolAriWm2(at(0));
     const aci0 = aerosolAciWm2(at(0));
     const ariScale = anchorScale(historyAt('aerosol_ari_wm2'), ari0);
@@ -242,13 +248,13 @@ export function resolveEmissionForcing(file: Pathway, history: Pathway | undefin
       out.bc_snow_wm2 = precursorMt.bc.map((e) => (bc0 > 0 ? (base * e) / bc0 : base));
       sources.bc_snow = `${historyLabel}scaled with BC emissions`;
     }
-  } else {
+  } else if (groups.aerosol === 'forcing') {
     sources.aerosol_ari = 'the file (forcing)';
     sources.aerosol_aci = 'the file (forcing)';
   }
 
   // Halogenated gases: concentrations from emissions (or as given), from the state at the join.
-  const needHalogens = groups.halogens !== 'forcing' || groups.ozone !== 'forcing';
+  const needHalogens = computes(groups.halogens) || computes(groups.ozone);
   let halogenPpt: Partial<Record<HalogenColumn, Float64Array>> | undefined;
   if (needHalogens) {
     if (spliced && !(years[0] >= HALOGEN_JOIN_YEARS[0] && years[0] <= HALOGEN_JOIN_YEARS[1])) {
@@ -286,7 +292,7 @@ export function resolveEmissionForcing(file: Pathway, history: Pathway | undefin
     if (heldGases.length > 0) {
       assumptions.push(`${heldGases.length} halogenated gases not in the file (${heldGases.slice(0, 4).join(', ')}${heldGases.length > 4 ? ', ...' : ''}): emissions ${partialWord}`);
     }
-    if (groups.halogens !== 'forcing') {
+    if (computes(groups.halogens)) {
       const base = historyAt('other_ghg_wm2');
       const other = new Float64Array(n);
       for (const g of HALOGEN_SPECIES) {
@@ -295,13 +301,12 @@ export function resolveEmissionForcing(file: Pathway, history: Pathway | undefin
       }
       out.other_ghg_wm2 = other.map((x) => base + x);
       sources.other_ghg = `${historyLabel}${groups.halogens === 'emissions' ? `the file's halogenated gases${heldGases.length > 0 ? ` (${heldGases.length} others assumed)` : ''}` : `assumed halogenated-gas emissions (${describeAbsentEmissionsRule(options.absent!)})`} (AR6 lifetimes and radiative efficiencies)`;
-    } else {
-      sources.other_ghg = 'the file (forcing)';
     }
   }
+  if (groups.halogens === 'forcing') sources.other_ghg = 'the file (forcing)';
 
   // Ozone: precursor and EESC terms here, CH4 and N2O terms in forcingByAgent.
-  if (groups.ozone !== 'forcing') {
+  if (computes(groups.ozone)) {
     const eesc = new Float64Array(n);
     for (const g of HALOGEN_SPECIES) {
       const d = halogenPpt![g.column]!;
@@ -314,7 +319,7 @@ export function resolveEmissionForcing(file: Pathway, history: Pathway | undefin
       + o.perNoxMt * (p.nox[k] - p.nox[0]) + o.perCoMt * (p.co[k] - p.co[0]) + o.perNmvocMt * (p.nmvoc[k] - p.nmvoc[0])
       + o.perEesc * (eesc[k] - eesc[0]));
     sources.ozone = `${historyLabel}${groups.ozone === 'emissions' ? "the file's NOx, CO and NMVOC" : `assumed NOx, CO and NMVOC (${describeAbsentEmissionsRule(options.absent!)})`}, halogens' EESC, and the run's CH4 and N2O (AR6 coefficients)`;
-  } else {
+  } else if (groups.ozone === 'forcing') {
     sources.ozone = 'the file (forcing)';
   }
   const stratGiven = has('strat_h2o_wm2') || has('other_wm2');
@@ -334,7 +339,7 @@ export function resolveEmissionForcing(file: Pathway, history: Pathway | undefin
     ...file,
     series: series as Pathway['series'],
     provenance: { ...file.provenance, notes, assumptions: [...(file.provenance.assumptions ?? []), ...assumptions] },
-    responsiveFrom: { year: years[0], ozone: groups.ozone !== 'forcing', stratH2o: !stratGiven },
+    responsiveFrom: { year: years[0], ozone: computes(groups.ozone), stratH2o: !stratGiven },
   };
   return { pathway, sources, assumptions, aerosolScale, halogenPpt, precursorMt };
 }

@@ -117,3 +117,18 @@ describe('resolveEmissionForcing', () => {
     expect(resolveEmissionForcing(f, history()).pathway).toBe(f);
   });
 });
+
+describe('resolveEmissionForcing with halogen concentrations', () => {
+  it('a concentration file with hfc134a_ppt moves other_ghg by RE x the change from its first year; absent groups stay with the history', () => {
+    const f = file({ co2_ppm: [425, 500], hfc134a_ppt: [130, 330] });
+    const r = resolveEmissionForcing(f, history());
+    const s = r.pathway.series as Record<string, Float64Array>;
+    const hfc = HALOGEN_SPECIES.find((g) => g.column === 'hfc134a')!;
+    const heldOthers = s.other_ghg_wm2[75] - 0.4081 - (hfc.radiativeEfficiency * 200) / 1000;
+    // The other gases continue from their present-day state with present-day emissions (held); CFCs decline.
+    expect(heldOthers).toBeLessThan(0);
+    expect(s.aerosol_aci_wm2).toBeUndefined();
+    expect(r.sources.other_ghg).toMatch(/the file's halogenated gases/);
+    expect(r.assumptions.join(' ')).toMatch(/35 halogenated gases not in the file/);
+  });
+});
