@@ -193,7 +193,7 @@ export function runEmissionDriven(pathway: Pathway, params: ClimateParams, optio
   let d = 0;
   for (let k = 0; k < n; k++) {
     co2Ppm[k] = co2YearInto(carbon, co2Drivers, k, t, 1);
-    if (plans.co2.mode[k] === CONCENTRATION && plans.co2.given) plans.co2.emission[k] = gtcToGtco2(carbon.lastEmissionGtc);
+    if (plans.co2.mode[k] === CONCENTRATION) plans.co2.emission[k] = gtcToGtco2(carbon.lastEmissionGtc);
     emittedGtc[k] = carbon.emittedGtc;
     atmosphericStockGtc[k] = atmosphericGtc(carbon);
     co2YearEndPpm[k] = co2Drivers.startPpm + atmosphericStockGtc[k] / GTC_PER_PPM;
@@ -217,7 +217,7 @@ export function runEmissionDriven(pathway: Pathway, params: ClimateParams, optio
     }
     surfaceK[k] = t;
     deepK[k] = d;
-    if (!(Number.isFinite(co2Ppm[k]) && Number.isFinite(ch4Ppb[k]) && Number.isFinite(n2oPpb[k]) && Number.isFinite(t) && ch4Ppb[k] > 0 && n2oPpb[k] > 0)) {
+    if (!(co2Ppm[k] > 0 && ch4Ppb[k] > 0 && n2oPpb[k] > 0 && Number.isFinite(co2Ppm[k] + ch4Ppb[k] + n2oPpb[k] + t))) {
       throw new NumericalError(
         `${pathway.name}: the run left the physical range in ${years[k]} (CO2 ${co2Ppm[k]} ppm, CH4 ${ch4Ppb[k]} ppb, N2O ${n2oPpb[k]} ppb, warming ${t} K); `
           + 'check the emissions for values far below zero',
@@ -227,14 +227,14 @@ export function runEmissionDriven(pathway: Pathway, params: ClimateParams, optio
   }
   for (const gas of ['ch4', 'n2o'] as const) {
     const plan = plans[gas];
-    if (plan.given) for (let k = 0; k <= plan.lastConcentration; k++) plan.emission[k] = gases[gas].emissionMt[k];
+    for (let k = 0; k <= plan.lastConcentration; k++) plan.emission[k] = gases[gas].emissionMt[k];
   }
 
   const forcing = forcingByAgent(n, { co2Ppm, ch4Ppb, n2oPpb, prescribed: pathway.series, chemistry }, options.forcing);
   const imbalanceWm2 = new Float64Array(n);
   for (let k = 0; k < n; k++) imbalanceWm2[k] = topOfAtmosphereImbalance(params, forcing.total[k], surfaceK[k], deepK[k]);
 
-  const co2EmissionsGtco2 = plans.co2.given ? plans.co2.emission : emittedGtc.map((_, k) => gtcToGtco2(k === 0 ? emittedGtc[0] : emittedGtc[k] - emittedGtc[k - 1]));
+  const co2EmissionsGtco2 = plans.co2.emission;
   const cumulativeCo2Gtco2 = new Float64Array(n);
   let sum = 0;
   for (let k = Math.max(0, CUMULATIVE_FROM_YEAR - years[0]); k < n; k++) {

@@ -12,7 +12,10 @@ const fit = fitCarbonCycle(history, params);
 describe('fitCarbonCycle on the bundled history', () => {
   it('regenerating src/carbon/fitted-carbon-cycle.ts gives the committed file byte for byte (scripts/fit-carbon-cycle.ts)', () => {
     const committed = readFileSync(new URL('../../src/carbon/fitted-carbon-cycle.ts', import.meta.url), 'utf8');
-    expect(fittedCarbonCycleModule(fit)).toBe(committed);
+    expect(
+      fittedCarbonCycleModule(fit),
+      'the history or the carbon scheme changed: run `npx tsc -p tsconfig.build.json && node dist/scripts/fit-carbon-cycle.js` and commit src/carbon/fitted-carbon-cycle.ts',
+    ).toBe(committed);
   });
 
   it('the defaults are the fit: Millar et al. 2017 r0 and rT, the fitted rC', () => {

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { diagnoseEmissions, JOOS_2013, runEmissionDriven, type EmissionRunOptions } from '../../src/carbon/index.js';
 import { calibrate } from '../../src/climate/index.js';
-import { ConfigError } from '../../src/errors.js';
+import { ConfigError, NumericalError } from '../../src/errors.js';
 import { loadHistory, spliceOntoHistory } from '../../src/io/index.js';
 import type { Pathway } from '../../src/pathway.js';
 import { expectAllClose, expectClose } from '../asserts.js';
@@ -253,6 +253,12 @@ describe('runEmissionDriven input checks', () => {
   it('rejects a concentration after emissions started', () => {
     const p = base({ n2o_ppb: Float64Array.of(NaN, NaN, 330), n2o_mt: Float64Array.of(10, 10, NaN) });
     expect(() => runEmissionDriven(p, params, options)).toThrow(/concentrations must come before emissions/);
+  });
+
+  it('stops with a NumericalError naming the year when emissions drive CO2 below zero', () => {
+    const p = pathway(2000, 3, { co2_gtco2: Float64Array.of(-5000, -5000, -5000) }, 'removal.csv');
+    expect(() => runEmissionDriven(p, params, options)).toThrow(NumericalError);
+    expect(() => runEmissionDriven(p, params, options)).toThrow(/^removal.csv: the run left the physical range in 200[0-2] \(CO2 -/);
   });
 
   it('rejects a prescribed forcing that is not a number', () => {
