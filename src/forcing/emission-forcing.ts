@@ -254,10 +254,16 @@ export function resolveEmissionForcing(file: Pathway, history: Pathway | undefin
   }
 
   // Halogenated gases: concentrations from emissions (or as given), from the state at the join.
-  const needHalogens = computes(groups.halogens) || computes(groups.ozone);
+  // Ozone needs the halogens only for its EESC term: outside the years the present-day state covers,
+  // a file that gives no halogens keeps EESC at the join (noted) instead of being refused.
+  const joinKnown = !spliced || (years[0] >= HALOGEN_JOIN_YEARS[0] && years[0] <= HALOGEN_JOIN_YEARS[1]);
+  const needHalogens = computes(groups.halogens) || (computes(groups.ozone) && joinKnown);
+  if (computes(groups.ozone) && !needHalogens) {
+    assumptions.push(`ozone-depleting gases held at their ${anchorYear} EESC: the file gives no halogenated gases and starts outside ${HALOGEN_JOIN_YEARS[0]}-${HALOGEN_JOIN_YEARS[1]}, the years the bundled present-day concentrations cover`);
+  }
   let halogenPpt: Partial<Record<HalogenColumn, Float64Array>> | undefined;
   if (needHalogens) {
-    if (spliced && !(years[0] >= HALOGEN_JOIN_YEARS[0] && years[0] <= HALOGEN_JOIN_YEARS[1])) {
+    if (!joinKnown) {
       throw new InputError([{
         file: source,
         code: 'input.halogen-join',
@@ -308,7 +314,7 @@ export function resolveEmissionForcing(file: Pathway, history: Pathway | undefin
   // Ozone: precursor and EESC terms here, CH4 and N2O terms in forcingByAgent.
   if (computes(groups.ozone)) {
     const eesc = new Float64Array(n);
-    for (const g of HALOGEN_SPECIES) {
+    for (const g of halogenPpt ? HALOGEN_SPECIES : []) {
       const d = halogenPpt![g.column]!;
       for (let k = 0; k < n; k++) eesc[k] += eescPpt(g, d[k]);
     }

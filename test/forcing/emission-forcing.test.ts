@@ -132,3 +132,21 @@ describe('resolveEmissionForcing with halogen concentrations', () => {
     expect(r.assumptions.join(' ')).toMatch(/35 halogenated gases not in the file/);
   });
 });
+
+describe('resolveEmissionForcing for a file starting in 2000', () => {
+  it('ozone precursors without halogens: EESC held at the join, stated as an assumption', () => {
+    const years = Float64Array.from({ length: 101 }, (_, i) => 2000 + i);
+    const series = { co2_ppm: years.map(() => 400), nox_mt: years.map((y) => 110 - (y - 2000)) } as Pathway['series'];
+    const f: Pathway = { name: 'early', years, series, metadata: {}, provenance: { source: 'early.csv', notes: [] } };
+    const r = resolveEmissionForcing(f, history());
+    expect(r.assumptions.join(' ')).toMatch(/EESC/);
+    const ozone = (r.pathway.series as Record<string, Float64Array>).ozone_wm2;
+    expectClose(ozone[100] - ozone[0], 1.797e-3 * -100, 1e-12, 'NOx term only');
+  });
+
+  it('halogen emissions from 2000 are refused: the present-day state covers joins in 2010-2040', () => {
+    const years = Float64Array.from({ length: 11 }, (_, i) => 2000 + i);
+    const f: Pathway = { name: 'early', years, series: { co2_ppm: years.map(() => 400), sf6_kt: years.map(() => 9) } as Pathway['series'], metadata: {}, provenance: { source: 'early.csv', notes: [] } };
+    expect(() => resolveEmissionForcing(f, history())).toThrow(/must start between 2010 and 2040/);
+  });
+});
