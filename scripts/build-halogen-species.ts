@@ -10,12 +10,12 @@
  * for perfluorocarbons and gases without an acronym, from the formula (`CF4` -> `cf4`,
  * `c-C4F8` -> `c_c4f8`).
  *
- * The table is read from pathways/records/ when it is there, else from /work/shared/data/ (the
- * published copy). Deterministic: the same table always writes the same bytes.
+ * The table is read from pathways/records/ (the bundled byte-identical copy, with its citation in
+ * pathways/records/README.md). Deterministic: the same table always writes the same bytes.
  *
  * Try: npx tsc -p tsconfig.build.json && node dist/scripts/build-halogen-species.js
  */
-import { existsSync, readFileSync, writeFileSync } from 'node:fs';
+import { readFileSync, writeFileSync } from 'node:fs';
 import { resolve } from 'node:path';
 import Papa from 'papaparse';
 
@@ -84,8 +84,7 @@ function elementCounts(formula: string): Record<string, number> {
 }
 
 function main(): void {
-  const records = resolve('pathways/records', TABLE);
-  const source = existsSync(records) ? records : resolve('/work/shared/data', TABLE);
+  const source = resolve('pathways/records', TABLE);
   const text = readFileSync(source, 'utf8');
   const rows = Papa.parse<Record<string, string>>(text, { header: true, skipEmptyLines: true }).data;
   const out: string[] = [];

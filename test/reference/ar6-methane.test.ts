@@ -1,8 +1,8 @@
 /**
  * Methane's full effect against IPCC AR6 WG1: the metrics table (Table 7.SM.7 / 7.15, the copy in
- * pathways/records or /work/shared/data) and the ERF time series (ar6-erf-1750-2019.csv).
+ * pathways/records) and the ERF time series (ar6-erf-1750-2019.csv).
  */
-import { existsSync, readFileSync } from 'node:fs';
+import { readFileSync } from 'node:fs';
 import Papa from 'papaparse';
 import { describe, expect, it } from 'vitest';
 import { runEmissionDriven } from '../../src/carbon/run-emission-driven.js';
@@ -15,8 +15,7 @@ import { STRAT_H2O_PER_CH4_ERF } from '../../src/forcing/strat-h2o.js';
 import { expectClose, expectWithin } from '../asserts.js';
 
 function record(name: string): Record<string, string>[] {
-  const bundled = `pathways/records/${name}`;
-  const text = readFileSync(existsSync(bundled) ? bundled : `/work/shared/data/${name}`, 'utf8');
+    const text = readFileSync(`pathways/records/${name}`, 'utf8');
   return Papa.parse<Record<string, string>>(text, { header: true, skipEmptyLines: true }).data;
 }
 

@@ -1,8 +1,8 @@
 /**
  * Halogenated gases against the AR6 table (IPCC AR6 WG1 Table 7.SM.7, CC-BY 4.0; the copy in
- * /work/shared/data or pathways/records) and the AR6 halogenated-gas ERF of 2019 (ar6-erf-1750-2019.csv).
+ * pathways/records) and the AR6 halogenated-gas ERF of 2019 (ar6-erf-1750-2019.csv).
  */
-import { existsSync, readFileSync } from 'node:fs';
+import { readFileSync } from 'node:fs';
 import Papa from 'papaparse';
 import { describe, expect, it } from 'vitest';
 import { halogenAnomalyPpt, halogenForcingWm2, ktPerPpt } from '../../src/carbon/halogen-cycle.js';
@@ -11,8 +11,7 @@ import { HALOGEN_SPECIES } from '../../src/carbon/halogen-species.js';
 import { expectClose, expectWithin } from '../asserts.js';
 
 function record(name: string): string {
-  const bundled = `pathways/records/${name}`;
-  return readFileSync(existsSync(bundled) ? bundled : `/work/shared/data/${name}`, 'utf8');
+    return readFileSync(`pathways/records/${name}`, 'utf8');
 }
 
 const table = Papa.parse<Record<string, string>>(record('ar6-ghg-lifetimes-efficiencies-metrics.csv'), { header: true, skipEmptyLines: true }).data;
