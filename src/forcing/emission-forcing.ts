@@ -34,6 +34,8 @@ const AEROSOL_SCALE_LIMITS = [0.2, 5] as const;
 export interface EmissionForcingOptions {
   /** What fills a group of species the file does not give. Without it such a file is refused. */
   absent?: AbsentEmissionsRule;
+  /** Line of the file's first data row (comments counted), for messages about first-year values. */
+  firstRowLine?: number;
 }
 
 /** The result of {@link resolveEmissionForcing}. */
@@ -219,7 +221,7 @@ export function resolveEmissionForcing(file: Pathway, history: Pathway | undefin
         const cols = aerosolGiven.map((p) => `${p}_mt`).join(', ') || 'the assumed precursor emissions';
         throw new InputError([{
           file: source,
-          line: undefined,
+          line: options.firstRowLine,
           column: cols,
           code: 'input.aerosol-emissions-implausible',
           message: `must give first-year (${years[0]}) aerosol precursor emissions that match the history's ${label} forcing in ${anchorYear}: `

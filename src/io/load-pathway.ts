@@ -57,7 +57,7 @@ export function readPathway(arg: string, options: LoadPathwayOptions = {}): Read
   // Forcing from the file's emissions first (it sees the lumped columns as the user wrote them), then
   // lumped aerosol_wm2 / other_wm2 become agent columns before the splice, so that the history's
   // agent columns are replaced by the file's and not added to them.
-  const emissionForcing = resolveEmissionForcing(annual, history, { absent: options.absentEmissions });
+  const emissionForcing = resolveEmissionForcing(annual, history, { absent: options.absentEmissions, firstRowLine: parsed.rowLines[0] });
   let pathway = splitLumpedForcing(emissionForcing.pathway);
   if (history) pathway = spliceOntoHistory(pathway, history);
   return { parsed, annual, pathway, emissionForcing };
