@@ -1,5 +1,5 @@
 import type { ClimateParams } from '../climate/params.js';
-import { twoBoxPropagator } from '../climate/exact-propagator.js';
+import { stepTwoBoxInto, twoBoxSteps } from '../climate/two-box-step.js';
 import { topOfAtmosphereImbalance } from '../climate/two-box.js';
 import { ConfigError, NumericalError } from '../errors.js';
 import { forcingByAgent, ghgForcingFunction, type ForcingOptions, type ForcingSeries } from '../forcing/agents.js';
@@ -188,11 +188,11 @@ export function runEmissionDriven(pathway: Pathway, params: ClimateParams, optio
   const uptakeGtc = new Float64Array(n);
 
   const carbon = annualCarbonState(options.carbonCycle ?? CARBON_CYCLE, feedback);
-  const { phi, g0, g1 } = twoBoxPropagator(params);
-  let t = 0;
-  let d = 0;
+  const steps = twoBoxSteps(params);
+  const t1 = new Float64Array(1);
+  const d1 = new Float64Array(1);
   for (let k = 0; k < n; k++) {
-    co2Ppm[k] = co2YearInto(carbon, co2Drivers, k, t, 1);
+    co2Ppm[k] = co2YearInto(carbon, co2Drivers, k, t1[0], 1);
     if (plans.co2.mode[k] === CONCENTRATION) plans.co2.emission[k] = gtcToGtco2(carbon.lastEmissionGtc);
     emittedGtc[k] = carbon.emittedGtc;
     atmosphericStockGtc[k] = atmosphericGtc(carbon);
@@ -208,15 +208,11 @@ export function runEmissionDriven(pathway: Pathway, params: ClimateParams, optio
       const c = methaneChemistryWm2(ch4Ppb[k], n2oPpb[k], ch4Ppb[r], n2oPpb[r]);
       totalWm2[k] += (chemistry.ozone ? c.ozone : 0) + (chemistry.stratH2o ? c.stratH2o : 0);
     }
-    if (k > 0) {
-      // The exact one-year propagator (climate/exact-propagator.ts), forcing linear between years.
-      const df = totalWm2[k] - totalWm2[k - 1];
-      const tn = phi[0] * t + phi[1] * d + g0[0] * totalWm2[k - 1] + g1[0] * df;
-      d = phi[2] * t + phi[3] * d + g0[1] * totalWm2[k - 1] + g1[1] * df;
-      t = tn;
-    }
+    // The one two-box step (climate/two-box-step.ts), forcing linear between the years' values.
+    if (k > 0) stepTwoBoxInto(steps, totalWm2.subarray(k - 1, k), totalWm2.subarray(k, k + 1), t1, d1);
+    const t = t1[0];
     surfaceK[k] = t;
-    deepK[k] = d;
+    deepK[k] = d1[0];
     if (!(co2Ppm[k] > 0 && ch4Ppb[k] > 0 && n2oPpb[k] > 0 && Number.isFinite(co2Ppm[k] + ch4Ppb[k] + n2oPpb[k] + t))) {
       throw new NumericalError(
         `${pathway.name}: the run left the physical range in ${years[k]} (CO2 ${co2Ppm[k]} ppm, CH4 ${ch4Ppb[k]} ppb, N2O ${n2oPpb[k]} ppb, warming ${t} K); `

@@ -42,7 +42,7 @@ describe('runEnsemble on an emission pathway', () => {
     expect(spread(narrow)).toBeLessThan(1e-9);
     expect(spread(wide)).toBeGreaterThan(0.05);
     // A larger iIRF100 keeps more CO2 airborne: warming rises with the multiplier (Millar et al. 2017, eq. 7).
-    const p = wide.members!.parameters.irf100Scale;
+    const p = wide.members!.parameters.values.irf100_scale!;
     const hi = p.indexOf(Math.max(...p));
     const lo = p.indexOf(Math.min(...p));
     expect(wide.members!.warmingK[k * 400 + hi]).toBeGreaterThan(wide.members!.warmingK[k * 400 + lo]);
@@ -53,7 +53,7 @@ describe('runEnsemble on an emission pathway', () => {
     const b = await runEnsemble(input, { ...options, members: 50 });
     expect(shardToJson(a.members!)).toBe(shardToJson(b.members!));
     expect(a.config.emissionDriven).toBe(true);
-    expect(a.parameters.irf100Scale.p95).toBeGreaterThan(a.parameters.irf100Scale.p05);
+    expect(a.parameters.irf100_scale.p95).toBeGreaterThan(a.parameters.irf100_scale.p05);
   });
 
   it('shards of an emission ensemble merge into exactly the whole run', async () => {
