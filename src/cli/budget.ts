@@ -13,6 +13,12 @@ import { announceWritten, pathwayInputs, tableRenderers, writeOutput } from './o
 /** The bundled non-CO2 path budgets assume unless `--non-co2` names another. */
 export const DEFAULT_NON_CO2 = 'budget-non-co2';
 
+/** What a budget's chances cover, for its cautions. */
+export const BUDGET_UNCERTAINTY =
+  'The chances come from the spread of the ensemble members\' climate response and carbon cycle only: the non-CO2 path is one assumed path, ' +
+  'the CO2 pathway family one shape, and the model structure one model. Budgets are very sensitive to the non-CO2 assumption and to warming to date; ' +
+  'compare with the remaining carbon budgets the IPCC assesses before quoting them.';
+
 interface BudgetOptions {
   limit: number[];
   chance: number[];
@@ -78,7 +84,7 @@ export function budgetCommand(io: CliIo): Command {
       }
       const write = opts.out === '-' ? io.stderr : io.stdout;
       write(budgetSummary(result, Boolean(shape)));
-      write(notesAndCautions(notes, standardCautions(), opts.out === '-' ? undefined : io.stdoutColumns));
+      write(notesAndCautions(notes, standardCautions(BUDGET_UNCERTAINTY), opts.out === '-' ? undefined : io.stdoutColumns));
     });
 }
 
