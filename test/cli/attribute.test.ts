@@ -30,3 +30,23 @@ describe('warmcast attribute', () => {
     }
   });
 });
+
+describe('warmcast attribute --members', () => {
+  it('adds warming_<agent>_p05/p50/p95_k with p05 <= p50 <= p95 in every year, and ranges in the terminal table', async () => {
+    const dir = tmp();
+    const r = await runCli(['attribute', 'swift-emissions', '--members', '40', '--out', 'm.csv', '--no-chart'], dir);
+    expect(r.code, r.err).toBe(0);
+    expect(r.out).toMatch(/co2\s+0\.\d\d \[0\.\d\d, \d\.\d\d\]/);
+    const [header, ...rows] = readFileSync(join(dir, 'm.csv'), 'utf8').trim().split('\n');
+    const cols = header.split(',');
+    for (const agent of FORCING_AGENTS) {
+      const [i05, i50, i95] = ['p05', 'p50', 'p95'].map((q) => cols.indexOf(`warming_${agent}_${q}_k`));
+      expect(i05).toBeGreaterThan(0);
+      for (const row of rows) {
+        const v = row.split(',').map(Number);
+        expect(v[i05]).toBeLessThanOrEqual(v[i50] + 1e-12);
+        expect(v[i50]).toBeLessThanOrEqual(v[i95] + 1e-12);
+      }
+    }
+  });
+});
