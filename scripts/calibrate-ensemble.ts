@@ -34,19 +34,18 @@ import { existsSync, readFileSync, writeFileSync } from 'node:fs';
 import { dirname, join, relative, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { forcingByAgent, FORCING_AGENTS } from '../src/forcing/agents.js';
-import { loadHistory } from '../src/io/bundled-pathways.js';
+import { bundledPathwaysDir, loadHistory } from '../src/io/bundled-pathways.js';
+import { CALIBRATED_SET_FORMAT } from '../src/ensemble/calibrated-set.js';
 import { memberMetrics } from '../src/ensemble/constrain-metrics.js';
 import { historyResponses, historyScratch, memberHistoryInto, type HistoryDrivers, type HistoryTargets } from '../src/ensemble/constrain-history.js';
 import { fitAr1, importanceWeights, logLikelihoods, periodMeanCovariance, systematicResample, weightedQuantile, type Ar1, type Observations } from '../src/ensemble/constrain.js';
 import { memberGenerators } from '../src/ensemble/member-generators.js';
-import { memberParameterKeys, type MemberColumns } from '../src/ensemble/member-parameters.js';
-import { ensemblePrior, forcingScaleRange, samplePrior, type EnsemblePrior } from '../src/ensemble/prior.js';
+import { ensemblePrior, forcingScaleRange, memberParameterKeys, samplePrior, type EnsemblePrior, type MemberColumns } from '../src/ensemble/prior.js';
 import { uniformFloat64 } from 'pure-rand/distribution/uniformFloat64';
 
-/** Format of the file written. */
-export const CALIBRATED_SET_FORMAT = 'warmcast calibrated member set, version 1';
 
-const ROOT = resolve(dirname(fileURLToPath(import.meta.url)), process.argv[1]?.includes(`${'dist'}`) ? '../..' : '..');
+/** The package root (the folder holding pathways/), from source or from the build. */
+const ROOT = dirname(bundledPathwaysDir());
 
 /** The published records, from pathways/records/ when bundled there, else the shared copies. */
 function recordPath(root: string, name: string): string {
@@ -256,7 +255,7 @@ export function calibrateEnsemble(options: CalibrationOptions = {}): Calibration
   const observed = targets.periods.map((p) => periodMean(obsT.warmingK, obsT.firstYear, p));
   // The AR(1) is fitted to HadCRUT5 minus a forced response: first the run of the prior medians, then
   // the weighted mean of the members under the first weights.
-  const medianColumns: MemberColumns = Object.fromEntries(prior.quantities.map((q) => [q.key, Float64Array.of(q.range.p50)]));
+  const medianColumns = Object.fromEntries(prior.quantities.map((q) => [q.key, Float64Array.of(q.range.p50)])) as MemberColumns;
   let reference = rebasedWarming(medianColumns, [0], Float64Array.of(1), drivers);
   let ar1: Ar1 = { phi: 0, sigmaK: 0 };
   let weighted: { weights: Float64Array; effectiveSize: number } = { weights: new Float64Array(0), effectiveSize: 0 };
@@ -282,8 +281,8 @@ export function calibrateEnsemble(options: CalibrationOptions = {}): Calibration
 
   const rng = memberGenerators(seed, 2 ** 52)();
   const picks = systematicResample(weighted.weights, keep, uniformFloat64(rng));
-  const keys = memberParameterKeys();
-  const set: MemberColumns = Object.fromEntries(keys.map((k) => [k, Float64Array.from(picks, (i) => round6(priorColumns[k][i]))]));
+  const keys = memberParameterKeys(FORCING_AGENTS);
+  const set = Object.fromEntries(keys.map((k) => [k, Float64Array.from(picks, (i) => round6(priorColumns[k]![i]))])) as MemberColumns;
   const distinct = new Set(picks).size;
 
   const metrics = Array.from({ length: keep }, (_, i) => memberMetrics(set, i));
@@ -295,7 +294,7 @@ export function calibrateEnsemble(options: CalibrationOptions = {}): Calibration
   const aerosolPrior = quantiles(responses.aerosolWm2, PS).map((v) => Number(v.toFixed(3)));
 
   // The representative parameters: the median of each parameter over the kept members.
-  const representative = Object.fromEntries(keys.map((k) => [k, round6(quantiles(set[k], [0.5])[0])]));
+  const representative = Object.fromEntries(keys.map((k) => [k, round6(quantiles(set[k]!, [0.5])[0])]));
 
   const report: string[] = [];
   report.push(`prior members ${members}, effective sample size ${weighted.effectiveSize.toFixed(0)}, kept ${keep} (${distinct} distinct)`);
@@ -363,7 +362,13 @@ export function calibrateEnsemble(options: CalibrationOptions = {}): Calibration
     prior_metrics: { ecsK: priorMetric((m) => m.ecsK), tcrK: priorMetric((m) => m.tcrK), tcreKPer1000Pgc: priorMetric((m) => m.tcreKPer1000Pgc), aerosolWm2_2005_2014: aerosolPrior },
     ...(heldOut ? { heldOut: heldOutChecks } : {}),
     representative,
-    members: Object.fromEntries(keys.map((k) => [k, Array.from(set[k])])),
+    members: {
+      ...Object.fromEntries(keys.map((k) => [k, Array.from(set[k]!)])),
+      // Diagnostics carried with each member (summaries report them; the kernel does not read them).
+      ecs_k: metrics.map((m) => round6(m.ecsK)),
+      tcr_k: metrics.map((m) => round6(m.tcrK)),
+      tcre_k_per_1000pgc: metrics.map((m) => round6(m.tcreKPer1000Pgc)),
+    },
   };
   return { json, report };
 }

@@ -6,6 +6,8 @@ import { CALIBRATION_DEFAULTS, PARAM_KEYS, type ClimateParams } from '../climate
 import { ConfigError, InputError } from '../errors.js';
 import { AR6_REFERENCE_PERIOD } from '../report/index.js';
 import { parseParams } from '../io/read-params.js';
+import { readCalibratedSet } from '../io/read-calibrated-set.js';
+import { representativeParams } from '../ensemble/calibrated-set.js';
 import type { CliIo } from './cli-io.js';
 import { unreadableReason } from './unreadable-reason.js';
 
@@ -180,7 +182,7 @@ export function resolveModelParams(
   opts: ModelOptions,
   io: CliIo,
   overrides: CalibrationTargets = {},
-): { params: ClimateParams; paramsFile?: string; notes: string[] } {
+): { params: ClimateParams; paramsFile?: string; notes: string[]; forcingScale: Record<string, number> } {
   let fromFile: CalibrationTargets = {};
   let paramsFile: string | undefined;
   if (opts.params !== undefined) {
@@ -205,7 +207,18 @@ export function resolveModelParams(
   // A file that fixes gamma without stating tcr_k still implies a TCR: keep that one.
   if (rederived.includes('exchangeWm2K') && targets.tcrK === undefined) targets.tcrK = calibrate(fromFile).tcrK;
   for (const k of rederived) delete targets[k];
-  const params = calibrate(targets);
+  // Whatever the user leaves open comes from the calibrated set's representative member (posterior
+  // medians): its heat capacities, efficacy and CO2 forcing always, its lambda and gamma unless an
+  // ECS or TCR target (flag or file) asks for them to be solved.
+  const representative = representativeParams(readCalibratedSet());
+  const fromSet: CalibrationTargets = { ...representative.targets };
+  if (targets.ecsK !== undefined || targets.feedbackWm2K !== undefined) delete fromSet.feedbackWm2K;
+  if (targets.ecsK !== undefined || targets.tcrK !== undefined || targets.exchangeWm2K !== undefined) delete fromSet.exchangeWm2K;
+  if (targets.ecsK !== undefined && targets.feedbackWm2K === undefined && targets.tcrK === undefined) {
+    // A new ECS alone keeps the set's TCR (gamma re-solved for it), as --ecs did with the old defaults.
+    fromSet.tcrK = calibrate({ ...representative.targets, ...fromFile, co2Formula: targets.co2Formula }).tcrK;
+  }
+  const params = calibrate({ ...fromSet, ...targets });
 
   const notes: string[] = [];
   if (rederived.length > 0) {
@@ -217,7 +230,7 @@ export function resolveModelParams(
         `TCR ${+params.tcrK.toFixed(4)} K; the file's other parameters are kept`,
     );
   }
-  return { params, paramsFile, notes };
+  return { params, paramsFile, notes, forcingScale: representative.forcingScale };
 }
 
 /** JSON key of each calibration input, for notes. */

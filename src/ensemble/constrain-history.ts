@@ -2,7 +2,7 @@ import { annualCarbonState, annualCarbonStepForIncreaseInto } from '../carbon/an
 import { GTC_PER_PPM, gtcToGtco2 } from '../carbon/units.js';
 import { propagateTwoBoxInto, twoBoxPropagator } from '../climate/exact-propagator.js';
 import { ConfigError } from '../errors.js';
-import { memberForcingInto, scaleKey, type MemberColumns } from './member-parameters.js';
+import type { MemberColumns } from './prior.js';
 
 /** The historical drivers every member is run over (concentration-driven, from rest in the first year). */
 export interface HistoryDrivers {
@@ -87,8 +87,12 @@ export function historyScratch(length: number): HistoryScratch {
  */
 export function memberHistoryInto(columns: MemberColumns, i: number, drivers: HistoryDrivers, scratch: HistoryScratch): void {
   const scales: Record<string, number> = {};
-  for (const agent of Object.keys(drivers.byAgent)) scales[agent] = columns[scaleKey(agent)]?.[i] ?? 1;
-  memberForcingInto(drivers.byAgent, scales, scratch.forcing);
+  for (const agent of Object.keys(drivers.byAgent)) scales[agent] = columns[`scale_${agent}`]?.[i] ?? 1;
+  const f = scratch.forcing.fill(0);
+  for (const [agent, series] of Object.entries(drivers.byAgent)) {
+    const s = scales[agent];
+    for (let k = 0; k < f.length; k++) f[k] += s * series[k];
+  }
   const prop = twoBoxPropagator({
     feedbackWm2K: columns.feedback_wm2k[i],
     upperHeatCapacity: columns.upper_heat_capacity[i],
@@ -153,12 +157,12 @@ export function historyResponses(
     const cd = columns.deep_heat_capacity[i];
     out.oceanHeatZj[r] = OCEAN_HEAT_SHARE * ZJ_PER_WYR_M2 * (c * t[h1] + cd * d[h1] - (c * t[h0] + cd * d[h0]));
     let aerosol = 0;
-    for (let j = 0; j < aerosolAgents.length; j++) aerosol += (columns[scaleKey(aerosolAgents[j])]?.[i] ?? 1) * aerosolMeans[j];
+    for (let j = 0; j < aerosolAgents.length; j++) aerosol += (columns[`scale_${aerosolAgents[j]}`]?.[i] ?? 1) * aerosolMeans[j];
     out.aerosolWm2[r] = aerosol;
     // Year k's emission is the one that carries the concentration from node k to node k + 1.
     const state = annualCarbonState();
-    const s0 = columns.irf100_scale[i];
-    const sT = columns.uptake_warming_scale[i];
+    const s0 = columns.irf100_scale![i];
+    const sT = columns.uptake_warming_scale![i];
     let emitted = 0;
     for (let k = 0; k <= e1; k++) {
       const e = annualCarbonStepForIncreaseInto(state, sT * t[k], s0, GTC_PER_PPM * (co2[k + 1] - co2[k]));

@@ -6,7 +6,7 @@ import { propagateTwoBoxInto, twoBoxPropagator } from '../climate/exact-propagat
 import type { TwoBoxParams } from '../climate/two-box.js';
 import { forcingOfDoubling } from '../forcing/co2.js';
 import { PREINDUSTRIAL } from '../forcing/constants.js';
-import type { MemberColumns } from './member-parameters.js';
+import type { MemberColumns } from './prior.js';
 
 /** The emergent climate metrics of one member. */
 export interface MemberMetrics {
@@ -54,7 +54,7 @@ export function memberMetrics(columns: MemberColumns, i: number): MemberMetrics 
   let emittedGtc = 0;
   for (let k = 0; k < 70; k++) {
     const increase = GTC_PER_PPM * PREINDUSTRIAL.co2Ppm * (1.01 ** (k + 1) - 1.01 ** k);
-    emittedGtc += annualCarbonStepForIncreaseInto(state, columns.uptake_warming_scale[i] * t[k], columns.irf100_scale[i], increase);
+    emittedGtc += annualCarbonStepForIncreaseInto(state, columns.uptake_warming_scale![i] * t[k], columns.irf100_scale![i], increase);
   }
   return { ecsK: forcing2xWm2 / twoBox.feedbackWm2K, tcrK, tcreKPer1000Pgc: tcrK / (emittedGtc / 1000) };
 }

@@ -3,7 +3,7 @@ import type { RandomGenerator } from 'pure-rand/types/RandomGenerator';
 import { ConfigError } from '../errors.js';
 import { assessedQuantile, LIKELY_Z, VERY_LIKELY_Z, type AssessedRange } from './assessed-range.js';
 import { memberGenerators } from './member-generators.js';
-import { CLIMATE_KEYS, CYCLE_KEYS, scaleKey, type MemberColumns } from './member-parameters.js';
+import { TWO_BOX_KEYS, type MemberParameters } from './member-parameters.js';
 import { normalQuantile } from './normal-quantile.js';
 
 /**
@@ -22,6 +22,25 @@ export interface PriorQuantity {
   upper?: number;
   /** Where the numbers come from, and whether read or recalled. */
   source: string;
+}
+
+/**
+ * Keys of the carbon-cycle and methane multipliers a member carries beside the two-box parameters
+ * and the forcing scales (member-parameters.ts): iIRF100 r0 and rT of Millar et al. 2017's uptake
+ * feedback, and the CH4 perturbation lifetime; 1 = the model's default.
+ */
+export const CYCLE_KEYS = ['irf100_scale', 'uptake_warming_scale', 'ch4_lifetime_scale'] as const;
+
+/** A member's parameter columns, one Float64Array per key (as MemberParameters['values']). */
+export type MemberColumns = MemberParameters['values'];
+
+/**
+ * Every key a calibrated member carries, in storage order: the two-box parameters, `scale_<agent>`
+ * per agent, then {@link CYCLE_KEYS}.
+ * @example memberParameterKeys(['co2'])[5] // 'scale_co2'
+ */
+export function memberParameterKeys(agents: readonly string[]): string[] {
+  return [...TWO_BOX_KEYS, ...agents.map((a) => `scale_${a}`), ...CYCLE_KEYS];
 }
 
 /** A prior over every member parameter, in draw order. */
@@ -119,10 +138,10 @@ export function forcingScaleRange(best: ArrayLike<number>, p05: ArrayLike<number
  * @returns the prior in draw order (keys as memberParameterKeys(agents))
  */
 export function ensemblePrior(scales: { agent: string; range: AssessedRange; source: string }[]): EnsemblePrior {
-  const forcing = scales.map(({ agent, range, source }) => ({ key: scaleKey(agent), range, lower: 0, source }));
+  const forcing = scales.map(({ agent, range, source }) => ({ key: `scale_${agent}`, range, lower: 0, source }));
   const quantities = [...PHYSICS_PRIOR, ...forcing, ...CYCLE_PRIOR];
   const keys = quantities.map((q) => q.key);
-  for (const k of [...CLIMATE_KEYS, ...CYCLE_KEYS]) if (!keys.includes(k)) throw new ConfigError(`prior lacks ${k}`, 'prior');
+  for (const k of [...TWO_BOX_KEYS, ...CYCLE_KEYS]) if (!keys.includes(k)) throw new ConfigError(`prior lacks ${k}`, 'prior');
   return { quantities };
 }
 
@@ -168,12 +187,12 @@ export function drawPriorMemberInto(rng: RandomGenerator, prior: EnsemblePrior, 
  */
 export function samplePrior(seed: number, count: number, prior: EnsemblePrior, start = 0): MemberColumns {
   const qs = prior.quantities;
-  const columns: MemberColumns = Object.fromEntries(qs.map((q) => [q.key, new Float64Array(count)]));
+  const columns = Object.fromEntries(qs.map((q) => [q.key, new Float64Array(count)])) as MemberColumns;
   const row = new Float64Array(qs.length);
   const next = memberGenerators(seed, start);
   for (let i = 0; i < count; i++) {
     drawPriorMemberInto(next(), prior, row);
-    for (let j = 0; j < qs.length; j++) columns[qs[j].key][i] = row[j];
+    for (let j = 0; j < qs.length; j++) columns[qs[j].key]![i] = row[j];
   }
   return columns;
 }

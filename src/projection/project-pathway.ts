@@ -22,6 +22,12 @@ export interface ProjectionOptions {
   aerosolScale?: number;
   /** Carbon-climate feedback on CO2 uptake in emission-driven runs (default true). */
   carbonFeedback?: boolean;
+  /**
+   * Multiplier per forcing agent (1 where absent), as the calibrated set's representative member
+   * carries them; CO2 is scaled through `params.forcing2xWm2`. Emission-driven runs apply the
+   * aerosol multiplier only (their other agents are computed inside the coupled run).
+   */
+  forcingScale?: Partial<Record<string, number>>;
 }
 
 /**
@@ -89,7 +95,9 @@ export function projectPathway(pathway: Pathway, options: ProjectionOptions): Pr
   // forcingByAgent adds nothing for an absent forcing column; say so, as for the gases above.
   const zeroForcing = FORCING_COLUMNS.filter((c) => !s[c]);
   if (zeroForcing.length > 0) notes.push(`${zeroForcing.join(', ')} not given: taken as zero`);
-  const forcingOptions: ForcingOptions = { co2Formula: params.co2Formula, forcing2xWm2: params.forcing2xWm2, aerosolScale: options.aerosolScale };
+  const agentScale = options.forcingScale ?? {};
+  const aerosolScale = (options.aerosolScale ?? 1) * (agentScale.aerosol ?? 1);
+  const forcingOptions: ForcingOptions = { co2Formula: params.co2Formula, forcing2xWm2: params.forcing2xWm2, aerosolScale };
   const tolerances = options.tolerances ?? DEFAULT_TOLERANCES;
 
   if (EMISSION_COLUMNS.some((c) => s[c] !== undefined)) {
@@ -116,6 +124,7 @@ export function projectPathway(pathway: Pathway, options: ProjectionOptions): Pr
   }
 
   const forcing = forcingByAgent(n, { co2Ppm: s.co2_ppm, ch4Ppb: s.ch4_ppb, n2oPpb: s.n2o_ppb, prescribed: s }, forcingOptions);
+  scaleAgentsInPlace(forcing, agentScale);
   const eb = energyBalance(params, forcing.total, options.method ?? 'odex', tolerances);
   const fromRest = startFromRestNote(pathway, { subject: 'the run', forcingWm2: forcing.total[0] });
   if (fromRest) notes.push(fromRest);
@@ -151,4 +160,23 @@ export function rebase(years: Float64Array, values: Float64Array, baseline: read
   for (let y = from; y <= to; y++) sum += values[y - first];
   const mean = sum / (to - from + 1);
   return values.map((v) => v - mean);
+}
+
+/**
+ * Multiplies each agent's series by its multiplier (CO2 and aerosol excluded: forcingByAgent has
+ * already applied `forcing2xWm2` and `aerosolScale`) and recomputes the total.
+ */
+function scaleAgentsInPlace(forcing: ReturnType<typeof forcingByAgent>, scale: Partial<Record<string, number>>): void {
+  const agents = FORCING_AGENTS.filter((a) => a !== 'co2' && a !== 'aerosol' && scale[a] !== undefined && scale[a] !== 1);
+  if (agents.length === 0) return;
+  for (const a of agents) {
+    const s = scale[a]!;
+    const series = forcing.byAgent[a as ForcingAgent];
+    for (let k = 0; k < series.length; k++) series[k] *= s;
+  }
+  for (let k = 0; k < forcing.total.length; k++) {
+    let sum = 0;
+    for (const a of FORCING_AGENTS) sum += forcing.byAgent[a as ForcingAgent][k];
+    forcing.total[k] = sum;
+  }
 }
