@@ -56,14 +56,14 @@ export function compareCommand(io: CliIo): Command {
           throw new ConfigError(`with --members each member draws its own ECS, TCR, 2xCO2 and aerosol forcing, so ${given.join(', ')} would be ignored: leave ${given.length > 1 ? 'them' : 'it'} out, or compare without --members`, given[0].slice(2));
         }
       }
-      const { params, paramsFile, notes: paramNotes } = resolveModelParams(opts, io);
+      const { params, paramsFile, notes: paramNotes, forcingScale } = resolveModelParams(opts, io);
       const baselineNote = thresholdBaselineNote(opts.baseline);
       const files: string[] = [];
       const scoped: ScopedNote[] = [];
       const runs = args.map((arg) => {
         const read = readPathway(pathwayArg(arg, io), { splice: opts.splice });
         files.push(...pathwayInputs(read));
-        const p = projectPathway(read.pathway, { params, baseline: opts.baseline, carbonFeedback: opts.carbonFeedback });
+        const p = projectPathway(read.pathway, { params, baseline: opts.baseline, carbonFeedback: opts.carbonFeedback, forcingScale });
         scoped.push(...[...p.provenance.notes, ...p.notes].map((text) => ({ pathway: p.name, text })));
         return { projection: p, pathway: read.pathway };
       });
