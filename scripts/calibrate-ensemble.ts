@@ -26,7 +26,8 @@
  * the same bytes.
  *
  * Usage: node dist/scripts/calibrate-ensemble.js [--members 100000] [--keep 4000] [--seed 20261204]
- *        [--out pathways/calibrated-members.json] [--validate]
+ *        [--out pathways/calibrated-members.json] [--validate | --no-validate]
+ * Without --no-validate the held-out check also runs and is recorded in the file's provenance.
  * Try: npm run build && node dist/scripts/calibrate-ensemble.js --members 20000 --out /tmp/set.json
  */
 import { createHash } from 'node:crypto';
@@ -123,6 +124,11 @@ export interface CalibrationOptions {
   heldOut?: boolean;
   /** Package root (default: this script's). */
   root?: string;
+  /**
+   * Also run the held-out check (constrain on 1850-2000, predict 2001-2023) and record it in the
+   * file's provenance (default false; the script turns it on unless --no-validate).
+   */
+  validate?: boolean;
 }
 
 /** The periods of HadCRUT5 compared, and the other targets. */
@@ -311,7 +317,7 @@ export function calibrateEnsemble(options: CalibrationOptions = {}): Calibration
     report.push(`warming ${p.join('-')} observed ${observed[j].toFixed(3)} posterior ${quantiles(v, PS).map((x) => x.toFixed(3)).join(' / ')} K`);
   });
 
-  const heldOutChecks: Record<string, unknown>[] = [];
+  const heldOutChecks: { period: [number, number]; observedK: number; posteriorK: number[] }[] = [];
   if (heldOut) {
     const check: [number, number][] = [[2001, 2023], [2001, 2012], [2013, 2023], [2011, 2020]];
     const late = historyResponses(set, drivers, { ...targets, periods: check }, 0, keep);
@@ -319,9 +325,22 @@ export function calibrateEnsemble(options: CalibrationOptions = {}): Calibration
       const v = Array.from({ length: keep }, (_, i) => late.periodWarmingK[i * check.length + j]);
       const q = quantiles(v, PS);
       const o = periodMean(obsT.warmingK, obsT.firstYear, p);
-      heldOutChecks.push({ period: p, observedK: o, posteriorK: q });
+      heldOutChecks.push({ period: p, observedK: round6(o), posteriorK: q.map(round6) });
       report.push(`held out ${p.join('-')}: observed ${o.toFixed(3)}, posterior ${q.map((x) => x.toFixed(3)).join(' / ')} K (median error ${(q[2] - o).toFixed(3)})`);
     });
+  }
+
+  let validation: Record<string, unknown> | undefined;
+  if (options.validate && !heldOut) {
+    const check = calibrateEnsemble({ ...options, heldOut: true, validate: false });
+    const c = check.json as { provenance: { effectiveSampleSize: number }; posterior: Record<string, unknown>; heldOut: unknown };
+    validation = {
+      method: 'the same prior and likelihood with HadCRUT5 periods up to 2000 and ocean heat 1971-2000 only; the posterior then predicts the held-out years',
+      effectiveSampleSize: c.provenance.effectiveSampleSize,
+      posterior: c.posterior,
+      checks: c.heldOut,
+    };
+    report.push(...check.report.filter((l) => l.startsWith('held out')).map((l) => `validation: ${l}`));
   }
 
   const json = {
@@ -361,6 +380,7 @@ export function calibrateEnsemble(options: CalibrationOptions = {}): Calibration
     },
     prior_metrics: { ecsK: priorMetric((m) => m.ecsK), tcrK: priorMetric((m) => m.tcrK), tcreKPer1000Pgc: priorMetric((m) => m.tcreKPer1000Pgc), aerosolWm2_2005_2014: aerosolPrior },
     ...(heldOut ? { heldOut: heldOutChecks } : {}),
+    ...(validation ? { heldOutValidation: validation } : {}),
     representative,
     members: {
       ...Object.fromEntries(keys.map((k) => [k, Array.from(set[k]!)])),
@@ -405,9 +425,16 @@ function main(argv: string[]): void {
     const i = argv.indexOf(name);
     return i >= 0 ? argv[i + 1] : undefined;
   };
-  const num = (name: string) => (value(name) === undefined ? undefined : Number(value(name)));
+  const num = (name: string, min: number, max: number) => {
+    const text = value(name);
+    if (text === undefined) return undefined;
+    const v = Number(text);
+    if (!(Number.isInteger(v) && v >= min && v <= max)) throw new Error(`${name} must be a whole number from ${min} to ${max}, got ${text}`);
+    return v;
+  };
   const heldOut = argv.includes('--validate');
-  const { json, report } = calibrateEnsemble({ members: num('--members'), keep: num('--keep'), seed: num('--seed'), heldOut });
+  const options = { members: num('--members', 100, 10_000_000), keep: num('--keep', 1, 1_000_000), seed: num('--seed', 0, 2 ** 32 - 1), heldOut, validate: !argv.includes('--no-validate') };
+  const { json, report } = calibrateEnsemble(options);
   for (const line of report) console.log(line);
   if (!heldOut) {
     const out = resolve(value('--out') ?? join(ROOT, 'pathways', 'calibrated-members.json'));
