@@ -126,8 +126,8 @@ export interface ModelOptions {
 export function addModelOptions(cmd: Command): Command {
   return cmd
     .option('--params <file>', 'model parameters JSON (any subset of the keys `warmcast calibrate` prints)')
-    .option('--ecs <kelvin>', 'equilibrium climate sensitivity target, K (default 3.0, IPCC AR6 best estimate)', numberOption('--ecs'))
-    .option('--tcr <kelvin>', 'transient climate response target, K (default 1.8, IPCC AR6 best estimate)', numberOption('--tcr'))
+    .option('--ecs <kelvin>', 'equilibrium climate sensitivity target, K (default: the calibrated set\'s posterior median model)', numberOption('--ecs'))
+    .option('--tcr <kelvin>', 'transient climate response target, K (default: the calibrated set\'s posterior median model)', numberOption('--tcr'))
     .addOption(
       new Option('--co2-formula <name>', 'CO2 forcing: ar6 (Meinshausen et al. 2020 + AR6 adjustment) or log (Myhre et al. 1998)')
         .choices(['ar6', 'log'])
@@ -229,6 +229,10 @@ export function resolveModelParams(
         `(derived from its own targets) ${rederived.length > 1 ? 'were' : 'was'} re-derived for ECS ${+params.ecsK.toFixed(4)} K and ` +
         `TCR ${+params.tcrK.toFixed(4)} K; the file's other parameters are kept`,
     );
+  }
+  const scaled = Object.entries(representative.forcingScale).filter(([, v]) => v !== 1);
+  if (scaled.length > 0) {
+    notes.push(`forcing multipliers of the calibrated set's posterior medians: ${scaled.map(([a, v]) => `${a} x${+v.toFixed(3)}`).join(', ')} (CO2 through forcing_2x_wm2)`);
   }
   return { params, paramsFile, notes, forcingScale: representative.forcingScale };
 }
