@@ -56,7 +56,7 @@ export function compareCommand(io: CliIo): Command {
           throw new ConfigError(`with --members each member draws its own ECS, TCR, 2xCO2 and aerosol forcing, so ${given.join(', ')} would be ignored: leave ${given.length > 1 ? 'them' : 'it'} out, or compare without --members`, given[0].slice(2));
         }
       }
-      const { params, paramsFile, notes: paramNotes, forcingScale } = resolveModelParams(opts, io);
+      const { params, paramsFile, notes: paramNotes, forcingScale, forcingNote } = resolveModelParams(opts, io);
       const baselineNote = thresholdBaselineNote(opts.baseline);
       const files: string[] = [];
       const scoped: ScopedNote[] = [];
@@ -107,7 +107,7 @@ export function compareCommand(io: CliIo): Command {
         opts.members !== undefined
           ? ['warming_k and the milestone values are the ensemble median of each pathway; its crossing years are the first years by which half of the members have crossed']
           : [];
-      const notes = [...paramNotes, ...(baselineNote ? [baselineNote] : []), ...medianNote, ...scopedNotes(scoped, runs.map((r) => r.projection.name))];
+      const notes = [...paramNotes, ...(forcingNote && opts.members === undefined ? [forcingNote] : []), ...(baselineNote ? [baselineNote] : []), ...medianNote, ...scopedNotes(scoped, runs.map((r) => r.projection.name))];
       const c = comparePathways(pathways, {
         milestoneYears: opts.years ? chosenYears(opts.years, runs.map((r) => r.projection.years)) : milestoneYears(firstFuture, last, 10),
         thresholdsK: opts.thresholds,

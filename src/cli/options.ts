@@ -182,7 +182,7 @@ export function resolveModelParams(
   opts: ModelOptions,
   io: CliIo,
   overrides: CalibrationTargets = {},
-): { params: ClimateParams; paramsFile?: string; notes: string[]; forcingScale: Record<string, number> } {
+): { params: ClimateParams; paramsFile?: string; notes: string[]; forcingScale: Record<string, number>; forcingNote?: string } {
   let fromFile: CalibrationTargets = {};
   let paramsFile: string | undefined;
   if (opts.params !== undefined) {
@@ -231,10 +231,10 @@ export function resolveModelParams(
     );
   }
   const scaled = Object.entries(representative.forcingScale).filter(([, v]) => v !== 1);
-  if (scaled.length > 0) {
-    notes.push(`forcing multipliers of the calibrated set's posterior medians: ${scaled.map(([a, v]) => `${a} x${+v.toFixed(3)}`).join(', ')} (CO2 through forcing_2x_wm2)`);
-  }
-  return { params, paramsFile, notes, forcingScale: representative.forcingScale };
+  const forcingNote = scaled.length > 0
+    ? `forcing multipliers of the calibrated set's posterior medians: ${scaled.map(([a, v]) => `${a} x${+v.toFixed(3)}`).join(', ')} (CO2 through forcing_2x_wm2)`
+    : undefined;
+  return { params, paramsFile, notes, forcingScale: representative.forcingScale, forcingNote };
 }
 
 /** JSON key of each calibration input, for notes. */
