@@ -28,12 +28,10 @@ export interface ProjectionOptions {
   carbonFeedback?: boolean;
   /**
    * Multiplier per forcing agent (1 where absent), as the calibrated set's representative member
-   * carries them. A prescribed agent's column `<agent>_wm2` is scaled before the run (so both
-   * concentration- and emission-driven runs see it); agents computed from concentrations (CH4,
-   * N2O) are scaled after in concentration-driven runs only; CO2 is scaled through
-   * `params.forcing2xWm2`.
+   * carries them (ForcingOptions.agentScale, in concentration- and emission-driven runs alike); CO2
+   * is scaled through `params.forcing2xWm2`.
    */
-  forcingScale?: Partial<Record<string, number>>;
+  forcingScale?: Partial<Record<ForcingAgent, number>>;
 }
 
 /**
@@ -95,7 +93,7 @@ export function projectPathway(pathway: Pathway, options: ProjectionOptions): Pr
   const years = pathway.years;
   const n = years.length;
   const notes: string[] = [];
-  const s = scalePrescribed(pathway.series, options.forcingScale ?? {});
+  const s = pathway.series;
 
   for (const [gas, cols] of Object.entries(GASES)) {
     if (!s[cols.concentration] && !s[cols.emission]) notes.push(`${gas.toUpperCase()} not given: held at its 1750 value`);
@@ -103,13 +101,12 @@ export function projectPathway(pathway: Pathway, options: ProjectionOptions): Pr
   // forcingByAgent adds nothing for an absent forcing column; say so, as for the gases above.
   const zeroForcing = forcingColumnsNotGiven(s);
   if (zeroForcing.length > 0) notes.push(`${zeroForcing.join(', ')} not given: taken as zero`);
-  const agentScale = options.forcingScale ?? {};
-  const forcingOptions: ForcingOptions = { co2Formula: params.co2Formula, forcing2xWm2: params.forcing2xWm2, aerosolScale: options.aerosolScale };
+  const forcingOptions: ForcingOptions = { co2Formula: params.co2Formula, forcing2xWm2: params.forcing2xWm2, aerosolScale: options.aerosolScale, agentScale: options.forcingScale };
   const tolerances = options.tolerances ?? DEFAULT_TOLERANCES;
 
   if (EMISSION_COLUMNS.some((c) => s[c] !== undefined)) {
     // Emission-driven: carbon boxes, gas burdens and temperatures advance together in one ODE system.
-    const r = runEmissionDriven({ ...pathway, series: s }, params, { forcing: forcingOptions, feedback: options.carbonFeedback ?? true, tolerances });
+    const r = runEmissionDriven(pathway, params, { forcing: forcingOptions, feedback: options.carbonFeedback ?? true, tolerances });
     const columns: Record<string, Float64Array> = {
       warming_k: rebase(years, r.surfaceK, baseline, pathway.name),
       deep_ocean_k: rebase(years, r.deepK, baseline, pathway.name),
@@ -134,7 +131,6 @@ export function projectPathway(pathway: Pathway, options: ProjectionOptions): Pr
   }
 
   const forcing = forcingByAgent(n, { co2Ppm: s.co2_ppm, ch4Ppb: s.ch4_ppb, n2oPpb: s.n2o_ppb, prescribed: s }, forcingOptions);
-  scaleAgentsInPlace(forcing, agentScale, s);
   const eb = energyBalance(params, forcing.total, options.method ?? 'odex', tolerances);
   const fromRest = startFromRestNote(pathway, { subject: 'the run', forcingWm2: forcing.total[0] });
   if (fromRest) notes.push(fromRest);
@@ -175,34 +171,3 @@ export function rebase(years: Float64Array, values: Float64Array, baseline: read
   return values.map((v) => v - mean);
 }
 
-/**
- * The pathway's series with each prescribed forcing column `<agent>_wm2` multiplied by that agent's
- * multiplier (new arrays where scaled; the pathway itself is not changed).
- */
-function scalePrescribed(series: Pathway['series'], scale: Partial<Record<string, number>>): Pathway['series'] {
-  const out: Record<string, Float64Array> = { ...(series as Record<string, Float64Array>) };
-  for (const [agent, s] of Object.entries(scale)) {
-    const column = out[`${agent}_wm2`];
-    if (column && s !== undefined && s !== 1) out[`${agent}_wm2`] = column.map((v) => s * v);
-  }
-  return out as Pathway['series'];
-}
-
-/**
- * Multiplies each computed (not prescribed) agent's series by its multiplier (CO2 excluded: its
- * scale is `forcing2xWm2`) and recomputes the total.
- */
-function scaleAgentsInPlace(forcing: ReturnType<typeof forcingByAgent>, scale: Partial<Record<string, number>>, prescribed: Pathway['series']): void {
-  const agents = FORCING_AGENTS.filter((a) => a !== 'co2' && !(`${a}_wm2` in prescribed) && scale[a] !== undefined && scale[a] !== 1);
-  if (agents.length === 0) return;
-  for (const a of agents) {
-    const s = scale[a]!;
-    const series = forcing.byAgent[a as ForcingAgent];
-    for (let k = 0; k < series.length; k++) series[k] *= s;
-  }
-  for (let k = 0; k < forcing.total.length; k++) {
-    let sum = 0;
-    for (const a of FORCING_AGENTS) sum += forcing.byAgent[a as ForcingAgent][k];
-    forcing.total[k] = sum;
-  }
-}
