@@ -285,6 +285,12 @@ export function calibrateEnsemble(options: CalibrationOptions = {}): Calibration
     }
   }
 
+  // Consistency of the error model: the weighted mean chi-square of the period means should be near
+  // their number if the covariance is neither too tight nor too loose.
+  const temperatureOnly = logLikelihoods(responses, { periodWarmingK: obs!.periodWarmingK, periodCovariance: obs!.periodCovariance });
+  let chi2 = 0;
+  for (let i = 0; i < temperatureOnly.length; i++) chi2 += weighted.weights[i] * -2 * temperatureOnly[i];
+
   const rng = memberGenerators(seed, 2 ** 52)();
   const picks = systematicResample(weighted.weights, keep, uniformFloat64(rng));
   const keys = memberParameterKeys(FORCING_AGENTS);
@@ -304,7 +310,7 @@ export function calibrateEnsemble(options: CalibrationOptions = {}): Calibration
 
   const report: string[] = [];
   report.push(`prior members ${members}, effective sample size ${weighted.effectiveSize.toFixed(0)}, kept ${keep} (${distinct} distinct)`);
-  report.push(`AR(1) of HadCRUT5 residuals: phi ${ar1.phi.toFixed(3)}, sigma ${ar1.sigmaK.toFixed(3)} K`);
+  report.push(`AR(1) of HadCRUT5 residuals: phi ${ar1.phi.toFixed(3)}, sigma ${ar1.sigmaK.toFixed(3)} K; posterior mean chi-square of the ${targets.periods.length} period means ${chi2.toFixed(2)}`);
   report.push(`ECS  prior ${priorMetric((m) => m.ecsK).join(' / ')}  posterior ${metric((m) => m.ecsK).join(' / ')} K (AR6 likely 2.5-4, very likely 2-5)`);
   report.push(`TCR  prior ${priorMetric((m) => m.tcrK).join(' / ')}  posterior ${metric((m) => m.tcrK).join(' / ')} K (AR6 likely 1.4-2.2)`);
   report.push(`TCRE prior ${priorMetric((m) => m.tcreKPer1000Pgc).join(' / ')}  posterior ${metric((m) => m.tcreKPer1000Pgc).join(' / ')} K/1000PgC (AR6 likely 1.0-2.3)`);
