@@ -1,8 +1,9 @@
 import { annualCarbonState, annualCarbonStepForIncreaseInto } from '../carbon/annual-carbon-step.js';
 import { GTC_PER_PPM, gtcToGtco2 } from '../carbon/units.js';
-import { propagateTwoBoxInto, twoBoxPropagator } from '../climate/exact-propagator.js';
+import { energyBalance } from '../climate/energy-balance.js';
 import { ConfigError } from '../errors.js';
 import type { MemberColumns } from './prior.js';
+import { memberTwoBox } from './constrain-metrics.js';
 
 /** The historical drivers every member is run over (concentration-driven, from rest in the first year). */
 export interface HistoryDrivers {
@@ -81,7 +82,7 @@ export function historyScratch(length: number): HistoryScratch {
 }
 
 /**
- * Runs member i over the history with the exact two-box propagator (forcing linear between year
+ * Runs member i over the history with the two-box step of climate/ (forcing linear between year
  * nodes, from rest in the first year): its forcing sum_a scale_a F_a, its surface and deep
  * temperatures (K, relative to the first year) into the scratch.
  */
@@ -93,14 +94,10 @@ export function memberHistoryInto(columns: MemberColumns, i: number, drivers: Hi
     const s = scales[agent];
     for (let k = 0; k < f.length; k++) f[k] += s * series[k];
   }
-  const prop = twoBoxPropagator({
-    feedbackWm2K: columns.feedback_wm2k[i],
-    upperHeatCapacity: columns.upper_heat_capacity[i],
-    deepHeatCapacity: columns.deep_heat_capacity[i],
-    exchangeWm2K: columns.exchange_wm2k[i],
-    deepEfficacy: columns.deep_efficacy[i],
-  });
-  propagateTwoBoxInto(prop, scratch.forcing, scratch.surface, scratch.deep);
+  // The one two-box step every run uses (climate/), from rest in the first year.
+  const run = energyBalance(memberTwoBox(columns, i), scratch.forcing, 'exact');
+  scratch.surface.set(run.surfaceK);
+  scratch.deep.set(run.deepK);
 }
 
 /**

@@ -2,7 +2,7 @@ import { annualCarbonState, annualCarbonStepForIncreaseInto } from '../carbon/an
 import { GTC_PER_PPM } from '../carbon/units.js';
 import { transientResponse } from '../climate/calibrate.js';
 import { onePercentForcing } from '../climate/calibrate.js';
-import { propagateTwoBoxInto, twoBoxPropagator } from '../climate/exact-propagator.js';
+import { energyBalance } from '../climate/energy-balance.js';
 import type { TwoBoxParams } from '../climate/two-box.js';
 import { forcingOfDoubling } from '../forcing/co2.js';
 import { PREINDUSTRIAL } from '../forcing/constants.js';
@@ -47,9 +47,7 @@ export function memberMetrics(columns: MemberColumns, i: number): MemberMetrics 
   const forcing2xWm2 = (columns.scale_co2?.[i] ?? 1) * forcingOfDoubling('ar6');
   const tcrK = transientResponse({ ...twoBox, co2Formula: 'ar6', forcing2xWm2 });
   const f = onePercentForcing('ar6', forcing2xWm2);
-  const t = new Float64Array(f.length);
-  const d = new Float64Array(f.length);
-  propagateTwoBoxInto(twoBoxPropagator(twoBox), f, t, d);
+  const t = energyBalance(twoBox, f, 'exact').surfaceK;
   const state = annualCarbonState();
   let emittedGtc = 0;
   for (let k = 0; k < 70; k++) {
