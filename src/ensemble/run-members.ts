@@ -147,6 +147,8 @@ function runWithCarbon(
   const otherForcingInto = blockForcing(task, block, OWN_GASES);
   const ones = new Float64Array(m).fill(1);
   const irf100 = v.irf100_scale ?? ones;
+  // The carbon cycle sees the member's warming times its multiplier on the uptake's warming sensitivity rT (calibrated set).
+  const uptakeWarming = v.uptake_warming_scale ?? ones;
   const [co2Scale, ch4Scale, n2oScale] = OWN_GASES.map((a) => v[forcingScaleKey(a)] ?? ones);
   const ghg = ghgForcingFunction({ co2Formula: task.co2Formula });
   const { co2Ppm: given, co2EmissionGtcPerYr: emission, co2StartPpm, ch4Ppb, n2oPpb } = carbon;
@@ -169,11 +171,11 @@ function runWithCarbon(
   for (let k = 0; k + 1 < n; k++) {
     for (let r = 0; r < m; r++) {
       if (!Number.isNaN(given[k + 1])) {
-        lastRate[r] = annualCarbonStepForIncreaseInto(states[r], t[r], irf100[r], GTC_PER_PPM * (given[k + 1] - given[k]));
+        lastRate[r] = annualCarbonStepForIncreaseInto(states[r], uptakeWarming[r] * t[r], irf100[r], GTC_PER_PPM * (given[k + 1] - given[k]));
         ppm[r] = given[k + 1];
       } else {
         const rate = Number.isNaN(emission[k]) ? lastRate[r] : emission[k];
-        annualCarbonStepInto(states[r], t[r], irf100[r], 0.5 * (rate + emission[k + 1]));
+        annualCarbonStepInto(states[r], uptakeWarming[r] * t[r], irf100[r], 0.5 * (rate + emission[k + 1]));
         ppm[r] = co2StartPpm + atmosphericGtc(states[r]) / GTC_PER_PPM;
       }
     }
