@@ -23,8 +23,10 @@ export interface CalibratedSet {
   representative: Record<string, number>;
   /** The prior the set was drawn from, in draw order (for `--prior`). */
   prior: EnsemblePrior;
-  /** Provenance and summary as written by the script. */
+  /** Provenance as written by the script (data files, prior, likelihood, seed, effective sample size). */
   provenance: Record<string, unknown>;
+  /** The script's posterior summary (percentiles of ECS, TCR, TCRE, aerosol ERF), as written. */
+  posterior: Record<string, unknown>;
 }
 
 /**
@@ -61,7 +63,7 @@ export function calibratedSetFromJson(data: unknown, file: string, sha256: strin
   const priorRows = provenance.prior as { key: string; p05: number; p50: number; p95: number; lower: number; source: string }[] | undefined;
   if (!Array.isArray(priorRows)) throw fail('provenance.prior must list the prior quantities');
   const prior: EnsemblePrior = { quantities: priorRows.map((q) => ({ key: q.key, range: rangeFrom3(q.p05, q.p50, q.p95), lower: q.lower, source: q.source })) };
-  return { file, sha256, count, members: members as MemberColumns, representative, prior, provenance };
+  return { file, sha256, count, members: members as MemberColumns, representative, prior, provenance, posterior: (d.posterior ?? {}) as Record<string, unknown> };
 }
 
 /**
