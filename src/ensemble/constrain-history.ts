@@ -1,5 +1,6 @@
-import { annualCarbonState, annualCarbonStepForIncreaseInto } from '../carbon/annual-carbon-step.js';
-import { GTC_PER_PPM, gtcToGtco2 } from '../carbon/units.js';
+import { annualCarbonState } from '../carbon/annual-carbon-step.js';
+import { co2YearDrivers, co2YearInto } from '../carbon/co2-year.js';
+import { gtcToGtco2 } from '../carbon/units.js';
 import { energyBalance } from '../climate/energy-balance.js';
 import { ConfigError } from '../errors.js';
 import type { MemberColumns } from './prior.js';
@@ -103,9 +104,9 @@ export function memberHistoryInto(columns: MemberColumns, i: number, drivers: Hi
 /**
  * The historical quantities of members [from, to) of a column set: mean warming of each target
  * period relative to the baseline, ocean heat content change, mean aerosol ERF and the CO2
- * emissions diagnosed from the observed concentrations with the member's carbon cycle (the annual
- * Joos et al. 2013 / Millar et al. 2017 step, driven by the member's warming times its rT
- * multiplier, with its iIRF100 multiplier).
+ * emissions diagnosed from the observed concentrations with the member's carbon cycle (the one
+ * production carbon step, co2YearInto, driven by the member's warming times its rT multiplier, with
+ * its iIRF100 multiplier).
  *
  * @param columns member parameters (memberParameterKeys of the drivers' agents)
  * @param drivers the history
@@ -142,7 +143,7 @@ export function historyResponses(
     emissionsGtco2: new Float64Array(count),
   };
   const scratch = historyScratch(n);
-  const co2 = drivers.co2Ppm;
+  const co2Drivers = co2YearDrivers(drivers.co2Ppm, undefined, drivers.co2Ppm[0]);
   for (let i = from; i < to; i++) {
     const r = i - from;
     memberHistoryInto(columns, i, drivers, scratch);
@@ -156,14 +157,16 @@ export function historyResponses(
     let aerosol = 0;
     for (let j = 0; j < aerosolAgents.length; j++) aerosol += (columns[`scale_${aerosolAgents[j]}`]?.[i] ?? 1) * aerosolMeans[j];
     out.aerosolWm2[r] = aerosol;
-    // Year k's emission is the one that carries the concentration from node k to node k + 1.
+    // The production carbon step (carbon/co2-year.ts): year k's emission total is the one that
+    // takes the stock to the next 1 January's concentration, the feedback seeing the previous
+    // year's warming (times the member's rT multiplier).
     const state = annualCarbonState();
     const s0 = columns.irf100_scale![i];
     const sT = columns.uptake_warming_scale![i];
     let emitted = 0;
     for (let k = 0; k <= e1; k++) {
-      const e = annualCarbonStepForIncreaseInto(state, sT * t[k], s0, GTC_PER_PPM * (co2[k + 1] - co2[k]));
-      if (k >= e0) emitted += e;
+      co2YearInto(state, co2Drivers, k, sT * (k > 0 ? t[k - 1] : 0), s0);
+      if (k >= e0) emitted += state.lastEmissionGtc;
     }
     out.emissionsGtco2[r] = gtcToGtco2(emitted);
     onWarming?.(i, t);

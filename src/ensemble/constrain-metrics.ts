@@ -1,5 +1,5 @@
-import { annualCarbonState, annualCarbonStepForIncreaseInto } from '../carbon/annual-carbon-step.js';
-import { GTC_PER_PPM } from '../carbon/units.js';
+import { annualCarbonState } from '../carbon/annual-carbon-step.js';
+import { co2YearDrivers, co2YearInto } from '../carbon/co2-year.js';
 import { transientResponse } from '../climate/calibrate.js';
 import { onePercentForcing } from '../climate/calibrate.js';
 import { energyBalance } from '../climate/energy-balance.js';
@@ -48,11 +48,15 @@ export function memberMetrics(columns: MemberColumns, i: number): MemberMetrics 
   const tcrK = transientResponse({ ...twoBox, co2Formula: 'ar6', forcing2xWm2 });
   const f = onePercentForcing('ar6', forcing2xWm2);
   const t = energyBalance(twoBox, f, 'exact').surfaceK;
+  // Emissions compatible with the 1 %/yr concentrations (annual means C0 x 1.01^k), diagnosed with
+  // the production carbon step, the feedback seeing the previous year's warming.
+  const ppm = Float64Array.from({ length: 71 }, (_, k) => PREINDUSTRIAL.co2Ppm * 1.01 ** k);
+  const drivers = co2YearDrivers(ppm, undefined, PREINDUSTRIAL.co2Ppm);
   const state = annualCarbonState();
   let emittedGtc = 0;
   for (let k = 0; k < 70; k++) {
-    const increase = GTC_PER_PPM * PREINDUSTRIAL.co2Ppm * (1.01 ** (k + 1) - 1.01 ** k);
-    emittedGtc += annualCarbonStepForIncreaseInto(state, columns.uptake_warming_scale![i] * t[k], columns.irf100_scale![i], increase);
+    co2YearInto(state, drivers, k, columns.uptake_warming_scale![i] * (k > 0 ? t[k - 1] : 0), columns.irf100_scale![i]);
+    emittedGtc += state.lastEmissionGtc;
   }
   return { ecsK: forcing2xWm2 / twoBox.feedbackWm2K, tcrK, tcreKPer1000Pgc: tcrK / (emittedGtc / 1000) };
 }
