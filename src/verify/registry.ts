@@ -4,6 +4,7 @@ import { ar6GasForcing2019, doublingForcing } from './forcing-checks.js';
 import { erfHistory } from './erf-history-checks.js';
 import { hadcrut5Fit } from './hadcrut-checks.js';
 import { historyObserved } from './history-checks.js';
+import { posteriorRanges } from './posterior-checks.js';
 import type { PublishedCheck, VerificationRow } from './published-check.js';
 import { twoBoxAnalytic } from './two-box-checks.js';
 
@@ -23,6 +24,7 @@ export const PUBLISHED_CHECKS: readonly PublishedCheck[] = [
   erfHistory,
   historyObserved,
   hadcrut5Fit,
+  posteriorRanges,
 ];
 
 /**
