@@ -10,6 +10,7 @@ import { notesAndCautions } from './notes-and-cautions.js';
 import { addModelOptions, baselineOption, type ModelOptions, pathwayArg, resolveModelParams, wholeNumberOption } from './options.js';
 import { announceWritten, pathwayInputs, tableRenderers, writeOutput } from './output.js';
 import { DEFAULT_PATHWAY } from './run.js';
+import { memberSource } from './member-source.js';
 
 interface AttributeOptions extends ModelOptions {
   out?: string;
@@ -18,6 +19,7 @@ interface AttributeOptions extends ModelOptions {
   chart: boolean;
   members?: number;
   seed: number;
+  prior: boolean;
 }
 
 /** `warmcast attribute [pathway]`: warming split by forcing agent, adding up to the total. */
@@ -30,15 +32,16 @@ export function attributeCommand(io: CliIo): Command {
     .option('--no-splice', 'do not splice a pathway that starts late onto the bundled history')
     .option('--no-chart', 'omit the terminal chart')
     .option('-n, --members <count>', 'add 5-95 % ranges from an ensemble of this many members', wholeNumberOption('--members', 2))
-    .option('--seed <integer>', 'random seed of the ensemble', wholeNumberOption('--seed', 0), 1);
+    .option('--seed <integer>', 'random seed of the ensemble', wholeNumberOption('--seed', 0), 1)
+    .option('--prior', 'with --members: draw from the prior, unconstrained by the observed record, instead of the calibrated set', false);
   addModelOptions(cmd)
     .addHelpText('after', '\nExamples:\n  warmcast attribute delayed\n  warmcast attribute swift-emissions --out swift-by-agent.csv\n')
     .action((pathway: string | undefined, opts: AttributeOptions) => {
-      const { params, paramsFile, notes: paramNotes } = resolveModelParams(opts, io);
+      const { params, paramsFile, notes: paramNotes, forcingScale, forcingNote } = resolveModelParams(opts, io);
       const read = readPathway(pathwayArg(pathway ?? DEFAULT_PATHWAY, io), { splice: opts.splice });
-      const result = attributePathway(read.pathway, { params, baseline: opts.baseline });
-      const ranges = opts.members ? attributeMembers(read.pathway, { params, members: opts.members, seed: opts.seed, baseline: opts.baseline }) : undefined;
-      const notes = [...read.pathway.provenance.notes, ...result.projection.notes, ...result.notes, ...(ranges?.notes ?? []), ...paramNotes];
+      const result = attributePathway(read.pathway, { params, baseline: opts.baseline, forcingScale });
+      const ranges = opts.members ? attributeMembers(read.pathway, { params, members: opts.members, seed: opts.seed, baseline: opts.baseline, source: memberSource(opts.prior) }) : undefined;
+      const notes = [...read.pathway.provenance.notes, ...result.projection.notes, ...result.notes, ...(ranges?.notes ?? []), ...paramNotes, ...(forcingNote ? [forcingNote] : [])];
       if (opts.out !== undefined) {
         const table = attributionTable(result, ranges);
         const written = writeOutput(opts.out, tableRenderers(table), {

@@ -6,8 +6,8 @@ import { plainTable } from '../report/index.js';
 import { standardCautions } from '../report/standard-cautions.js';
 import type { CliIo } from './cli-io.js';
 import { notesAndCautions } from './notes-and-cautions.js';
-import { numberListOption, pathwayArg, wholeNumberOption, yearOption } from './options.js';
-import { calibrate } from '../climate/calibrate.js';
+import { numberListOption, pathwayArg, resolveModelParams, wholeNumberOption, yearOption } from './options.js';
+import { memberSource } from './member-source.js';
 import { announceWritten, pathwayInputs, tableRenderers, writeOutput } from './output.js';
 
 /** The bundled non-CO2 path budgets assume unless `--non-co2` names another. */
@@ -27,6 +27,7 @@ interface BudgetOptions {
   shape?: string;
   members: number;
   seed: number;
+  prior: boolean;
   out?: string;
 }
 
@@ -54,6 +55,7 @@ export function budgetCommand(io: CliIo): Command {
     .option('--shape <file>', 'keep this pathway\'s own net CO2 shape (co2_gtco2) and find the latest net zero, stretching or compressing its decline in time; its non-CO2 emissions are used unless --non-co2 is given')
     .option('-n, --members <count>', 'ensemble members', wholeNumberOption('--members', 1), 500)
     .option('--seed <integer>', 'random seed', wholeNumberOption('--seed', 0), 1)
+    .option('--prior', 'draw the members from the prior, unconstrained by the observed record, instead of the calibrated set', false)
     .option('-o, --out <file>', 'write the budget table; the extension picks the format: .csv (+ .meta.json), .json, .md; - for stdout as CSV')
     .addHelpText(
       'after',
@@ -61,7 +63,8 @@ export function budgetCommand(io: CliIo): Command {
     )
     .action((opts: BudgetOptions) => {
       const chances = chancesFromOption(opts.chance);
-      const params = calibrate();
+      const { params, forcingScale } = resolveModelParams({}, io);
+      const source = memberSource(opts.prior);
       const nonCo2Name = opts.nonCo2 ?? (opts.shape ? undefined : DEFAULT_NON_CO2);
       const nonCo2Read = readPathway(pathwayArg(nonCo2Name ?? opts.shape!, io), { splice: true });
       let shape: Float64Array | undefined;
@@ -70,7 +73,7 @@ export function budgetCommand(io: CliIo): Command {
         shapeRead = readPathway(pathwayArg(opts.shape, io), { splice: true });
         shape = shapeFrom(shapeRead.pathway.years, shapeRead.pathway.series.co2_gtco2, opts.from ?? (shapeRead.pathway.provenance.historyLastYear ?? 0) + 1, opts.shape);
       }
-      const result = carbonBudget(nonCo2Read.pathway, { limits: opts.limit, chances, fromYear: opts.from, members: opts.members, seed: opts.seed, params, shape });
+      const result = carbonBudget(nonCo2Read.pathway, { limits: opts.limit, chances, fromYear: opts.from, members: opts.members, seed: opts.seed, params, forcingScale, source, shape });
       const notes = [...nonCo2Read.pathway.provenance.notes, ...result.notes];
       if (opts.out !== undefined) {
         const written = writeOutput(opts.out, tableRenderers(budgetTable(result)), {

@@ -3,6 +3,7 @@ import { energyBalance } from '../climate/energy-balance.js';
 import { gtco2ToGtc } from '../carbon/units.js';
 import { ConfigError } from '../errors.js';
 import { co2Forcing } from '../forcing/co2.js';
+import type { ForcingAgent } from '../forcing/agents.js';
 import { forcingScaleKey, sliceMemberParameters, type MemberParameters, type MemberSource } from '../ensemble/member-parameters.js';
 import { ar6Members } from '../ensemble/ar6-members.js';
 import { AR6_SAMPLING } from '../ensemble/sampling.js';
@@ -36,6 +37,8 @@ export interface CarbonBudgetOptions {
   source?: MemberSource;
   /** Central parameters: the CH4 and N2O concentrations all members share, and the current CO2 rate. */
   params: ClimateParams;
+  /** The central run's multiplier per forcing agent (the calibrated set's medians), as `run` uses. */
+  forcingScale?: Partial<Record<ForcingAgent, number>>;
   /** Last year run (default: 250 years after fromYear, so a late net zero still shows its peak). */
   endYear?: number;
   /**
@@ -117,7 +120,7 @@ export function carbonBudget(nonCo2: Pathway, options: CarbonBudgetOptions): Car
   const placeholder = new Float64Array(n).fill(NaN);
   placeholder.fill(0, joinIndex);
   const spliced: Pathway = { ...pathway, series: { ...pathway.series, co2_ppm: co2Ppm, co2_gtco2: placeholder } };
-  const central = projectPathway(spliced, { params: options.params });
+  const central = projectPathway(spliced, { params: options.params, forcingScale: options.forcingScale });
   const rate = central.columns.co2_gtco2[joinIndex - 1];
   const notes: string[] = [];
   if (!(rate > 0)) throw new ConfigError(`the net CO2 rate diagnosed at the end of the history is ${rate.toFixed(1)} Gt CO2 per year: a budget needs a positive rate to fall from`, 'rate');
@@ -160,7 +163,7 @@ export function carbonBudget(nonCo2: Pathway, options: CarbonBudgetOptions): Car
   }
   const refSeries = new Float64Array(n).fill(NaN);
   for (let k = joinIndex; k < n; k++) refSeries[k] = k < fromIndex ? rate : futureRef[k - fromIndex];
-  const refRun = projectPathway({ ...spliced, series: { ...spliced.series, co2_gtco2: refSeries } }, { params: options.params });
+  const refRun = projectPathway({ ...spliced, series: { ...spliced.series, co2_gtco2: refSeries } }, { params: options.params, forcingScale: options.forcingScale });
   const forcing = Object.fromEntries(Object.entries(refRun.columns).filter(([k]) => /^forcing_.*_wm2$/.test(k) && k !== 'forcing_wm2' && k !== 'forcing_aerosol_wm2').map(([k, v]) => [k.slice(8, -4), v]));
   const parts = attributeWarming(options.params, refRun.years, forcing, baseline);
   const kz = Math.min(n - 1, refNetZero - y0);
