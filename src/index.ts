@@ -14,4 +14,5 @@ export * from './carbon/index.js';
 export * from './metrics/index.js';
 export { ensembleHeadlines, ensembleTable, mergeShards, runEnsemble, shardFromJson, shardToJson, startEnsembleThreads, summarizeEnsemble, AR6_SAMPLING } from './ensemble/index.js';
 export type { EnsembleHeadlines, EnsembleInput, EnsembleOptions, EnsembleResult, EnsembleSampling, EnsembleThreads } from './ensemble/index.js';
-export { comparisonHtml, comparisonMarkdown, svgChart, terminalChart, htmlReport, standardCautions } from './report/index.js';
+export { comparisonDocument, ensembleDocument, OUTPUT_FORMATS, renderDocument, runDocument, svgChart, terminalChart, terminalText, htmlReport, standardCautions } from './report/index.js';
+export type { OutputDocument, OutputTable } from './report/index.js';

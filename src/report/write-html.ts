@@ -1,0 +1,27 @@
+import { headlineLines, headlineTable } from './headline-text.js';
+import { htmlReport } from './html-report.js';
+import type { OutputDocument } from './output-document.js';
+import { svgChart } from './svg-chart.js';
+
+/**
+ * A document as one self-contained HTML page (see htmlReport): the title, what was run, the
+ * headline (as sentences for one option, as a table for several), the cautions, the human tables,
+ * the charts inline as SVG, the notes, the provenance.
+ *
+ * @param doc the document
+ * @param provenance where the numbers came from
+ * @returns the HTML document text
+ */
+export function htmlText(doc: OutputDocument, provenance: object): string {
+  const single = doc.headline.length === 1;
+  return htmlReport({
+    title: doc.title,
+    summaryLines: [doc.subtitle, ...(single ? headlineLines(doc.headline[0], doc.baseline).map((l) => l.trim().replace(/\s{2,}/g, ' ')) : []), ...(doc.labelKey ?? [])],
+    tables: [...(single ? [] : [headlineTable(doc.headline, doc.baseline)]), ...doc.tables],
+    charts: doc.charts.map(svgChart),
+    assumptions: { baseline: `warming relative to the ${doc.baseline[0]}-${doc.baseline[1]} mean`, 'warming levels': 'reached in the middle year of the first 20-year period whose mean exceeds the level (IPCC AR6 WG1)' },
+    provenance,
+    cautions: doc.cautions,
+    notes: doc.notes,
+  });
+}
