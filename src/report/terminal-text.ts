@@ -81,7 +81,7 @@ export function plainTable(t: OutputTable, width = Infinity): string[] {
   if (t.caption) out.push(...wrap(t.caption, width, '  '));
   out.push(line(shown.map((c) => c.head)), '  ' + shown.map((c) => '-'.repeat(c.w)).join('  '));
   for (let r = 0; r < rows; r++) out.push(line(shown.map((c) => c.cells[r])));
-  if (kept < cols.length) out.push(`  (${cols.length - kept} more column${cols.length - kept === 1 ? '' : 's'} in the output files; widen the terminal to see them)`);
+  if (kept < cols.length) out.push(...wrap(`(${cols.length - kept} more column${cols.length - kept === 1 ? '' : 's'} in the output files; widen the terminal to see them)`, width, '  '));
   for (const n of t.notes ?? []) out.push(...wrap(n, width, '  '));
   return out;
 }
