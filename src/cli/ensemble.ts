@@ -137,7 +137,11 @@ export function mergeCommand(io: CliIo): Command {
     .argument('<shard...>', 'shard files (.json), all K from 1 to N of one ensemble');
   addReportOptions(cmd);
   refuseOptions(cmd, MERGE_REFUSES)
-    .addHelpText('after', '\nEvery setting (pathway, seed, members, thresholds, baseline, CO2 formula) comes from the shards.\n\nExample:\n  warmcast merge shard-*.json --out swift-ens.csv\n')
+    .addHelpText(
+      'after',
+      '\nEvery setting (pathway, seed, members, thresholds, baseline, CO2 formula) comes from the shards.\n\nExample:\n  warmcast merge shard-*.json --out swift-ens.csv\n' +
+        cautionsHelp(standardCautions(UNCERTAINTY_HELP)),
+    )
     .action(async (files: string[], opts: ReportOptions) => {
       // One shard at a time, so that only the merged members and one shard's data are held.
       const merger = shardMerger();

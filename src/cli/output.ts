@@ -16,15 +16,12 @@ export interface ReportOptions {
   to?: number;
   years?: number[];
   every?: number;
-  notes: boolean;
+  notes?: boolean;
   chart: boolean;
 }
 
 /** `--out` help: the formats of the output registry. */
-const OUT_HELP =
-  'write the results; the extension picks the format: ' +
-  Object.entries(OUTPUT_FORMATS).map(([ext, f]) => `${ext} (${f.what})`).join('; ') +
-  '; - writes the CSV to stdout';
+const OUT_HELP = `write the results; the extension picks the format: ${Object.keys(OUTPUT_FORMATS).join(', ')} (a CSV gets a .meta.json beside it); - writes the CSV to stdout`;
 
 /**
  * Adds the output options every command that projects shares, with one meaning everywhere:
@@ -39,7 +36,7 @@ export function addReportOptions(cmd: Command): Command {
     .option('--to <year>', 'last year of the tables, charts and files', yearOption)
     .option('--years <list>', 'rows of the Markdown, HTML and terminal tables, e.g. 2030,2050,2100 (CSV, JSON and xlsx keep every year)', numberListOption('--years'))
     .addOption(new Option('--every <step>', 'rows of the Markdown, HTML and terminal tables every 5 or 10 years (default: every 10 to 2100, every 25 after)').argParser(everyOption))
-    .option('--notes', 'print every note on how the inputs were read and run (files always keep them)', false)
+    .option('--notes', 'print every note on how the inputs were read and run (files always keep them)')
     .option('--no-chart', 'omit the terminal chart');
 }
 

@@ -5,7 +5,7 @@
  */
 export { comparisonDocument } from './comparison-document.js';
 export type { ComparisonDocumentOptions } from './comparison-document.js';
-export { comparisonJson, comparisonSummary } from './comparison-json.js';
+export { comparisonSummary } from './comparison-json.js';
 export { comparisonLongTable } from './comparison-long-table.js';
 export { comparisonTables } from './comparison-tables.js';
 export type { ComparisonTableOptions } from './comparison-tables.js';
