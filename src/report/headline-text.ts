@@ -4,9 +4,9 @@ import type { OutputTable } from './output-table.js';
 import { isAr6Baseline } from './threshold-baseline-note.js';
 import { thresholdName } from './threshold-name.js';
 
-/** `1.51 K` or, with members, `1.51 K [1.20-1.90]` (median [5-95 %]). */
-function warmingText(v: number, range?: { p05: number; p95: number }, unit = ' K'): string {
-  return range ? `${kelvin(v)}${unit} [${kelvin(range.p05)}-${kelvin(range.p95)}]` : `${kelvin(v)}${unit}`;
+/** `1.51 K` or, with members, `1.51 K [1.20-1.90]` (median [5-95 %]; the range to `rangeDigits` decimals). */
+function warmingText(v: number, range?: { p05: number; p95: number }, unit = ' K', rangeDigits = 2): string {
+  return range ? `${kelvin(v)}${unit} [${kelvin(range.p05, rangeDigits)}-${kelvin(range.p95, rangeDigits)}]` : `${kelvin(v)}${unit}`;
 }
 
 /** The crossing of one level in words: `2048`, `2030 or earlier`, `not by 2140`. */
@@ -52,7 +52,7 @@ export function headlineLines(h: Headline, baseline: readonly [number, number]):
   h.crossings.forEach((x, j) => {
     const lead = j === 0 ? '  reached   ' : '            ';
     const median = x.year === null ? `fewer than half of the members by ${x.lastVisibleYear}` : `median ${crossingText(x)}`;
-    lines.push(`${lead}${thresholdName(x.thresholdK, baseline)}: ${median}; crossed by ${crossedByText(x)}${j === 0 ? ` (${rule})` : ''}`);
+    lines.push(`${lead}${thresholdName(x.thresholdK, baseline)}: ${median}; members crossed: ${crossedByText(x)}${j === 0 ? ` (${rule})` : ''}`);
   });
   return lines;
 }
@@ -62,32 +62,36 @@ export function headlineLines(h: Headline, baseline: readonly [number, number]):
  * headline years, its peak and year, and per level its crossing year (with members: median and
  * ranges, and the share crossed by the last headline year).
  *
+ * `compact` (the terminal) gives ranges to one decimal, leaves "(rising)" to the files and puts the
+ * share crossed by the last headline year in the header, so that three options with members fit
+ * 120 columns.
+ *
  * @example headlineTable(hs, [1850, 1900]).columns.map((c) => c.label) // ['option', '2030 K', '2050 K', '2100 K', 'peak K', 'peak year', '1.5 K reached', '2 K reached']
  */
-export function headlineTable(hs: readonly Headline[], baseline: readonly [number, number]): OutputTable {
+export function headlineTable(hs: readonly Headline[], baseline: readonly [number, number], compact = false): OutputTable {
   const years = [...new Set(hs.flatMap((h) => h.atYears.map((a) => a.year)))].sort((a, b) => a - b);
   const ranged = hs.some((h) => h.members !== undefined);
   const levels = hs[0]?.crossings.map((x) => x.thresholdK) ?? [];
   const lastYear = years.at(-1);
+  const rangeDigits = compact ? 1 : 2;
   const col = (key: string, label: string, cells: string[]) => ({ key, label, values: cells });
   const columns = [
     col('option', 'option', hs.map((h) => h.label)),
     ...years.map((y) =>
       col(`warming_${y}_k`, `${y} K`, hs.map((h) => {
         const a = h.atYears.find((x) => x.year === y);
-        return a ? warmingText(a.warmingK, a.range as HeadlineRange | undefined, '') : 'n/a';
+        return a ? warmingText(a.warmingK, a.range as HeadlineRange | undefined, '', rangeDigits) : 'n/a';
       })),
     ),
-    col('peak_k', 'peak K', hs.map((h) => warmingText(h.peak.warmingK, h.peak.range, ''))),
-    col('peak_year', 'peak year', hs.map((h) => `${h.peak.year}${h.peak.stillRising ? ' (rising)' : ''}`)),
+    col('peak_k', 'peak K', hs.map((h) => warmingText(h.peak.warmingK, h.peak.range, '', rangeDigits))),
+    col('peak_year', 'peak year', hs.map((h) => `${h.peak.year}${h.peak.stillRising && !compact ? ' (rising)' : ''}`)),
     ...levels.map((t, j) =>
-      col(`reached_${t}_k`, `${+t.toPrecision(6)} K reached`, hs.map((h) => {
+      col(`reached_${t}_k`, `${+t.toPrecision(6)} K${compact && ranged ? ` (% by ${lastYear})` : ' reached'}`, hs.map((h) => {
         const x = h.crossings[j];
         const share = x.crossedBy?.find((b) => b.year === lastYear);
         if (!share || lastYear === undefined) return crossingText(x);
-        return share.share === null
-          ? `${crossingText(x)} (${percent(x.crossedByLastVisible ?? null)} by ${x.lastVisibleYear})`
-          : `${crossingText(x)} (${percent(share.share)} by ${lastYear})`;
+        const text = share.share === null ? `${percent(x.crossedByLastVisible ?? null)} by ${x.lastVisibleYear}` : compact ? percent(share.share) : `${percent(share.share)} by ${lastYear}`;
+        return `${crossingText(x)} (${text})`;
       })),
     ),
   ];

@@ -84,14 +84,22 @@ export function warmingCharts(c: Comparison, options: WarmingChartOptions): { ch
     });
   }
   // The terminal chart leaves the observed record out: at a character per year its year-to-year
-  // noise would cross the model's line over the whole history.
-  const terminalLines = lines;
+  // noise would cross the model's line over the whole history. A single option with members shows
+  // its 5 and 95 % lines around the median (several options would be too many lines).
+  const only = c.pathways.length === 1 ? c.pathways[0] : undefined;
+  const terminalLines: ChartLine[] = only?.range
+    ? [
+        { label: '95th percentile', style: 1, ...cut(only.years, only.range.p95) },
+        { ...lines[0], label: `${only.label}, median` },
+        { label: '5th percentile', style: 2, ...cut(only.years, only.range.p05) },
+      ]
+    : lines;
   return {
     charts,
     terminal: {
       series: terminalLines,
       options: {
-        title: `Warming, K relative to ${baseline}${ranged ? ' (medians)' : ''}`,
+        title: `Warming, K relative to ${baseline}${only?.range ? ': median and 5-95 % of members' : ranged ? ' (medians)' : ''}`,
         yLabel: 'K',
         height: options.terminalHeight ?? 8,
         thresholds: c.thresholdsK,

@@ -18,7 +18,7 @@ describe('warmcast ensemble and merge', () => {
     expect(header).toBe(
       'year,warming_p05_k,warming_p17_k,warming_p50_k,warming_p83_k,warming_p95_k,crossed_by_1.5,prob_above_1.5,crossed_by_2,prob_above_2,crossed_by_3,prob_above_3',
     );
-    expect(io.out.replace(/\n {12}/g, ' ')).toMatch(/^ {2}reached {3}1\.5 K: median \d{4}; crossed by \d+ % by 2030, \d+ % by 2050, \d+ % by 2100 \(20-year means, the IPCC AR6 rule\)/m);
+    expect(io.out.replace(/\n {12}/g, ' ')).toMatch(/^ {2}reached {3}1\.5 K: median \d{4}; members crossed: \d+ % by 2030, \d+ % by 2050, \d+ % by 2100 \(20-year means, the IPCC AR6 rule\)/m);
     const meta = JSON.parse(readFileSync(join(dir, 'e.meta.json'), 'utf8'));
     expect(meta.seed).toBe(7);
     expect(meta.notes.join('\n')).toMatch(/unphysical parameter draws were redrawn/);
@@ -226,7 +226,7 @@ describe('warmcast ensemble and merge', () => {
     }
     // ... and the terminal prints them.
     const t15 = h.crossings[0];
-    expect(io.out).toContain(`1.5 K: median ${t15.year}; crossed by ${t15.crossedBy.map((b: { year: number; share: number }) => `${percentText(b.share)} by ${b.year}`).join(', ')}`);
+    expect(io.out).toContain(`1.5 K: median ${t15.year}; members crossed: ${t15.crossedBy.map((b: { year: number; share: number }) => `${percentText(b.share)} by ${b.year}`).join(', ')}`);
     expect(Object.keys(json.ensemble.sampled)).toEqual(['ecs_k', 'tcr_k']);
     expect(JSON.parse(readFileSync(join(dir, 'e.meta.json'), 'utf8')).headline).toEqual(json.headline);
     expect(readFileSync(join(dir, 'e.csv'), 'utf8').split('\n')[0]).toMatch(/^year,warming_p05_k,/);
@@ -344,7 +344,7 @@ describe('warmcast ensemble and merge', () => {
     writeFileSync(file, '# name: Ends in 2100\nyear,co2_ppm\n2030,440\n2060,500\n2100,560\n');
     const io = captureIo();
     expect(await main(['ensemble', file, '--members', '200', '--no-chart', '--out', join(dir, 'e.md')], io)).toBe(0);
-    expect(io.out.replace(/\n {12}/g, ' ')).toMatch(/2 K: median [^;]+; crossed by [<>]?\d+ % by 2030, [<>]?\d+ % by 2050, n\/a by 2100 \(by 2090, the run's last 20-year mean: [<>]?\d+ %\)/);
+    expect(io.out.replace(/\n {12}/g, ' ')).toMatch(/2 K: median [^;]+; members crossed: [<>]?\d+ % by 2030, [<>]?\d+ % by 2050, n\/a by 2100 \(by 2090, the run's last 20-year mean: [<>]?\d+ %\)/);
     expect(readFileSync(join(dir, 'e.md'), 'utf8')).toMatch(/\([<>]?\d+ % by 2090\)/);
   });
 });
