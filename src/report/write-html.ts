@@ -1,11 +1,11 @@
-import { headlineLines, headlineTable } from './headline-text.js';
+import { headlineTable } from './headline-text.js';
 import { htmlReport } from './html-report.js';
 import type { OutputDocument } from './output-document.js';
 import { svgChart } from './svg-chart.js';
 
 /**
  * A document as one self-contained HTML page (see htmlReport): the title, what was run, the
- * headline (as sentences for one option, as a table for several), the cautions, the human tables,
+ * headline table (as in Markdown), the cautions, the human tables,
  * the charts inline as SVG, the notes, the provenance.
  *
  * @param doc the document
@@ -13,11 +13,10 @@ import { svgChart } from './svg-chart.js';
  * @returns the HTML document text
  */
 export function htmlText(doc: OutputDocument, provenance: object): string {
-  const single = doc.headline.length === 1;
   return htmlReport({
     title: doc.title,
-    summaryLines: [doc.subtitle, ...(single ? headlineLines(doc.headline[0], doc.baseline).map((l) => l.trim().replace(/\s{2,}/g, ' ')) : []), ...(doc.labelKey ?? [])],
-    tables: [...(single ? [] : [headlineTable(doc.headline, doc.baseline)]), ...doc.tables],
+    summaryLines: [doc.subtitle, ...(doc.labelKey ?? [])],
+    tables: [headlineTable(doc.headline, doc.baseline), ...doc.tables],
     charts: doc.charts.map(svgChart),
     assumptions: { baseline: `warming relative to the ${doc.baseline[0]}-${doc.baseline[1]} mean`, 'warming levels': 'reached in the middle year of the first 20-year period whose mean exceeds the level (IPCC AR6 WG1)' },
     provenance,
