@@ -40,6 +40,9 @@ export async function xlsxBytes(doc: OutputDocument, provenance: object & { crea
   return new Uint8Array(await wb.xlsx.writeBuffer());
 }
 
+/** A number as human tables show it, without units or ranges. */
+const PLAIN_NUMBER = /^[+-]?\d+(\.\d+)?$/;
+
 /** The yearly table: keys as headers, numbers at full precision, empty cells for NaN. */
 function dataSheet(wb: ExcelJS.Workbook, t: OutputTable): void {
   const ws = wb.addWorksheet('data');
@@ -57,7 +60,8 @@ function humanSheet(wb: ExcelJS.Workbook, t: OutputTable): void {
   if (t.caption) ws.addRow([t.caption]).font = { bold: true };
   ws.addRow(t.columns.map(humanLabel)).font = { bold: true };
   const rows = rowCount(t);
-  for (let r = 0; r < rows; r++) ws.addRow(t.columns.map((c) => (isNumeric(c) && Number.isFinite(c.values[r]) ? Number(humanCell(c, r)) : humanCell(c, r))));
+  // A cell that is a plain number as shown (1.51, +0.02) goes in as a number, so it can be charted.
+  for (let r = 0; r < rows; r++) ws.addRow(t.columns.map((c) => (PLAIN_NUMBER.test(humanCell(c, r)) ? Number(humanCell(c, r)) : humanCell(c, r))));
   for (const n of t.notes ?? []) ws.addRow([n]);
   t.columns.forEach((c, j) => (ws.getColumn(j + 1).width = Math.min(40, Math.max(10, humanLabel(c).length + 2))));
 }
