@@ -125,7 +125,7 @@ export function ensembleCommand(io: CliIo): Command {
         io.stderr(`wrote shard ${opts.shard.index}/${opts.shard.count} (${result.memberCount} members) to ${opts.out}; combine all shards with \`warmcast merge\`\n`);
         return;
       }
-      await emitEnsemble(result, origin.pathway, opts, { inputs, notes: allNotes, pathway: origin.pathway, io });
+      await emitEnsemble(result, origin.pathway, opts, { inputs, notes: allNotes, pathway: origin.pathway, firstFuture: read.pathway.provenance.spliceYear, io });
     });
   return cmd;
 }
@@ -208,7 +208,7 @@ async function emitEnsemble(
   result: EnsembleResult,
   name: string,
   opts: ReportOptions,
-  ctx: { inputs: string[]; notes: string[]; pathway?: string; pathwayInputs?: EnsembleOrigin['inputs']; io: CliIo },
+  ctx: { inputs: string[]; notes: string[]; pathway?: string; pathwayInputs?: EnsembleOrigin['inputs']; firstFuture?: number; io: CliIo },
 ): Promise<void> {
   const { io } = ctx;
   const baseline = result.config.baseline;
@@ -216,7 +216,12 @@ async function emitEnsemble(
   const notes = baselineNote ? [...ctx.notes, baselineNote] : [...ctx.notes];
   const observed = observedRecord(baseline, notes);
   const { years } = result;
-  const rows = rowChoice(opts, years[0], years[years.length - 1], firstFutureYear(notes) ?? years[0]);
+  const first = years[0];
+  const last = years[years.length - 1];
+  // Where the future starts: the splice year; for merged shards, as their notes record it, else 2020
+  // (the milestone rows then start at 2020 rather than at a history's 1750).
+  const firstFuture = ctx.firstFuture ?? firstFutureYear(notes) ?? Math.max(first, Math.min(2020, last));
+  const rows = rowChoice(opts, first, last, firstFuture);
   const doc = ensembleDocument(result, { name, rows, notes, summary: ensembleHeadlines(result), uncertainty: uncertaintyText(result), ...(observed ? { observed } : {}) });
   if (opts.out !== undefined) {
     const written = await writeDocument(opts.out, doc, {
