@@ -84,7 +84,7 @@ export function headlineTable(hs: readonly Headline[], baseline: readonly [numbe
       })),
     ),
     col('peak_k', 'peak K', hs.map((h) => warmingText(h.peak.warmingK, h.peak.range, '', rangeDigits))),
-    col('peak_year', 'peak year', hs.map((h) => `${h.peak.year}${h.peak.stillRising && !compact ? ' (rising)' : ''}`)),
+    col('peak_year', 'peak year', hs.map((h) => `${h.peak.year}${h.peak.stillRising && !(compact && ranged) ? ' (rising)' : ''}`)),
     ...levels.map((t, j) =>
       col(`reached_${t}_k`, `${+t.toPrecision(6)} K${compact && ranged ? ` (% by ${lastYear})` : ' reached'}`, hs.map((h) => {
         const x = h.crossings[j];
