@@ -3,7 +3,7 @@ import { Command } from 'commander';
 import { ConfigError } from '../errors.js';
 import { readPathway } from '../io/load-pathway.js';
 import { comparePathways, pairedDifferenceRange, type PathwayWarming } from '../metrics/index.js';
-import { defaultWorkerCount, runEnsemble, startEnsembleThreads, type EnsembleThreads } from '../ensemble/index.js';
+import { runEnsemble } from '../ensemble/index.js';
 import { ensembleInput, projectPathway } from '../projection/index.js';
 import { comparisonDocument, ensembleWarming, scopedNotes, standardCautions, thresholdBaselineNote, type ScopedNote } from '../report/index.js';
 import type { CliIo } from './cli-io.js';
@@ -69,25 +69,19 @@ export function compareCommand(io: CliIo): Command {
       const ref = runs[0].projection;
       const pathways: PathwayWarming[] = [];
       let shared: Record<string, number | string> | undefined;
-      const anyEmissions = runs.some((r) => r.projection.columns.co2_gtco2 !== undefined);
-      const threads = opts.members !== undefined ? ensembleThreadsFor(opts.members * ref.years.length * runs.length, anyEmissions) : undefined;
       const members: { firstYear: number; members: number; warmingK: Float64Array }[] = [];
-      try {
-        for (const { label, name, projection: p, pathway } of runs) {
-          if (opts.members === undefined) {
-            pathways.push({ label, name, years: p.years, warmingK: p.columns.warming_k, ...(p.columns.co2_gtco2 ? { co2Gtco2: p.columns.co2_gtco2 } : {}) });
-            continue;
-          }
-          // Same seed for every option: member i draws the same parameters in each, so differences pair up.
-          const { input, notes: inputNotes } = ensembleInput(pathway, params, { baseline: opts.baseline });
-          const e = await runEnsemble(input, { members: opts.members, seed: opts.seed, thresholds: opts.thresholds, baseline: opts.baseline, keepMembers: true, ...(threads ? { threads } : {}) });
-          scoped.push(...[...inputNotes, ...e.notes].map((text) => ({ pathway: label, ensemble: true, text })));
-          shared ??= ensembleParameters(e.config);
-          members.push({ firstYear: e.years[0], members: e.memberCount, warmingK: e.members!.warmingK });
-          pathways.push({ ...ensembleWarming(e, label), name, ...(p.columns.co2_gtco2 ? { co2Gtco2: p.columns.co2_gtco2 } : {}) });
+      for (const { label, name, projection: p, pathway } of runs) {
+        if (opts.members === undefined) {
+          pathways.push({ label, name, years: p.years, warmingK: p.columns.warming_k, ...(p.columns.co2_gtco2 ? { co2Gtco2: p.columns.co2_gtco2 } : {}) });
+          continue;
         }
-      } finally {
-        await threads?.close();
+        // Same seed for every option: member i draws the same parameters in each, so differences pair up.
+        const { input, notes: inputNotes } = ensembleInput(pathway, params, { baseline: opts.baseline });
+        const e = await runEnsemble(input, { members: opts.members, seed: opts.seed, thresholds: opts.thresholds, baseline: opts.baseline, keepMembers: true });
+        scoped.push(...[...inputNotes, ...e.notes].map((text) => ({ pathway: label, ensemble: true, text })));
+        shared ??= ensembleParameters(e.config);
+        members.push({ firstYear: e.years[0], members: e.memberCount, warmingK: e.members!.warmingK });
+        pathways.push({ ...ensembleWarming(e, label), name, ...(p.columns.co2_gtco2 ? { co2Gtco2: p.columns.co2_gtco2 } : {}) });
       }
       if (members.length > 1) {
         for (let j = 1; j < pathways.length; j++) pathways[j].differenceRange = pairedDifferenceRange(members[0], members[j], pathways[j].years);
@@ -159,10 +153,4 @@ function labelledArgs(args: readonly string[], labels?: readonly string[]): { la
     seen.add(label);
   }
   return out;
-}
-
-/** Worker threads shared by several ensembles of `memberYears` in all, or none when one thread is enough. */
-function ensembleThreadsFor(memberYears: number, emissionDriven: boolean): EnsembleThreads | undefined {
-  const count = defaultWorkerCount(memberYears, emissionDriven);
-  return count > 1 ? startEnsembleThreads(count) : undefined;
 }

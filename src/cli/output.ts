@@ -4,7 +4,7 @@ import { Option, type Command } from 'commander';
 import { ConfigError } from '../errors.js';
 import { bundledPathwaysDir, loadObservedRecord, writeFilesAtomic, type ReadPathwayResult } from '../io/index.js';
 import { rebase, reportYears } from '../metrics/index.js';
-import { isOutputFormat, OUTPUT_FORMATS, renderDocument, terminalText, type OutputDocument, type RowChoice } from '../report/index.js';
+import { formatsOf, isOutputFormat, OUTPUT_FORMATS, renderDocument, terminalText, type OutputDocument, type OutputFormat, type RowChoice } from '../report/index.js';
 import type { CliIo } from './cli-io.js';
 import { numberListOption, wholeNumberOption, yearOption } from './options.js';
 import { buildProvenance, type ProvenanceInput } from './provenance.js';
@@ -99,15 +99,30 @@ export async function writeDocument(out: string, doc: OutputDocument, ctx: Prove
     return [];
   }
   const path = resolve(ctx.io.cwd, out);
-  const ext = extname(path).toLowerCase();
-  if (!isOutputFormat(ext)) {
-    throw new ConfigError(`--out ${path}: the extension must be one of ${Object.keys(OUTPUT_FORMATS).join(', ')} (it picks the format)`, 'out');
-  }
+  const ext = checkOutExtension(out, doc, path);
   const stem = path.slice(0, -ext.length);
   const files = (await renderDocument(doc, provenance, ext)).map((f) => ({ path: f.suffix === ext ? path : stem + f.suffix, content: f.content }));
   const existed = files.map((f) => existsSync(f.path));
   writeFilesAtomic(files, { inputs: ctx.inputs });
   return files.map((f, i) => ({ path: f.path, replaced: existed[i] }));
+}
+
+/**
+ * The format `out` names, checked against the formats that fit the document (see formatsOf), so
+ * that a command can refuse a wrong extension before any work.
+ *
+ * @param out the --out argument
+ * @param doc the document, or what is known of it beforehand (whether it has charts)
+ * @param shown how to name the file in the message (default `out` as given)
+ * @throws ConfigError naming the formats that fit
+ */
+export function checkOutExtension(out: string, doc: Pick<OutputDocument, 'charts'>, shown = out): OutputFormat {
+  const ext = extname(out).toLowerCase();
+  const fits = formatsOf(doc);
+  if (!isOutputFormat(ext) || !fits.includes(ext)) {
+    throw new ConfigError(`--out ${shown}: the extension must be one of ${fits.join(', ')} (it picks the format)`, 'out');
+  }
+  return ext;
 }
 
 /** Prints a document on the terminal (or on stderr when the CSV goes to stdout), fitted to its width. */

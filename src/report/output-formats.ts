@@ -32,6 +32,15 @@ export interface RenderedFile {
 }
 
 /**
+ * The formats that fit a document: every format, except `.svg` for a document without charts (a
+ * table of checks, say).
+ * @example formatsOf(doc) // ['.csv', '.json', '.md', '.svg', '.html', '.xlsx']
+ */
+export function formatsOf(doc: Pick<OutputDocument, 'charts'>): OutputFormat[] {
+  return (Object.keys(OUTPUT_FORMATS) as OutputFormat[]).filter((f) => f !== '.svg' || doc.charts.length > 0);
+}
+
+/**
  * Whether `ext` (lower case, with the dot) is a format of the registry.
  * @example isOutputFormat('.xlsx') // true
  */

@@ -36,7 +36,7 @@ export function terminalText(doc: OutputDocument, options: TerminalTextOptions =
   if (doc.headline.length === 1) {
     // A long headline line wraps under its text, keeping its label ('  warming   ') as the lead.
     for (const l of headlineLines(doc.headline[0], doc.baseline)) out.push(...(l.length <= width ? [l] : wrap(l.slice(12), width, l.slice(0, 12))));
-  } else {
+  } else if (doc.headline.length > 1) {
     const t = headlineTable(doc.headline, doc.baseline, true);
     out.push(...plainTable({ ...t, notes: [] }, width));
   }

@@ -16,7 +16,7 @@ export function htmlText(doc: OutputDocument, provenance: object): string {
   return htmlReport({
     title: doc.title,
     summaryLines: [doc.subtitle, ...(doc.labelKey ?? [])],
-    tables: [headlineTable(doc.headline, doc.baseline), ...doc.tables],
+    tables: [...(doc.headline.length > 0 ? [headlineTable(doc.headline, doc.baseline)] : []), ...doc.tables],
     charts: doc.charts.map(svgChart),
     assumptions: { baseline: `warming relative to the ${doc.baseline[0]}-${doc.baseline[1]} mean`, 'warming levels': 'reached in the middle year of the first 20-year period whose mean exceeds the level (IPCC AR6 WG1)' },
     provenance,

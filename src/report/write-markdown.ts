@@ -52,7 +52,7 @@ export function markdownText(doc: OutputDocument, provenance: object): string {
     '',
     markdownEscape(doc.subtitle),
     '',
-    markdownTable(headlineTable(doc.headline, doc.baseline)),
+    ...(doc.headline.length > 0 ? [markdownTable(headlineTable(doc.headline, doc.baseline))] : []),
     ...(doc.labelKey ? [...list(doc.labelKey), ''] : []),
     ...doc.tables.map(markdownTable),
     '## Notes',

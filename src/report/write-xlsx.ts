@@ -21,7 +21,7 @@ export async function xlsxBytes(doc: OutputDocument, provenance: object & { crea
   const when = provenance.created_utc ? new Date(provenance.created_utc) : new Date(0);
   wb.created = when;
   wb.modified = when;
-  humanSheet(wb, headlineTable(doc.headline, doc.baseline));
+  if (doc.headline.length > 0) humanSheet(wb, headlineTable(doc.headline, doc.baseline));
   dataSheet(wb, doc.data);
   for (const t of doc.tables) humanSheet(wb, t);
   const notes = wb.addWorksheet('notes');

@@ -66,7 +66,7 @@ describe('warmcast compare', () => {
     // No single parameter set was used: provenance records what the members share, not ECS 3 / TCR 1.8.
     expect(doc.provenance.caution).toMatch(/Ranges are shown for steady, swift/);
     expect(doc.provenance.caution).not.toMatch(/No uncertainty range is shown/);
-    expect(doc.provenance.parameters).toEqual({ co2_formula: 'ar6', upper_heat_capacity: 8, deep_heat_capacity: 100, deep_efficacy: 1 });
+    expect(doc.provenance.parameters).toEqual({ co2_formula: 'ar6' });
     expect(doc.columns).toEqual(expect.arrayContaining(['difference_p05_k', 'difference_p95_k', 'crossed_by_1.5', 'prob_above_1.5']));
     // Paired members: the spread of the difference is narrower than the two options' ranges side by side.
     const at2100 = (label: string) => doc.rows.find((r: Record<string, number | string>) => r.pathway === label && r.year === 2100);
