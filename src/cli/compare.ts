@@ -1,3 +1,4 @@
+import type { AbsentEmissionsRule } from '../forcing/absent-emissions.js';
 import { basename, extname } from 'node:path';
 import { Command } from 'commander';
 import { ConfigError } from '../errors.js';
@@ -7,7 +8,7 @@ import { runEnsemble } from '../ensemble/index.js';
 import { ensembleInput, projectPathway } from '../projection/index.js';
 import { comparisonDocument, ensembleWarming, scopedNotes, standardCautions, thresholdBaselineNote, type ScopedNote } from '../report/index.js';
 import type { CliIo } from './cli-io.js';
-import { addModelOptions, baselineOption, cautionsHelp, type ModelOptions, pathwayArg, resolveModelParams, thresholdsOption, wholeNumberOption } from './options.js';
+import { addModelOptions, baselineOption, cautionsHelp, type ModelOptions, pathwayArg, resolveModelParams, thresholdsOption, wholeNumberOption, absentEmissionsOption } from './options.js';
 import { addReportOptions, announceWritten, observedRecord, pathwayInputs, printDocument, rowChoice, writeDocument, type ReportOptions } from './output.js';
 import { ensembleParameters } from './provenance.js';
 
@@ -18,6 +19,7 @@ interface CompareOptions extends ModelOptions, ReportOptions {
   thresholds: number[];
   baseline: [number, number];
   splice: boolean;
+  absentEmissions?: AbsentEmissionsRule;
   carbonFeedback: boolean;
 }
 
@@ -33,6 +35,7 @@ export function compareCommand(io: CliIo): Command {
   addReportOptions(cmd)
     .addOption(thresholdsOption('warming levels in K whose crossing years are reported', [1.5, 2]))
     .addOption(baselineOption())
+    .addOption(absentEmissionsOption())
     .option('--no-splice', 'do not splice pathways that start late onto the bundled history (each run then starts from zero warming in its first year)')
     .option('--no-carbon-feedback', 'emission-driven runs: switch off the carbon-climate feedback on uptake')
     .option('--members <count>', 'also run a parameter ensemble of this many members per option: medians with ranges, and each difference\'s range from paired members', wholeNumberOption('--members', 2))
@@ -60,7 +63,7 @@ export function compareCommand(io: CliIo): Command {
       const files: string[] = [];
       const scoped: ScopedNote[] = [];
       const runs = options.map(({ label, path, name }) => {
-        const read = readPathway(pathwayArg(path, io), { splice: opts.splice });
+        const read = readPathway(pathwayArg(path, io), { splice: opts.splice, absentEmissions: opts.absentEmissions });
         files.push(...pathwayInputs(read));
         const p = projectPathway(read.pathway, { params, baseline: opts.baseline, carbonFeedback: opts.carbonFeedback });
         scoped.push(...[...p.provenance.notes, ...p.notes].map((text) => ({ pathway: label, text })));

@@ -1,3 +1,4 @@
+import type { AbsentEmissionsRule } from '../forcing/absent-emissions.js';
 import { Command, InvalidArgumentError, Option } from 'commander';
 import { readFileSync } from 'node:fs';
 import { resolve } from 'node:path';
@@ -8,7 +9,7 @@ import { readPathway } from '../io/load-pathway.js';
 import { ensembleInput } from '../projection/index.js';
 import { ensembleDocument, standardCautions, thresholdBaselineNote } from '../report/index.js';
 import type { CliIo } from './cli-io.js';
-import { baselineOption, cautionsHelp, pathwayArg, refuseOptions, resolveModelParams, thresholdsOption, wholeNumberOption, type RefusedOption } from './options.js';
+import { baselineOption, cautionsHelp, pathwayArg, refuseOptions, resolveModelParams, thresholdsOption, wholeNumberOption, type RefusedOption, absentEmissionsOption } from './options.js';
 import { addReportOptions, announceWritten, observedRecord, pathwayInputs, printDocument, rowChoice, writeDocument, type ReportOptions } from './output.js';
 import { allocationError, checkEnsembleMemory, checkMergeMemory } from './memory-check.js';
 import { progressBar } from './progress.js';
@@ -23,6 +24,7 @@ interface EnsembleCliOptions extends ReportOptions {
   baseline: [number, number];
   shard?: { index: number; count: number };
   splice: boolean;
+  absentEmissions?: AbsentEmissionsRule;
 }
 
 /** The uncertainty sentence of an ensemble's outputs. */
@@ -71,6 +73,7 @@ export function ensembleCommand(io: CliIo): Command {
     .option('--seed <integer>', 'random seed (same seed, same output on any machine, and shards merged equal one run)', wholeNumberOption('--seed', 0), 1)
     .addOption(thresholdsOption('warming levels in K above the baseline (above 0) for exceedance probabilities', [1.5, 2, 3]))
     .addOption(baselineOption())
+    .addOption(absentEmissionsOption())
     .option('--shard <K/N>', 'run only the K-th of N equal slices of the members and write them as a shard file (.json) for `warmcast merge`', shardOption)
     .option('--no-splice', 'do not splice a pathway that starts late onto the bundled history')
     .addOption(new Option('--co2-formula <name>', 'CO2 forcing: ar6 (Meinshausen et al. 2020 + AR6 adjustment) or log (Myhre et al. 1998)').choices(['ar6', 'log']).default('ar6', 'ar6'));
@@ -90,7 +93,7 @@ export function ensembleCommand(io: CliIo): Command {
       if (opts.shard && !opts.out?.toLowerCase().endsWith('.json')) throw new ConfigError('--shard writes a shard file: give --out NAME.json', 'out');
       // Central parameters: the CO2 formula, and the CH4 and N2O of an emission pathway's central run.
       const { params } = resolveModelParams({ co2Formula: opts.co2Formula }, io);
-      const read = readPathway(pathwayArg(arg, io), { splice: opts.splice });
+      const read = readPathway(pathwayArg(arg, io), { splice: opts.splice, absentEmissions: opts.absentEmissions });
       const { input, notes } = ensembleInput(read.pathway, params, { baseline: opts.baseline });
       const inputs = pathwayInputs(read);
       const years = input.years.length;

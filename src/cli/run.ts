@@ -1,10 +1,11 @@
+import type { AbsentEmissionsRule } from '../forcing/absent-emissions.js';
 import { Command, Option } from 'commander';
 import { ConfigError } from '../errors.js';
 import { readPathway } from '../io/load-pathway.js';
 import { projectPathway } from '../projection/index.js';
 import { runDocument, standardCautions, thresholdBaselineNote } from '../report/index.js';
 import type { CliIo } from './cli-io.js';
-import { addModelOptions, baselineOption, cautionsHelp, type ModelOptions, numberOption, pathwayArg, resolveModelParams } from './options.js';
+import { addModelOptions, baselineOption, cautionsHelp, type ModelOptions, numberOption, pathwayArg, resolveModelParams, absentEmissionsOption } from './options.js';
 import { addReportOptions, announceWritten, observedRecord, pathwayInputs, printDocument, rowChoice, writeDocument, type ReportOptions } from './output.js';
 
 /** The pathway `warmcast run` uses when none is given. */
@@ -13,6 +14,7 @@ export const DEFAULT_PATHWAY = 'delayed';
 interface RunOptions extends ModelOptions, ReportOptions {
   baseline: [number, number];
   splice: boolean;
+  absentEmissions?: AbsentEmissionsRule;
   carbonFeedback: boolean;
   method: 'odex' | 'exact';
   rtol: number;
@@ -26,6 +28,7 @@ export function runCommand(io: CliIo): Command {
     .argument('[pathway...]', `pathway CSV files or bundled names (default: ${DEFAULT_PATHWAY}; see \`warmcast pathways\`)`);
   addReportOptions(cmd)
     .addOption(baselineOption())
+    .addOption(absentEmissionsOption())
     .option('--no-splice', 'do not splice a pathway that starts late onto the bundled history (the run then starts from zero warming in its first year, not in equilibrium with that year\'s forcing)')
     .option('--no-carbon-feedback', 'emission-driven runs: switch off the carbon-climate feedback on uptake');
   addModelOptions(cmd)
@@ -46,7 +49,7 @@ export function runCommand(io: CliIo): Command {
       const { params, paramsFile, notes: paramNotes } = resolveModelParams(opts, io);
       const baselineNote = thresholdBaselineNote(opts.baseline);
       for (const arg of args) {
-        const read = readPathway(pathwayArg(arg, io), { splice: opts.splice });
+        const read = readPathway(pathwayArg(arg, io), { splice: opts.splice, absentEmissions: opts.absentEmissions });
         const p = projectPathway(read.pathway, {
           params,
           baseline: opts.baseline,

@@ -23,3 +23,4 @@ export { describePathway } from './describe-pathway.js';
 export { loadObservedRecord, HADCRUT5_CITATION, type ObservedRecord } from './observed-record.js';
 export { writeFileAtomic, writeFilesAtomic, type FileToWrite, type WriteFileAtomicOptions } from './write-file-atomic.js';
 export { parseParams, PARAMS_FILE_KEYS } from './read-params.js';
+export { describeAgentSources } from './describe-agent-sources.js';

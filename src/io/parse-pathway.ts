@@ -1,8 +1,10 @@
 import Papa from 'papaparse';
 import { InputError, type InputProblem } from '../errors.js';
 import { LUMPED_PARTS } from '../forcing/lumped-forcing.js';
-import { GASES, LUMPED_FORCING_COLUMNS, PATHWAY_COLUMNS, type Gas, type PathwayColumn } from '../pathway.js';
-import { isoDateToYear } from './iso-date-year.js';
+import { HALOGEN_COLUMNS } from '../carbon/halogen-species.js';
+import { GASES, HALOGEN_CONCENTRATION_COLUMNS, HALOGEN_EMISSION_COLUMNS, LUMPED_FORCING_COLUMNS, PATHWAY_COLUMNS, type Gas, type PathwayColumn } from '../pathway.js';
+import { commonDayOfDates, isoDateToYear } from './iso-date-year.js';
+import { nearestHalogen } from './nearest-halogen.js';
 import { nearestName } from './nearest-name.js';
 import { VALUE_BOUNDS } from './value-bounds.js';
 
@@ -16,8 +18,18 @@ export interface ParsedPathway {
   metadata: Record<string, string>;
   /** Which time column the file uses. */
   timeColumn: 'year' | 'date';
-  /** Decimal year label of each row, strictly ascending (dates converted by isoDateToYear). */
+  /**
+   * Decimal year label of each row, strictly ascending: dates converted by isoDateToYear, or, when
+   * every date falls on the same day of the year, each date's calendar year (sameDayCalendarYears).
+   */
   times: Float64Array;
+  /** With dates all on one day of the year: that day as `MM-DD` (the rows are then calendar years). */
+  datesOnDay?: string;
+  /**
+   * With at least half of the dates (two or more) on one day of the year but not all: that day, how
+   * many, and the line of the first date on another day (toAnnual notes a probable typo).
+   */
+  datesMostlyOnDay?: { monthDay: string; count: number; otherLine: number };
   /** Data columns present, canonical lower-case names, one value per row in the column's unit. */
   columns: Partial<Record<PathwayColumn, Float64Array>>;
   /** 1-based physical line of each row in the file (comment and blank lines counted). */
@@ -45,6 +57,12 @@ const UNIT_HINTS: Readonly<Record<string, string>> = {
   n2o_tgn: 'n2o_mt (Mt N2O per year: multiply Tg N by 44/28 = 1.571)',
   n2o_mtn: 'n2o_mt (Mt N2O per year: multiply Mt N by 44/28 = 1.571)',
 };
+
+/** Column names as listed in messages: the halogenated gases as two patterns instead of 72 names. */
+const LISTED_COLUMNS: readonly string[] = [
+  ...PATHWAY_COLUMNS.filter((c) => !(HALOGEN_EMISSION_COLUMNS as readonly string[]).includes(c) && !(HALOGEN_CONCENTRATION_COLUMNS as readonly string[]).includes(c)),
+  '<gas>_kt', '<gas>_ppt (halogenated gases)',
+];
 
 type CellRole =
   | { kind: 'time'; name: 'year' | 'date'; header: string }
@@ -109,6 +127,7 @@ export function parsePathway(text: string, file: string): ParsedPathway {
   let timeRole: Extract<CellRole, { kind: 'time' }> | undefined;
 
   const times: number[] = [];
+  const dateTexts: string[] = [];
   const rowLines: number[] = [];
   const values = new Map<PathwayColumn, number[]>();
   const lineOfTime = new Map<number, number>();
@@ -167,6 +186,7 @@ export function parsePathway(text: string, file: string): ParsedPathway {
       }
     }
     times.push(time);
+    if (timeRole) dateTexts.push(cells[roles.indexOf(timeRole)].trim());
 
     if (timeRole && Number.isFinite(time)) {
       const timeText = cells[roles.indexOf(timeRole)].trim();
@@ -233,12 +253,20 @@ export function parsePathway(text: string, file: string): ParsedPathway {
     const v = values.get(column);
     if (v) columns[column] = Float64Array.from(v);
   }
+  // Dates all on one day of the year name calendar years (DESIGN.md conventions; README).
+  const common = timeRole!.name === 'date' ? commonDayOfDates(dateTexts) : undefined;
+  const sameDay = common && common.firstOther < 0 ? common : undefined;
+  const mostly = common && !sameDay && common.count >= 2 && 2 * common.count >= dateTexts.length
+    ? { monthDay: common.monthDay, count: common.count, otherLine: rowLines[common.firstOther] }
+    : undefined;
   return {
     file,
     name: metadata.name || baseName(file),
     metadata,
     timeColumn: timeRole!.name,
-    times: Float64Array.from(times),
+    times: Float64Array.from(sameDay ? sameDay.years : times),
+    ...(sameDay ? { datesOnDay: sameDay.monthDay } : {}),
+    ...(mostly ? { datesMostlyOnDay: mostly } : {}),
     columns,
     rowLines: Int32Array.from(rowLines),
     headerLine,
@@ -298,7 +326,7 @@ function readHeader(cells: string[], line: number, report: Report): CellRole[] {
         line,
         column: String(j + 1),
         message: `must name every column (header cell ${j + 1} is empty)`,
-        expected: `one of ${known.join(', ')}`,
+        expected: `one of year, date, ${LISTED_COLUMNS.join(', ')}`,
       });
       roles.push({ kind: 'skip' });
       return;
@@ -325,6 +353,21 @@ function readHeader(cells: string[], line: number, report: Report): CellRole[] {
       unknownCount++;
       const hintKey = key.replace(/[^a-z0-9]+/g, '_');
       const hint = Object.hasOwn(UNIT_HINTS, hintKey) ? UNIT_HINTS[hintKey] : undefined;
+      const halogen = hint === undefined ? /^(.+?)[\s_]*(kt|ppt)$/.exec(key) : null;
+      if (halogen) {
+        const g = nearestHalogen(halogen[1]);
+        report({
+          code: 'input.unknown-gas',
+          line,
+          column: header,
+          message: 'must name a halogenated gas warmcast models (from the IPCC AR6 WG1 Table 7.SM.7 species)'
+            + (g ? `; did you mean "${g.column}_${halogen[2]}" (${g.label}, ${g.name})?` : ''),
+          value: header,
+          expected: `<gas>_${halogen[2]} with <gas> one of ${HALOGEN_COLUMNS.join(', ')}`,
+        });
+        roles.push({ kind: 'skip' });
+        return;
+      }
       const guess = hint === undefined ? nearestName(key, known) : undefined;
       report({
         code: 'input.unknown-column',
@@ -336,7 +379,7 @@ function readHeader(cells: string[], line: number, report: Report): CellRole[] {
             ? `must be a known column name; did you mean "${guess}"?`
             : 'must be a known column name',
         value: header,
-        expected: `one of ${known.join(', ')}`,
+        expected: `one of year, date, ${LISTED_COLUMNS.join(', ')}`,
       });
       roles.push({ kind: 'skip' });
     }
@@ -378,6 +421,21 @@ function readHeader(cells: string[], line: number, report: Report): CellRole[] {
       });
     }
   }
+  for (const gas of HALOGEN_COLUMNS) {
+    const conc = dataRoles.find((r) => r.column === `${gas}_ppt`);
+    const emis = dataRoles.find((r) => r.column === `${gas}_kt`);
+    if (conc && emis) {
+      const later = roles.indexOf(conc) > roles.indexOf(emis) ? conc : emis;
+      report({
+        code: 'input.gas-twice',
+        line,
+        column: later.header,
+        message: `must give ${gas} either as a concentration (${gas}_ppt) or as emissions (${gas}_kt), not both`,
+        value: later.header,
+        expected: `one column per gas: ${gas}_ppt or ${gas}_kt`,
+      });
+    }
+  }
   for (const lumped of LUMPED_FORCING_COLUMNS) {
     const whole = dataRoles.find((r) => r.column === lumped);
     const part = dataRoles.find((r) => (LUMPED_PARTS[lumped] as readonly string[]).includes(r.column));
@@ -398,7 +456,7 @@ function readHeader(cells: string[], line: number, report: Report): CellRole[] {
       code: 'input.no-data-columns',
       line,
       message: 'must have at least one data column besides the time column',
-      expected: `one or more of ${PATHWAY_COLUMNS.join(', ')}`,
+      expected: `one or more of ${LISTED_COLUMNS.join(', ')}`,
     });
   }
   return roles;
@@ -441,7 +499,16 @@ function readValue(
     return NaN;
   }
   const b = VALUE_BOUNDS[role.column];
-  if (!(read.value >= b.min && read.value <= b.max)) {
+  if (read.value < 0 && b.min === 0) {
+    report({
+      code: 'input.negative',
+      line,
+      column: role.header,
+      message: `must not be negative: ${b.quantity} cannot be below 0 ${b.unit}`,
+      value: cell,
+      expected: `a value from 0 to ${b.max} ${b.unit}`,
+    });
+  } else if (!(read.value >= b.min && read.value <= b.max)) {
     report({
       code: 'input.out-of-range',
       line,

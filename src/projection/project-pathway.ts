@@ -4,6 +4,7 @@ import type { ClimateParams } from '../climate/params.js';
 import { ConfigError } from '../errors.js';
 import { FORCING_AGENTS, forcingByAgent, type ForcingAgent, type ForcingOptions } from '../forcing/agents.js';
 import { PREINDUSTRIAL } from '../forcing/constants.js';
+import { chemistryAnchor } from '../forcing/methane-chemistry.js';
 import { DEFAULT_TOLERANCES, type OdeTolerances } from '../numerics/integrate-steps.js';
 import { forcingColumnsNotGiven } from '../forcing/lumped-forcing.js';
 import { EMISSION_COLUMNS, GASES, type Pathway, type PathwayProvenance } from '../pathway.js';
@@ -100,8 +101,8 @@ export function projectPathway(pathway: Pathway, options: ProjectionOptions): Pr
   const tolerances = options.tolerances ?? DEFAULT_TOLERANCES;
 
   if (EMISSION_COLUMNS.some((c) => s[c] !== undefined)) {
-    // Emission-driven: carbon boxes, gas burdens and temperatures advance together in one ODE system.
-    const r = runEmissionDriven(pathway, params, { forcing: forcingOptions, feedback: options.carbonFeedback ?? true, tolerances });
+    // Emission-driven: carbon boxes, gas burdens and temperatures advance together, a calendar year at a time.
+    const r = runEmissionDriven(pathway, params, { forcing: forcingOptions, feedback: options.carbonFeedback ?? true });
     const columns: Record<string, Float64Array> = {
       warming_k: rebase(years, r.surfaceK, baseline, pathway.name),
       deep_ocean_k: rebase(years, r.deepK, baseline, pathway.name),
@@ -125,7 +126,15 @@ export function projectPathway(pathway: Pathway, options: ProjectionOptions): Pr
     return { name: pathway.name, provenance: pathway.provenance, params, baseline, years, columns, notes: [...notes, ...r.notes, ...budgetNotes], carbon: r };
   }
 
-  const forcing = forcingByAgent(n, { co2Ppm: s.co2_ppm, ch4Ppb: s.ch4_ppb, n2oPpb: s.n2o_ppb, prescribed: s }, forcingOptions);
+  // Ozone and strat. H2O follow a given CH4 or N2O from the join when their forcing came from emissions.
+  const chemistry = chemistryAnchor(years, pathway.responsiveFrom);
+  const forcing = forcingByAgent(n, {
+    co2Ppm: s.co2_ppm,
+    ch4Ppb: s.ch4_ppb ?? new Float64Array(n).fill(PREINDUSTRIAL.ch4Ppb),
+    n2oPpb: s.n2o_ppb ?? new Float64Array(n).fill(PREINDUSTRIAL.n2oPpb),
+    prescribed: s,
+    chemistry,
+  }, forcingOptions);
   const eb = energyBalance(params, forcing.total, options.method ?? 'exact', tolerances);
   const fromRest = startFromRestNote(pathway, { subject: 'the run', forcingWm2: forcing.total[0] });
   if (fromRest) notes.push(fromRest);

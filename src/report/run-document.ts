@@ -54,7 +54,9 @@ export function runDocument(p: Projection, options: RunDocumentOptions): OutputD
   const subtitle =
     `${p.provenance.source}; ECS ${p.params.ecsK.toFixed(2)} K, TCR ${p.params.tcrK.toFixed(2)} K, CO2 forcing ${p.params.co2Formula}, one central run; ` +
     `warming relative to the ${p.baseline[0]}-${p.baseline[1]} mean${spliceText(p)}`;
-  const notes = [...p.provenance.notes, ...p.notes, ...(options.notes ?? [])];
+  // Stated assumptions (what the file lacks, filled by a rule) stand on the terminal, never only in --notes.
+  const assumptions = (p.provenance.assumptions ?? []).map((a) => `assumption: ${a}`);
+  const notes = [...assumptions, ...p.provenance.notes, ...p.notes, ...(options.notes ?? [])];
   return projectionDocument({
     command: 'run',
     title: p.name,
@@ -66,7 +68,7 @@ export function runDocument(p: Projection, options: RunDocumentOptions): OutputD
     rows: options.rows,
     ...(options.observed ? { observed: options.observed } : {}),
     notes,
-    terminalNotes: notes.filter((n) => n.startsWith('warning')),
+    terminalNotes: [...assumptions, ...notes.filter((n) => n.startsWith('warning'))],
     cautions: standardCautions(),
     shortCaution: shortCaution('run', false),
   });

@@ -49,7 +49,11 @@ export function terminalText(doc: OutputDocument, options: TerminalTextOptions =
     out.push(...terminalChart(doc.terminalChart.series, { ...doc.terminalChart.options, width, color: options.color }).split('\n'));
   }
   out.push('');
-  for (const n of doc.terminalNotes ?? []) out.push(...wrap(n, width, '  note: ', 8));
+  for (const n of doc.terminalNotes ?? []) {
+    // A stated assumption reads as one ('  assumption: ...'), other notes as notes.
+    const m = /^(assumption): (.*)$/s.exec(n);
+    out.push(...(m ? wrap(m[2], width, `  ${m[1]}: `) : wrap(n, width, '  note: ', 8)));
+  }
   if (options.notes) {
     for (const n of doc.notes) out.push(...wrap(n, width, '  note: ', 8));
   } else if (doc.notes.length > 0) {
