@@ -32,6 +32,9 @@ export function terminalText(doc: OutputDocument, options: TerminalTextOptions =
   out.push(...wrap(doc.title, width, ''));
   out.push(...wrap(doc.subtitle, width, '  '));
   for (const k of doc.labelKey ?? []) out.push(...wrap(k, width, '  '));
+  // Stated assumptions (what the inputs lack, filled by a rule) head the output, under the title.
+  const assumptions = (doc.terminalNotes ?? []).filter((n) => n.startsWith('assumption: '));
+  for (const a of assumptions) out.push(...wrap(a.slice('assumption: '.length), width, '  assumption: '));
   out.push('');
   if (doc.headline.length === 1) {
     // A long headline line wraps under its text, keeping its label ('  warming   ') as the lead.
@@ -49,11 +52,7 @@ export function terminalText(doc: OutputDocument, options: TerminalTextOptions =
     out.push(...terminalChart(doc.terminalChart.series, { ...doc.terminalChart.options, width, color: options.color }).split('\n'));
   }
   out.push('');
-  for (const n of doc.terminalNotes ?? []) {
-    // A stated assumption reads as one ('  assumption: ...'), other notes as notes.
-    const m = /^(assumption): (.*)$/s.exec(n);
-    out.push(...(m ? wrap(m[2], width, `  ${m[1]}: `) : wrap(n, width, '  note: ', 8)));
-  }
+  for (const n of doc.terminalNotes ?? []) if (!assumptions.includes(n)) out.push(...wrap(n, width, '  note: ', 8));
   if (options.notes) {
     for (const n of doc.notes) out.push(...wrap(n, width, '  note: ', 8));
   } else if (doc.notes.length > 0) {
