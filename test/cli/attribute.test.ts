@@ -37,6 +37,7 @@ describe('warmcast attribute --members', () => {
     const r = await runCli(['attribute', 'swift-emissions', '--members', '40', '--out', 'm.csv', '--no-chart'], dir);
     expect(r.code, r.err).toBe(0);
     expect(r.out).toMatch(/co2\s+0\.\d\d \[0\.\d\d, \d\.\d\d\]/);
+    expect(r.out).toMatch(/ranges from 40 members/);
     const [header, ...rows] = readFileSync(join(dir, 'm.csv'), 'utf8').trim().split('\n');
     const cols = header.split(',');
     for (const agent of FORCING_AGENTS) {
