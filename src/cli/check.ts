@@ -2,7 +2,7 @@ import { Command } from 'commander';
 import { InputError, WarmcastError, type InputProblem } from '../errors.js';
 import { describePathway, readPathway } from '../io/index.js';
 import type { CliIo } from './cli-io.js';
-import { pathwayArg } from './options.js';
+import { co2JumpOption, pathwayArg } from './options.js';
 
 /** `warmcast check FILE...`: report what each pathway file holds, or every problem in it. */
 export function checkCommand(io: CliIo): Command {
@@ -10,12 +10,13 @@ export function checkCommand(io: CliIo): Command {
     .description('check pathway files: what was read (years, columns, units, interpolation, splice) or every problem found')
     .argument('<pathway...>', 'pathway CSV files or bundled names')
     .option('--no-splice', 'check without splicing onto the bundled history')
+    .addOption(co2JumpOption())
     .addHelpText('after', '\nExample:\n  warmcast check my-pathway.csv pathways/swift.csv\n')
-    .action((pathways: string[], opts: { splice: boolean }) => {
+    .action((pathways: string[], opts: { splice: boolean; co2JumpIntended?: boolean }) => {
       const problems: InputProblem[] = [];
       for (const arg of pathways) {
         try {
-          const { parsed, pathway } = readPathway(pathwayArg(arg, io), { splice: opts.splice });
+          const { parsed, pathway } = readPathway(pathwayArg(arg, io), { splice: opts.splice, co2JumpIntended: opts.co2JumpIntended });
           io.stdout(describePathway(parsed, pathway).join('\n') + '\n\n');
         } catch (e) {
           if (e instanceof InputError) problems.push(...e.problems);

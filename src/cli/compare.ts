@@ -7,7 +7,7 @@ import { defaultWorkerCount, runEnsemble, startEnsembleThreads, type EnsembleThr
 import { ensembleInput, projectPathway } from '../projection/index.js';
 import { comparisonCharts, comparisonHtml, comparisonJson, comparisonLongTable, comparisonSummary, comparisonMarkdown, comparisonText, comparisonUncertainty, scopedNotes, standardCautions, thresholdBaselineNote, type ScopedNote } from '../report/index.js';
 import type { CliIo } from './cli-io.js';
-import { addModelOptions, baselineOption, type ModelOptions, numberListOption, pathwayArg, resolveModelParams, thresholdsOption, wholeNumberOption, yearOption } from './options.js';
+import { addModelOptions, baselineOption, co2JumpOption, type ModelOptions, numberListOption, pathwayArg, resolveModelParams, thresholdsOption, wholeNumberOption, yearOption } from './options.js';
 import { notesAndCautions } from './notes-and-cautions.js';
 import { announceWritten, pathwayInputs, writeOutput } from './output.js';
 import { ensembleParameters } from './provenance.js';
@@ -21,6 +21,7 @@ interface CompareOptions extends ModelOptions {
   thresholds: number[];
   baseline: [number, number];
   splice: boolean;
+  co2JumpIntended?: boolean;
   chart: boolean;
   carbonFeedback: boolean;
   from?: number;
@@ -36,6 +37,7 @@ export function compareCommand(io: CliIo): Command {
     .addOption(thresholdsOption('warming levels in K whose crossing years are reported', [1.5, 2]))
     .addOption(baselineOption())
     .option('--no-splice', 'do not splice pathways that start late onto the bundled history (each run then starts from zero warming in its first year)')
+    .addOption(co2JumpOption())
     .option('--no-carbon-feedback', 'emission-driven runs: switch off the carbon-climate feedback on uptake')
     .option('--members <count>', 'also run a parameter ensemble of this many members per pathway: ranges in tables and shaded in charts, median as the line', wholeNumberOption('--members', 2))
     .option('--seed <integer>', 'random seed of the ensembles (with --members)', wholeNumberOption('--seed', 0), 1)
@@ -61,7 +63,7 @@ export function compareCommand(io: CliIo): Command {
       const files: string[] = [];
       const scoped: ScopedNote[] = [];
       const runs = args.map((arg) => {
-        const read = readPathway(pathwayArg(arg, io), { splice: opts.splice });
+        const read = readPathway(pathwayArg(arg, io), { splice: opts.splice, co2JumpIntended: opts.co2JumpIntended });
         files.push(...pathwayInputs(read));
         const p = projectPathway(read.pathway, { params, baseline: opts.baseline, carbonFeedback: opts.carbonFeedback });
         scoped.push(...[...p.provenance.notes, ...p.notes].map((text) => ({ pathway: p.name, text })));

@@ -8,7 +8,7 @@ import { readPathway } from '../io/load-pathway.js';
 import { ensembleInput } from '../projection/index.js';
 import { ensembleHeadlineLines, ensembleHeadlinesMarkdown, standardCautions, terminalChart, thresholdBaselineNote } from '../report/index.js';
 import type { CliIo } from './cli-io.js';
-import { baselineOption, pathwayArg, refuseOptions, resolveModelParams, thresholdsOption, wholeNumberOption, type RefusedOption } from './options.js';
+import { baselineOption, co2JumpOption, pathwayArg, refuseOptions, resolveModelParams, thresholdsOption, wholeNumberOption, type RefusedOption } from './options.js';
 import { announceWritten, pathwayInputs, tableRenderers, writeOutput } from './output.js';
 import { allocationError, checkEnsembleMemory, checkMergeMemory } from './memory-check.js';
 import { notesAndCautions } from './notes-and-cautions.js';
@@ -26,6 +26,7 @@ interface EnsembleCliOptions {
   workers?: number;
   out?: string;
   splice: boolean;
+  co2JumpIntended?: boolean;
   chart: boolean;
 }
 
@@ -78,6 +79,7 @@ export function ensembleCommand(io: CliIo): Command {
     .option('--workers <count>', 'threads (default: chosen by run size; the output does not depend on it)', wholeNumberOption('--workers', 1))
     .option('-o, --out <file>', 'write the headline figures and the yearly percentiles and probabilities: .csv (+ .meta.json), .json, .md; with --shard a .json shard file')
     .option('--no-splice', 'do not splice a pathway that starts late onto the bundled history')
+    .addOption(co2JumpOption())
     .option('--no-chart', 'omit the terminal chart')
     .addOption(new Option('--co2-formula <name>', 'CO2 forcing: ar6 (Meinshausen et al. 2020 + AR6 adjustment) or log (Myhre et al. 1998)').choices(['ar6', 'log']).default('ar6', 'ar6'));
   refuseOptions(cmd, ENSEMBLE_REFUSES)
@@ -94,7 +96,7 @@ export function ensembleCommand(io: CliIo): Command {
       if (opts.shard && !opts.out?.toLowerCase().endsWith('.json')) throw new ConfigError('--shard writes a shard file: give --out NAME.json', 'out');
       // Central parameters: the CO2 formula, and the CH4 and N2O of an emission pathway's central run.
       const { params } = resolveModelParams({ co2Formula: opts.co2Formula }, io);
-      const read = readPathway(pathwayArg(arg, io), { splice: opts.splice });
+      const read = readPathway(pathwayArg(arg, io), { splice: opts.splice, co2JumpIntended: opts.co2JumpIntended });
       const { input, notes } = ensembleInput(read.pathway, params, { baseline: opts.baseline });
       const inputs = pathwayInputs(read);
       const years = input.years.length;

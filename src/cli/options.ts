@@ -86,6 +86,14 @@ export function baselineOption(): Option {
     .default([...DEFAULT_BASELINE], DEFAULT_BASELINE.join('-'));
 }
 
+/**
+ * `--co2-jump-intended`: a CO2 emission column whose first value after the history is near 12/44 of
+ * the rate diagnosed from the record is refused as Gt C unless this says the fall is meant.
+ */
+export function co2JumpOption(): Option {
+  return new Option('--co2-jump-intended', 'accept a first CO2 emission value near 12/44 of the rate the record implies (otherwise refused as Gt C typed under co2_gtco2)');
+}
+
 /** `--thresholds <list>` (warming levels above 0 K) with `defaults`, shown in help as they are typed (`1.5,2`). */
 export function thresholdsOption(description: string, defaults: number[]): Option {
   return new Option('--thresholds <list>', description).argParser(warmingLevelsOption('--thresholds')).default(defaults, defaults.join(','));

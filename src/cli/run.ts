@@ -4,7 +4,7 @@ import { readPathway } from '../io/load-pathway.js';
 import { projectPathway, type Projection } from '../projection/index.js';
 import { thresholdBaselineNote } from '../report/index.js';
 import type { CliIo } from './cli-io.js';
-import { addModelOptions, baselineOption, type ModelOptions, numberOption, pathwayArg, resolveModelParams, yearOption } from './options.js';
+import { addModelOptions, baselineOption, co2JumpOption, type ModelOptions, numberOption, pathwayArg, resolveModelParams, yearOption } from './options.js';
 import { announceWritten, clipProjection, pathwayInputs, projectionTable, tableRenderers, writeOutput } from './output.js';
 import { printProjectionSummary } from './summary.js';
 import { runHeadlines, runHeadlinesMarkdown } from './run-headlines.js';
@@ -18,6 +18,7 @@ interface RunOptions extends ModelOptions {
   to?: number;
   baseline: [number, number];
   splice: boolean;
+  co2JumpIntended?: boolean;
   chart: boolean;
   carbonFeedback: boolean;
   method: 'odex' | 'exact';
@@ -35,6 +36,7 @@ export function runCommand(io: CliIo): Command {
     .option('--to <year>', 'last year to report', yearOption)
     .addOption(baselineOption())
     .option('--no-splice', 'do not splice a pathway that starts late onto the bundled history (the run then starts from zero warming in its first year, not in equilibrium with that year\'s forcing)')
+    .addOption(co2JumpOption())
     .option('--no-carbon-feedback', 'emission-driven runs: switch off the carbon-climate feedback on uptake')
     .option('--no-chart', 'omit the terminal chart');
   addModelOptions(cmd)
@@ -56,7 +58,7 @@ export function runCommand(io: CliIo): Command {
       const runNotes = [...paramNotes, ...(baselineNote ? [baselineNote] : [])];
       const projections: { projection: Projection; whole: Projection; files: string[] }[] = [];
       for (const arg of args) {
-        const read = readPathway(pathwayArg(arg, io), { splice: opts.splice });
+        const read = readPathway(pathwayArg(arg, io), { splice: opts.splice, co2JumpIntended: opts.co2JumpIntended });
         const full = projectPathway(read.pathway, {
           params,
           baseline: opts.baseline,

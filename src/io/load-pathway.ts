@@ -3,6 +3,8 @@ import { join } from 'node:path';
 import { InputError } from '../errors.js';
 import type { Pathway } from '../pathway.js';
 import { bundledPathwayNames, bundledPathwaysDir, loadHistory } from './bundled-pathways.js';
+import { co2UnitProblem } from './co2-unit-check.js';
+import { nearestName } from './nearest-name.js';
 import { parsePathway, type ParsedPathway } from './parse-pathway.js';
 import { readTextFile } from './read-text-file.js';
 import { spliceOntoHistory } from './splice-onto-history.js';
@@ -14,6 +16,11 @@ export interface LoadPathwayOptions {
   splice?: boolean;
   /** Folder of bundled pathways and history.csv (default: the one shipped with warmcast). */
   pathwaysDir?: string;
+  /**
+   * The user says a CO2 emission jump at the join with the history is meant, so a first value near
+   * 12/44 of the rate diagnosed from the record is not refused as Gt C (see co2UnitProblem).
+   */
+  co2JumpIntended?: boolean;
 }
 
 /** Every stage of reading one pathway, for `warmcast check`. */
@@ -43,7 +50,10 @@ export function readPathway(arg: string, options: LoadPathwayOptions = {}): Read
   if (source !== path) annual = { ...annual, provenance: { ...annual.provenance, source } };
   let pathway = annual;
   if (options.splice !== false && !isHistoryFile(path, pathwaysDir())) {
-    pathway = spliceOntoHistory(annual, loadHistory(pathwaysDir()));
+    const history = loadHistory(pathwaysDir());
+    pathway = spliceOntoHistory(annual, history);
+    const problem = co2UnitProblem(parsed, pathway, history, options.co2JumpIntended ?? false);
+    if (problem) throw new InputError([problem]);
   }
   return { parsed, annual, pathway };
 }
@@ -59,7 +69,8 @@ export function readPathway(arg: string, options: LoadPathwayOptions = {}): Read
  * @param options - `splice` (default true), `pathwaysDir` (default: the bundled folder)
  * @returns the annual Pathway a run uses
  * @throws InputError (exit 2) when the file is missing and not a bundled name (the message lists the
- *   bundled names), a folder, unreadable, too large, not UTF-8, or invalid
+ *   bundled names and the nearest one to a typo), a folder, unreadable, too large, not UTF-8, or
+ *   invalid, or when its CO2 emissions look like Gt C (co2UnitProblem; `co2JumpIntended` says they are not)
  * @example
  * loadPathway('swift').provenance.spliceYear // 2025
  * loadPathway('my-plan.csv', { splice: false }).years[0] // the file's first year
@@ -83,10 +94,11 @@ function locate(arg: string, pathwaysDir: () => string): { path: string; source:
     if (existsSync(path)) return { path, source: `bundled:${name}` };
   }
   const names = dir === undefined ? [] : bundledPathwayNames(dir);
+  const guess = nearestName(arg.replace(/\.csv$/i, ''), names);
   throw new InputError([{
     file: arg,
     code: 'input.not-found',
-    message: 'must be an existing file or the name of a bundled pathway',
+    message: `must be an existing file or the name of a bundled pathway${guess === undefined ? '' : `; did you mean "${guess}"?`}`,
     value: arg,
     expected: names.length > 0
       ? `a CSV file path or one of the bundled pathways: ${names.join(', ')}`
