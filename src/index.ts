@@ -1,17 +1,42 @@
-// warmcast's library surface: pathway reading, forcing, the energy balance model, calibration and
-// projections. Everything here is pure except the file readers in io/.
-export * from './errors.js';
-export * from './pathway.js';
-export * from './forcing/index.js';
-export * from './climate/index.js';
-export * from './projection/index.js';
-export { parsePathway, toAnnual, spliceOntoHistory, loadPathway, readPathway, loadHistory, listBundledPathways, describePathway } from './io/index.js';
-export type { ParsedPathway, ReadPathwayResult, BundledPathway } from './io/index.js';
-export { parseParams } from './io/index.js';
-export { DEFAULT_TOLERANCES } from './numerics/integrate-steps.js';
-export type { OdeTolerances } from './numerics/integrate-steps.js';
-export * from './carbon/index.js';
-export * from './metrics/index.js';
-export { ensembleHeadlines, ensembleTable, mergeShards, runEnsemble, shardFromJson, shardToJson, startEnsembleThreads, summarizeEnsemble, AR6_SAMPLING } from './ensemble/index.js';
-export type { EnsembleHeadlines, EnsembleInput, EnsembleOptions, EnsembleResult, EnsembleSampling, EnsembleThreads } from './ensemble/index.js';
-export { comparisonHtml, comparisonMarkdown, svgChart, terminalChart, htmlReport, standardCautions } from './report/index.js';
+/**
+ * warmcast's library surface: what another project needs to turn a pathway into warming, its
+ * ranges and its answers. Everything here is documented where it is defined (units, sources,
+ * examples). Physics and statistics are pure functions; only the pathway readers touch the file
+ * system. The folders' own index files export more, for warmcast's own use; those names are not
+ * part of the library and may change.
+ *
+ * @example
+ * import { calibrate, loadPathway, projectPathway } from 'warmcast';
+ * const run = projectPathway(loadPathway('swift'), { params: calibrate({ ecsK: 3, tcrK: 1.8 }) });
+ * run.columns.warming_k[run.years.indexOf(2100)] // K above 1850-1900
+ */
+
+// Errors: every failure is a WarmcastError with a stable `code` and the exit code the CLI uses.
+export { ConfigError, InputError, NumericalError, WarmcastError, formatInputProblem } from './errors.js';
+export type { InputProblem } from './errors.js';
+
+// Pathways: reading files (or text), the annual grid, the bundled history and pathways.
+export { PATHWAY_COLUMNS, COLUMN_UNITS } from './pathway.js';
+export type { Pathway, PathwayColumn, PathwayProvenance } from './pathway.js';
+export { listBundledPathways, loadHistory, loadPathway, parsePathway, spliceOntoHistory, toAnnual } from './io/index.js';
+export type { BundledPathway, LoadPathwayOptions, ParsedPathway } from './io/index.js';
+
+// The model: calibration from ECS and TCR, forcing by agent, the energy balance.
+export { calibrate, energyBalance } from './climate/index.js';
+export type { CalibrationTargets, ClimateParams, EnergyBalanceResult } from './climate/index.js';
+export { FORCING_AGENTS, ch4ErfAr6, co2ErfAr6, forcingByAgent, n2oErfAr6 } from './forcing/index.js';
+export type { Co2Formula, ForcingAgent, ForcingOptions } from './forcing/index.js';
+export { diagnoseEmissions, gtcToGtco2, gtco2ToGtc } from './carbon/index.js';
+
+// Projections and ensembles.
+export { ensembleInput, projectPathway } from './projection/index.js';
+export type { Projection, ProjectionOptions } from './projection/index.js';
+export { mergeShards, runEnsemble, shardFromJson, shardToJson } from './ensemble/index.js';
+export type { EnsembleInput, EnsembleOptions, EnsembleResult } from './ensemble/index.js';
+
+// Answers: warming levels, peaks, comparisons, cumulative emissions.
+export { comparePathways, crossingPeriod, cumulativeToNetZero, peak } from './metrics/index.js';
+export type { Comparison, ComparisonOptions, CrossingPeriod, Peak } from './metrics/index.js';
+
+// Reports: the cautions every quoted number needs, and the comparison as a document.
+export { comparisonHtml, comparisonMarkdown, standardCautions } from './report/index.js';
