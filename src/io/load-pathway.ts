@@ -1,6 +1,7 @@
 import { existsSync, realpathSync } from 'node:fs';
 import { join } from 'node:path';
 import { InputError } from '../errors.js';
+import { splitLumpedForcing } from '../forcing/lumped-forcing.js';
 import type { Pathway } from '../pathway.js';
 import { bundledPathwayNames, bundledPathwaysDir, loadHistory } from './bundled-pathways.js';
 import { co2UnitProblem } from './co2-unit-check.js';
@@ -48,10 +49,12 @@ export function readPathway(arg: string, options: LoadPathwayOptions = {}): Read
   const parsed = parsePathway(readTextFile(path), path);
   let annual = toAnnual(parsed);
   if (source !== path) annual = { ...annual, provenance: { ...annual.provenance, source } };
-  let pathway = annual;
+  // Lumped aerosol_wm2 / other_wm2 become agent columns before the splice, so that the history's
+  // agent columns are replaced by the file's and not added to them.
+  let pathway = splitLumpedForcing(annual);
   if (options.splice !== false && !isHistoryFile(path, pathwaysDir())) {
     const history = loadHistory(pathwaysDir());
-    pathway = spliceOntoHistory(annual, history);
+    pathway = spliceOntoHistory(pathway, history);
     const problem = co2UnitProblem(parsed, pathway, history, options.co2JumpIntended ?? false);
     if (problem) throw new InputError([problem]);
   }
@@ -61,7 +64,8 @@ export function readPathway(arg: string, options: LoadPathwayOptions = {}): Read
 /**
  * Reads a pathway for a run. `arg` is a file path or the name of a bundled pathway (`swift` or
  * `swift.csv` for `pathways/swift.csv`); an existing file wins over a bundled name. The file is read
- * (at most MAX_PATHWAY_BYTES, UTF-8), validated (parsePathway), put on the annual grid (toAnnual) and,
+ * (at most MAX_PATHWAY_BYTES, UTF-8), validated (parsePathway), put on the annual grid (toAnnual),
+ * its lumped `aerosol_wm2` and `other_wm2` split over their agents (splitLumpedForcing) and,
  * unless `splice: false`, spliced onto the bundled history (spliceOntoHistory) when it starts later
  * than the history. A bundled pathway's provenance source is `bundled:<name>`; a file's is its path.
  *
