@@ -12,7 +12,8 @@
  * COLUMNS=100 as when output is piped; an argument naming a file of the repository (a test
  * fixture) is passed as its full path and shown as written. After the command, `| head N` keeps the first N lines
  * (adding `...` when more followed), `| file NAME` shows a file the command wrote instead of what it
- * printed, and `| lines A-B` keeps lines A to B of it. The temporary folder's path is shown as `.`.
+ * printed, `| lines A-B` keeps lines A to B of it, and `| markdown` puts the text in the README as
+ * Markdown (a table that renders) instead of in a text block. The temporary folder's path is shown as `.`.
  * Between `<!-- options: run -->` and `<!-- /options -->` goes a table of the command's options,
  * read from its `--help` (flags, what each does, its default).
  * test/readme.test.ts fails when the README differs from what this script would write.
@@ -42,6 +43,7 @@ interface ExampleSpec {
   head?: number;
   file?: string;
   lines?: [number, number];
+  markdown?: boolean;
 }
 
 /**
@@ -55,12 +57,13 @@ export function parseExample(marker: string): ExampleSpec {
   const spec: ExampleSpec = { argv: words.slice(1) };
   for (const step of steps) {
     const [name, arg] = step.split(/\s+/);
-    if (name === 'head') spec.head = Number(arg);
+    if (name === 'markdown') spec.markdown = true;
+    else if (name === 'head') spec.head = Number(arg);
     else if (name === 'file') spec.file = arg;
     else if (name === 'lines') {
       const [a, b] = arg.split('-').map(Number);
       spec.lines = [a, b];
-    } else throw new Error(`README example step must be head, file or lines: "${step}" in ${marker}`);
+    } else throw new Error(`README example step must be head, file, lines or markdown: "${step}" in ${marker}`);
   }
   return spec;
 }
@@ -79,7 +82,10 @@ export async function runExample(spec: ExampleSpec): Promise<string> {
     text = text.split(dir).join('.').split(`${ROOT}/`).join('');
     let lines = text.replace(/\n+$/, '').split('\n').map((l) => l.trimEnd());
     if (spec.lines) lines = lines.slice(spec.lines[0] - 1, spec.lines[1]);
-    if (spec.head !== undefined && lines.length > spec.head) lines = [...lines.slice(0, spec.head), '...'];
+    if (spec.head !== undefined && lines.length > spec.head) {
+      const more = lines.length - spec.head;
+      lines = [...lines.slice(0, spec.head), spec.markdown ? `\n(${more} more lines)` : '...'];
+    }
     return lines.join('\n');
   } finally {
     if (columns === undefined) delete process.env.COLUMNS;
@@ -137,8 +143,10 @@ export async function renderReadme(text: string): Promise<string> {
     if (!m) continue;
     const end = lines.indexOf(END, i + 1);
     if (end < 0) throw new Error(`README line ${i + 1}: example "${m[1]}" has no ${END}`);
-    const output = await runExample(parseExample(m[1]));
-    out.push('```text', output, '```', END);
+    const spec = parseExample(m[1]);
+    const output = await runExample(spec);
+    if (spec.markdown) out.push('', output, '', END);
+    else out.push('```text', output, '```', END);
     i = end;
   }
   return out.join('\n');

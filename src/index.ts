@@ -38,5 +38,9 @@ export type { EnsembleInput, EnsembleOptions, EnsembleResult } from './ensemble/
 export { comparePathways, crossingPeriod, cumulativeToNetZero, peak } from './metrics/index.js';
 export type { Comparison, ComparisonOptions, CrossingPeriod, Peak } from './metrics/index.js';
 
+// Checks: the published checks the tests make, run on the user's machine (`warmcast verify`).
+export { PUBLISHED_CHECKS, runPublishedChecks } from './verify/index.js';
+export type { PublishedCheck, VerificationRow } from './verify/index.js';
+
 // Reports: the cautions every quoted number needs, and the comparison as a document.
 export { comparisonHtml, comparisonMarkdown, standardCautions } from './report/index.js';

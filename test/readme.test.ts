@@ -23,7 +23,8 @@ describe('README examples', () => {
       argv: ['compare', 'a', 'b', '--out', 't.md'], file: 't.md', lines: [2, 5], head: 3,
     });
     expect(() => parseExample('ls -l')).toThrow('must start with "warmcast"');
-    expect(() => parseExample('warmcast run | tail 3')).toThrow('must be head, file or lines');
+    expect(() => parseExample('warmcast run | tail 3')).toThrow('must be head, file, lines or markdown');
+    expect(parseExample('warmcast verify | markdown').markdown).toBe(true);
   });
 
   it('optionsTable(run) lists run\'s options from its --help with their defaults', async () => {
