@@ -1,3 +1,4 @@
+import type { AbsentEmissionsRule } from '../forcing/absent-emissions.js';
 import { Command } from 'commander';
 import { ConfigError } from '../errors.js';
 import { formatCsv } from '../io/index.js';
@@ -7,7 +8,7 @@ import { runEnsemble } from '../ensemble/index.js';
 import { ensembleInput, projectPathway } from '../projection/index.js';
 import { comparisonCharts, comparisonHtml, comparisonJson, comparisonLongTable, comparisonSummary, comparisonMarkdown, comparisonText, comparisonUncertainty, scopedNotes, standardCautions, thresholdBaselineNote, type ScopedNote } from '../report/index.js';
 import type { CliIo } from './cli-io.js';
-import { addModelOptions, baselineOption, co2JumpOption, type ModelOptions, numberListOption, pathwayArg, resolveModelParams, thresholdsOption, wholeNumberOption, yearOption } from './options.js';
+import { addModelOptions, baselineOption, type ModelOptions, numberListOption, pathwayArg, resolveModelParams, thresholdsOption, wholeNumberOption, yearOption, absentEmissionsOption, co2JumpOption } from './options.js';
 import { notesAndCautions } from './notes-and-cautions.js';
 import { announceWritten, pathwayInputs, writeOutput } from './output.js';
 import { ensembleParameters } from './provenance.js';
@@ -22,6 +23,7 @@ interface CompareOptions extends ModelOptions {
   baseline: [number, number];
   splice: boolean;
   co2JumpIntended?: boolean;
+  absentEmissions?: AbsentEmissionsRule;
   chart: boolean;
   carbonFeedback: boolean;
   from?: number;
@@ -36,6 +38,7 @@ export function compareCommand(io: CliIo): Command {
     .option('--years <list>', 'milestone years, e.g. 2030,2040,2050,2100 (default every 10 years over the future)', numberListOption('--years'))
     .addOption(thresholdsOption('warming levels in K whose crossing years are reported', [1.5, 2]))
     .addOption(baselineOption())
+    .addOption(absentEmissionsOption())
     .option('--no-splice', 'do not splice pathways that start late onto the bundled history (each run then starts from zero warming in its first year)')
     .addOption(co2JumpOption())
     .option('--no-carbon-feedback', 'emission-driven runs: switch off the carbon-climate feedback on uptake')
@@ -63,7 +66,7 @@ export function compareCommand(io: CliIo): Command {
       const files: string[] = [];
       const scoped: ScopedNote[] = [];
       const runs = args.map((arg) => {
-        const read = readPathway(pathwayArg(arg, io), { splice: opts.splice, co2JumpIntended: opts.co2JumpIntended });
+        const read = readPathway(pathwayArg(arg, io), { splice: opts.splice, absentEmissions: opts.absentEmissions, co2JumpIntended: opts.co2JumpIntended });
         files.push(...pathwayInputs(read));
         const p = projectPathway(read.pathway, { params, baseline: opts.baseline, carbonFeedback: opts.carbonFeedback });
         scoped.push(...[...p.provenance.notes, ...p.notes].map((text) => ({ pathway: p.name, text })));

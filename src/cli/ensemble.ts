@@ -1,3 +1,4 @@
+import type { AbsentEmissionsRule } from '../forcing/absent-emissions.js';
 import { Command, InvalidArgumentError, Option } from 'commander';
 import { readFileSync } from 'node:fs';
 import { resolve } from 'node:path';
@@ -8,7 +9,7 @@ import { readPathway } from '../io/load-pathway.js';
 import { ensembleInput } from '../projection/index.js';
 import { ensembleHeadlineLines, ensembleHeadlinesMarkdown, standardCautions, terminalChart, thresholdBaselineNote } from '../report/index.js';
 import type { CliIo } from './cli-io.js';
-import { baselineOption, co2JumpOption, pathwayArg, refuseOptions, resolveModelParams, thresholdsOption, wholeNumberOption, type RefusedOption } from './options.js';
+import { baselineOption, pathwayArg, refuseOptions, resolveModelParams, thresholdsOption, wholeNumberOption, type RefusedOption, absentEmissionsOption, co2JumpOption } from './options.js';
 import { announceWritten, pathwayInputs, tableRenderers, writeOutput } from './output.js';
 import { allocationError, checkEnsembleMemory, checkMergeMemory } from './memory-check.js';
 import { notesAndCautions } from './notes-and-cautions.js';
@@ -26,6 +27,7 @@ interface EnsembleCliOptions {
   out?: string;
   splice: boolean;
   co2JumpIntended?: boolean;
+  absentEmissions?: AbsentEmissionsRule;
   chart: boolean;
 }
 
@@ -76,6 +78,7 @@ export function ensembleCommand(io: CliIo): Command {
     .addOption(baselineOption())
     .option('--shard <K/N>', 'run only the K-th of N equal slices of the members and write them as a shard file (.json) for `warmcast merge`', shardOption)
     .option('-o, --out <file>', 'write the headline figures and the yearly percentiles and probabilities: .csv (+ .meta.json), .json, .md; with --shard a .json shard file')
+    .addOption(absentEmissionsOption())
     .option('--no-splice', 'do not splice a pathway that starts late onto the bundled history')
     .addOption(co2JumpOption())
     .option('--no-chart', 'omit the terminal chart')
@@ -94,7 +97,7 @@ export function ensembleCommand(io: CliIo): Command {
       if (opts.shard && !opts.out?.toLowerCase().endsWith('.json')) throw new ConfigError('--shard writes a shard file: give --out NAME.json', 'out');
       // Central parameters: the CO2 formula, and the CH4 and N2O of an emission pathway's central run.
       const { params } = resolveModelParams({ co2Formula: opts.co2Formula }, io);
-      const read = readPathway(pathwayArg(arg, io), { splice: opts.splice, co2JumpIntended: opts.co2JumpIntended });
+      const read = readPathway(pathwayArg(arg, io), { splice: opts.splice, absentEmissions: opts.absentEmissions, co2JumpIntended: opts.co2JumpIntended });
       const { input, notes } = ensembleInput(read.pathway, params, { baseline: opts.baseline });
       const inputs = pathwayInputs(read);
       const years = input.years.length;

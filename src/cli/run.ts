@@ -1,10 +1,11 @@
+import type { AbsentEmissionsRule } from '../forcing/absent-emissions.js';
 import { Command, Option } from 'commander';
 import { ConfigError } from '../errors.js';
 import { readPathway } from '../io/load-pathway.js';
 import { projectPathway, type Projection } from '../projection/index.js';
 import { thresholdBaselineNote } from '../report/index.js';
 import type { CliIo } from './cli-io.js';
-import { addModelOptions, baselineOption, co2JumpOption, type ModelOptions, numberOption, pathwayArg, resolveModelParams, yearOption } from './options.js';
+import { addModelOptions, baselineOption, type ModelOptions, numberOption, pathwayArg, resolveModelParams, yearOption, absentEmissionsOption, co2JumpOption } from './options.js';
 import { announceWritten, clipProjection, pathwayInputs, projectionTable, tableRenderers, writeOutput } from './output.js';
 import { printProjectionSummary } from './summary.js';
 import { runHeadlines, runHeadlinesMarkdown } from './run-headlines.js';
@@ -19,6 +20,7 @@ interface RunOptions extends ModelOptions {
   baseline: [number, number];
   splice: boolean;
   co2JumpIntended?: boolean;
+  absentEmissions?: AbsentEmissionsRule;
   chart: boolean;
   carbonFeedback: boolean;
   method: 'odex' | 'exact';
@@ -35,6 +37,7 @@ export function runCommand(io: CliIo): Command {
     .option('--from <year>', 'first year to report (the model still starts from pre-industrial)', yearOption)
     .option('--to <year>', 'last year to report', yearOption)
     .addOption(baselineOption())
+    .addOption(absentEmissionsOption())
     .option('--no-splice', 'do not splice a pathway that starts late onto the bundled history (the run then starts from zero warming in its first year, not in equilibrium with that year\'s forcing)')
     .addOption(co2JumpOption())
     .option('--no-carbon-feedback', 'emission-driven runs: switch off the carbon-climate feedback on uptake')
@@ -58,7 +61,7 @@ export function runCommand(io: CliIo): Command {
       const runNotes = [...paramNotes, ...(baselineNote ? [baselineNote] : [])];
       const projections: { projection: Projection; whole: Projection; files: string[] }[] = [];
       for (const arg of args) {
-        const read = readPathway(pathwayArg(arg, io), { splice: opts.splice, co2JumpIntended: opts.co2JumpIntended });
+        const read = readPathway(pathwayArg(arg, io), { splice: opts.splice, absentEmissions: opts.absentEmissions, co2JumpIntended: opts.co2JumpIntended });
         const full = projectPathway(read.pathway, {
           params,
           baseline: opts.baseline,

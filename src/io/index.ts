@@ -26,3 +26,4 @@ export { formatMarkdown } from './format-markdown.js';
 export { formatJson } from './format-json.js';
 export { writeFileAtomic, writeFilesAtomic, type FileToWrite, type WriteFileAtomicOptions } from './write-file-atomic.js';
 export { parseParams, PARAMS_FILE_KEYS } from './read-params.js';
+export { describeAgentSources } from './describe-agent-sources.js';

@@ -1,6 +1,8 @@
 import { existsSync, realpathSync } from 'node:fs';
 import { join } from 'node:path';
 import { InputError } from '../errors.js';
+import type { AbsentEmissionsRule } from '../forcing/absent-emissions.js';
+import { resolveEmissionForcing, type EmissionForcing } from '../forcing/emission-forcing.js';
 import { splitLumpedForcing } from '../forcing/lumped-forcing.js';
 import type { Pathway } from '../pathway.js';
 import { bundledPathwayNames, bundledPathwaysDir, loadHistory } from './bundled-pathways.js';
@@ -22,6 +24,12 @@ export interface LoadPathwayOptions {
    * 12/44 of the rate diagnosed from the record is not refused as Gt C (see co2UnitProblem).
    */
   co2JumpIntended?: boolean;
+  /**
+   * What fills a group of short-lived species (aerosol precursors, ozone precursors, halogenated
+   * gases) that an emission file gives neither as emissions nor as forcing; without it such a file
+   * is refused (resolveEmissionForcing).
+   */
+  absentEmissions?: AbsentEmissionsRule;
 }
 
 /** Every stage of reading one pathway, for `warmcast check`. */
@@ -30,8 +38,10 @@ export interface ReadPathwayResult {
   parsed: ParsedPathway;
   /** The file's own values on the annual grid. */
   annual: Pathway;
-  /** What a run uses: `annual`, spliced onto the history unless that was turned off or not needed. */
+  /** What a run uses: `annual` with forcing from its emissions, spliced onto the history unless that was turned off or not needed. */
   pathway: Pathway;
+  /** Forcing computed from the file's emissions: where each agent comes from, the assumptions made. */
+  emissionForcing: EmissionForcing;
 }
 
 /**
@@ -49,16 +59,19 @@ export function readPathway(arg: string, options: LoadPathwayOptions = {}): Read
   const parsed = parsePathway(readTextFile(path), path);
   let annual = toAnnual(parsed);
   if (source !== path) annual = { ...annual, provenance: { ...annual.provenance, source } };
-  // Lumped aerosol_wm2 / other_wm2 become agent columns before the splice, so that the history's
+  const splice = options.splice !== false && !isHistoryFile(path, pathwaysDir());
+  const history = splice ? loadHistory(pathwaysDir()) : undefined;
+  // Forcing from the file's emissions first (it sees the lumped columns as the user wrote them), then
+  // lumped aerosol_wm2 / other_wm2 become agent columns before the splice, so that the history's
   // agent columns are replaced by the file's and not added to them.
-  let pathway = splitLumpedForcing(annual);
-  if (options.splice !== false && !isHistoryFile(path, pathwaysDir())) {
-    const history = loadHistory(pathwaysDir());
+  const emissionForcing = resolveEmissionForcing(annual, history, { absent: options.absentEmissions, firstRowLine: parsed.rowLines[0] });
+  let pathway = splitLumpedForcing(emissionForcing.pathway);
+  if (history) {
     pathway = spliceOntoHistory(pathway, history);
     const problem = co2UnitProblem(parsed, pathway, history, options.co2JumpIntended ?? false);
     if (problem) throw new InputError([problem]);
   }
-  return { parsed, annual, pathway };
+  return { parsed, annual, pathway, emissionForcing };
 }
 
 /**

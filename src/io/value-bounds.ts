@@ -1,4 +1,5 @@
 import type { PathwayColumn } from '../pathway.js';
+import { SPECIES_BOUNDS } from './species-bounds.js';
 
 /** The plausible range of one pathway column, with the reason for each end. */
 export interface ValueBounds {
@@ -64,13 +65,15 @@ export const VALUE_BOUNDS: Readonly<Record<PathwayColumn, ValueBounds>> = {
       + 'a value in Mt CO2 (40000) fails the high end (common practice, no source)',
   },
   ch4_mt: {
-    min: 0,
+    min: -220,
     max: 5000,
     quantity: 'a CH4 emission rate',
     unit: 'Mt CH4 yr-1',
     source:
       'present anthropogenic emissions are about 350-400 Mt CH4 yr-1 (Global Methane Budget; from memory); '
-      + 'an emission rate cannot be negative; 5000 is about 10 times any scenario (common practice, no source)',
+      + 'anthropogenic emissions may be negative (removal) but not below minus the natural flux, 220 Mt CH4 yr-1 '
+      + '(the 1750 steady state: 729.2 ppb x 2.75 Mt ppb-1 / 9.1 yr; src/carbon/README.md), or total emissions '
+      + 'would be negative; 5000 is about 10 times any scenario (common practice, no source)',
   },
   n2o_mt: {
     min: 0,
@@ -134,6 +137,7 @@ export const VALUE_BOUNDS: Readonly<Record<PathwayColumn, ValueBounds>> = {
       + 'high end: volcanic forcing is measured from the long pre-industrial mean (IPCC AR6), which makes quiet '
       + 'years about +0.2 W m-2 (common practice, no source)',
   },
+  ...SPECIES_BOUNDS,
 };
 
 /** Bounds of a per-agent forcing column (common practice, no source; `why` names the history's extreme). */
