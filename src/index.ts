@@ -31,8 +31,8 @@ export { diagnoseEmissions, gtcToGtco2, gtco2ToGtc } from './carbon/index.js';
 // Projections and ensembles.
 export { ensembleInput, projectPathway } from './projection/index.js';
 export type { Projection, ProjectionOptions } from './projection/index.js';
-export { mergeShards, runEnsemble, shardFromJson, shardToJson } from './ensemble/index.js';
-export type { EnsembleInput, EnsembleOptions, EnsembleResult } from './ensemble/index.js';
+export { AR6_SAMPLING, ar6Members, mergeShards, runEnsemble, shardFromJson, shardToJson } from './ensemble/index.js';
+export type { EnsembleInput, EnsembleOptions, EnsembleResult, EnsembleSampling, MemberSource } from './ensemble/index.js';
 
 // Answers: warming levels, peaks, comparisons, cumulative emissions.
 export { comparePathways, crossingPeriod, cumulativeToNetZero, peak } from './metrics/index.js';
