@@ -33,6 +33,11 @@ export { ensembleInput, projectPathway } from './projection/index.js';
 export type { Projection, ProjectionOptions } from './projection/index.js';
 export { AR6_SAMPLING, ar6Members, mergeShards, runEnsemble, shardFromJson, shardToJson } from './ensemble/index.js';
 export type { EnsembleInput, EnsembleOptions, EnsembleResult, EnsembleSampling, MemberSource } from './ensemble/index.js';
+// The calibrated parameter set (pathways/calibrated-members.json): the CLI's default ensemble members
+// and, through representativeParams, its default single-run model.
+export { calibratedMemberSource, priorMemberSource, representativeParams } from './ensemble/calibrated-set.js';
+export type { CalibratedSet } from './ensemble/calibrated-set.js';
+export { readCalibratedSet } from './io/read-calibrated-set.js';
 
 // Answers: warming levels, peaks, comparisons, cumulative emissions.
 export { comparePathways, crossingPeriod, cumulativeToNetZero, peak } from './metrics/index.js';

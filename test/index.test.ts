@@ -7,7 +7,7 @@ import { calibrate, ensembleInput, forcingByAgent, loadPathway, projectPathway, 
 // The intended library surface (DEVELOPERS.md, "The library surface"): adding or removing a name is a
 // deliberate change to one of these lists.
 const VALUES = [
-  'AR6_SAMPLING', 'ar6Members', 'COLUMN_UNITS', 'ConfigError', 'FORCING_AGENTS', 'InputError', 'NumericalError', 'PATHWAY_COLUMNS', 'WarmcastError',
+  'AR6_SAMPLING', 'ar6Members', 'calibratedMemberSource', 'COLUMN_UNITS', 'priorMemberSource', 'readCalibratedSet', 'representativeParams', 'ConfigError', 'FORCING_AGENTS', 'InputError', 'NumericalError', 'PATHWAY_COLUMNS', 'WarmcastError',
   'calibrate', 'ch4ErfAr6', 'co2ErfAr6', 'comparePathways', 'comparisonHtml', 'comparisonMarkdown', 'crossingPeriod',
   'cumulativeToNetZero', 'diagnoseEmissions', 'energyBalance', 'ensembleInput', 'forcingByAgent', 'formatInputProblem',
   'gtcToGtco2', 'gtco2ToGtc', 'listBundledPathways', 'loadHistory', 'loadPathway', 'mergeShards', 'n2oErfAr6',
@@ -15,7 +15,7 @@ const VALUES = [
   'spliceOntoHistory', 'standardCautions', 'toAnnual',
 ];
 const TYPES = [
-  'BundledPathway', 'CalibrationTargets', 'ClimateParams', 'Co2Formula', 'Comparison', 'ComparisonOptions', 'CrossingPeriod',
+  'BundledPathway', 'CalibratedSet', 'CalibrationTargets', 'ClimateParams', 'Co2Formula', 'Comparison', 'ComparisonOptions', 'CrossingPeriod',
   'EnergyBalanceResult', 'EnsembleInput', 'EnsembleOptions', 'EnsembleResult', 'EnsembleSampling', 'ForcingAgent', 'ForcingOptions', 'InputProblem',
   'LoadPathwayOptions', 'ParsedPathway', 'Pathway', 'PathwayColumn', 'PathwayProvenance', 'Peak', 'Projection', 'ProjectionOptions',
   'MemberSource', 'PublishedCheck', 'VerificationRow',
