@@ -47,5 +47,7 @@ export type { Comparison, ComparisonOptions, CrossingPeriod, Peak } from './metr
 export { PUBLISHED_CHECKS, runPublishedChecks } from './verify/index.js';
 export type { PublishedCheck, VerificationRow } from './verify/index.js';
 
-// Reports: the cautions every quoted number needs, and the comparison as a document.
-export { comparisonHtml, comparisonMarkdown, standardCautions } from './report/index.js';
+// Reports: a run, a comparison or an ensemble as one document (headline, tables, charts, notes,
+// cautions), written in any format of OUTPUT_FORMATS; and the cautions every quoted number needs.
+export { comparisonDocument, ensembleDocument, OUTPUT_FORMATS, renderDocument, runDocument, standardCautions } from './report/index.js';
+export type { OutputDocument, OutputFormat, OutputTable } from './report/index.js';

@@ -8,7 +8,7 @@ import { calibrate, ensembleInput, forcingByAgent, loadPathway, projectPathway, 
 // deliberate change to one of these lists.
 const VALUES = [
   'AR6_SAMPLING', 'ar6Members', 'calibratedMemberSource', 'COLUMN_UNITS', 'priorMemberSource', 'readCalibratedSet', 'representativeParams', 'ConfigError', 'FORCING_AGENTS', 'InputError', 'NumericalError', 'PATHWAY_COLUMNS', 'WarmcastError',
-  'calibrate', 'ch4ErfAr6', 'co2ErfAr6', 'comparePathways', 'comparisonHtml', 'comparisonMarkdown', 'crossingPeriod',
+  'calibrate', 'ch4ErfAr6', 'co2ErfAr6', 'comparePathways', 'comparisonDocument', 'crossingPeriod', 'ensembleDocument', 'OUTPUT_FORMATS', 'renderDocument', 'runDocument',
   'cumulativeToNetZero', 'diagnoseEmissions', 'energyBalance', 'ensembleInput', 'forcingByAgent', 'formatInputProblem',
   'gtcToGtco2', 'gtco2ToGtc', 'listBundledPathways', 'loadHistory', 'loadPathway', 'mergeShards', 'n2oErfAr6',
   'parsePathway', 'peak', 'projectPathway', 'PUBLISHED_CHECKS', 'runEnsemble', 'runPublishedChecks', 'shardFromJson', 'shardToJson',
@@ -18,7 +18,7 @@ const TYPES = [
   'BundledPathway', 'CalibratedSet', 'CalibrationTargets', 'ClimateParams', 'Co2Formula', 'Comparison', 'ComparisonOptions', 'CrossingPeriod',
   'EnergyBalanceResult', 'EnsembleInput', 'EnsembleOptions', 'EnsembleResult', 'EnsembleSampling', 'ForcingAgent', 'ForcingOptions', 'InputProblem',
   'LoadPathwayOptions', 'ParsedPathway', 'Pathway', 'PathwayColumn', 'PathwayProvenance', 'Peak', 'Projection', 'ProjectionOptions',
-  'MemberSource', 'PublishedCheck', 'VerificationRow',
+  'MemberSource', 'OutputDocument', 'OutputFormat', 'OutputTable', 'PublishedCheck', 'VerificationRow',
 ];
 
 /** The names src/index.ts exports as types (`export type { A, B } from ...`), read from its text. */
