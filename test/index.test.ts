@@ -1,6 +1,52 @@
 // The README's library example, run as written.
 import { describe, expect, it } from 'vitest';
-import { calibrate, ensembleInput, forcingByAgent, loadPathway, projectPathway, runEmissionDriven, runEnsemble, comparePathways } from '../src/index.js';
+import { readdirSync, readFileSync } from 'node:fs';
+import * as library from '../src/index.js';
+import { calibrate, ensembleInput, forcingByAgent, loadPathway, projectPathway, runEnsemble, comparePathways } from '../src/index.js';
+
+// The intended library surface (DEVELOPERS.md, "The library surface"): adding or removing a name is a
+// deliberate change to one of these lists.
+const VALUES = [
+  'AR6_SAMPLING', 'ar6Members', 'calibratedMemberSource', 'COLUMN_UNITS', 'priorMemberSource', 'readCalibratedSet', 'representativeParams', 'ConfigError', 'FORCING_AGENTS', 'InputError', 'NumericalError', 'PATHWAY_COLUMNS', 'WarmcastError',
+  'calibrate', 'ch4ErfAr6', 'co2ErfAr6', 'comparePathways', 'comparisonDocument', 'crossingPeriod', 'ensembleDocument', 'OUTPUT_FORMATS', 'renderDocument', 'runDocument',
+  'cumulativeToNetZero', 'diagnoseEmissions', 'energyBalance', 'ensembleInput', 'forcingByAgent', 'formatInputProblem',
+  'gtcToGtco2', 'gtco2ToGtc', 'listBundledPathways', 'loadHistory', 'loadPathway', 'mergeShards', 'n2oErfAr6',
+  'parsePathway', 'peak', 'projectPathway', 'PUBLISHED_CHECKS', 'runEnsemble', 'runPublishedChecks', 'shardFromJson', 'shardToJson',
+  'spliceOntoHistory', 'standardCautions', 'toAnnual',
+];
+const TYPES = [
+  'BundledPathway', 'CalibratedSet', 'CalibrationTargets', 'ClimateParams', 'Co2Formula', 'Comparison', 'ComparisonOptions', 'CrossingPeriod',
+  'EnergyBalanceResult', 'EnsembleInput', 'EnsembleOptions', 'EnsembleResult', 'EnsembleSampling', 'ForcingAgent', 'ForcingOptions', 'InputProblem',
+  'LoadPathwayOptions', 'ParsedPathway', 'Pathway', 'PathwayColumn', 'PathwayProvenance', 'Peak', 'Projection', 'ProjectionOptions',
+  'MemberSource', 'OutputDocument', 'OutputFormat', 'OutputTable', 'PublishedCheck', 'VerificationRow',
+];
+
+/** The names src/index.ts exports as types (`export type { A, B } from ...`), read from its text. */
+function exportedTypeNames(): string[] {
+  const text = readFileSync(new URL('../src/index.ts', import.meta.url), 'utf8');
+  return [...text.matchAll(/^export type \{([^}]*)\}/gm)].flatMap((m) => m[1].split(',').map((s) => s.trim()).filter(Boolean));
+}
+
+describe('library surface (src/index.ts)', () => {
+  it('src/index.ts exports exactly the intended values', () => {
+    expect(Object.keys(library).sort()).toEqual([...VALUES].sort());
+  });
+
+  it('src/index.ts exports exactly the intended types, and nothing with export *', () => {
+    expect(exportedTypeNames().sort()).toEqual([...TYPES].sort());
+    expect(readFileSync(new URL('../src/index.ts', import.meta.url), 'utf8')).not.toMatch(/^export \*/m);
+  });
+
+  it('every exported value is documented where it is defined (JSDoc right before its declaration)', () => {
+    const sources = readdirSync(new URL('../src/', import.meta.url), { recursive: true, encoding: 'utf8' })
+      .filter((f) => f.endsWith('.ts') && !f.endsWith('.d.ts'))
+      .map((f) => readFileSync(new URL(`../src/${f}`, import.meta.url), 'utf8'))
+      .join('\n');
+    const undocumented = VALUES.filter((name) => !new RegExp(`\\*/\\s*export (?:async )?(?:function|const|class) ${name}\\b`).test(sources));
+    expect(undocumented).toEqual([]);
+  });
+});
+
 
 describe('library surface (README example)', () => {
   it('loads a bundled pathway, calibrates, projects, and reads warming in 2100', () => {
@@ -11,7 +57,6 @@ describe('library surface (README example)', () => {
     expect(y2100).toBeGreaterThan(1);
     expect(y2100).toBeLessThan(3);
     expect(typeof forcingByAgent).toBe('function');
-    expect(typeof runEmissionDriven).toBe('function');
     expect(typeof runEnsemble).toBe('function');
     expect(typeof comparePathways).toBe('function');
   });

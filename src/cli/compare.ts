@@ -9,7 +9,7 @@ import { memberSource } from './member-source.js';
 import { ensembleInput, projectPathway } from '../projection/index.js';
 import { comparisonDocument, ensembleWarming, scopedNotes, standardCautions, thresholdBaselineNote, type ScopedNote } from '../report/index.js';
 import type { CliIo } from './cli-io.js';
-import { addModelOptions, baselineOption, cautionsHelp, type ModelOptions, pathwayArg, resolveModelParams, thresholdsOption, wholeNumberOption, absentEmissionsOption } from './options.js';
+import { addModelOptions, baselineOption, cautionsHelp, type ModelOptions, pathwayArg, resolveModelParams, thresholdsOption, wholeNumberOption, absentEmissionsOption, co2JumpOption } from './options.js';
 import { addReportOptions, announceWritten, observedRecord, pathwayInputs, printDocument, rowChoice, writeDocument, type ReportOptions } from './output.js';
 import { ensembleParameters } from './provenance.js';
 
@@ -20,6 +20,7 @@ interface CompareOptions extends ModelOptions, ReportOptions {
   thresholds: number[];
   baseline: [number, number];
   splice: boolean;
+  co2JumpIntended?: boolean;
   absentEmissions?: AbsentEmissionsRule;
   carbonFeedback: boolean;
 }
@@ -38,6 +39,7 @@ export function compareCommand(io: CliIo): Command {
     .addOption(baselineOption())
     .addOption(absentEmissionsOption())
     .option('--no-splice', 'do not splice pathways that start late onto the bundled history (each run then starts from zero warming in its first year)')
+    .addOption(co2JumpOption())
     .option('--no-carbon-feedback', 'emission-driven runs: switch off the carbon-climate feedback on uptake')
     .option('--members <count>', 'also run a parameter ensemble of this many members per option: medians with ranges, and each difference\'s range from paired members', wholeNumberOption('--members', 2))
     .option('--seed <integer>', 'random seed of the ensembles (with --members)', wholeNumberOption('--seed', 0), 1);
@@ -64,7 +66,7 @@ export function compareCommand(io: CliIo): Command {
       const files: string[] = [];
       const scoped: ScopedNote[] = [];
       const runs = options.map(({ label, path, name }) => {
-        const read = readPathway(pathwayArg(path, io), { splice: opts.splice, absentEmissions: opts.absentEmissions });
+        const read = readPathway(pathwayArg(path, io), { splice: opts.splice, absentEmissions: opts.absentEmissions, co2JumpIntended: opts.co2JumpIntended });
         files.push(...pathwayInputs(read));
         const p = projectPathway(read.pathway, { params, baseline: opts.baseline, carbonFeedback: opts.carbonFeedback, forcingScale });
         scoped.push(...[...p.provenance.notes, ...p.notes].map((text) => ({ pathway: label, text })));
