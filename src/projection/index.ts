@@ -5,3 +5,7 @@ export { attributePathway } from './attribute-pathway.js';
 export type { AttributedProjection } from './attribute-pathway.js';
 export { AR6_ENERGY_BUDGET, EARTH_AREA_M2, OCEAN_SHARE_OF_HEAT_GAIN, energyBudget, energyBudgetNote } from './energy-budget.js';
 export type { EnergyBudget } from './energy-budget.js';
+export { attributeMembers } from './attribute-members.js';
+export type { AttributionRanges } from './attribute-members.js';
+export { carbonBudget } from './carbon-budget.js';
+export type { BudgetAssumptions, CarbonBudget, CarbonBudgetOptions } from './carbon-budget.js';
