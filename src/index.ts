@@ -39,6 +39,10 @@ export { calibratedMemberSource, priorMemberSource, representativeParams } from 
 export type { CalibratedSet } from './ensemble/calibrated-set.js';
 export { readCalibratedSet } from './io/read-calibrated-set.js';
 
+// The inverse questions: remaining CO2 budgets for a limit and a chance, and warming by forcing agent.
+export { attributeMembers, attributePathway, carbonBudget } from './projection/index.js';
+export type { AttributedProjection, AttributionRanges, BudgetAssumptions, CarbonBudget, CarbonBudgetOptions } from './projection/index.js';
+
 // Answers: warming levels, peaks, comparisons, cumulative emissions.
 export { comparePathways, crossingPeriod, cumulativeToNetZero, peak } from './metrics/index.js';
 export type { Comparison, ComparisonOptions, CrossingPeriod, Peak } from './metrics/index.js';

@@ -12,13 +12,14 @@ const VALUES = [
   'cumulativeToNetZero', 'diagnoseEmissions', 'energyBalance', 'ensembleInput', 'forcingByAgent', 'formatInputProblem',
   'gtcToGtco2', 'gtco2ToGtc', 'listBundledPathways', 'loadHistory', 'loadPathway', 'mergeShards', 'n2oErfAr6',
   'parsePathway', 'peak', 'projectPathway', 'PUBLISHED_CHECKS', 'runEnsemble', 'runPublishedChecks', 'shardFromJson', 'shardToJson',
-  'spliceOntoHistory', 'standardCautions', 'toAnnual',
+  'spliceOntoHistory', 'standardCautions', 'toAnnual', 'attributeMembers', 'attributePathway', 'carbonBudget',
 ];
 const TYPES = [
   'BundledPathway', 'CalibratedSet', 'CalibrationTargets', 'ClimateParams', 'Co2Formula', 'Comparison', 'ComparisonOptions', 'CrossingPeriod',
   'EnergyBalanceResult', 'EnsembleInput', 'EnsembleOptions', 'EnsembleResult', 'EnsembleSampling', 'ForcingAgent', 'ForcingOptions', 'InputProblem',
   'LoadPathwayOptions', 'ParsedPathway', 'Pathway', 'PathwayColumn', 'PathwayProvenance', 'Peak', 'Projection', 'ProjectionOptions',
   'MemberSource', 'OutputDocument', 'OutputFormat', 'OutputTable', 'PublishedCheck', 'VerificationRow',
+  'AttributedProjection', 'AttributionRanges', 'BudgetAssumptions', 'CarbonBudget', 'CarbonBudgetOptions',
 ];
 
 /** The names src/index.ts exports as types (`export type { A, B } from ...`), read from its text. */
