@@ -437,8 +437,12 @@ function readHeader(cells: string[], line: number, report: Report): CellRole[] {
   }
 
   const dataRoles = roles.filter((r): r is Extract<CellRole, { kind: 'data' }> => r.kind === 'data');
-  for (const gas of Object.keys(GASES) as Gas[]) {
-    const { concentration, emission } = GASES[gas];
+  // Each gas once: the three main gases and the halogenated ones, as a concentration or as emissions.
+  const gasForms = [
+    ...(Object.keys(GASES) as Gas[]).map((gas) => ({ name: gas.toUpperCase(), ...GASES[gas] })),
+    ...HALOGEN_COLUMNS.map((gas) => ({ name: gas, concentration: `${gas}_ppt`, emission: `${gas}_kt` })),
+  ];
+  for (const { name, concentration, emission } of gasForms) {
     const conc = dataRoles.find((r) => r.column === concentration);
     const emis = dataRoles.find((r) => r.column === emission);
     if (conc && emis) {
@@ -447,24 +451,9 @@ function readHeader(cells: string[], line: number, report: Report): CellRole[] {
         code: 'input.gas-twice',
         line,
         column: later.header,
-        message: `must give ${gas.toUpperCase()} either as a concentration (${concentration}) or as emissions (${emission}), not both`,
+        message: `must give ${name} either as a concentration (${concentration}) or as emissions (${emission}), not both`,
         value: later.header,
         expected: `one column per gas: ${concentration} or ${emission}`,
-      });
-    }
-  }
-  for (const gas of HALOGEN_COLUMNS) {
-    const conc = dataRoles.find((r) => r.column === `${gas}_ppt`);
-    const emis = dataRoles.find((r) => r.column === `${gas}_kt`);
-    if (conc && emis) {
-      const later = roles.indexOf(conc) > roles.indexOf(emis) ? conc : emis;
-      report({
-        code: 'input.gas-twice',
-        line,
-        column: later.header,
-        message: `must give ${gas} either as a concentration (${gas}_ppt) or as emissions (${gas}_kt), not both`,
-        value: later.header,
-        expected: `one column per gas: ${gas}_ppt or ${gas}_kt`,
       });
     }
   }
