@@ -39,11 +39,31 @@ export function readPathway(arg: string, options: LoadPathwayOptions = {}): Read
   const pathwaysDir = () => options.pathwaysDir ?? bundledPathwaysDir();
   const { path, source } = locate(arg, pathwaysDir);
   const parsed = parsePathway(readTextFile(path), path);
+  return pathwayFromParsed(parsed, { ...options, source, isHistory: isHistoryFile(path, pathwaysDir()) });
+}
+
+/**
+ * The stages after reading, shared by pathway files and the scenarios of a scenario table: the
+ * parsed rows put on the annual grid (toAnnual), `notes` from the reader put first in the
+ * provenance, and the result spliced onto the bundled history (spliceOntoHistory) unless `splice`
+ * is false or the rows are the history itself.
+ *
+ * @param parsed rows as read (parsePathway, or one scenario of readIamcTable)
+ * @param options splice and pathwaysDir as for readPathway; `source` for provenance (default the
+ *   parsed file); `notes` of the reader (a table's CO2 sum, skipped regions); `isHistory`
+ */
+export function pathwayFromParsed(
+  parsed: ParsedPathway,
+  options: LoadPathwayOptions & { source?: string; notes?: string[]; isHistory?: boolean } = {},
+): ReadPathwayResult {
   let annual = toAnnual(parsed);
-  if (source !== path) annual = { ...annual, provenance: { ...annual.provenance, source } };
+  const source = options.source ?? parsed.file;
+  if (source !== parsed.file || options.notes?.length) {
+    annual = { ...annual, provenance: { ...annual.provenance, source, notes: [...(options.notes ?? []), ...annual.provenance.notes] } };
+  }
   let pathway = annual;
-  if (options.splice !== false && !isHistoryFile(path, pathwaysDir())) {
-    pathway = spliceOntoHistory(annual, loadHistory(pathwaysDir()));
+  if (options.splice !== false && !options.isHistory) {
+    pathway = spliceOntoHistory(annual, loadHistory(options.pathwaysDir ?? bundledPathwaysDir()));
   }
   return { parsed, annual, pathway };
 }

@@ -128,3 +128,16 @@ export const VALUE_BOUNDS: Readonly<Record<PathwayColumn, ValueBounds>> = {
       + 'makes quiet years a few tenths positive (common practice, no source)',
   },
 };
+
+/**
+ * Says why `value` is not plausible for `column` (outside VALUE_BOUNDS), in the words of an input
+ * problem; undefined when it is. One check for pathway files and scenario tables.
+ *
+ * @param value in the column's unit
+ * @example outOfBounds('co2_gtco2', 40000) // { message: 'must be a plausible value for a CO2 emission rate', expected: 'a value from -100 to 500 Gt CO2 yr-1' }
+ */
+export function outOfBounds(column: PathwayColumn, value: number): { message: string; expected: string } | undefined {
+  const b = VALUE_BOUNDS[column];
+  if (value >= b.min && value <= b.max) return undefined;
+  return { message: `must be a plausible value for ${b.quantity}`, expected: `a value from ${b.min} to ${b.max} ${b.unit}` };
+}
