@@ -1,19 +1,19 @@
 import { Command } from 'commander';
 import { ConfigError } from '../errors.js';
 import { formatCsv } from '../io/index.js';
-import { readPathway } from '../io/load-pathway.js';
 import { comparePathways, milestoneYears, type PathwayWarming } from '../metrics/index.js';
 import { defaultWorkerCount, runEnsemble, startEnsembleThreads, type EnsembleThreads } from '../ensemble/index.js';
 import { ensembleInput, projectPathway } from '../projection/index.js';
 import { comparisonCharts, comparisonHtml, comparisonJson, comparisonLongTable, comparisonSummary, comparisonMarkdown, comparisonText, comparisonUncertainty, scopedNotes, standardCautions, thresholdBaselineNote, type ScopedNote } from '../report/index.js';
 import type { CliIo } from './cli-io.js';
-import { addModelOptions, baselineOption, type ModelOptions, numberListOption, pathwayArg, resolveModelParams, thresholdsOption, wholeNumberOption, yearOption } from './options.js';
+import { addScenarioOptions, readPathwayArgs, type ScenarioOptions } from './scenario-options.js';
+import { addModelOptions, baselineOption, type ModelOptions, numberListOption, resolveModelParams, thresholdsOption, wholeNumberOption, yearOption } from './options.js';
 import { notesAndCautions } from './notes-and-cautions.js';
 import { announceWritten, pathwayInputs, writeOutput } from './output.js';
 import { ensembleParameters } from './provenance.js';
 import { paramsToJson } from '../climate/params.js';
 
-interface CompareOptions extends ModelOptions {
+interface CompareOptions extends ModelOptions, ScenarioOptions {
   members?: number;
   seed: number;
   out?: string;
@@ -41,10 +41,10 @@ export function compareCommand(io: CliIo): Command {
     .option('--seed <integer>', 'random seed of the ensembles (with --members)', wholeNumberOption('--seed', 0), 1)
     .option('--from <year>', 'first year of the charts (default 1850, or the first year of the pathways); the tables and files keep every year', yearOption)
     .option('--no-chart', 'omit the terminal chart');
-  addModelOptions(cmd)
+  addScenarioOptions(addModelOptions(cmd), true)
     .addHelpText(
       'after',
-      '\nExamples:\n  warmcast compare steady delayed swift\n  warmcast compare steady swift --years 2030,2050,2100 --out table.md\n  warmcast compare steady delayed swift --out report.html\n',
+      '\nExamples:\n  warmcast compare steady delayed swift\n  warmcast compare scenarios.xlsx --scenario Quick --scenario Slow\n  warmcast compare steady swift --years 2030,2050,2100 --out table.md\n  warmcast compare steady delayed swift --out report.html\n',
     )
     .action(async (args: string[], opts: CompareOptions) => {
       if (opts.members !== undefined) {
@@ -60,8 +60,8 @@ export function compareCommand(io: CliIo): Command {
       const baselineNote = thresholdBaselineNote(opts.baseline);
       const files: string[] = [];
       const scoped: ScopedNote[] = [];
-      const runs = args.map((arg) => {
-        const read = readPathway(pathwayArg(arg, io), { splice: opts.splice });
+      const reads = await readPathwayArgs(args, opts, io);
+      const runs = reads.map((read) => {
         files.push(...pathwayInputs(read));
         const p = projectPathway(read.pathway, { params, baseline: opts.baseline, carbonFeedback: opts.carbonFeedback });
         scoped.push(...[...p.provenance.notes, ...p.notes].map((text) => ({ pathway: p.name, text })));

@@ -4,11 +4,11 @@ import { resolve } from 'node:path';
 import { ConfigError, InputError } from '../errors.js';
 import { defaultWorkerCount, ensembleHeadlines, ensembleTable, fewMembersWarning, runEnsemble, shardFromJson, shardMerger, shardRange, shardToJson, summarizeEnsemble, type EnsembleConfig, type EnsembleHeadlines, type EnsembleOrigin, type EnsembleResult } from '../ensemble/index.js';
 import type { Table } from '../io/index.js';
-import { readPathway } from '../io/load-pathway.js';
 import { ensembleInput } from '../projection/index.js';
 import { ensembleHeadlineLines, ensembleHeadlinesMarkdown, standardCautions, terminalChart, thresholdBaselineNote } from '../report/index.js';
 import type { CliIo } from './cli-io.js';
-import { baselineOption, pathwayArg, refuseOptions, resolveModelParams, thresholdsOption, wholeNumberOption, type RefusedOption } from './options.js';
+import { addScenarioOptions, readPathwayArgs, type ScenarioOptions } from './scenario-options.js';
+import { baselineOption, refuseOptions, resolveModelParams, thresholdsOption, wholeNumberOption, type RefusedOption } from './options.js';
 import { announceWritten, pathwayInputs, tableRenderers, writeOutput } from './output.js';
 import { allocationError, checkEnsembleMemory, checkMergeMemory } from './memory-check.js';
 import { notesAndCautions } from './notes-and-cautions.js';
@@ -16,7 +16,7 @@ import { progressBar } from './progress.js';
 import { unreadableReason } from './unreadable-reason.js';
 import { ensembleParameters, sha256File } from './provenance.js';
 
-interface EnsembleCliOptions {
+interface EnsembleCliOptions extends ScenarioOptions {
   co2Formula?: 'ar6' | 'log';
   members: number;
   seed: number;
@@ -80,7 +80,7 @@ export function ensembleCommand(io: CliIo): Command {
     .option('--no-splice', 'do not splice a pathway that starts late onto the bundled history')
     .option('--no-chart', 'omit the terminal chart')
     .addOption(new Option('--co2-formula <name>', 'CO2 forcing: ar6 (Meinshausen et al. 2020 + AR6 adjustment) or log (Myhre et al. 1998)').choices(['ar6', 'log']).default('ar6', 'ar6'));
-  refuseOptions(cmd, ENSEMBLE_REFUSES)
+  refuseOptions(addScenarioOptions(cmd, false), ENSEMBLE_REFUSES)
     .addHelpText(
       'after',
       '\nECS, TCR, 2xCO2 and aerosol forcing are sampled per member, so --ecs, --tcr and --params are not taken.\n' +
@@ -94,7 +94,7 @@ export function ensembleCommand(io: CliIo): Command {
       if (opts.shard && !opts.out?.toLowerCase().endsWith('.json')) throw new ConfigError('--shard writes a shard file: give --out NAME.json', 'out');
       // Central parameters: the CO2 formula, and the CH4 and N2O of an emission pathway's central run.
       const { params } = resolveModelParams({ co2Formula: opts.co2Formula }, io);
-      const read = readPathway(pathwayArg(arg, io), { splice: opts.splice });
+      const [read] = await readPathwayArgs([arg], opts, io, false);
       const { input, notes } = ensembleInput(read.pathway, params, { baseline: opts.baseline });
       const inputs = pathwayInputs(read);
       const years = input.years.length;

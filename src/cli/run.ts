@@ -1,10 +1,10 @@
 import { Command, Option } from 'commander';
 import { ConfigError } from '../errors.js';
-import { readPathway } from '../io/load-pathway.js';
 import { projectPathway, type Projection } from '../projection/index.js';
 import { thresholdBaselineNote } from '../report/index.js';
 import type { CliIo } from './cli-io.js';
-import { addModelOptions, baselineOption, type ModelOptions, numberOption, pathwayArg, resolveModelParams, yearOption } from './options.js';
+import { addScenarioOptions, readPathwayArgs, type ScenarioOptions } from './scenario-options.js';
+import { addModelOptions, baselineOption, type ModelOptions, numberOption, resolveModelParams, yearOption } from './options.js';
 import { announceWritten, clipProjection, pathwayInputs, projectionTable, tableRenderers, writeOutput } from './output.js';
 import { printProjectionSummary } from './summary.js';
 import { runHeadlines, runHeadlinesMarkdown } from './run-headlines.js';
@@ -12,7 +12,7 @@ import { runHeadlines, runHeadlinesMarkdown } from './run-headlines.js';
 /** The pathway `warmcast run` uses when none is given. */
 export const DEFAULT_PATHWAY = 'delayed';
 
-interface RunOptions extends ModelOptions {
+interface RunOptions extends ModelOptions, ScenarioOptions {
   out?: string;
   from?: number;
   to?: number;
@@ -37,17 +37,18 @@ export function runCommand(io: CliIo): Command {
     .option('--no-splice', 'do not splice a pathway that starts late onto the bundled history (the run then starts from zero warming in its first year, not in equilibrium with that year\'s forcing)')
     .option('--no-carbon-feedback', 'emission-driven runs: switch off the carbon-climate feedback on uptake')
     .option('--no-chart', 'omit the terminal chart');
-  addModelOptions(cmd)
+  addScenarioOptions(addModelOptions(cmd), true)
     .addOption(new Option('--method <name>', 'temperature stepping: odex (ODE solver) or exact (matrix-exponential propagator)').choices(['odex', 'exact']).default('odex', 'odex'))
     .option('--rtol <value>', 'odex relative tolerance', numberOption('--rtol'), 1e-10)
     .option('--atol <value>', 'odex absolute tolerance, K', numberOption('--atol'), 1e-10)
     .addHelpText(
       'after',
-      '\nExamples:\n  warmcast run                                  # the default bundled pathway\n  warmcast run my-pathway.csv --out out.csv\n  warmcast run swift --ecs 4 --tcr 2.2 --to 2100\n  warmcast run steady --params params.json --out steady.md\n',
+      '\nExamples:\n  warmcast run                                  # the default bundled pathway\n  warmcast run my-pathway.csv --out out.csv\n  warmcast run swift --ecs 4 --tcr 2.2 --to 2100\n  warmcast run steady --params params.json --out steady.md\n  warmcast run scenarios.xlsx --scenario Quick\n',
     )
-    .action((pathways: string[], opts: RunOptions) => {
+    .action(async (pathways: string[], opts: RunOptions) => {
       const args = pathways.length > 0 ? pathways : [DEFAULT_PATHWAY];
-      if (opts.out !== undefined && args.length > 1) {
+      const reads = await readPathwayArgs(args, opts, io);
+      if (opts.out !== undefined && reads.length > 1) {
         throw new ConfigError('--out takes one pathway; to put several side by side use `warmcast compare`', 'out');
       }
       if (!(opts.rtol > 0 && opts.atol > 0)) throw new ConfigError('--rtol and --atol must be positive', 'rtol');
@@ -55,8 +56,7 @@ export function runCommand(io: CliIo): Command {
       const baselineNote = thresholdBaselineNote(opts.baseline);
       const runNotes = [...paramNotes, ...(baselineNote ? [baselineNote] : [])];
       const projections: { projection: Projection; whole: Projection; files: string[] }[] = [];
-      for (const arg of args) {
-        const read = readPathway(pathwayArg(arg, io), { splice: opts.splice });
+      for (const read of reads) {
         const full = projectPathway(read.pathway, {
           params,
           baseline: opts.baseline,

@@ -110,6 +110,6 @@ function same(a: string, b: string): boolean {
  */
 export function scenarioPathway(scenario: IamcScenario, options: LoadPathwayOptions = {}): ReadPathwayResult {
   if (!scenario.parsed) throw new InputError(scenario.problems);
-  const source = `${scenario.parsed.file} (model "${scenario.model}", scenario "${scenario.scenario}")`;
+  const source = `${scenario.parsed.file} [model "${scenario.model}", scenario "${scenario.scenario}"]`;
   return pathwayFromParsed(scenario.parsed, { ...options, source, notes: [`read from the scenario table ${source}, region World`, ...scenario.notes] });
 }
