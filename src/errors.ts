@@ -109,3 +109,14 @@ export class NumericalError extends WarmcastError {
     super(message, code, 1);
   }
 }
+
+/**
+ * A batch finished and wrote what it could, but some of its items (scenarios of a table) failed; the
+ * message says how many and where they are listed. Exit code 3, so that a scheduler can tell a
+ * partial result from a complete one (0) and from a run that produced nothing (1, 2).
+ */
+export class PartialFailureError extends WarmcastError {
+  constructor(message: string, code = 'batch.some-failed') {
+    super(message, code, 3);
+  }
+}

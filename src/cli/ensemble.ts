@@ -7,6 +7,7 @@ import type { Table } from '../io/index.js';
 import { ensembleInput } from '../projection/index.js';
 import { ensembleHeadlineLines, ensembleHeadlinesMarkdown, standardCautions, terminalChart, thresholdBaselineNote } from '../report/index.js';
 import type { CliIo } from './cli-io.js';
+import { isBatchShardFile, mergeBatchFiles } from './batch.js';
 import { addScenarioOptions, readPathwayArgs, type ScenarioOptions } from './scenario-options.js';
 import { baselineOption, refuseOptions, resolveModelParams, thresholdsOption, wholeNumberOption, type RefusedOption } from './options.js';
 import { announceWritten, pathwayInputs, tableRenderers, writeOutput } from './output.js';
@@ -146,6 +147,8 @@ export function mergeCommand(io: CliIo): Command {
   refuseOptions(cmd, MERGE_REFUSES)
     .addHelpText('after', '\nEvery setting (pathway, seed, members, thresholds, baseline, CO2 formula) comes from the shards.\n\nExample:\n  warmcast merge shard-*.json --out swift-ens.csv\n')
     .action(async (files: string[], opts: { out?: string; chart: boolean }) => {
+      // Shards of `warmcast batch` (scenarios of a table) merge into a batch summary.
+      if (isBatchShardFile(resolve(io.cwd, files[0]))) return mergeBatchFiles(files, opts.out, io);
       // One shard at a time, so that only the merged members and one shard's data are held.
       const merger = shardMerger();
       let checked = false;

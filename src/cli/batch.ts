@@ -1,0 +1,314 @@
+import { Command, InvalidArgumentError, Option } from 'commander';
+import { availableParallelism } from 'node:os';
+import { extname, join, resolve } from 'node:path';
+import { closeSync, mkdirSync, openSync, readFileSync, readSync } from 'node:fs';
+import { BATCH_PERCENTILE_NAMES, CUMULATIVE_FROM, PEAK_YEARS } from '../batch/assess-scenario.js';
+import { batchErrorTable, batchSummaryTable, medianCrossingColumn, probPeakAboveColumn } from '../batch/batch-summary.js';
+import { batchShardFromJson, batchShardToJson, isBatchShardText, mergeBatchShards, type BatchSettings } from '../batch/batch-shard.js';
+import { batchWorkbook } from '../batch/batch-workbook.js';
+import { batchErrorLines, runBatch, type BatchOutcome, type BatchScenario } from '../batch/run-batch.js';
+import { AR6_WARMING_CATEGORIES } from '../batch/warming-category.js';
+import { ConfigError, InputError, PartialFailureError } from '../errors.js';
+import { ensembleTable, shardRange, startEnsembleThreads } from '../ensemble/index.js';
+import { pathwayCoverage } from '../io/iamc-coverage.js';
+import { readScenarioTable, scenarioPathway } from '../io/iamc-read.js';
+import { bundledPathwaysDir, formatCsv, formatJson, formatMarkdown, writeFilesAtomic, type Table } from '../io/index.js';
+import { plainTable, standardCautions } from '../report/index.js';
+import type { CliIo } from './cli-io.js';
+import { notesAndCautions } from './notes-and-cautions.js';
+import { baselineOption, pathwayArg, thresholdsOption, wholeNumberOption } from './options.js';
+import { announceWritten, tableRenderers, writeOutput } from './output.js';
+import { progressBar } from './progress.js';
+import { buildProvenance, sha256File, type Provenance } from './provenance.js';
+import { resolveModelParams } from './options.js';
+
+/** Members per scenario when `--members` is not given: enough for the 5-95 % range of a 1,000-scenario set in minutes. */
+export const BATCH_DEFAULT_MEMBERS = 600;
+
+/** Levels a batch always reports (the AR6 WG3 categories and planners' questions turn on them); --thresholds adds more. */
+const ALWAYS_THRESHOLDS = [1.5, 2];
+
+/** Summary formats `--out` writes, by extension. */
+const SUMMARY_FORMATS = ['.csv', '.xlsx', '.md', '.json'];
+
+interface BatchOptions {
+  members: number;
+  seed: number;
+  thresholds: number[];
+  baseline: [number, number];
+  co2Formula: 'ar6' | 'log';
+  out?: string;
+  outDir?: string;
+  shard?: { index: number; count: number };
+  workers?: number;
+  splice: boolean;
+}
+
+function shardOption(text: string): { index: number; count: number } {
+  const m = /^(\d+)\/(\d+)$/.exec(text.trim());
+  if (!m || Number(m[1]) < 1 || Number(m[1]) > Number(m[2])) throw new InvalidArgumentError(`must be K/N with 1 <= K <= N, such as 3/20; got "${text}"`);
+  return { index: Number(m[1]), count: Number(m[2]) };
+}
+
+/** `warmcast batch TABLE`: every scenario of a table through the ensemble, one summary row each. */
+export function batchCommand(io: CliIo): Command {
+  return new Command('batch')
+    .description('assess every scenario of a scenario table (IAMC layout, .csv or .xlsx) with the ensemble: peak and 2100 warming ranges, threshold probabilities, crossing and net-zero years, AR6 WG3 category')
+    .argument('<table>', 'scenario table in the IAMC layout (.csv or .xlsx)')
+    .option('-n, --members <count>', 'ensemble members per scenario (every scenario uses the same members)', wholeNumberOption('--members', 1), BATCH_DEFAULT_MEMBERS)
+    .option('--seed <integer>', 'random seed (a scenario\'s row equals `warmcast ensemble TABLE --scenario NAME` with the same seed and members)', wholeNumberOption('--seed', 0), 1)
+    .addOption(thresholdsOption('warming levels in K for prob_peak_above_<t> and median_crossing_year_<t> (1.5 and 2 are always reported)', ALWAYS_THRESHOLDS))
+    .addOption(baselineOption())
+    .option('-o, --out <file>', 'write the summary: .csv (+ .meta.json, + .errors.csv), .xlsx, .md, .json; with --shard a .json shard file for `warmcast merge`')
+    .option('--out-dir <dir>', 'also write each scenario\'s yearly warming percentiles and probabilities to DIR/<model>--<scenario>.csv (+ .meta.json)')
+    .option('--shard <K/N>', 'assess only the K-th of N equal slices of the scenarios and write a shard file (--out NAME.json); combine with `warmcast merge`', shardOption)
+    .option('--workers <count>', 'threads (default one per core; the output does not depend on it)', wholeNumberOption('--workers', 1))
+    .option('--no-splice', 'do not splice scenarios onto the bundled history')
+    .addOption(new Option('--co2-formula <name>', 'CO2 forcing: ar6 (Meinshausen et al. 2020 + AR6 adjustment) or log (Myhre et al. 1998)').choices(['ar6', 'log']).default('ar6', 'ar6'))
+    .addHelpText(
+      'after',
+      '\nExit codes: 0 every scenario assessed; 3 some scenarios failed (the summary holds the others, the errors table lists the failures); 2 bad input or options, or no scenario could be assessed; 1 internal failure.\n' +
+        '\nExamples:\n  warmcast batch pathways/examples/invented-scenarios.csv --out summary.csv\n' +
+        '  warmcast batch scenarios.xlsx --members 1000 --seed 7 --thresholds 1.5,2,3 --out summary.xlsx --out-dir trajectories\n' +
+        '  warmcast batch scenarios.xlsx --shard 3/20 --out shard-3.json      # one task of an array job\n' +
+        '  warmcast merge shard-*.json --out summary.csv\n',
+    )
+    .action(async (arg: string, opts: BatchOptions) => {
+      if (opts.seed >= 2 ** 32) throw new ConfigError('--seed must be below 2^32', 'seed');
+      const ext = opts.out === undefined ? undefined : extname(opts.out).toLowerCase();
+      if (opts.shard && ext !== '.json') throw new ConfigError('--shard writes a shard file: give --out NAME.json', 'out');
+      if (!opts.shard && ext !== undefined && !SUMMARY_FORMATS.includes(ext)) throw new ConfigError(`--out ${opts.out}: the extension must be one of ${SUMMARY_FORMATS.join(', ')} (it picks the format)`, 'out');
+      const thresholds = [...new Set([...ALWAYS_THRESHOLDS, ...opts.thresholds])].sort((a, b) => a - b);
+      const { params } = resolveModelParams({ co2Formula: opts.co2Formula }, io);
+      const path = resolve(io.cwd, pathwayArg(arg, io));
+      const table = await readScenarioTable(pathwayArg(arg, io));
+      if (opts.shard && opts.shard.count > table.scenarios.length) {
+        throw new ConfigError(`--shard ${opts.shard.index}/${opts.shard.count}: the table has only ${table.scenarios.length} scenarios; use at most ${table.scenarios.length} shards`, 'shard');
+      }
+      const scenarios: BatchScenario[] = table.scenarios.map((s, index) => ({
+        index,
+        model: s.model,
+        scenario: s.scenario,
+        read: () => {
+          const read = scenarioPathway(s, { splice: opts.splice });
+          return { pathway: read.pathway, filledBy: filledByText(pathwayCoverage(read, s.notes)) };
+        },
+      }));
+      const { from, to } = shardRange(scenarios.length, opts.shard);
+      const outDir = opts.outDir === undefined ? undefined : resolve(io.cwd, opts.outDir);
+      if (outDir) mkdirSync(outDir, { recursive: true });
+      const settings: BatchSettings = {
+        table: { path: arg, sha256: sha256File(path) },
+        scenarios: scenarios.length,
+        members: opts.members,
+        seed: opts.seed,
+        thresholds,
+        baseline: opts.baseline,
+        co2Formula: params.co2Formula,
+        splice: opts.splice,
+      };
+      const inputs = [path, join(bundledPathwaysDir(), 'history.csv')];
+      let ensembleNotes: string[] = [];
+      let trajectories = 0;
+      const threads = startEnsembleThreads(opts.workers ?? availableParallelism());
+      let outcome: BatchOutcome;
+      try {
+        outcome = await runBatch(scenarios.slice(from, to), {
+          params,
+          members: opts.members,
+          seed: opts.seed,
+          thresholds,
+          baseline: opts.baseline,
+          threads,
+          onProgress: progressBar(io, 'scenarios', 1),
+          onAssessed: (s, result, notes) => {
+            if (ensembleNotes.length === 0) ensembleNotes = result.notes;
+            if (!outDir) return;
+            const t = ensembleTable(result);
+            const yearly: Table = { columns: t.columns, data: t.columns.map((c) => t.values[c]) };
+            writeOutput(join(outDir, `${fileStem(s.model)}--${fileStem(s.scenario)}.csv`), tableRenderers(yearly), {
+              inputs,
+              parameters: { co2_formula: params.co2Formula },
+              baseline: opts.baseline,
+              notes,
+              seed: opts.seed,
+              pathway: `${s.scenario} (model ${s.model})`,
+              caution: batchCaution(opts.members),
+              io,
+            });
+            trajectories++;
+          },
+        });
+      } finally {
+        await threads.close();
+      }
+      const notes = [...table.notes.map((n) => `table: ${n}`), ...batchNotes(thresholds), ...ensembleNotes];
+      if (outDir && trajectories > 0) io.stderr(`wrote ${trajectories} yearly trajectories to ${outDir}\n`);
+
+      if (opts.shard) {
+        const written = writeOutput(opts.out!, { '.json': () => batchShardToJson({ settings, shard: opts.shard!, outcome, notes }) }, { inputs, baseline: opts.baseline, notes, seed: opts.seed, io });
+        announceWritten(written, io);
+        io.stderr(`shard ${opts.shard.index}/${opts.shard.count}: scenarios ${from + 1}-${to} of ${scenarios.length}; combine all shards with \`warmcast merge\`\n`);
+        finish(outcome, io, to - from);
+        return;
+      }
+      await emitBatch(outcome, { settings, notes, inputs, out: opts.out, io });
+    });
+}
+
+/**
+ * Writes and prints a batch's summary (from one run or merged shards) and its errors, then ends
+ * with exit code 3 when some scenarios failed, or 2 when none could be assessed.
+ */
+export async function emitBatch(outcome: BatchOutcome, ctx: { settings: BatchSettings; notes: string[]; inputs: string[]; out?: string; io: CliIo }): Promise<void> {
+  const { settings, io } = ctx;
+  const summary = batchSummaryTable(outcome, settings.thresholds);
+  const errors = batchErrorTable(outcome);
+  if (outcome.rows.length === 0 && outcome.errors.length > 0) throw new InputError(outcome.errors.flatMap((e) => e.problems.map((p) => (p.file === '' ? { ...p, file: settings.table.path } : p))));
+  if (ctx.out !== undefined) {
+    const provenanceInput = {
+      inputs: ctx.inputs,
+      parameters: { co2_formula: settings.co2Formula, members: settings.members },
+      baseline: settings.baseline,
+      notes: ctx.notes,
+      seed: settings.seed,
+      caution: batchCaution(settings.members),
+      io,
+    };
+    const path = resolve(io.cwd, ctx.out);
+    if (extname(path).toLowerCase() === '.xlsx') {
+      const bytes = await batchWorkbook(summary, errors, buildProvenance(provenanceInput));
+      writeFilesAtomic([{ path, content: bytes }], { inputs: ctx.inputs });
+      announceWritten([{ path, replaced: false }], io);
+    } else {
+      const hasErrors = outcome.errors.length > 0;
+      const errorList = outcome.errors.map((e) => ({ model: e.model, scenario: e.scenario, code: e.code, problems: batchErrorLines(e) }));
+      const renderers = {
+        '.csv': () => formatCsv(summary),
+        '.json': (p: Provenance) => formatJson(summary, p, { errors: errorList }),
+        '.md': (p: Provenance) =>
+          formatMarkdown(summary, 3) +
+          (hasErrors ? `\n## Scenarios that failed\n\n${formatMarkdown(errors)}` : '') +
+          `\nwarmcast ${p.version}, ${p.created_utc}; ${settings.members} members per scenario, seed ${p.seed}; warming relative to ${p.baseline}.\n\nNotes:\n\n${p.notes.map((n) => `- ${n.replace(/</g, '\\<')}`).join('\n')}\n\n${p.caution}\n`,
+      };
+      const written = writeOutput(ctx.out, renderers, { ...provenanceInput, sidecar: hasErrors ? { errors: errorList } : undefined });
+      if (extname(path).toLowerCase() === '.csv' && hasErrors) {
+        const errorsPath = path.slice(0, -4) + '.errors.csv';
+        writeFilesAtomic([{ path: errorsPath, content: formatCsv(errors) }], { inputs: ctx.inputs });
+        written.push({ path: errorsPath, replaced: false });
+      }
+      announceWritten(written, io);
+    }
+  }
+  io.stdout(batchSummaryText(outcome, settings, ctx.out !== undefined));
+  io.stdout(notesAndCautions([], [standardCautions()[0], batchUncertainty(settings.members), standardCautions()[2]], io.stdoutColumns));
+  finish(outcome, io, outcome.rows.length + outcome.errors.length);
+}
+
+/** Prints the errors table and throws PartialFailureError (exit 3) when some scenarios failed. */
+function finish(outcome: BatchOutcome, io: CliIo, total: number): void {
+  if (outcome.errors.length === 0) return;
+  io.stderr(`\n${outcome.errors.length} scenario${outcome.errors.length === 1 ? '' : 's'} could not be assessed:\n`);
+  for (const e of outcome.errors) for (const line of batchErrorLines(e)) io.stderr(`  ${line}\n`);
+  throw new PartialFailureError(`${outcome.errors.length} of ${total} scenarios failed (listed above${total > outcome.errors.length ? '; the summary holds the others' : ''}); exit code 3`);
+}
+
+/** The terminal summary: one line per scenario (at most 40 when a file holds them all), then the count per category. */
+function batchSummaryText(outcome: BatchOutcome, settings: BatchSettings, toFile: boolean): string {
+  const rows = outcome.rows;
+  const shown = toFile && rows.length > 40 ? rows.slice(0, 20) : rows;
+  const pct = (p: number) => `${Math.round(100 * p)} %`;
+  const text = plainTable({
+    columns: ['model', 'scenario', 'cat.', 'peak K (5-95 %)', 'peak yr', '2100 K', 'P(peak>1.5)', 'P(peak>2)', 'net-zero CO2'],
+    numeric: [false, false, false, true, true, true, true, true, true],
+    rows: shown.map((r) => [
+      r.model,
+      r.scenario,
+      r.category,
+      `${r.peakWarmingK.p50.toFixed(2)} (${r.peakWarmingK.p05.toFixed(2)}-${r.peakWarmingK.p95.toFixed(2)})`,
+      String(r.peakYearP50),
+      r.warming2100K ? r.warming2100K.p50.toFixed(2) : '-',
+      pct(r.probPeakAbove[settings.thresholds.indexOf(1.5)].probability),
+      pct(r.probPeakAbove[settings.thresholds.indexOf(2)].probability),
+      r.netZeroCo2Year === null ? 'not reached' : String(r.netZeroCo2Year),
+    ]),
+  });
+  const counts = AR6_WARMING_CATEGORIES.map((c) => [c.code, rows.filter((r) => r.category === c.code).length] as const).filter(([, n]) => n > 0);
+  const lines = [
+    `${rows.length} scenario${rows.length === 1 ? '' : 's'} assessed, ${settings.members} members each (seed ${settings.seed}); warming relative to ${settings.baseline.join('-')}; peak over ${PEAK_YEARS.join('-')}`,
+    text.trimEnd(),
+  ];
+  if (shown.length < rows.length) lines.push(`  ... ${rows.length - shown.length} more in the file written`);
+  lines.push(`AR6 WG3 categories: ${counts.map(([c, n]) => `${c} ${n}`).join(', ')}`);
+  return lines.join('\n') + '\n';
+}
+
+/** Groups the filled agents by how they are filled: `aerosol, other: <note>; solar, volcanic: <note>`. */
+function filledByText(coverage: ReturnType<typeof pathwayCoverage>): string {
+  const groups = new Map<string, string[]>();
+  for (const f of coverage.filled) {
+    const how = f.how.length > 0 ? f.how.join(' / ') : 'not given';
+    groups.set(how, [...(groups.get(how) ?? []), f.agent]);
+  }
+  return [...groups].map(([how, agents]) => `${agents.join(', ')}: ${how}`).join('; ');
+}
+
+/** The batch's own conventions, for provenance. */
+function batchNotes(thresholds: number[]): string[] {
+  return [
+    `peak_warming_pXX_k: percentiles across members of each member's highest annual warming over ${PEAK_YEARS.join('-')} (the 21st century, as the AR6 WG3 categories judge it); peak_year_p50: median of the members' peak years; warming_2100_pXX_k: percentiles of the members' warming in 2100 (${BATCH_PERCENTILE_NAMES.join(', ')}; Hyndman & Fan 1996 definition 7)`,
+    `${thresholds.map(probPeakAboveColumn).join(', ')}: share of members whose peak warming over ${PEAK_YEARS.join('-')} exceeds the level`,
+    `${thresholds.map(medianCrossingColumn).join(', ')}: first year by which half of the members' 20-year means have crossed the level (IPCC AR6 rule); empty when fewer than half cross`,
+    `net_zero_co2_year: first year from ${CUMULATIVE_FROM} (or the scenario's first year, cumulative_co2_from_year) with net CO2 emissions at or below zero; cumulative_co2_to_net_zero_gtco2: the sum of the annual net CO2 emissions from that year to the year before net zero (to the end when net zero is not reached)`,
+    `category: IPCC AR6 WG3 warming category (codes C1-C8), the first whose criterion the members meet; criteria recalled from memory (AR6 WG3 Table SPM.2 and Annex III): ${AR6_WARMING_CATEGORIES.map((c) => `${c.code} ${c.criterion}`).join('; ')}`,
+    'filled_by: the forcing agents a scenario does not give, and how the run fills them',
+    'every scenario runs the same members (same seed), so differences between rows come from the scenarios, not from sampling',
+  ];
+}
+
+function batchUncertainty(members: number): string {
+  return `Ranges are the spread of ${members} ensemble members per scenario (climate response, forcing scales and carbon cycle sampled); they do not include uncertainty in the scenarios or in the model structure. Categories are this model's reading of the AR6 WG3 criteria, not the IPCC's classification of these scenarios.`;
+}
+
+function batchCaution(members: number): string {
+  return [standardCautions()[0], batchUncertainty(members), standardCautions()[2]].join(' ');
+}
+
+/** A name as part of a file name: letters, digits, dot, hyphen and underscore kept, the rest `_`. */
+function fileStem(name: string): string {
+  return name.trim().replace(/[^\w.-]+/g, '_').replace(/^\.+/, '_') || '_';
+}
+
+/**
+ * Merges batch shard files (from `warmcast batch --shard K/N`) into the summary one whole batch gives;
+ * called by `warmcast merge` when its files are batch shards.
+ */
+export async function mergeBatchFiles(files: string[], out: string | undefined, io: CliIo): Promise<void> {
+  const shards = files.map((file) => {
+    let text: string;
+    try {
+      text = readFileSync(resolve(io.cwd, file), 'utf8');
+    } catch (e) {
+      throw new InputError([{ file, code: 'input.unreadable', message: `shard file must be readable: ${(e as Error).message}`, expected: 'a shard file written by `warmcast batch --shard K/N`' }]);
+    }
+    return { file, shard: batchShardFromJson(text, file) };
+  });
+  const merged = mergeBatchShards(shards);
+  await emitBatch(merged.outcome, { settings: merged.settings, notes: merged.notes, inputs: files.map((f) => resolve(io.cwd, f)), out, io });
+}
+
+/** Whether a file (as `warmcast merge` is given it) is a batch shard: its first bytes name the batch shard format. */
+export function isBatchShardFile(path: string): boolean {
+  try {
+    const fd = openSync(path, 'r');
+    try {
+      const head = Buffer.alloc(200);
+      const n = readSync(fd, head, 0, head.length, 0);
+      return isBatchShardText(head.subarray(0, n).toString('utf8'));
+    } finally {
+      closeSync(fd);
+    }
+  } catch {
+    return false;
+  }
+}
