@@ -32,3 +32,5 @@ export type { EnsembleSampling } from './sampling.js';
 export { SHARD_FORMAT, SHARD_VERSION, shardFileBytes, shardFromJson, shardToJson } from './shard-file.js';
 export { exceedanceCountsLength, FEW_MEMBERS, fewMembersWarning, PERCENTILE_NAMES, PERCENTILES, summarizeEnsemble } from './summarize-ensemble.js';
 export type { EnsembleResult, ParameterSummary, PeakSummary, PercentileName, ThresholdCrossing } from './summarize-ensemble.js';
+export { emptyMemberParameters, forcingScaleKey, sliceMemberParameters, TWO_BOX_KEYS } from './member-parameters.js';
+export type { ForcingScaleKey, MemberParameters, MemberSource, TwoBoxKey } from './member-parameters.js';
