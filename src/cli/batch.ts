@@ -6,12 +6,12 @@ import { BATCH_PERCENTILE_NAMES, CUMULATIVE_FROM, PEAK_YEARS } from '../batch/as
 import { batchErrorTable, batchSummaryTable, medianCrossingColumn, probPeakAboveColumn } from '../batch/batch-summary.js';
 import { batchShardFromJson, batchShardToJson, isBatchShardText, mergeBatchShards, type BatchSettings } from '../batch/batch-shard.js';
 import { batchWorkbook } from '../batch/batch-workbook.js';
-import { batchErrorLines, runBatch, type BatchOutcome, type BatchScenario } from '../batch/run-batch.js';
+import { batchErrorLines, type BatchOutcome } from '../batch/run-batch.js';
+import { runBatchThreads } from './batch-threads.js';
 import { AR6_WARMING_CATEGORIES } from '../batch/warming-category.js';
 import { ConfigError, InputError, PartialFailureError } from '../errors.js';
-import { ensembleTable, shardRange, startEnsembleThreads } from '../ensemble/index.js';
-import { pathwayCoverage } from '../io/iamc-coverage.js';
-import { readScenarioTable, scenarioPathway } from '../io/iamc-read.js';
+import { shardRange } from '../ensemble/index.js';
+import { readScenarioTable } from '../io/iamc-read.js';
 import { bundledPathwaysDir, formatCsv, formatJson, formatMarkdown, writeFilesAtomic, type Table } from '../io/index.js';
 import { plainTable, standardCautions } from '../report/index.js';
 import type { CliIo } from './cli-io.js';
@@ -85,15 +85,7 @@ export function batchCommand(io: CliIo): Command {
       if (opts.shard && opts.shard.count > table.scenarios.length) {
         throw new ConfigError(`--shard ${opts.shard.index}/${opts.shard.count}: the table has only ${table.scenarios.length} scenarios; use at most ${table.scenarios.length} shards`, 'shard');
       }
-      const scenarios: BatchScenario[] = table.scenarios.map((s, index) => ({
-        index,
-        model: s.model,
-        scenario: s.scenario,
-        read: () => {
-          const read = scenarioPathway(s, { splice: opts.splice });
-          return { pathway: read.pathway, filledBy: filledByText(pathwayCoverage(read, s.notes)) };
-        },
-      }));
+      const scenarios = table.scenarios;
       const { from, to } = shardRange(scenarios.length, opts.shard);
       const outDir = opts.outDir === undefined ? undefined : resolve(io.cwd, opts.outDir);
       if (outDir) mkdirSync(outDir, { recursive: true });
@@ -110,38 +102,33 @@ export function batchCommand(io: CliIo): Command {
       const inputs = [path, join(bundledPathwaysDir(), 'history.csv')];
       let ensembleNotes: string[] = [];
       let trajectories = 0;
-      const threads = startEnsembleThreads(opts.workers ?? availableParallelism());
-      let outcome: BatchOutcome;
-      try {
-        outcome = await runBatch(scenarios.slice(from, to), {
-          params,
-          members: opts.members,
-          seed: opts.seed,
-          thresholds,
-          baseline: opts.baseline,
-          threads,
-          onProgress: progressBar(io, 'scenarios', 1),
-          onAssessed: (s, result, notes) => {
-            if (ensembleNotes.length === 0) ensembleNotes = result.notes;
-            if (!outDir) return;
-            const t = ensembleTable(result);
-            const yearly: Table = { columns: t.columns, data: t.columns.map((c) => t.values[c]) };
-            writeOutput(join(outDir, `${fileStem(s.model)}--${fileStem(s.scenario)}.csv`), tableRenderers(yearly), {
-              inputs,
-              parameters: { co2_formula: params.co2Formula },
-              baseline: opts.baseline,
-              notes,
-              seed: opts.seed,
-              pathway: `${s.scenario} (model ${s.model})`,
-              caution: batchCaution(opts.members),
-              io,
-            });
-            trajectories++;
-          },
-        });
-      } finally {
-        await threads.close();
-      }
+      const outcome = await runBatchThreads(scenarios, from, to, {
+        params,
+        members: opts.members,
+        seed: opts.seed,
+        thresholds,
+        baseline: opts.baseline,
+        splice: opts.splice,
+        threads: opts.workers ?? availableParallelism(),
+        onProgress: progressBar(io, 'scenarios', 1),
+        onYearly: (index, t, notes, runNotes) => {
+          if (ensembleNotes.length === 0) ensembleNotes = runNotes;
+          if (!outDir) return;
+          const s = scenarios[index];
+          const yearly: Table = { columns: t.columns, data: t.columns.map((c) => t.values[c]) };
+          writeOutput(join(outDir, `${fileStem(s.model)}--${fileStem(s.scenario)}.csv`), tableRenderers(yearly), {
+            inputs,
+            parameters: { co2_formula: params.co2Formula },
+            baseline: opts.baseline,
+            notes,
+            seed: opts.seed,
+            pathway: `${s.scenario} (model ${s.model})`,
+            caution: batchCaution(opts.members),
+            io,
+          });
+          trajectories++;
+        },
+      });
       const notes = [...table.notes.map((n) => `table: ${n}`), ...batchNotes(thresholds), ...ensembleNotes];
       if (outDir && trajectories > 0) io.stderr(`wrote ${trajectories} yearly trajectories to ${outDir}\n`);
 
@@ -241,16 +228,6 @@ function batchSummaryText(outcome: BatchOutcome, settings: BatchSettings, toFile
   if (shown.length < rows.length) lines.push(`  ... ${rows.length - shown.length} more in the file written`);
   lines.push(`AR6 WG3 categories: ${counts.map(([c, n]) => `${c} ${n}`).join(', ')}`);
   return lines.join('\n') + '\n';
-}
-
-/** Groups the filled agents by how they are filled: `aerosol, other: <note>; solar, volcanic: <note>`. */
-function filledByText(coverage: ReturnType<typeof pathwayCoverage>): string {
-  const groups = new Map<string, string[]>();
-  for (const f of coverage.filled) {
-    const how = f.how.length > 0 ? f.how.join(' / ') : 'not given';
-    groups.set(how, [...(groups.get(how) ?? []), f.agent]);
-  }
-  return [...groups].map(([how, agents]) => `${agents.join(', ')}: ${how}`).join('; ');
 }
 
 /** The batch's own conventions, for provenance. */
