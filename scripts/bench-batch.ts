@@ -30,7 +30,7 @@ const wall0 = performance.now();
 const cpu0 = process.cpuUsage();
 const table = readIamcTable('bench.csv', [csvSheet(inventedTableCsv(inventedScenarioSet(scenarioCount)), 'bench.csv')]);
 const options = { params: calibrate({}), members, seed: 1, thresholds: [1.5, 2], baseline: [1850, 1900] as [number, number] };
-const outcome = await runBatchThreads(table.scenarios, 0, table.scenarios.length, { ...options, splice: true, threads: workers });
+const outcome = await runBatchThreads(table.scenarios, 0, table.scenarios.length, { ...options, load: {}, threads: workers });
 if (outcome.errors.length > 0) throw new Error(`${outcome.errors.length} invented scenarios failed: ${outcome.errors[0].problems[0].message}`);
 const wallS = (performance.now() - wall0) / 1000;
 const cpu = process.cpuUsage(cpu0);
@@ -42,7 +42,7 @@ const target = 1000 * 600;
 const years = scenarioPathway(table.scenarios[0]).pathway.years.length;
 
 // The threads change nothing: the first three rows again, in this thread alone.
-const alone = await runBatch(table.scenarios.slice(0, 3).map((s, i) => batchScenario(s, i, true)), options);
+const alone = await runBatch(table.scenarios.slice(0, 3).map((s, i) => batchScenario(s, i, {})), options);
 if (JSON.stringify(alone.rows) !== JSON.stringify(outcome.rows.slice(0, 3))) throw new Error('rows from threads differ from rows run in one thread');
 console.log(`${scenarioCount} scenarios x ${members} members, ${years} years each (emission-driven), ${workers} thread${workers === 1 ? '' : 's'}; load average ${loadavg()[0].toFixed(1)} on ${availableParallelism()} cores`);
 console.log(`wall ${wallS.toFixed(1)} s: ${perWall.toFixed(0)} scenario-members/s; projected 1,000 x 600: ${(target / perWall).toFixed(0)} s`);

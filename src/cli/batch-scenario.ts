@@ -2,18 +2,19 @@ import type { BatchScenario } from '../batch/run-batch.js';
 import { pathwayCoverage, type PathwayCoverage } from '../io/iamc-coverage.js';
 import { scenarioPathway } from '../io/iamc-read.js';
 import type { IamcScenario } from '../io/iamc-table.js';
+import type { LoadPathwayOptions } from '../io/load-pathway.js';
 
 /**
- * A table's scenario as a batch item: read (spliced onto the history unless `splice` is false) when
- * the batch reaches it, with the text of the agents it does not give and how they are filled.
+ * A table's scenario as a batch item: read with the `load` options (splice, as a run reads pathways)
+ * when the batch reaches it, with the text of the agents it does not give and how they are filled.
  */
-export function batchScenario(s: IamcScenario, index: number, splice: boolean): BatchScenario {
+export function batchScenario(s: IamcScenario, index: number, load: LoadPathwayOptions): BatchScenario {
   return {
     index,
     model: s.model,
     scenario: s.scenario,
     read: () => {
-      const read = scenarioPathway(s, { splice });
+      const read = scenarioPathway(s, load);
       return { pathway: read.pathway, filledBy: filledByText(pathwayCoverage(read, s.notes)) };
     },
   };

@@ -3,13 +3,15 @@ import type { AssessOptions } from '../batch/assess-scenario.js';
 import { runBatch, type BatchOutcome } from '../batch/run-batch.js';
 import { ensembleTable, workerThreadsAvailable, type EnsembleTable } from '../ensemble/index.js';
 import type { IamcScenario } from '../io/iamc-table.js';
+import type { LoadPathwayOptions } from '../io/load-pathway.js';
 import { batchScenario } from './batch-scenario.js';
 
 /** One scenario handed to a batch worker. */
 export interface BatchWorkerRequest {
   index: number;
   scenario: IamcScenario;
-  splice: boolean;
+  /** How the scenario is read (splice), as the calling thread would read it. */
+  load: LoadPathwayOptions;
   options: Omit<AssessOptions, 'threads'>;
   /** Whether to send back the yearly table (for `--out-dir`). */
   yearly: boolean;
@@ -39,13 +41,13 @@ export async function runBatchThreads(
   scenarios: IamcScenario[],
   from: number,
   to: number,
-  options: Omit<AssessOptions, 'threads'> & { splice: boolean; threads: number; onProgress?: (done: number, total: number) => void; onYearly?: OnYearly },
+  options: Omit<AssessOptions, 'threads'> & { load: LoadPathwayOptions; threads: number; onProgress?: (done: number, total: number) => void; onYearly?: OnYearly },
 ): Promise<BatchOutcome> {
-  const { splice, threads, onProgress, onYearly, ...assess } = options;
+  const { load, threads, onProgress, onYearly, ...assess } = options;
   const count = to - from;
   const size = Math.min(threads, count);
   if (!workerThreadsAvailable() || size <= 1) {
-    const items = scenarios.slice(from, to).map((s, i) => batchScenario(s, from + i, splice));
+    const items = scenarios.slice(from, to).map((s, i) => batchScenario(s, from + i, load));
     return runBatch(items, {
       ...assess,
       onProgress,
@@ -63,7 +65,7 @@ export async function runBatchThreads(
             const give = () => {
               if (next >= to) return resolve();
               const index = next++;
-              const request: BatchWorkerRequest = { index, scenario: scenarios[index], splice, options: assess, yearly: onYearly !== undefined };
+              const request: BatchWorkerRequest = { index, scenario: scenarios[index], load, options: assess, yearly: onYearly !== undefined };
               worker.postMessage(request);
             };
             worker.on('message', (reply: BatchWorkerReply) => {

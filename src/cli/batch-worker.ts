@@ -14,7 +14,7 @@ const port = parentPort!;
 
 port.on('message', async (request: BatchWorkerRequest) => {
   let yearly: BatchWorkerReply['yearly'];
-  const outcome = await runBatch([batchScenario(request.scenario, request.index, request.splice)], {
+  const outcome = await runBatch([batchScenario(request.scenario, request.index, request.load)], {
     ...request.options,
     onAssessed: (_s, result, notes) => {
       if (request.yearly) yearly = { table: ensembleTable(result), notes, ensembleNotes: result.notes };

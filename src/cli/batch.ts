@@ -108,7 +108,7 @@ export function batchCommand(io: CliIo): Command {
         seed: opts.seed,
         thresholds,
         baseline: opts.baseline,
-        splice: opts.splice,
+        load: { splice: opts.splice },
         threads: opts.workers ?? availableParallelism(),
         onProgress: progressBar(io, 'scenarios', 1),
         onYearly: (index, t, notes, runNotes) => {

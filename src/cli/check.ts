@@ -27,7 +27,7 @@ export function checkCommand(io: CliIo): Command {
             problems.push(...described.problems);
             continue;
           }
-          const reads = picking ? await readPathwayArgs([arg], opts, io) : [readPathway(path, { splice: opts.splice })];
+          const reads = picking ? await readPathwayArgs([arg], opts, { splice: opts.splice }, io) : [readPathway(path, { splice: opts.splice })];
           for (const { parsed, pathway } of reads) io.stdout(describePathway(parsed, pathway).join('\n') + '\n\n');
         } catch (e) {
           if (e instanceof InputError) problems.push(...e.problems);

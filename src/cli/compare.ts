@@ -60,7 +60,7 @@ export function compareCommand(io: CliIo): Command {
       const baselineNote = thresholdBaselineNote(opts.baseline);
       const files: string[] = [];
       const scoped: ScopedNote[] = [];
-      const reads = await readPathwayArgs(args, opts, io);
+      const reads = await readPathwayArgs(args, opts, { splice: opts.splice }, io);
       const runs = reads.map((read) => {
         files.push(...pathwayInputs(read));
         const p = projectPathway(read.pathway, { params, baseline: opts.baseline, carbonFeedback: opts.carbonFeedback });

@@ -95,7 +95,7 @@ export function ensembleCommand(io: CliIo): Command {
       if (opts.shard && !opts.out?.toLowerCase().endsWith('.json')) throw new ConfigError('--shard writes a shard file: give --out NAME.json', 'out');
       // Central parameters: the CO2 formula, and the CH4 and N2O of an emission pathway's central run.
       const { params } = resolveModelParams({ co2Formula: opts.co2Formula }, io);
-      const [read] = await readPathwayArgs([arg], opts, io, false);
+      const [read] = await readPathwayArgs([arg], opts, { splice: opts.splice }, io, false);
       const { input, notes } = ensembleInput(read.pathway, params, { baseline: opts.baseline });
       const inputs = pathwayInputs(read);
       const years = input.years.length;

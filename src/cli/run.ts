@@ -47,7 +47,7 @@ export function runCommand(io: CliIo): Command {
     )
     .action(async (pathways: string[], opts: RunOptions) => {
       const args = pathways.length > 0 ? pathways : [DEFAULT_PATHWAY];
-      const reads = await readPathwayArgs(args, opts, io);
+      const reads = await readPathwayArgs(args, opts, { splice: opts.splice }, io);
       if (opts.out !== undefined && reads.length > 1) {
         throw new ConfigError('--out takes one pathway; to put several side by side use `warmcast compare`', 'out');
       }

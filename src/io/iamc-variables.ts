@@ -76,7 +76,7 @@ export const IAMC_VARIABLES: readonly IamcVariable[] = [
 const HALOGENATED: Readonly<Record<string, string>> = {
   hfc23: 'hfc23', hfc32: 'hfc32', hfc125: 'hfc125', hfc134a: 'hfc134a', hfc143a: 'hfc143a', hfc152a: 'hfc152a',
   hfc227ea: 'hfc227ea', hfc236fa: 'hfc236fa', hfc245fa: 'hfc245fa', hfc365mfc: 'hfc365mfc', hfc4310: 'hfc4310mee', hfc4310mee: 'hfc4310mee',
-  cf4: 'cf4', c2f6: 'c2f6', c3f8: 'c3f8', c4f10: 'c4f10', c5f12: 'c5f12', c6f14: 'c6f14', c7f16: 'c7f16', c8f18: 'c8f18', cc4f8: 'cc4f8',
+  cf4: 'cf4', c2f6: 'c2f6', c3f8: 'c3f8', c4f10: 'c4f10', c5f12: 'c5f12', c6f14: 'c6f14', c7f16: 'c7f16', c8f18: 'c8f18', cc4f8: 'c_c4f8',
   sf6: 'sf6', nf3: 'nf3', so2f2: 'so2f2',
   cfc11: 'cfc11', cfc12: 'cfc12', cfc113: 'cfc113', cfc114: 'cfc114', cfc115: 'cfc115',
   hcfc22: 'hcfc22', hcfc141b: 'hcfc141b', hcfc142b: 'hcfc142b',

@@ -110,6 +110,12 @@ describe('--scenario and check TABLE', () => {
     expect(ambiguous.err).toContain('add --model NAME');
     const compare = await runCli(['compare', 'table.xlsx', '--scenario', 'Slow', '--scenario', 'Quick', '--model', 'Model A', '--no-chart'], dir);
     expect(compare.code, compare.err).toBe(0);
+    const notTable = await runCli(['run', 'swift', '--scenario', 'Slow'], dir);
+    expect(notTable.code).toBe(2);
+    expect(notTable.err).toContain('--scenario picks a scenario of a scenario table');
+    const unknown = await runCli(['ensemble', 'table.csv', '--scenario', 'Slowe', '--members', '10'], dir);
+    expect(unknown.code).toBe(2);
+    expect(unknown.err).toContain('did you mean "Slow"?');
     const none = await runCli(['run', 'table.csv'], dir);
     expect(none.code).toBe(2);
     expect(none.err).toContain('choose one with --scenario NAME');
