@@ -76,6 +76,8 @@ interface ScenarioRows {
   otherRegions: Set<string>;
   worldRows: number;
   unread: Set<string>;
+  /** Variables whose unit was refused. */
+  refused: Set<string>;
 }
 
 /**
@@ -199,9 +201,12 @@ export function readIamcTable(file: string, sheets: IamcSheet[]): IamcTable {
         s.problems.push({ ...ids, column: names[index.unit], code: 'input.iamc-unit-changes', message: `must keep one unit per variable: row ${entry.line} gives "${entry.unit}"`, value: unit, expected: entry.unit });
         continue;
       }
+      // In the long layout a variable has a row per year: a refused unit is reported at its first row only.
+      if (s.refused.has(key)) continue;
       if (!entry) {
         const read = emissionUnitFactor(unit, info.target);
         if (!read.ok) {
+          s.refused.add(key);
           s.problems.push({ ...ids, column: names[index.unit], code: 'input.iamc-unit', message: `must be a unit known for ${info.variable}`, value: unit, expected: `one of ${read.known.join(', ')}` });
           continue;
         }
@@ -257,7 +262,7 @@ function rowsOf(map: Map<string, ScenarioRows>, model: string, scenario: string,
   const key = `${model}\u0000${scenario}`;
   let s = map.get(key);
   if (!s) {
-    s = { model, scenario, firstLine: line, sheet, problems: [], variables: new Map(), otherRegions: new Set(), worldRows: 0, unread: new Set() };
+    s = { model, scenario, firstLine: line, sheet, problems: [], variables: new Map(), otherRegions: new Set(), worldRows: 0, unread: new Set(), refused: new Set() };
     map.set(key, s);
   }
   return s;

@@ -1,7 +1,8 @@
 import ExcelJS from 'exceljs';
 import { existsSync, readdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
-import { describe, expect, it } from 'vitest';
+import { execFileSync, spawnSync } from 'node:child_process';
+import { beforeAll, describe, expect, it } from 'vitest';
 import { inventedScenario, wideCsv, xlsxBytes } from '../io/iamc-fixture.js';
 import { runCli, tempDirs } from './cli-harness.js';
 
@@ -129,5 +130,23 @@ describe('--scenario and check TABLE', () => {
     expect(r.out).toMatch(/scenario "Quick", model "Model B"\n.*\n  gives: co2 \(Emissions\|CO2\|Energy and Industrial Processes \+ Emissions\|CO2\|AFOLU\); ch4 \(Emissions\|CH4\); n2o \(Emissions\|N2O\)/);
     expect(r.out).toMatch(/  filled: aerosol: /);
     expect(r.out).toContain('1 of 3 scenarios have problems (listed above); the others can be run');
+  });
+});
+
+describe('warmcast batch, the built binary (black box)', () => {
+  const bin = join(process.cwd(), 'dist/src/cli/bin.js');
+  // Built afresh: worker threads exist only in the compiled files, and a stale build would test old code.
+  beforeAll(() => void execFileSync('npx', ['tsc', '-p', 'tsconfig.build.json'], { stdio: 'inherit' }), 120_000);
+
+  it('two worker threads give exactly the rows of one thread in-process', async () => {
+    const dir = await tables(true);
+    const threads = spawnSync(process.execPath, [bin, 'batch', 'table.xlsx', ...SETTINGS, '--workers', '2', '--out', 'threads.json'], { cwd: dir, encoding: 'utf8' });
+    expect(threads.status, threads.stderr).toBe(3);
+    expect((await runCli(['batch', 'table.xlsx', ...SETTINGS, '--out', 'one.json'], dir)).code).toBe(3);
+    expect(json(dir, 'threads.json').rows).toEqual(json(dir, 'one.json').rows);
+    // The in-process run names the table by its absolute path, the binary as typed.
+    const errors = (file: string) => JSON.stringify(json(dir, file).errors).replaceAll(join(dir, 'table.xlsx'), 'table.xlsx');
+    expect(errors('threads.json')).toBe(errors('one.json'));
+    expect(json(dir, 'one.json').errors[0].problems).toHaveLength(1);
   });
 });
