@@ -15,3 +15,7 @@ export * from './metrics/index.js';
 export { ensembleHeadlines, ensembleTable, mergeShards, runEnsemble, shardFromJson, shardToJson, startEnsembleThreads, summarizeEnsemble, AR6_SAMPLING } from './ensemble/index.js';
 export type { EnsembleHeadlines, EnsembleInput, EnsembleOptions, EnsembleResult, EnsembleSampling, EnsembleThreads } from './ensemble/index.js';
 export { comparisonHtml, comparisonMarkdown, svgChart, terminalChart, htmlReport, standardCautions } from './report/index.js';
+export { readScenarioTable, selectScenario, scenarioPathway, isScenarioTable, describeScenarioTable } from './io/index.js';
+export type { IamcScenario, IamcTable, ScenarioChoice } from './io/index.js';
+export { assessScenario, runBatch, batchSummaryTable, mergeBatchShards, warmingCategory, AR6_WARMING_CATEGORIES } from './batch/index.js';
+export type { BatchOutcome, ScenarioAssessment, WarmingCategory } from './batch/index.js';
