@@ -59,7 +59,7 @@ export function batchCommand(io: CliIo): Command {
     .option('--seed <integer>', 'random seed (a scenario\'s row equals `warmcast ensemble TABLE --scenario NAME` with the same seed and members)', wholeNumberOption('--seed', 0), 1)
     .addOption(thresholdsOption('warming levels in K for prob_peak_above_<t> and median_crossing_year_<t> (1.5 and 2 are always reported)', ALWAYS_THRESHOLDS))
     .addOption(baselineOption())
-    .option('-o, --out <file>', 'write the summary: .csv (+ .meta.json, + .errors.csv), .xlsx, .md, .json; with --shard a .json shard file for `warmcast merge`')
+    .option('-o, --out <file>', 'write the summary: .csv (+ .meta.json, + .errors.csv), .xlsx, .md, .json; - for CSV on stdout; with --shard a .json shard file for `warmcast merge`')
     .option('--out-dir <dir>', 'also write each scenario\'s yearly warming percentiles and probabilities to DIR/<model>--<scenario>.csv (+ .meta.json)')
     .option('--shard <K/N>', 'assess only the K-th of N equal slices of the scenarios and write a shard file (--out NAME.json); combine with `warmcast merge`', shardOption)
     .option('--workers <count>', 'threads (default one per core; the output does not depend on it)', wholeNumberOption('--workers', 1))
@@ -77,7 +77,7 @@ export function batchCommand(io: CliIo): Command {
       if (opts.seed >= 2 ** 32) throw new ConfigError('--seed must be below 2^32', 'seed');
       const ext = opts.out === undefined ? undefined : extname(opts.out).toLowerCase();
       if (opts.shard && ext !== '.json') throw new ConfigError('--shard writes a shard file: give --out NAME.json', 'out');
-      if (!opts.shard && ext !== undefined && !SUMMARY_FORMATS.includes(ext)) throw new ConfigError(`--out ${opts.out}: the extension must be one of ${SUMMARY_FORMATS.join(', ')} (it picks the format)`, 'out');
+      if (!opts.shard && ext !== undefined && opts.out !== '-' && !SUMMARY_FORMATS.includes(ext)) throw new ConfigError(`--out ${opts.out}: the extension must be one of ${SUMMARY_FORMATS.join(', ')} (it picks the format)`, 'out');
       const thresholds = [...new Set([...ALWAYS_THRESHOLDS, ...opts.thresholds])].sort((a, b) => a - b);
       const { params } = resolveModelParams({ co2Formula: opts.co2Formula }, io);
       const path = resolve(io.cwd, pathwayArg(arg, io));
@@ -162,7 +162,7 @@ export async function emitBatch(outcome: BatchOutcome, ctx: { settings: BatchSet
       caution: batchCaution(settings.members),
       io,
     };
-    const path = resolve(io.cwd, ctx.out);
+    const path = ctx.out === '-' ? '-' : resolve(io.cwd, ctx.out);
     if (extname(path).toLowerCase() === '.xlsx') {
       const bytes = await batchWorkbook(summary, errors, buildProvenance(provenanceInput));
       writeFilesAtomic([{ path, content: bytes }], { inputs: ctx.inputs });
@@ -174,7 +174,7 @@ export async function emitBatch(outcome: BatchOutcome, ctx: { settings: BatchSet
         '.csv': () => formatCsv(summary),
         '.json': (p: Provenance) => formatJson(summary, p, { errors: errorList }),
         '.md': (p: Provenance) =>
-          formatMarkdown(summary, 3) +
+          formatMarkdown(summary, 3, markdownDigits(summary)) +
           (hasErrors ? `\n## Scenarios that failed\n\n${formatMarkdown(errors)}` : '') +
           `\nwarmcast ${p.version}, ${p.created_utc}; ${settings.members} members per scenario, seed ${p.seed}; warming relative to ${p.baseline}.\n\nNotes:\n\n${p.notes.map((n) => `- ${n.replace(/</g, '\\<')}`).join('\n')}\n\n${p.caution}\n`,
       };
@@ -187,8 +187,10 @@ export async function emitBatch(outcome: BatchOutcome, ctx: { settings: BatchSet
       announceWritten(written, io);
     }
   }
-  io.stdout(batchSummaryText(outcome, settings, ctx.out !== undefined));
-  io.stdout(notesAndCautions([], [standardCautions()[0], batchUncertainty(settings.members), standardCautions()[2]], io.stdoutColumns));
+  // With `--out -` the summary CSV is standard output, so the terminal table goes to standard error.
+  const write = ctx.out === '-' ? io.stderr : io.stdout;
+  write(batchSummaryText(outcome, settings, ctx.out !== undefined));
+  write(notesAndCautions([], [standardCautions()[0], batchUncertainty(settings.members), standardCautions()[2]], ctx.out === '-' ? undefined : io.stdoutColumns));
   finish(outcome, io, outcome.rows.length + outcome.errors.length);
 }
 
@@ -228,6 +230,16 @@ function batchSummaryText(outcome: BatchOutcome, settings: BatchSettings, toFile
   if (shown.length < rows.length) lines.push(`  ... ${rows.length - shown.length} more in the file written`);
   lines.push(`AR6 WG3 categories: ${counts.map(([c, n]) => `${c} ${n}`).join(', ')}`);
   return lines.join('\n') + '\n';
+}
+
+/** Whole numbers for the year columns and the cumulative CO2 of the Markdown summary, two decimals for shares. */
+function markdownDigits(summary: Table): Record<string, number> {
+  const digits: Record<string, number> = {};
+  for (const c of summary.columns) {
+    if (c.includes('year') || c.startsWith('cumulative_')) digits[c] = 0;
+    else if (c.startsWith('prob_')) digits[c] = 2;
+  }
+  return digits;
 }
 
 /** The batch's own conventions, for provenance. */
