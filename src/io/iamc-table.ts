@@ -288,6 +288,21 @@ function headerYear(cell: SheetCell | undefined): number | undefined {
   return year >= 1000 && year <= 3000 ? year : undefined;
 }
 
+/**
+ * Present global totals, in our columns' units, against which a scenario's values up to
+ * PRESENT_CHECK_LAST_YEAR are checked for a unit mistake.
+ */
+const PRESENT_GLOBAL: Readonly<Record<string, { value: number; unit: string; source: string }>> = {
+  co2_gtco2: { value: 40, unit: 'Gt CO2/yr', source: 'Global Carbon Budget, about 2020; from memory' },
+  ch4_mt: { value: 380, unit: 'Mt CH4/yr', source: 'anthropogenic, Global Methane Budget, about 2020; from memory' },
+  n2o_mt: { value: 10, unit: 'Mt N2O/yr', source: 'anthropogenic, Global N2O Budget, about 2020; from memory' },
+  so2_mt: { value: 80, unit: 'Mt SO2/yr', source: 'anthropogenic, CEDS inventory, about 2020; from memory' },
+};
+/** Values this many times above or below the present total are refused (common practice, no source: a unit slip is a factor 1000). */
+const PRESENT_FACTOR = 30;
+/** Only years up to this one are compared with the present totals (later ones may fall far in a deep-cut scenario). */
+const PRESENT_CHECK_LAST_YEAR = 2030;
+
 /** At most this many names in a note's list, then "and N more". */
 const LISTED = 5;
 
@@ -376,6 +391,27 @@ function assembleScenario(file: string, s: ScenarioRows, ambiguousName: boolean)
       if (outside) {
         problems.push({ ...at, line: cell.line, column: cell.column, variable, code: 'input.out-of-range', value: String(cell.written), message: `${outside.message} once converted to ${column}`, expected: `${outside.expected} (${cell.value.toPrecision(4)} after conversion)` });
       }
+    }
+  }
+  // A global total far from today's in a near-present year is almost always a unit mistake (kt for Mt, Mt for Gt).
+  for (const [column, { variable, years }] of series) {
+    const present = PRESENT_GLOBAL[column];
+    if (!present) continue;
+    const early = [...years.entries()].filter(([y]) => y <= PRESENT_CHECK_LAST_YEAR).sort((a, b) => a[0] - b[0])[0];
+    if (!early) continue;
+    const [year, cell] = early;
+    const ratio = Math.abs(cell.value) / present.value;
+    if (ratio < 1 / PRESENT_FACTOR || ratio > PRESENT_FACTOR) {
+      problems.push({
+        ...at,
+        line: cell.line,
+        column: cell.column,
+        variable,
+        code: 'input.iamc-implausible-total',
+        value: String(cell.written),
+        message: `is ${+cell.value.toPrecision(3)} ${present.unit} in ${year} once converted from "${s.variables.get(variableKey(variable.split(' + ')[0]))?.unit ?? ''}": the world's total is about ${present.value} ${present.unit} (${present.source}), so the unit is probably wrong`,
+        expected: `a World total within a factor ${PRESENT_FACTOR} of ${present.value} ${present.unit} in years up to ${PRESENT_CHECK_LAST_YEAR}, in the unit the Unit column names`,
+      });
     }
   }
   if (problems.length > 0) return result();

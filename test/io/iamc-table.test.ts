@@ -100,6 +100,15 @@ describe('readIamcTable', () => {
     expect(p).toMatchObject({ code: 'input.out-of-range', line: 8, column: '2020', variable: 'Emissions|CO2' });
   });
 
+  it('refuses a near-present World total far from today\'s: Gt values under a Mt unit (a factor 1000)', () => {
+    // 41 written under "Mt CO2/yr" is 0.041 Gt CO2/yr in 2020, against about 40 today (from memory).
+    const slip = rows.map((r) => (r.scenario === 'Slow' && r.variable === 'Emissions|CO2' && r.region === 'World' ? { ...r, values: Object.fromEntries(Object.entries(r.values).map(([y, v]) => [y, v === null ? null : v / 1000])) } : r));
+    const p = fromCsv(wideCsv(slip)).scenarios[1].problems;
+    expect(p.map((x) => x.code)).toEqual(['input.iamc-implausible-total']);
+    expect(p[0]).toMatchObject({ line: 8, column: '2020', variable: 'Emissions|CO2' });
+    expect(p[0].message).toContain('is 0.041 Gt CO2/yr in 2020 once converted from "Mt CO2/yr"');
+  });
+
   it('refuses a table without the IAMC columns, or with both layouts', () => {
     expect(() => fromCsv('Model,Scenario,Variable,Unit,2020\nA,B,Emissions|CO2,Mt CO2/yr,1\n')).toThrow(/missing Region/);
     expect(() => fromCsv('Model,Scenario,Region,Variable,Unit,Year,Value,2020\n')).toThrow(/not both/);
