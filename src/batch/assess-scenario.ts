@@ -1,5 +1,5 @@
 import type { ClimateParams } from '../climate/params.js';
-import { runEnsemble, type EnsembleResult, type EnsembleThreads } from '../ensemble/index.js';
+import { runEnsemble, type EnsembleResult } from '../ensemble/index.js';
 import { cumulativeToNetZero } from '../metrics/cumulative-to-net-zero.js';
 import { quantilesInPlace } from '../numerics/quantiles.js';
 import type { Pathway } from '../pathway.js';
@@ -26,8 +26,6 @@ export interface AssessOptions {
   /** Warming levels, K, for prob_peak_above_<t> and the median crossing years. */
   thresholds: number[];
   baseline: [number, number];
-  /** Worker threads shared by the batch's ensembles. */
-  threads?: EnsembleThreads;
 }
 
 /** One scenario's row of a batch summary: the figures planners classify scenarios by. */
@@ -80,7 +78,8 @@ export async function assessScenario(
     thresholds: options.thresholds,
     baseline: options.baseline,
     keepMembers: true,
-    ...(options.threads ? { threads: options.threads } : {}),
+    // One thread per scenario: a batch spreads scenarios, not members, over the cores.
+    workers: 1,
   });
   const { peakK, peakYear, warming2100K } = memberFigures(result);
   const percentiles = (values: Float64Array) => {

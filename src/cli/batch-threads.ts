@@ -1,7 +1,7 @@
 import { Worker } from 'node:worker_threads';
 import type { AssessOptions } from '../batch/assess-scenario.js';
 import { runBatch, type BatchOutcome } from '../batch/run-batch.js';
-import { ensembleTable, workerThreadsAvailable, type EnsembleTable } from '../ensemble/index.js';
+import { ensembleTable, type EnsembleTable } from '../ensemble/index.js';
 import type { IamcScenario } from '../io/iamc-table.js';
 import type { LoadPathwayOptions } from '../io/load-pathway.js';
 import { batchScenario } from './batch-scenario.js';
@@ -12,7 +12,7 @@ export interface BatchWorkerRequest {
   scenario: IamcScenario;
   /** How the scenario is read (splice), as the calling thread would read it. */
   load: LoadPathwayOptions;
-  options: Omit<AssessOptions, 'threads'>;
+  options: AssessOptions;
   /** Whether to send back the yearly table (for `--out-dir`). */
   yearly: boolean;
 }
@@ -41,12 +41,12 @@ export async function runBatchThreads(
   scenarios: IamcScenario[],
   from: number,
   to: number,
-  options: Omit<AssessOptions, 'threads'> & { load: LoadPathwayOptions; threads: number; onProgress?: (done: number, total: number) => void; onYearly?: OnYearly },
+  options: AssessOptions & { load: LoadPathwayOptions; threads: number; onProgress?: (done: number, total: number) => void; onYearly?: OnYearly },
 ): Promise<BatchOutcome> {
   const { load, threads, onProgress, onYearly, ...assess } = options;
   const count = to - from;
   const size = Math.min(threads, count);
-  if (!workerThreadsAvailable() || size <= 1) {
+  if (!compiled() || size <= 1) {
     const items = scenarios.slice(from, to).map((s, i) => batchScenario(s, from + i, load));
     return runBatch(items, {
       ...assess,
@@ -84,4 +84,12 @@ export async function runBatchThreads(
   }
   replies.sort((a, b) => a.index - b.index);
   return { rows: replies.flatMap((r) => r.outcome.rows), errors: replies.flatMap((r) => r.outcome.errors) };
+}
+
+/**
+ * True when this module is the compiled JavaScript in dist/, beside the compiled batch-worker.js;
+ * under vitest or another TypeScript loader it is a .ts file and the scenarios run in this thread.
+ */
+function compiled(): boolean {
+  return import.meta.url.endsWith('.js');
 }
