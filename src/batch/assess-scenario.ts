@@ -78,8 +78,6 @@ export async function assessScenario(
     thresholds: options.thresholds,
     baseline: options.baseline,
     keepMembers: true,
-    // One thread per scenario: a batch spreads scenarios, not members, over the cores.
-    workers: 1,
   });
   const { peakK, peakYear, warming2100K } = memberFigures(result);
   const percentiles = (values: Float64Array) => {
