@@ -64,13 +64,13 @@ describe('warmcast batch', () => {
     const r = await runCli(['batch', 'table.csv', ...SETTINGS, '--out', 'summary.csv'], dir);
     expect(r.code).toBe(3);
     expect(r.err).toContain('1 of 3 scenarios failed');
-    expect(r.err).toContain('table.csv:9: column "Unit": model "Model A", scenario "Slow", variable "Emissions|CH4": must be a unit known for Emissions|CH4');
+    expect(r.err).toContain('table.csv:16: column "Unit": model "Model A", scenario "Slow", variable "Emissions|CH4": must be a unit known for Emissions|CH4');
     const summary = readFileSync(join(dir, 'summary.csv'), 'utf8').trim().split('\n');
     expect(summary).toHaveLength(3);
     expect(summary[0].split(',').slice(0, 3)).toEqual(['model', 'scenario', 'category']);
     const errors = readFileSync(join(dir, 'summary.errors.csv'), 'utf8').trim().split('\n');
     expect(errors[0]).toBe('model,scenario,file,sheet,row,column,variable,code,problem');
-    expect(errors[1]).toMatch(/^Model A,Slow,.*table\.csv,,9,Unit,Emissions\|CH4,input\.iamc-unit,/);
+    expect(errors[1]).toMatch(/^Model A,Slow,.*table\.csv,,16,Unit,Emissions\|CH4,input\.iamc-unit,/);
   });
 
   it('reads the same table as .xlsx (long layout) and as .csv (wide) to the same summary, and writes .xlsx and trajectories', async () => {
@@ -128,7 +128,7 @@ describe('--scenario and check TABLE', () => {
     expect(r.code).toBe(2);
     expect(r.out).toContain('scenario table: IAMC wide layout, 3 scenarios from 2 models');
     expect(r.out).toMatch(/scenario "Quick", model "Model B"\n.*\n  gives: co2 \(Emissions\|CO2\|Energy and Industrial Processes \+ Emissions\|CO2\|AFOLU\); ch4 \(Emissions\|CH4\); n2o \(Emissions\|N2O\)/);
-    expect(r.out).toMatch(/  filled: aerosol: /);
+    expect(r.out).toMatch(/  filled: solar: /);
     expect(r.out).toContain('1 of 3 scenarios have problems (listed above); the others can be run');
   });
 });

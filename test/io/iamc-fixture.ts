@@ -17,7 +17,7 @@ export const FIXTURE_YEARS = [2020, 2030, 2040, 2050, 2060, 2070, 2080, 2090, 21
 
 /**
  * An invented scenario: CO2 (in Mt CO2/yr, split into its two sectors when `sectors`), CH4 (Mt),
- * N2O (kt), SO2 (Mt), declining from 2020 levels by `cut` (0 = flat, 1 = to zero by 2100), plus an
+ * N2O (kt), the aerosol and ozone precursors (Mt), F-gases (Mt CO2-equiv), declining from 2020 levels by `cut` (0 = flat, 1 = to zero by 2100), plus an
  * R5 region row that must be skipped.
  */
 export function inventedScenario(model: string, scenario: string, cut: number, options: { sectors?: boolean } = {}): FixtureRow[] {
@@ -34,6 +34,13 @@ export function inventedScenario(model: string, scenario: string, cut: number, o
   rows.push(row('Emissions|CH4', 'Mt CH4/yr', path(380, 150)));
   rows.push(row('Emissions|N2O', 'kt N2O/yr', path(10_500, 6_000)));
   rows.push(row('Emissions|Sulfur', 'Mt SO2/yr', path(80, 10)));
+  rows.push(row('Emissions|BC', 'Mt BC/yr', path(7, 2)));
+  rows.push(row('Emissions|OC', 'Mt OC/yr', path(30, 12)));
+  rows.push(row('Emissions|NH3', 'Mt NH3/yr', path(60, 55)));
+  rows.push(row('Emissions|NOx', 'Mt NO2/yr', path(110, 35)));
+  rows.push(row('Emissions|CO', 'Mt CO/yr', path(800, 300)));
+  rows.push(row('Emissions|VOC', 'Mt VOC/yr', path(180, 90)));
+  rows.push(row('Emissions|F-Gases', 'Mt CO2-equiv/yr', path(1_500, 400)));
   rows.push(row('Primary Energy', 'EJ/yr', path(600, 500)));
   rows.push(row('Emissions|CO2', 'Mt CO2/yr', path(15_000, 0), 'R5ASIA'));
   return rows;

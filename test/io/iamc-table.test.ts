@@ -73,12 +73,12 @@ describe('readIamcTable', () => {
     expect(slow.parsed).toBeUndefined();
     expect(slow.problems).toHaveLength(1);
     const p = slow.problems[0];
-    expect(p).toMatchObject({ file: 'table.csv', line: 9, column: 'Unit', model: 'Model A', scenario: 'Slow', variable: 'Emissions|CH4', code: 'input.iamc-unit', value: 'Mt CH4-equiv' });
+    expect(p).toMatchObject({ file: 'table.csv', line: 16, column: 'Unit', model: 'Model A', scenario: 'Slow', variable: 'Emissions|CH4', code: 'input.iamc-unit', value: 'Mt CH4-equiv' });
     expect(p.expected).toContain('Mt CH4/yr');
     // The other scenarios are still read.
     expect(table.scenarios[0].parsed).toBeDefined();
     expect(new InputError(slow.problems).message).toBe(
-      'table.csv:9: column "Unit": model "Model A", scenario "Slow", variable "Emissions|CH4": must be a unit known for Emissions|CH4 (got "Mt CH4-equiv"; expected one of kt CH4/yr, Mt CH4/yr, Gt CH4/yr)',
+      'table.csv:16: column "Unit": model "Model A", scenario "Slow", variable "Emissions|CH4": must be a unit known for Emissions|CH4 (got "Mt CH4-equiv"; expected one of kt CH4/yr, Mt CH4/yr, Gt CH4/yr)',
     );
   });
 
@@ -97,7 +97,7 @@ describe('readIamcTable', () => {
     // 41,000 written in a Gt CO2/yr row: 41,000 Gt CO2/yr is far above any plausible rate.
     const gt = rows.map((r) => (r.scenario === 'Slow' && r.variable === 'Emissions|CO2' && r.region === 'World' ? { ...r, unit: 'Gt CO2/yr' } : r));
     const p = fromCsv(wideCsv(gt)).scenarios[1].problems[0];
-    expect(p).toMatchObject({ code: 'input.out-of-range', line: 8, column: '2020', variable: 'Emissions|CO2' });
+    expect(p).toMatchObject({ code: 'input.out-of-range', line: 15, column: '2020', variable: 'Emissions|CO2' });
   });
 
   it('refuses a near-present World total far from today\'s: Gt values under a Mt unit (a factor 1000)', () => {
@@ -105,7 +105,7 @@ describe('readIamcTable', () => {
     const slip = rows.map((r) => (r.scenario === 'Slow' && r.variable === 'Emissions|CO2' && r.region === 'World' ? { ...r, values: Object.fromEntries(Object.entries(r.values).map(([y, v]) => [y, v === null ? null : v / 1000])) } : r));
     const p = fromCsv(wideCsv(slip)).scenarios[1].problems;
     expect(p.map((x) => x.code)).toEqual(['input.iamc-implausible-total']);
-    expect(p[0]).toMatchObject({ line: 8, column: '2020', variable: 'Emissions|CO2' });
+    expect(p[0]).toMatchObject({ line: 15, column: '2020', variable: 'Emissions|CO2' });
     expect(p[0].message).toContain('is 0.041 Gt CO2/yr in 2020 once converted from "Mt CO2/yr"');
   });
 
