@@ -109,7 +109,7 @@ const ODEX_MEMBERS = 100;
 const f2x = forcingOfDoubling('ar6');
 const odex = await timed(() => {
   for (let i = 0; i < ODEX_MEMBERS; i++) {
-    const f = Float64Array.from({ length: n }, (_, k) => (p.forcing2xWm2[i] / f2x) * forcing.byAgent.co2[k] + p.aerosolScale[i] * forcing.byAgent.aerosol[k] + (total[k] - forcing.byAgent.co2[k] - forcing.byAgent.aerosol[k]));
+    const f = Float64Array.from({ length: n }, (_, k) => (p.forcing2xWm2[i] / f2x) * forcing.byAgent.co2[k] + p.aerosolScale[i] * forcing.aerosol[k] + (total[k] - forcing.byAgent.co2[k] - forcing.aerosol[k]));
     energyBalance(params(i), f, 'odex');
   }
 });
@@ -122,8 +122,8 @@ const task: MemberTask = {
   sampling: AR6_SAMPLING,
   co2Formula: 'ar6',
   co2Wm2: a.co2,
-  aerosolWm2: a.aerosol,
-  otherWm2: a.ch4.map((v, k) => v + a.n2o[k] + a.other[k] + a.solar[k] + a.volcanic[k]),
+  aerosolWm2: forcing.aerosol,
+  otherWm2: total.map((v, k) => v - a.co2[k] - forcing.aerosol[k]),
   baselineFrom: options.baseline[0] - pathway.years[0],
   baselineTo: options.baseline[1] - pathway.years[0],
 };

@@ -1,101 +1,59 @@
 /**
- * Builds `pathways/history.csv`: the annual record, 1750-2024, that every run starts from (pre-industrial
- * equilibrium in 1750) and that future pathways are spliced onto. Columns: global-mean CO2 (ppm), CH4
- * and N2O (ppb), and prescribed effective radiative forcing (ERF, W m-2 relative to 1750) for aerosols,
- * other agents, the Sun and volcanoes.
+ * Builds `pathways/history.csv`, the annual record 1750-2024 that every run starts from (pre-industrial
+ * equilibrium in 1750) and that future pathways are spliced onto, from the bundled IPCC AR6 WG1
+ * Annex III effective radiative forcing (pathways/records/ar6-erf-1750-2019.csv; Smith et al. 2021,
+ * CC-BY 4.0) and the observed greenhouse-gas concentrations below.
  *
- * How it is built:
- * - Gases: anchor tables (year -> value) interpolated onto every year with a monotone cubic (Steffen
- *   1990, A&A 239, 443): the curve passes through every anchor and never overshoots between two, so
- *   growth rates stay smooth and no spurious dip or bump appears. Before the instrumental records the
- *   anchors are the Law Dome ice-core spline (MacFarling Meure et al. 2006), pinned to the AR6 1750
- *   values and, at the join, to the first instrumental value by a correction that ramps linearly in time.
- * - Aerosol and other forcing: anchor tables (mostly from memory of assessment figures) interpolated the
- *   same way; "other" is the sum of six component tables.
- * - Solar and volcanic forcing: built from a table of solar cycles and a table of eruptions, evaluated
- *   monthly and averaged over each calendar year.
+ * What it writes, year by year:
+ * - CO2 (ppm), CH4 and N2O (ppb): the observed annual means of the instrumental records (Mauna Loa CO2
+ *   from 1959, NOAA global means of CO2 from 1979, CH4 from 1984, N2O from 2001). Before each record
+ *   starts, the concentration that gives AR6's ERF of that gas through warmcast's AR6 formulas
+ *   (src/forcing), found by inverting the three formulas together: AR6's own record in ppm. (An
+ *   ice-core spline read directly, Law Dome, puts CO2 forcing up to 0.054 W m-2 away from AR6's in
+ *   1808, as AR6 follows its own merged reconstruction; the issue's tolerance is 0.03.)
+ * - Every other agent as its own column (W m-2): AR6's best estimate, 1750-2019, as in the record, and
+ *   2020-2024 by a rule per agent (EXTENSION_RULES below). Volcanic and solar keep AR6's convention:
+ *   relative to long pre-industrial means, so volcanic forcing is positive between eruptions.
  *
- * Every value carries its origin beside it: "seen" = read in (a copy of) the published data file named;
- * "REFERENCES.md" = the project's page of published values, with its status; "from memory" = recalled,
- * unverified; "derived" = computed here from the others. Values are approximate; see pathways/README.md.
- *
- * Usage: node dist/scripts/build-history.js [output.csv]   (default: pathways/history.csv under the
- * current directory). Deterministic: the same source always writes the same bytes.
+ * The output is deterministic; test/scripts/build-history.test.ts checks that it reproduces the
+ * bundled file, and test/reference/ar6-erf-history.test.ts that the history's forcing by agent equals
+ * the record's. Usage: node dist/scripts/build-history.js [records-folder] [output.csv]
+ * (defaults: pathways/records and pathways/history.csv under the current directory).
  */
-import { writeFileSync } from 'node:fs';
-import { resolve } from 'node:path';
+import { readFileSync, writeFileSync } from 'node:fs';
+import { join, resolve } from 'node:path';
+import { pathToFileURL } from 'node:url';
+import { ch4ErfAr6 } from '../src/forcing/ch4.js';
+import { co2ErfAr6 } from '../src/forcing/co2.js';
+import { PREINDUSTRIAL } from '../src/forcing/constants.js';
+import { n2oErfAr6 } from '../src/forcing/n2o.js';
+import { findRoot } from '../src/numerics/find-root.js';
 
-/** A (year, value) pair; the year is a calendar year, the value that year's annual mean. */
-type Anchor = readonly [year: number, value: number];
+/** A (year, value) pair of an annual-mean record. */
+type Annual = readonly [year: number, value: number];
 
 const FIRST_YEAR = 1750;
+const LAST_AR6_YEAR = 2019;
 const LAST_YEAR = 2024;
 
 // ---------------------------------------------------------------------------------------------------
-// Gases before the instrumental records: Law Dome, Antarctica, 20-year smoothing spline.
-// MacFarling Meure et al. 2006, GRL 33, L14810, data file law2006 (CO2 in ppm; CH4 in ppb on the
-// NOAA04 scale; N2O in ppb). All values: seen (copy of the data file, annual spline columns).
-// ---------------------------------------------------------------------------------------------------
-
-/** Law Dome CO2 spline, ppm, read every 10 years (signal well above the ~1 ppm spline noise). */
-const LAW_DOME_CO2: readonly Anchor[] = [
-  [1750, 276.8], [1760, 276.5], [1770, 277.3], [1780, 278.2], [1790, 280.0],
-  [1800, 282.6], [1810, 284.2], [1820, 283.3], [1830, 283.9], [1840, 284.0],
-  [1850, 286.8], [1860, 286.1], [1870, 287.9], [1880, 289.8], [1890, 293.0],
-  [1900, 296.1], [1910, 299.3], [1920, 303.4], [1930, 306.6], [1940, 310.5],
-  [1950, 311.2], [1955, 313.5],
-];
-/** Law Dome CO2 spline in 1959, ppm (seen); used only to pin the join with Mauna Loa. */
-const LAW_DOME_CO2_1959 = 315.7;
-
-/** Law Dome CH4 spline (NOAA04 scale), ppb, every 10 years. */
-const LAW_DOME_CH4: readonly Anchor[] = [
-  [1750, 705.3], [1760, 708.5], [1770, 722.8], [1780, 726.9], [1790, 727.1],
-  [1800, 735.5], [1810, 744.2], [1820, 748.5], [1830, 763.9], [1840, 775.2],
-  [1850, 793.3], [1860, 795.8], [1870, 817.5], [1880, 836.6], [1890, 852.0],
-  [1900, 875.6], [1910, 923.6], [1920, 969.0], [1930, 1023.5], [1940, 1075.7],
-  [1950, 1117.3], [1960, 1220.3], [1970, 1357.6], [1980, 1513.6],
-];
-/** Law Dome CH4 spline in 1984, ppb (seen); used only to pin the join with the NOAA global mean. */
-const LAW_DOME_CH4_1984 = 1579.6;
-
-/**
- * Law Dome N2O spline, ppb. Read every 25 years before 1950: the ice-core precision (6.5 ppb, 1 sigma,
- * per the data file) makes decadal wiggles of +/-2 ppb in the spline noise rather than signal.
- */
-const LAW_DOME_N2O: readonly Anchor[] = [
-  [1750, 271.2], [1775, 273.1], [1800, 272.6], [1825, 274.1], [1850, 270.4],
-  [1875, 274.7], [1900, 277.2], [1925, 284.2], [1950, 287.7], [1960, 292.3],
-  [1970, 295.2], [1980, 302.6], [1990, 307.7], [2000, 315.4],
-];
-/** Law Dome N2O spline in 2001, ppb (seen); used only to pin the join with the NOAA global mean. */
-const LAW_DOME_N2O_2001 = 316.2;
-
-/** AR6 WG1 1750 concentrations (REFERENCES.md, status M✓: reproduce AR6's 1750-2019 ERF). */
-const AR6_1750 = { co2Ppm: 278.3, ch4Ppb: 729.2, n2oPpb: 270.1 } as const;
-
-// ---------------------------------------------------------------------------------------------------
-// Gases from the instrumental records.
+// Observed concentrations (annual means), the series the history held before this script read AR6.
 // ---------------------------------------------------------------------------------------------------
 
 /**
  * Mauna Loa CO2 annual means, ppm, 1959-1978 (NOAA GML / Scripps, co2_annmean_mlo, WMO X2019 scale;
  * seen). Used as the global mean before the NOAA global series starts: over 1979-1981 the two differ by
- * -0.15 to +0.01 ppm (derived from the two files). REFERENCES.md lists 1959 as 315.97 (an older file
- * version); this version reads 315.98.
+ * -0.15 to +0.01 ppm.
  */
-const MAUNA_LOA_CO2: readonly Anchor[] = [
+const MAUNA_LOA_CO2: readonly Annual[] = [
   [1959, 315.98], [1960, 316.91], [1961, 317.64], [1962, 318.45], [1963, 318.99],
   [1964, 319.62], [1965, 320.04], [1966, 321.37], [1967, 322.18], [1968, 323.05],
   [1969, 324.62], [1970, 325.68], [1971, 326.32], [1972, 327.46], [1973, 329.68],
   [1974, 330.19], [1975, 331.13], [1976, 332.03], [1977, 333.84], [1978, 335.41],
 ];
 
-/**
- * NOAA GML global marine-surface CO2 annual means, ppm, 1979-2024 (co2_annmean_gl; seen). The 2019
- * value, 410.07, matches AR6's 410.1 (REFERENCES.md). The last year is preliminary in NOAA's file.
- */
-const NOAA_GLOBAL_CO2: readonly Anchor[] = [
+/** NOAA GML global marine-surface CO2 annual means, ppm, 1979-2024 (co2_annmean_gl; seen; 2024 preliminary). */
+const NOAA_GLOBAL_CO2: readonly Annual[] = [
   [1979, 336.86], [1980, 338.91], [1981, 340.11], [1982, 340.85], [1983, 342.53],
   [1984, 344.07], [1985, 345.54], [1986, 346.97], [1987, 348.68], [1988, 351.16],
   [1989, 352.79], [1990, 354.06], [1991, 355.40], [1992, 356.09], [1993, 356.83],
@@ -108,11 +66,8 @@ const NOAA_GLOBAL_CO2: readonly Anchor[] = [
   [2024, 422.80],
 ];
 
-/**
- * NOAA GML global CH4 annual means, ppb, 1984-2023 (ch4_annmean_gl; seen), then 2024 from memory
- * (about 1930, +/-3 ppb). The 2019 value, 1866.58, matches AR6's 1866.3 (REFERENCES.md) within 0.3 ppb.
- */
-const NOAA_GLOBAL_CH4: readonly Anchor[] = [
+/** NOAA GML global CH4 annual means, ppb, 1984-2023 (ch4_annmean_gl; seen), then 2024 from memory (about 1930, +/-3 ppb). */
+const NOAA_GLOBAL_CH4: readonly Annual[] = [
   [1984, 1644.84], [1985, 1657.29], [1986, 1670.09], [1987, 1682.70], [1988, 1693.21],
   [1989, 1704.52], [1990, 1714.47], [1991, 1724.76], [1992, 1735.48], [1993, 1736.48],
   [1994, 1742.05], [1995, 1748.88], [1996, 1751.30], [1997, 1754.51], [1998, 1765.53],
@@ -124,11 +79,8 @@ const NOAA_GLOBAL_CH4: readonly Anchor[] = [
   [2024, 1930.0], // from memory
 ];
 
-/**
- * NOAA GML global N2O annual means, ppb, 2001-2023 (n2o_annmean_gl; seen), then 2024 from memory
- * (about 337.8, +/-0.3 ppb). The 2019 value, 331.88, sits 0.22 ppb below AR6's multi-network 332.1.
- */
-const NOAA_GLOBAL_N2O: readonly Anchor[] = [
+/** NOAA GML global N2O annual means, ppb, 2001-2023 (n2o_annmean_gl; seen), then 2024 from memory (about 337.8, +/-0.3 ppb). */
+const NOAA_GLOBAL_N2O: readonly Annual[] = [
   [2001, 316.36], [2002, 316.94], [2003, 317.63], [2004, 318.26], [2005, 318.91],
   [2006, 319.82], [2007, 320.44], [2008, 321.50], [2009, 322.27], [2010, 323.19],
   [2011, 324.21], [2012, 325.05], [2013, 325.94], [2014, 327.09], [2015, 328.17],
@@ -138,419 +90,206 @@ const NOAA_GLOBAL_N2O: readonly Anchor[] = [
 ];
 
 // ---------------------------------------------------------------------------------------------------
-// Aerosol ERF (aerosol-radiation + aerosol-cloud interactions), W m-2 relative to 1750.
+// The prescribed agents: AR6 record column and the rule that carries it from 2019 to 2024.
 // ---------------------------------------------------------------------------------------------------
 
-const AEROSOL_WM2: readonly Anchor[] = [
-  [1750, 0.0], // by definition
-  [1800, -0.02], // from memory: early biomass and coal burning, small
-  [1850, -0.10], // from memory
-  [1875, -0.18], // from memory
-  [1900, -0.35], // from memory (assessment time series give about -0.3 to -0.4)
-  [1920, -0.45], // from memory
-  [1940, -0.55], // from memory
-  [1950, -0.65], // from memory
-  [1960, -0.85], // from memory: rapid post-war growth of SO2 emissions
-  [1970, -1.05], // from memory
-  [1980, -1.20], // from memory
-  [1990, -1.27], // from memory
-  [2000, -1.30], // from memory
-  [2010, -1.30], // REFERENCES.md (C/M✓): AR6 -1.3 [-2.0 to -0.6] for 1750 to 2005-2014, placed mid-period
-  [2015, -1.22], // from memory: falling SO2 emissions, mainly East Asia
-  [2019, -1.10], // from memory: AR6 2019 value, about -1.1 (not in REFERENCES.md)
-  [2024, -1.00], // from memory: continued SO2 cuts, incl. the 2020 shipping-fuel sulphur limit
+/** How an agent is carried from the record's last year (2019) to 2024. */
+type ExtensionRule =
+  | { kind: 'trend'; years: readonly [number, number] }
+  | { kind: 'ch4-ratio' }
+  | { kind: 'activity'; relativeTo2019: readonly number[] }
+  | { kind: 'cycle-repeat'; period: number }
+  | { kind: 'mean'; years: readonly [number, number] };
+
+/** Output column, record column and extension rule of each prescribed agent, in output order. */
+const PRESCRIBED: readonly { column: string; record: string; rule: ExtensionRule; says: string }[] = [
+  { column: 'other_ghg_wm2', record: 'other_wmghg', rule: { kind: 'trend', years: [2010, 2019] }, says: 'least-squares trend of 2010-2019 continued from the 2019 value' },
+  { column: 'ozone_wm2', record: 'o3', rule: { kind: 'trend', years: [2010, 2019] }, says: 'least-squares trend of 2010-2019 continued from the 2019 value' },
+  { column: 'strat_h2o_wm2', record: 'h2o_stratospheric', rule: { kind: 'ch4-ratio' }, says: 'AR6\'s fixed ratio to the CH4 ERF (0.05 / 0.544 in every year of the record), applied to the CH4 ERF of the observed CH4' },
+  {
+    column: 'contrails_wm2', record: 'contrails',
+    // Global air traffic relative to 2019: about 0.56, 0.66, 0.84, 0.96, 1.03 (from memory: pandemic and recovery).
+    rule: { kind: 'activity', relativeTo2019: [0.56, 0.66, 0.84, 0.96, 1.03] },
+    says: 'the 2019 value times air traffic relative to 2019: 0.56, 0.66, 0.84, 0.96, 1.03 for 2020-2024 (from memory)',
+  },
+  { column: 'aerosol_ari_wm2', record: 'aerosol-radiation_interactions', rule: { kind: 'trend', years: [2010, 2019] }, says: 'least-squares trend of 2010-2019 continued from the 2019 value' },
+  { column: 'aerosol_aci_wm2', record: 'aerosol-cloud_interactions', rule: { kind: 'trend', years: [2010, 2019] }, says: 'least-squares trend of 2010-2019 continued from the 2019 value' },
+  { column: 'bc_snow_wm2', record: 'bc_on_snow', rule: { kind: 'trend', years: [2010, 2019] }, says: 'least-squares trend of 2010-2019 continued from the 2019 value' },
+  { column: 'land_use_wm2', record: 'land_use', rule: { kind: 'trend', years: [2010, 2019] }, says: 'least-squares trend of 2010-2019 continued from the 2019 value' },
+  // Solar cycle 24 ran from the minimum of late 2008 to that of late 2019 (from memory), so 2020-2024
+  // repeat 2009-2013; cycle 25 has been stronger (from memory), so 2022-2024 are likely low by a few hundredths.
+  { column: 'solar_wm2', record: 'solar', rule: { kind: 'cycle-repeat', period: 11 }, says: 'solar cycle 24 repeated: 2020-2024 take the values of 2009-2013, 11 years (one cycle, minimum to minimum) earlier' },
+  { column: 'volcanic_wm2', record: 'volcanic', rule: { kind: 'mean', years: [2010, 2019] }, says: 'held at the 2010-2019 mean, the background of a decade of small eruptions (the record\'s 2019 repeats 2018)' },
 ];
 
-// ---------------------------------------------------------------------------------------------------
-// Other anthropogenic ERF, W m-2 relative to 1750: the sum of the six components below.
-// AR6 2019 values: halogenated 0.41, ozone 0.47 (REFERENCES.md, C/M✓); stratospheric water vapour
-// 0.05, black carbon on snow 0.08, contrails and aviation cirrus 0.06, land use -0.20 (from memory).
-// ---------------------------------------------------------------------------------------------------
+/** The ERF record as columns of numbers by header name, with its years. */
+interface ErfRecord {
+  years: number[];
+  columns: Record<string, number[]>;
+}
 
-/** Halogenated gases (CFCs, HCFCs, HFCs, PFCs, SF6, ...). */
-const HALOGENATED_WM2: readonly Anchor[] = [
-  [1750, 0.0], // by definition (natural CH3Cl/CH3Br are part of the 1750 state)
-  [1930, 0.0], // from memory: industrial halocarbons begin in the 1930s
-  [1950, 0.008], // from memory
-  [1960, 0.025], // from memory
-  [1970, 0.08], // from memory
-  [1980, 0.19], // from memory
-  [1990, 0.30], // from memory
-  [2000, 0.35], // from memory: CFC growth stops (Montreal Protocol), HCFC/HFC growth continues
-  [2010, 0.38], // from memory
-  [2019, 0.41], // REFERENCES.md (C/M✓): AR6 1750-2019
-  [2024, 0.42], // from memory: HFC rise slightly exceeds CFC decline
-];
+/** Parses the AR6 ERF CSV (a header row, then one row of numbers per year). */
+export function parseErfRecord(text: string): ErfRecord {
+  const lines = text.trim().split(/\r?\n/);
+  const header = lines[0].split(',');
+  const columns: Record<string, number[]> = Object.fromEntries(header.map((h) => [h, [] as number[]]));
+  for (const line of lines.slice(1)) {
+    const cells = line.split(',').map(Number);
+    header.forEach((h, j) => columns[h].push(cells[j]));
+  }
+  return { years: columns[header[0]], columns };
+}
 
-/** Tropospheric plus stratospheric ozone. */
-const OZONE_WM2: readonly Anchor[] = [
-  [1750, 0.0], // by definition
-  [1850, 0.03], // from memory
-  [1900, 0.07], // from memory
-  [1920, 0.10], // from memory
-  [1950, 0.17], // from memory
-  [1960, 0.22], // from memory
-  [1970, 0.29], // from memory
-  [1980, 0.35], // from memory
-  [1990, 0.38], // from memory (stratospheric depletion offsets part of the tropospheric rise)
-  [2000, 0.41], // from memory
-  [2010, 0.44], // from memory
-  [2019, 0.47], // REFERENCES.md (C/M✓): AR6 1750-2019
-  [2024, 0.48], // from memory
-];
+/** One annual series of the record, 1750-2019, checked to be complete. */
+function recordSeries(record: ErfRecord, name: string): number[] {
+  const series = record.columns[name];
+  if (!series) throw new Error(`the ERF record has no column ${name}`);
+  if (record.years[0] !== FIRST_YEAR || record.years[record.years.length - 1] !== LAST_AR6_YEAR || record.years.length !== LAST_AR6_YEAR - FIRST_YEAR + 1) {
+    throw new Error(`the ERF record must run from ${FIRST_YEAR} to ${LAST_AR6_YEAR}, one row a year`);
+  }
+  return series;
+}
 
 /**
- * Stratospheric water vapour from methane oxidation: 0.05 W m-2 in 2019 (AR6, from memory), taken
- * proportional to the CH4 rise since 1750 (common practice, no source).
+ * Concentrations (ppm, ppb, ppb) whose ERF through warmcast's AR6 formulas equals the given CO2, CH4 and
+ * N2O ERF: each formula solved for its own gas with the others held, repeated until nothing moves
+ * (the band overlaps couple the three only weakly, so a few rounds settle to 1e-9).
  */
-const STRAT_WATER_VAPOUR_2019_WM2 = 0.05;
-const CH4_2019_PPB = 1866.3; // REFERENCES.md (AR6 2019)
+export function concentrationsForErf(co2Wm2: number, ch4Wm2: number, n2oWm2: number): [number, number, number] {
+  let c: number = PREINDUSTRIAL.co2Ppm;
+  let m: number = PREINDUSTRIAL.ch4Ppb;
+  let n: number = PREINDUSTRIAL.n2oPpb;
+  for (let round = 0; round < 20; round++) {
+    const before = [c, m, n];
+    n = findRoot((x) => n2oErfAr6(x, c, m) - n2oWm2, 200, 400, 1e-10);
+    c = findRoot((x) => co2ErfAr6(x, n) - co2Wm2, 200, 600, 1e-10);
+    m = findRoot((x) => ch4ErfAr6(x, n) - ch4Wm2, 400, 3000, 1e-10);
+    if (Math.abs(c - before[0]) < 1e-9 && Math.abs(m - before[1]) < 1e-9 && Math.abs(n - before[2]) < 1e-9) break;
+  }
+  return [c, m, n];
+}
 
-/** Land-use surface albedo (and irrigation). */
-const LAND_USE_WM2: readonly Anchor[] = [
-  [1750, 0.0], // by definition
-  [1800, -0.02], // from memory
-  [1850, -0.05], // from memory
-  [1900, -0.10], // from memory
-  [1950, -0.15], // from memory
-  [1980, -0.18], // from memory
-  [2000, -0.19], // from memory
-  [2019, -0.20], // from memory: AR6 -0.20 [-0.30 to -0.10]
-  [2024, -0.20], // from memory
-];
+/** A year's observed value from a table of annual means, or undefined before the table starts. */
+function observed(table: readonly Annual[], year: number): number | undefined {
+  return table.find(([y]) => y === year)?.[1];
+}
 
-/** Black carbon deposited on snow and ice. */
-const BC_ON_SNOW_WM2: readonly Anchor[] = [
-  [1750, 0.0], // by definition
-  [1850, 0.01], // from memory
-  [1900, 0.03], // from memory
-  [1950, 0.05], // from memory
-  [1970, 0.07], // from memory
-  [1990, 0.08], // from memory
-  [2019, 0.08], // from memory: AR6 0.08 [0.00 to 0.18]
-  [2024, 0.08], // from memory
-];
-
-/** Contrails and aviation-induced cirrus. */
-const CONTRAILS_WM2: readonly Anchor[] = [
-  [1750, 0.0], // by definition
-  [1940, 0.0], // from memory: negligible before jet aviation
-  [1950, 0.002], // from memory
-  [1960, 0.006], // from memory
-  [1970, 0.015], // from memory
-  [1980, 0.022], // from memory
-  [1990, 0.030], // from memory
-  [2000, 0.040], // from memory
-  [2010, 0.048], // from memory
-  [2019, 0.057], // from memory: AR6 0.057 [0.019 to 0.098]
-  [2020, 0.032], // from memory: air traffic roughly halved in the pandemic year
-  [2021, 0.038], // from memory
-  [2022, 0.048], // from memory
-  [2023, 0.055], // from memory
-  [2024, 0.059], // from memory
-];
-
-// ---------------------------------------------------------------------------------------------------
-// Solar ERF: slow background plus an 11-year cycle, W m-2.
-// ---------------------------------------------------------------------------------------------------
-
-/**
- * Slow change of the cycle-mean solar ERF relative to the cycle-mean level around 1750 (from memory:
- * the shape of irradiance reconstructions, a Dalton-minimum dip near 1810 and a rise of about
- * 0.05 W m-2, i.e. about 0.3 W m-2 of total irradiance, through the 19th and 20th centuries).
- */
-const SOLAR_BACKGROUND_WM2: readonly Anchor[] = [
-  [1750, 0.0], // by definition
-  [1790, 0.005], // from memory
-  [1810, -0.025], // from memory: Dalton minimum
-  [1830, -0.01], // from memory
-  [1850, 0.0], // from memory
-  [1880, 0.0], // from memory
-  [1900, 0.005], // from memory
-  [1925, 0.025], // from memory
-  [1950, 0.04], // from memory
-  [1960, 0.05], // from memory: strong cycles of the mid-20th century
-  [1985, 0.05], // from memory
-  [2000, 0.045], // from memory
-  [2024, 0.035], // from memory: weaker cycles 23-24
-];
-
-/**
- * Solar-cycle minima, decimal years (from memory: the sunspot-cycle record; 1744.0 before cycle 1 is
- * less certain, 2030.9 after cycle 25 is assumed as 11 years on). Cycle k runs from minimum k to k+1.
- */
-const SOLAR_MINIMA_YEARS: readonly number[] = [
-  1744.0, 1755.2, 1766.5, 1775.5, 1784.7, 1798.3, 1810.6, 1823.3, 1833.9, 1843.5, 1855.9, 1867.2,
-  1878.9, 1889.6, 1901.7, 1913.6, 1923.6, 1933.8, 1944.2, 1954.3, 1964.9, 1976.5, 1986.8, 1996.4,
-  2008.9, 2019.9, 2030.9,
-];
-
-/**
- * Peak smoothed sunspot number of each cycle (version-2 numbers, from memory), cycles 0 to 25. Cycle 0
- * (140) is a guess; cycle 25 (160) is its approximate peak in 2024-2025.
- */
-const CYCLE_PEAK_SUNSPOTS: readonly number[] = [
-  140, 144, 193, 264, 235, 82, 81, 119, 245, 220, 186, 234, 124, 147, 107, 176, 130, 199, 219, 285, 157,
-  233, 213, 180, 116, 160,
-];
-
-/**
- * Half-amplitude of the cycle's annual-mean ERF for a cycle peaking at 180 sunspots: 0.05 W m-2 (from
- * memory). A direct conversion of a ~0.9 W m-2 annual-mean irradiance swing, ERF = dTSI (1 - 0.29)/4,
- * would give about 0.08, so this amplitude is uncertain by a factor of about 1.5.
- */
-const SOLAR_HALF_AMPLITUDE_WM2 = 0.05;
-const REFERENCE_CYCLE_SUNSPOTS = 180;
-
-// ---------------------------------------------------------------------------------------------------
-// Volcanic ERF: negative spikes relative to a quiescent stratosphere, W m-2.
-// ---------------------------------------------------------------------------------------------------
-
-/**
- * Major eruptions: date (decimal year) and the peak annual-mean ERF of the aerosol cloud. All values
- * from memory (ice-core sulphate and optical-depth reconstructions scaled at about -20 W m-2 per unit
- * stratospheric optical depth); uncertain by about +/-30% for the 20th century and +/-50% before.
- * Smaller eruptions, and those after 2000 (together about -0.1 to -0.2 W m-2), are left out.
- */
-const ERUPTIONS: readonly {
-  name: string;
-  dateYear: number;
-  peakWm2: number;
-  /** Rise and decay time constants, years, where they differ from the defaults below. */
-  riseYears?: number;
-  decayYears?: number;
-}[] = [
-  // Laki, a high-latitude fissure eruption: its aerosol stayed mostly in the upper troposphere and
-  // lowermost stratosphere and was removed within months (from memory), so it rises and decays faster.
-  { name: 'Laki', dateYear: 1783.45, peakWm2: -1.0, riseYears: 0.1, decayYears: 0.4 },
-  { name: 'unidentified 1809', dateYear: 1809.0, peakWm2: -2.0 },
-  { name: 'Tambora', dateYear: 1815.28, peakWm2: -4.5 },
-  { name: 'Babuyan Claro', dateYear: 1831.5, peakWm2: -1.0 },
-  { name: 'Cosigüina', dateYear: 1835.05, peakWm2: -1.3 },
-  { name: 'Krakatau', dateYear: 1883.65, peakWm2: -2.0 },
-  { name: 'Santa María', dateYear: 1902.8, peakWm2: -1.2 }, // with Pelée and Soufrière, 1902
-  { name: 'Novarupta', dateYear: 1912.43, peakWm2: -0.6 },
-  { name: 'Agung', dateYear: 1963.2, peakWm2: -1.3 },
-  { name: 'Fuego', dateYear: 1974.8, peakWm2: -0.4 },
-  { name: 'El Chichón', dateYear: 1982.28, peakWm2: -1.5 },
-  { name: 'Pinatubo', dateYear: 1991.45, peakWm2: -2.5 }, // annual mean of 1992
-];
-
-/**
- * Time shape of a stratospheric aerosol cloud: rises with a 6-month time constant, decays with a
- * 12-month e-folding time, so it peaks about 6.6 months after the eruption (from memory: Pinatubo's
- * global optical depth peaked about 6-9 months after the eruption and decayed with an e-folding time
- * of about a year). The shape itself is common practice, no source.
- */
-const VOLCANIC_RISE_YEARS = 0.5;
-const VOLCANIC_DECAY_YEARS = 1.0;
-
-// ---------------------------------------------------------------------------------------------------
-// Construction.
-// ---------------------------------------------------------------------------------------------------
-
-/**
- * Corrects raw anchors so that they hit `startTarget` at `start.year` and `end.target` at `end.year`:
- * an additive offset (or, with `mode: 'ratio'`, a factor) that varies linearly in time between the two
- * pins. Used to put the Antarctic ice-core record onto the global-mean level at both ends.
- */
-function pinBetween(
-  raw: readonly Anchor[],
-  start: { year: number; raw: number; target: number },
-  end: { year: number; raw: number; target: number },
-  mode: 'offset' | 'ratio',
-): Anchor[] {
-  const correction = (pin: { raw: number; target: number }) =>
-    mode === 'offset' ? pin.target - pin.raw : pin.target / pin.raw;
-  const c0 = correction(start);
-  const c1 = correction(end);
-  return raw.map(([year, value]) => {
-    const c = c0 + ((c1 - c0) * (year - start.year)) / (end.year - start.year);
-    return [year, mode === 'offset' ? value + c : value * c] as const;
+/** Least-squares slope of a series over the given years (inclusive), per year. */
+function trendPerYear(years: number[], values: number[], [from, to]: readonly [number, number]): number {
+  const xs: number[] = [];
+  const ys: number[] = [];
+  years.forEach((y, i) => {
+    if (y >= from && y <= to) {
+      xs.push(y);
+      ys.push(values[i]);
+    }
   });
-}
-
-/**
- * Monotone cubic interpolation (Steffen 1990, A&A 239, 443, eqs. 11 and 13 for the interior slopes;
- * one-sided secant slopes at the two ends) of `anchors` at each of `years`.
- * Throws if the anchors are not strictly increasing in year or do not cover `years`.
- */
-function interpolateMonotone(anchors: readonly Anchor[], years: readonly number[]): Float64Array {
-  const n = anchors.length;
-  const x = anchors.map((a) => a[0]);
-  const y = anchors.map((a) => a[1]);
-  for (let i = 1; i < n; i++) {
-    if (!(x[i] > x[i - 1])) throw new Error(`anchor years must increase strictly, got ${x[i - 1]} then ${x[i]}`);
-  }
-  const h = new Float64Array(n - 1);
-  const s = new Float64Array(n - 1);
-  for (let i = 0; i < n - 1; i++) {
-    h[i] = x[i + 1] - x[i];
-    s[i] = (y[i + 1] - y[i]) / h[i];
-  }
-  const slope = new Float64Array(n);
-  slope[0] = s[0];
-  slope[n - 1] = s[n - 2];
-  for (let i = 1; i < n - 1; i++) {
-    const p = (s[i - 1] * h[i] + s[i] * h[i - 1]) / (h[i - 1] + h[i]);
-    slope[i] =
-      (Math.sign(s[i - 1]) + Math.sign(s[i])) * Math.min(Math.abs(s[i - 1]), Math.abs(s[i]), 0.5 * Math.abs(p));
-  }
-  const out = new Float64Array(years.length);
-  let i = 0;
-  years.forEach((t, k) => {
-    if (t < x[0] || t > x[n - 1]) throw new Error(`year ${t} lies outside the anchors ${x[0]}-${x[n - 1]}`);
-    while (i < n - 2 && t > x[i + 1]) i++;
-    const u = (t - x[i]) / h[i];
-    const u2 = u * u;
-    const u3 = u2 * u;
-    out[k] =
-      (2 * u3 - 3 * u2 + 1) * y[i] +
-      (u3 - 2 * u2 + u) * h[i] * slope[i] +
-      (-2 * u3 + 3 * u2) * y[i + 1] +
-      (u3 - u2) * h[i] * slope[i + 1];
+  const mx = xs.reduce((a, b) => a + b, 0) / xs.length;
+  const my = ys.reduce((a, b) => a + b, 0) / ys.length;
+  let sxy = 0;
+  let sxx = 0;
+  xs.forEach((x, i) => {
+    sxy += (x - mx) * (ys[i] - my);
+    sxx += (x - mx) * (x - mx);
   });
-  return out;
+  return sxy / sxx;
 }
 
-/** Mean of `f` over calendar year `year`, from its values at the middle of each month. */
-function calendarYearMean(f: (t: number) => number, year: number): number {
-  let sum = 0;
-  for (let month = 0; month < 12; month++) sum += f(year + (month + 0.5) / 12);
-  return sum / 12;
-}
-
-/** The 11-year cycle part of solar ERF at decimal year `t`, W m-2 (zero mean over each cycle). */
-function solarCycleWm2(t: number): number {
-  const minima = SOLAR_MINIMA_YEARS;
-  const k = minima.findIndex((m, j) => j < minima.length - 1 && t >= m && t < minima[j + 1]);
-  if (k < 0) throw new Error(`year ${t} lies outside the solar-cycle table`);
-  const phase = (t - minima[k]) / (minima[k + 1] - minima[k]);
-  // The amplitude moves linearly between cycle midpoints so that the series stays continuous at minima.
-  const midpoint = (j: number) => 0.5 * (minima[j] + minima[j + 1]);
-  const last = CYCLE_PEAK_SUNSPOTS.length - 1;
-  const j0 = t < midpoint(k) ? Math.max(k - 1, 0) : k;
-  const j1 = Math.min(j0 + 1, last);
-  const w = j1 === j0 ? 0 : Math.min(Math.max((t - midpoint(j0)) / (midpoint(j1) - midpoint(j0)), 0), 1);
-  const sunspots = CYCLE_PEAK_SUNSPOTS[j0] * (1 - w) + CYCLE_PEAK_SUNSPOTS[j1] * w;
-  return -SOLAR_HALF_AMPLITUDE_WM2 * (sunspots / REFERENCE_CYCLE_SUNSPOTS) * Math.cos(2 * Math.PI * phase);
-}
-
-/** Unscaled aerosol-cloud shape, `dt` years after an eruption, for the given time constants (years). */
-function volcanicShape(dt: number, riseYears: number, decayYears: number): number {
-  if (dt <= 0) return 0;
-  return (1 - Math.exp(-dt / riseYears)) * Math.exp(-dt / decayYears);
-}
-
-/** Annual-mean volcanic ERF for each of `years`, each eruption scaled to its peak annual mean. */
-function volcanicWm2(years: readonly number[]): Float64Array {
-  const out = new Float64Array(years.length);
-  for (const eruption of ERUPTIONS) {
-    const rise = eruption.riseYears ?? VOLCANIC_RISE_YEARS;
-    const decay = eruption.decayYears ?? VOLCANIC_DECAY_YEARS;
-    const shape = years.map((year) => calendarYearMean((t) => volcanicShape(t - eruption.dateYear, rise, decay), year));
-    const scale = eruption.peakWm2 / Math.max(...shape);
-    shape.forEach((v, k) => (out[k] += scale * v));
+/** The values of one prescribed agent for 2020-2024 by its rule. */
+function extend(rule: ExtensionRule, years: number[], values: number[], ch4ErfByYear: (year: number) => number, ch4Record2019: number): number[] {
+  const last = values[values.length - 1];
+  const out: number[] = [];
+  for (let year = LAST_AR6_YEAR + 1; year <= LAST_YEAR; year++) {
+    const ahead = year - LAST_AR6_YEAR;
+    switch (rule.kind) {
+      case 'trend':
+        out.push(last + ahead * trendPerYear(years, values, rule.years));
+        break;
+      case 'ch4-ratio':
+        out.push((last / ch4Record2019) * ch4ErfByYear(year));
+        break;
+      case 'activity':
+        out.push(last * rule.relativeTo2019[ahead - 1]);
+        break;
+      case 'cycle-repeat':
+        out.push(values[years.indexOf(year - rule.period)]);
+        break;
+      case 'mean': {
+        const [from, to] = rule.years;
+        const inSpan = values.filter((_, i) => years[i] >= from && years[i] <= to);
+        out.push(inSpan.reduce((a, b) => a + b, 0) / inSpan.length);
+        break;
+      }
+    }
   }
   return out;
 }
 
-/** Formats a number with fixed decimals, without a "-0.000" for values that round to zero. */
-function fixed(value: number, decimals: number): string {
-  const text = value.toFixed(decimals);
-  return Number(text) === 0 ? (0).toFixed(decimals) : text;
-}
+/** The extension rule of each prescribed column, as the README states it. */
+export const EXTENSION_RULES: Readonly<Record<string, string>> = Object.fromEntries(PRESCRIBED.map((p) => [p.column, p.says]));
 
-function buildHistory(): { header: string[]; columns: [string, Float64Array, number][]; years: number[] } {
-  const years = Array.from({ length: LAST_YEAR - FIRST_YEAR + 1 }, (_, k) => FIRST_YEAR + k);
+/**
+ * The text of history.csv built from the AR6 ERF record's CSV text.
+ *
+ * @param erfCsv contents of pathways/records/ar6-erf-1750-2019.csv
+ * @returns the CSV text (comment lines, header, one row per year 1750-2024)
+ */
+export function buildHistoryCsv(erfCsv: string): string {
+  const record = parseErfRecord(erfCsv);
+  const years = record.years;
+  const co2Erf = recordSeries(record, 'co2');
+  const ch4Erf = recordSeries(record, 'ch4');
+  const n2oErf = recordSeries(record, 'n2o');
 
-  const co2Anchors = [
-    ...pinBetween(
-      LAW_DOME_CO2,
-      { year: 1750, raw: LAW_DOME_CO2[0][1], target: AR6_1750.co2Ppm },
-      { year: 1959, raw: LAW_DOME_CO2_1959, target: MAUNA_LOA_CO2[0][1] },
-      'offset',
-    ),
-    ...MAUNA_LOA_CO2,
-    ...NOAA_GLOBAL_CO2,
-  ];
-  // CH4 is not well mixed between the hemispheres: the Antarctic record sits a few per cent below the
-  // global mean, so it is scaled (not shifted) onto the global level.
-  const ch4Anchors = [
-    ...pinBetween(
-      LAW_DOME_CH4,
-      { year: 1750, raw: LAW_DOME_CH4[0][1], target: AR6_1750.ch4Ppb },
-      { year: 1984, raw: LAW_DOME_CH4_1984, target: NOAA_GLOBAL_CH4[0][1] },
-      'ratio',
-    ),
-    ...NOAA_GLOBAL_CH4,
-  ];
-  const n2oAnchors = [
-    ...pinBetween(
-      LAW_DOME_N2O,
-      { year: 1750, raw: LAW_DOME_N2O[0][1], target: AR6_1750.n2oPpb },
-      { year: 2001, raw: LAW_DOME_N2O_2001, target: NOAA_GLOBAL_N2O[0][1] },
-      'offset',
-    ),
-    ...NOAA_GLOBAL_N2O,
-  ];
+  const rows: string[] = [];
+  const ch4ErfOfYear = new Map<number, number>();
+  const gases = new Map<number, [number, number, number]>();
+  for (let year = FIRST_YEAR; year <= LAST_YEAR; year++) {
+    const i = year - FIRST_YEAR;
+    const implied = year <= LAST_AR6_YEAR ? concentrationsForErf(co2Erf[i], ch4Erf[i], n2oErf[i]) : undefined;
+    const c = observed(year < 1979 ? MAUNA_LOA_CO2 : NOAA_GLOBAL_CO2, year) ?? implied![0];
+    const m = observed(NOAA_GLOBAL_CH4, year) ?? implied![1];
+    const n = observed(NOAA_GLOBAL_N2O, year) ?? implied![2];
+    // The columns are written to 2 decimals; the forcing a run computes is that of the written values.
+    const written: [number, number, number] = [round(c, 2), round(m, 2), round(n, 2)];
+    gases.set(year, written);
+    ch4ErfOfYear.set(year, ch4ErfAr6(written[1], written[2]));
+  }
 
-  const co2 = interpolateMonotone(co2Anchors, years);
-  const ch4 = interpolateMonotone(ch4Anchors, years);
-  const n2o = interpolateMonotone(n2oAnchors, years);
-  const aerosol = interpolateMonotone(AEROSOL_WM2, years);
+  const prescribed = PRESCRIBED.map(({ record: name, rule }) => {
+    const values = recordSeries(record, name);
+    return [...values, ...extend(rule, years, values, (y) => ch4ErfOfYear.get(y)!, ch4Erf[ch4Erf.length - 1])];
+  });
 
-  const components = [HALOGENATED_WM2, OZONE_WM2, LAND_USE_WM2, BC_ON_SNOW_WM2, CONTRAILS_WM2].map((table) =>
-    interpolateMonotone(table, years),
-  );
-  const other = years.map(
-    (_, k) =>
-      components.reduce((sum, series) => sum + series[k], 0) +
-      (STRAT_WATER_VAPOUR_2019_WM2 * (ch4[k] - AR6_1750.ch4Ppb)) / (CH4_2019_PPB - AR6_1750.ch4Ppb),
-  );
-
-  const solarBackground = interpolateMonotone(SOLAR_BACKGROUND_WM2, years);
-  const solar = years.map((year, k) => solarBackground[k] + calendarYearMean(solarCycleWm2, year));
-  const volcanic = volcanicWm2(years);
-
-  const header = [
+  for (let year = FIRST_YEAR; year <= LAST_YEAR; year++) {
+    const i = year - FIRST_YEAR;
+    const [c, m, n] = gases.get(year)!;
+    rows.push([year, c.toFixed(2), m.toFixed(2), n.toFixed(2), ...prescribed.map((v) => v[i].toFixed(5))].join(','));
+  }
+  const header = ['year', 'co2_ppm', 'ch4_ppb', 'n2o_ppb', ...PRESCRIBED.map((p) => p.column)].join(',');
+  return [
     '# name: Historical record 1750-2024',
-    '# description: Annual global-mean CO2, CH4 and N2O and prescribed effective radiative forcing (W m-2 relative to 1750), the record every run starts from and future pathways are spliced onto.',
-    '# note: Values are approximate. Gases: Law Dome ice-core spline (MacFarling Meure et al. 2006) pinned to AR6 1750 values, then Mauna Loa and NOAA global annual means. Forcing: anchor values recalled from assessment figures (IPCC AR6), interpolated. Origins and uncertainties of every anchor: pathways/README.md.',
-    '# built-by: scripts/build-history.ts',
-    '# rows: calendar-year means; solar_wm2 is relative to the cycle-mean level around 1750; volcanic_wm2 is relative to a quiescent stratosphere (zero between eruptions).',
-  ];
-  const columns: [string, Float64Array, number][] = [
-    ['co2_ppm', co2, 2],
-    ['ch4_ppb', ch4, 2],
-    ['n2o_ppb', n2o, 2],
-    ['aerosol_wm2', aerosol, 4],
-    ['other_wm2', Float64Array.from(other), 4],
-    ['solar_wm2', Float64Array.from(solar), 4],
-    ['volcanic_wm2', volcanic, 4],
-  ];
-  return { header, columns, years };
+    '# description: Annual global-mean CO2, CH4 and N2O and prescribed effective radiative forcing by agent (W m-2), the record every run starts from and future pathways are spliced onto.',
+    '# note: Forcing 1750-2019 is the IPCC AR6 WG1 Annex III best estimate (Smith et al. 2021, CC-BY 4.0; pathways/records/); 2020-2024 extended by a rule per agent. Solar and volcanic forcing are relative to long pre-industrial means as in AR6 (volcanic is positive between eruptions). Gases: observed annual means (Mauna Loa from 1959, NOAA global CO2 from 1979, CH4 from 1984, N2O from 2001), before that the concentrations that give AR6\'s gas ERF. Written by scripts/build-history.ts; origins of every column: pathways/README.md.',
+    header,
+    ...rows,
+    '',
+  ].join('\n');
 }
 
-function toCsv({ header, columns, years }: ReturnType<typeof buildHistory>): string {
-  const lines = [...header, ['year', ...columns.map(([name]) => name)].join(',')];
-  years.forEach((year, k) => {
-    lines.push([String(year), ...columns.map(([, series, decimals]) => fixed(series[k], decimals))].join(','));
-  });
-  return lines.join('\n') + '\n';
+function round(x: number, digits: number): number {
+  const f = 10 ** digits;
+  return Math.round(x * f) / f;
 }
 
-const history = buildHistory();
-const outPath = resolve(process.argv[2] ?? 'pathways/history.csv');
-writeFileSync(outPath, toCsv(history));
-
-const volcanic = history.columns.find(([name]) => name === 'volcanic_wm2')![1];
-const meanVolcanic = volcanic.reduce((a, b) => a + b, 0) / volcanic.length;
-console.log(`wrote ${outPath}: ${history.years.length} years, ${history.years[0]}-${history.years.at(-1)}`);
-for (const year of [1750, 1850, 1900, 1950, 1992, 2019, 2024]) {
-  const k = year - FIRST_YEAR;
-  console.log(`${year} ` + history.columns.map(([name, series, d]) => `${name}=${fixed(series[k], d)}`).join(' '));
+function main(argv: string[]): void {
+  const recordsDir = resolve(argv[0] ?? join('pathways', 'records'));
+  const output = resolve(argv[1] ?? join('pathways', 'history.csv'));
+  const text = buildHistoryCsv(readFileSync(join(recordsDir, 'ar6-erf-1750-2019.csv'), 'utf8'));
+  writeFileSync(output, text);
+  console.log(`wrote ${output} (${text.split('\n').length - 5} years)`);
 }
-console.log(`mean volcanic_wm2 over the record: ${meanVolcanic.toFixed(4)} W m-2`);
 
-// Try: npx tsc -p tsconfig.build.json && node dist/scripts/build-history.js
+if (process.argv[1] && import.meta.url === pathToFileURL(resolve(process.argv[1])).href) main(process.argv.slice(2));
+
+// Try: npx tsc -p tsconfig.build.json && node dist/scripts/build-history.js && git diff --stat pathways/history.csv

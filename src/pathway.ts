@@ -7,14 +7,40 @@
 export const CONCENTRATION_COLUMNS = ['co2_ppm', 'ch4_ppb', 'n2o_ppb'] as const;
 /** Emission columns: CO2 in Gt CO2 per year, CH4 in Mt CH4 per year, N2O in Mt N2O per year. */
 export const EMISSION_COLUMNS = ['co2_gtco2', 'ch4_mt', 'n2o_mt'] as const;
-/** Prescribed effective radiative forcing columns, W m-2. */
-export const FORCING_COLUMNS = ['aerosol_wm2', 'other_wm2', 'solar_wm2', 'volcanic_wm2'] as const;
+/**
+ * Prescribed effective radiative forcing columns, one per non-gas agent of FORCING_AGENTS
+ * (src/forcing/agents.ts), W m-2: anthropogenic agents relative to 1750, solar and volcanic relative
+ * to their long pre-industrial means as in IPCC AR6 (volcanic is positive between eruptions).
+ */
+export const AGENT_FORCING_COLUMNS = [
+  'other_ghg_wm2',
+  'ozone_wm2',
+  'strat_h2o_wm2',
+  'contrails_wm2',
+  'aerosol_ari_wm2',
+  'aerosol_aci_wm2',
+  'bc_snow_wm2',
+  'land_use_wm2',
+  'solar_wm2',
+  'volcanic_wm2',
+] as const;
+/**
+ * Lumped forcing columns still accepted in pathway files, W m-2: `aerosol_wm2` (aerosol-radiation
+ * plus aerosol-cloud interactions) and `other_wm2` (other greenhouse gases, ozone, stratospheric water
+ * vapour, contrails, black carbon on snow, land use). Reading a file splits them over their agents
+ * (splitLumpedForcing in src/forcing/lumped-forcing.ts).
+ */
+export const LUMPED_FORCING_COLUMNS = ['aerosol_wm2', 'other_wm2'] as const;
+/** Every prescribed forcing column a pathway may hold, W m-2. */
+export const FORCING_COLUMNS = [...AGENT_FORCING_COLUMNS, ...LUMPED_FORCING_COLUMNS] as const;
 /** Every data column a pathway file may hold, in canonical order. */
 export const PATHWAY_COLUMNS = [...CONCENTRATION_COLUMNS, ...EMISSION_COLUMNS, ...FORCING_COLUMNS] as const;
 
 export type ConcentrationColumn = (typeof CONCENTRATION_COLUMNS)[number];
 export type EmissionColumn = (typeof EMISSION_COLUMNS)[number];
 export type ForcingColumn = (typeof FORCING_COLUMNS)[number];
+export type AgentForcingColumn = (typeof AGENT_FORCING_COLUMNS)[number];
+export type LumpedForcingColumn = (typeof LUMPED_FORCING_COLUMNS)[number];
 export type PathwayColumn = (typeof PATHWAY_COLUMNS)[number];
 
 /** The three well-mixed gases and their emission/concentration column pair. */
@@ -33,10 +59,18 @@ export const COLUMN_UNITS: Record<PathwayColumn, string> = {
   co2_gtco2: 'Gt CO2 yr-1',
   ch4_mt: 'Mt CH4 yr-1',
   n2o_mt: 'Mt N2O yr-1',
-  aerosol_wm2: 'W m-2',
-  other_wm2: 'W m-2',
+  other_ghg_wm2: 'W m-2',
+  ozone_wm2: 'W m-2',
+  strat_h2o_wm2: 'W m-2',
+  contrails_wm2: 'W m-2',
+  aerosol_ari_wm2: 'W m-2',
+  aerosol_aci_wm2: 'W m-2',
+  bc_snow_wm2: 'W m-2',
+  land_use_wm2: 'W m-2',
   solar_wm2: 'W m-2',
   volcanic_wm2: 'W m-2',
+  aerosol_wm2: 'W m-2',
+  other_wm2: 'W m-2',
 };
 
 /** Where the values of a pathway came from, carried into every output. */

@@ -1,5 +1,5 @@
 import { ConfigError } from '../errors.js';
-import type { ForcingSeries } from '../forcing/agents.js';
+import { AEROSOL_AGENTS, FORCING_AGENTS, type ForcingSeries } from '../forcing/agents.js';
 import type { Co2Formula } from '../forcing/co2.js';
 import type { EnsembleConfig, EnsembleMemberParameters } from './ensemble-members.js';
 import { MEMBER_STREAM_SCHEME } from './member-generators.js';
@@ -166,7 +166,7 @@ function ensembleConfig(input: EnsembleInput, options: EnsembleOptions, sampling
     co2Formula: input.co2Formula ?? 'ar6',
     sampling,
     emissionDriven: c !== undefined,
-    inputChecksum: checksum([a.co2, a.ch4, a.n2o, a.aerosol, a.other, a.solar, a.volcanic, ...carbonSeries]),
+    inputChecksum: checksum([...FORCING_AGENTS.map((agent) => a[agent]), ...carbonSeries]),
   };
 }
 
@@ -174,15 +174,22 @@ function memberTask(input: EnsembleInput, config: EnsembleConfig): MemberTask {
   const a = input.forcing.byAgent;
   const n = config.yearCount;
   const otherWm2 = new Float64Array(n);
-  // Emission-driven members compute their own CO2, CH4 and N2O forcing.
-  if (input.carbon) for (let k = 0; k < n; k++) otherWm2[k] = a.other[k] + a.solar[k] + a.volcanic[k];
-  else for (let k = 0; k < n; k++) otherWm2[k] = a.ch4[k] + a.n2o[k] + a.other[k] + a.solar[k] + a.volcanic[k];
+  const aerosolWm2 = new Float64Array(n);
+  // Emission-driven members compute their own CO2, CH4 and N2O forcing; members scale CO2 and the aerosols.
+  const unscaled = FORCING_AGENTS.filter((agent) => agent !== 'co2' && !(AEROSOL_AGENTS as readonly string[]).includes(agent)
+    && !(input.carbon && (agent === 'ch4' || agent === 'n2o')));
+  for (let k = 0; k < n; k++) {
+    let sum = 0;
+    for (const agent of unscaled) sum += a[agent][k];
+    otherWm2[k] = sum;
+    aerosolWm2[k] = a.aerosol_ari[k] + a.aerosol_aci[k];
+  }
   return {
     seed: config.seed,
     sampling: config.sampling,
     co2Formula: config.co2Formula,
     co2Wm2: Float64Array.from(a.co2),
-    aerosolWm2: Float64Array.from(a.aerosol),
+    aerosolWm2,
     otherWm2,
     baselineFrom: config.baseline[0] - config.firstYear,
     baselineTo: config.baseline[1] - config.firstYear,

@@ -1,12 +1,35 @@
-import type { ForcingColumn } from '../pathway.js';
+import type { AgentForcingColumn, ForcingColumn } from '../pathway.js';
 import { ch4ErfAr6 } from './ch4.js';
 import { co2Forcing, forcingOfDoubling, type Co2Formula } from './co2.js';
 import { PREINDUSTRIAL } from './constants.js';
+import { LUMPED_PARTS, lumpedShare } from './lumped-forcing.js';
 import { n2oErfAr6 } from './n2o.js';
 
-/** Forcing agents reported separately in every output, in output order. */
-export const FORCING_AGENTS = ['co2', 'ch4', 'n2o', 'aerosol', 'other', 'solar', 'volcanic'] as const;
+/**
+ * Forcing agents reported separately in every output, in output order: the IPCC AR6 WG1 chapter 7
+ * categories (CO2, CH4, N2O, other well-mixed greenhouse gases, ozone, stratospheric water vapour
+ * from CH4, contrails and aviation-induced cirrus, aerosol-radiation and aerosol-cloud interactions,
+ * black carbon on snow, land use, solar, volcanic).
+ */
+export const FORCING_AGENTS = [
+  'co2', 'ch4', 'n2o', 'other_ghg', 'ozone', 'strat_h2o', 'contrails',
+  'aerosol_ari', 'aerosol_aci', 'bc_snow', 'land_use', 'solar', 'volcanic',
+] as const;
 export type ForcingAgent = (typeof FORCING_AGENTS)[number];
+
+/** Agents computed from concentrations by the gas formulas. */
+export const GAS_FORCING_AGENTS = ['co2', 'ch4', 'n2o'] as const;
+/** Agents given as prescribed forcing columns (`<agent>_wm2`), in FORCING_AGENTS order. */
+export const PRESCRIBED_FORCING_AGENTS = FORCING_AGENTS.filter(
+  (a): a is Exclude<ForcingAgent, (typeof GAS_FORCING_AGENTS)[number]> => !(GAS_FORCING_AGENTS as readonly string[]).includes(a),
+);
+/** The aerosol agents, whose sum is reported as `forcing_aerosol_wm2` and scaled by `aerosolScale`. */
+export const AEROSOL_AGENTS = ['aerosol_ari', 'aerosol_aci'] as const;
+
+/** The prescribed input column of a non-gas agent: `ozone` -> `ozone_wm2`. */
+export function agentColumn(agent: (typeof PRESCRIBED_FORCING_AGENTS)[number]): AgentForcingColumn {
+  return `${agent}_wm2`;
+}
 
 /** How greenhouse-gas forcing is computed. */
 export interface ForcingOptions {
@@ -17,7 +40,7 @@ export interface ForcingOptions {
    * doubling forcing (so ensembles can sample it); when undefined the formula stands as published.
    */
   forcing2xWm2?: number;
-  /** Multiplier on prescribed aerosol forcing (1 = as given). Ensembles sample it. */
+  /** Multiplier on prescribed aerosol forcing, both aerosol-radiation and aerosol-cloud parts (1 = as given). Ensembles sample it. */
   aerosolScale?: number;
 }
 
@@ -49,20 +72,26 @@ export interface ForcingInputs {
   co2Ppm?: Float64Array;
   ch4Ppb?: Float64Array;
   n2oPpb?: Float64Array;
-  /** Prescribed ERF series, W m-2, by column name; absent columns count as zero. */
+  /**
+   * Prescribed ERF series, W m-2, by column name (`<agent>_wm2`); absent columns count as zero. A
+   * lumped `aerosol_wm2` or `other_wm2` stands for its agents in the shares of lumpedShare.
+   */
   prescribed?: Partial<Record<ForcingColumn, Float64Array>>;
 }
 
 /** Forcing by agent and in total, W m-2, one value per year. */
 export interface ForcingSeries {
+  /** Sum over every agent. */
   total: Float64Array;
   byAgent: Record<ForcingAgent, Float64Array>;
+  /** Aerosol-radiation plus aerosol-cloud interactions (the `forcing_aerosol_wm2` output column). */
+  aerosol: Float64Array;
 }
 
 /**
  * Effective radiative forcing by agent for a pathway's annual series: CO2, CH4 and N2O from the AR6
- * formulas (Meinshausen et al. 2020 with AR6 adjustments, or CO2 by Myhre et al. 1998), prescribed
- * aerosol/other/solar/volcanic columns added as given (aerosol times `aerosolScale`).
+ * formulas (Meinshausen et al. 2020 with AR6 adjustments, or CO2 by Myhre et al. 1998), every other
+ * agent from its prescribed column as given (the two aerosol agents times `aerosolScale`).
  *
  * @param length number of years
  * @param inputs concentration and prescribed series, each of `length`
@@ -72,7 +101,6 @@ export interface ForcingSeries {
 export function forcingByAgent(length: number, inputs: ForcingInputs, options: ForcingOptions): ForcingSeries {
   const ghg = ghgForcingFunction(options);
   const byAgent = Object.fromEntries(FORCING_AGENTS.map((a) => [a, new Float64Array(length)])) as Record<ForcingAgent, Float64Array>;
-  const total = new Float64Array(length);
   const aerosolScale = options.aerosolScale ?? 1;
   const p = inputs.prescribed ?? {};
   for (let i = 0; i < length; i++) {
@@ -84,13 +112,30 @@ export function forcingByAgent(length: number, inputs: ForcingInputs, options: F
     byAgent.co2[i] = f.co2;
     byAgent.ch4[i] = f.ch4;
     byAgent.n2o[i] = f.n2o;
-    byAgent.aerosol[i] = p.aerosol_wm2 ? aerosolScale * p.aerosol_wm2[i] : 0;
-    byAgent.other[i] = p.other_wm2 ? p.other_wm2[i] : 0;
-    byAgent.solar[i] = p.solar_wm2 ? p.solar_wm2[i] : 0;
-    byAgent.volcanic[i] = p.volcanic_wm2 ? p.volcanic_wm2[i] : 0;
+  }
+  for (const agent of PRESCRIBED_FORCING_AGENTS) {
+    const out = byAgent[agent];
+    const column = agentColumn(agent);
+    const scale = (AEROSOL_AGENTS as readonly string[]).includes(agent) ? aerosolScale : 1;
+    const given = p[column];
+    if (given) {
+      for (let i = 0; i < length; i++) out[i] = scale * given[i];
+      continue;
+    }
+    for (const lumped of ['aerosol_wm2', 'other_wm2'] as const) {
+      const values = p[lumped];
+      if (!values || !LUMPED_PARTS[lumped].includes(column)) continue;
+      const share = scale * lumpedShare(lumped, column);
+      for (let i = 0; i < length; i++) out[i] = share * values[i];
+    }
+  }
+  const total = new Float64Array(length);
+  const aerosol = new Float64Array(length);
+  for (let i = 0; i < length; i++) {
     let sum = 0;
     for (const a of FORCING_AGENTS) sum += byAgent[a][i];
     total[i] = sum;
+    aerosol[i] = byAgent.aerosol_ari[i] + byAgent.aerosol_aci[i];
   }
-  return { total, byAgent };
+  return { total, byAgent, aerosol };
 }

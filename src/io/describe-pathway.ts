@@ -1,4 +1,5 @@
-import { COLUMN_UNITS, FORCING_COLUMNS, GASES, PATHWAY_COLUMNS, type Gas, type Pathway } from '../pathway.js';
+import { forcingColumnsNotGiven } from '../forcing/lumped-forcing.js';
+import { COLUMN_UNITS, GASES, PATHWAY_COLUMNS, type Gas, type Pathway } from '../pathway.js';
 import type { ParsedPathway } from './parse-pathway.js';
 import { describeTimeSteps, formatDecimalYear, isAnnualGrid } from './time-steps.js';
 
@@ -67,7 +68,7 @@ export function describePathway(parsed: ParsedPathway, pathway: Pathway): string
   if (missing.length > 0) {
     lines.push(`gases not given (held at pre-industrial): ${missing.map((g) => g.toUpperCase()).join(', ')}`);
   }
-  const zeroForcing = FORCING_COLUMNS.filter((c) => pathway.series[c] === undefined);
+  const zeroForcing = forcingColumnsNotGiven(pathway.series);
   if (zeroForcing.length > 0) lines.push(`forcing not given (taken as zero): ${zeroForcing.join(', ')}`);
   return lines;
 }

@@ -1,6 +1,7 @@
 import { existsSync, realpathSync } from 'node:fs';
 import { join } from 'node:path';
 import { InputError } from '../errors.js';
+import { splitLumpedForcing } from '../forcing/lumped-forcing.js';
 import type { Pathway } from '../pathway.js';
 import { bundledPathwayNames, bundledPathwaysDir, loadHistory } from './bundled-pathways.js';
 import { parsePathway, type ParsedPathway } from './parse-pathway.js';
@@ -61,9 +62,11 @@ export function pathwayFromParsed(
   if (source !== parsed.file || options.notes?.length) {
     annual = { ...annual, provenance: { ...annual.provenance, source, notes: [...(options.notes ?? []), ...annual.provenance.notes] } };
   }
-  let pathway = annual;
+  // Lumped aerosol_wm2 / other_wm2 become agent columns before the splice, so that the history's
+  // agent columns are replaced by the file's and not added to them.
+  let pathway = splitLumpedForcing(annual);
   if (options.splice !== false && !options.isHistory) {
-    pathway = spliceOntoHistory(annual, loadHistory(options.pathwaysDir ?? bundledPathwaysDir()));
+    pathway = spliceOntoHistory(pathway, loadHistory(options.pathwaysDir ?? bundledPathwaysDir()));
   }
   return { parsed, annual, pathway };
 }
@@ -71,7 +74,8 @@ export function pathwayFromParsed(
 /**
  * Reads a pathway for a run. `arg` is a file path or the name of a bundled pathway (`swift` or
  * `swift.csv` for `pathways/swift.csv`); an existing file wins over a bundled name. The file is read
- * (at most MAX_PATHWAY_BYTES, UTF-8), validated (parsePathway), put on the annual grid (toAnnual) and,
+ * (at most MAX_PATHWAY_BYTES, UTF-8), validated (parsePathway), put on the annual grid (toAnnual),
+ * its lumped `aerosol_wm2` and `other_wm2` split over their agents (splitLumpedForcing) and,
  * unless `splice: false`, spliced onto the bundled history (spliceOntoHistory) when it starts later
  * than the history. A bundled pathway's provenance source is `bundled:<name>`; a file's is its path.
  *

@@ -1,6 +1,7 @@
 import Papa from 'papaparse';
 import { InputError, type InputProblem } from '../errors.js';
-import { GASES, PATHWAY_COLUMNS, type Gas, type PathwayColumn } from '../pathway.js';
+import { LUMPED_PARTS } from '../forcing/lumped-forcing.js';
+import { GASES, LUMPED_FORCING_COLUMNS, PATHWAY_COLUMNS, type Gas, type PathwayColumn } from '../pathway.js';
 import { isoDateToYear } from './iso-date-year.js';
 import { nearestName } from './nearest-name.js';
 import { outOfBounds } from './value-bounds.js';
@@ -375,6 +376,21 @@ function readHeader(cells: string[], line: number, report: Report): CellRole[] {
         message: `must give ${gas.toUpperCase()} either as a concentration (${concentration}) or as emissions (${emission}), not both`,
         value: later.header,
         expected: `one column per gas: ${concentration} or ${emission}`,
+      });
+    }
+  }
+  for (const lumped of LUMPED_FORCING_COLUMNS) {
+    const whole = dataRoles.find((r) => r.column === lumped);
+    const part = dataRoles.find((r) => (LUMPED_PARTS[lumped] as readonly string[]).includes(r.column));
+    if (whole && part) {
+      const later = roles.indexOf(whole) > roles.indexOf(part) ? whole : part;
+      report({
+        code: 'input.forcing-twice',
+        line,
+        column: later.header,
+        message: `must give ${lumped} or its agent columns (${LUMPED_PARTS[lumped].join(', ')}), not both`,
+        value: later.header,
+        expected: `either ${lumped} alone or agent columns only`,
       });
     }
   }

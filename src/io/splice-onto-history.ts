@@ -1,4 +1,6 @@
 import { InputError } from '../errors.js';
+import { splitLumpedForcing } from '../forcing/lumped-forcing.js';
+import { NATURAL_BACKGROUND_WM2, NATURAL_BACKGROUND_YEARS } from '../forcing/natural-background.js';
 import {
   COLUMN_UNITS,
   CONCENTRATION_COLUMNS,
@@ -18,9 +20,10 @@ import {
  *   history's first year to the pathway's last year. A pathway that starts inside the history's span
  *   (say 1900) wins from its first year on.
  * - a column the pathway lacks continues from the history while the history covers it, and is then
- *   held at its year-H value; solar and volcanic forcing are held instead at the mean of the
- *   history's last 11 years (one solar cycle), so that the phase of the solar cycle or a recent
- *   eruption at the end of the record is not carried forward. Notes say which.
+ *   held at its year-H value; solar and volcanic forcing go instead linearly over 10 years to their
+ *   pre-industrial background, the 1850-1900 means of the IPCC AR6 series (NATURAL_BACKGROUND_WM2),
+ *   so that neither the phase of the solar cycle nor a quiet or eruptive end of the record is
+ *   carried forward, and the join makes no step. Notes say which.
  * - a gas the pathway gives in the other form than the history does (the pathway gives `co2_gtco2`,
  *   the history `co2_ppm`): both series are kept. The history's form holds the history's values
  *   before F and NaN from F on; the pathway's form is NaN before F. The carbon cycle joins the two,
@@ -37,6 +40,8 @@ import {
  *   file starts the year after it) by more than 2 % (concentrations) or 0.1 W m-2 (forcing) is noted
  *   with both values; the values are used as given.
  *
+ * A lumped `aerosol_wm2` or `other_wm2` in the pathway is first split over its agents
+ * (splitLumpedForcing), so that it replaces the history's agent columns rather than adding to them.
  * A pathway starting at or before the history's first year is returned as it is.
  *
  * @param future - the annual pathway read from a file
@@ -49,7 +54,10 @@ import {
  * s.provenance.spliceYear // 2025
  * s.provenance.notes // [..., 'spliced onto bundled history at 2025 (1750-2024 from history.csv)']
  */
-export function spliceOntoHistory(future: Pathway, history: Pathway): Pathway {
+export function spliceOntoHistory(unsplitFuture: Pathway, unsplitHistory: Pathway): Pathway {
+  // The file's lumped aerosol_wm2 / other_wm2 replace the history's agent columns, not add to them.
+  const future = splitLumpedForcing(unsplitFuture);
+  const history = splitLumpedForcing(unsplitHistory);
   const fy = future.years;
   const hy = history.years;
   const f0 = fy[0];
@@ -96,12 +104,14 @@ export function spliceOntoHistory(future: Pathway, history: Pathway): Pathway {
         out[i] = y < f0 && y <= hLast ? hs[y - h0] : NaN;
       }
     } else if (hs) {
-      const cyclic = CYCLE_MEAN_COLUMNS.includes(column);
-      (cyclic ? heldAtMean : held).push(column);
-      const level = cyclic ? tailMean(hs, HELD_MEAN_YEARS) : hs[hLast - h0];
+      const natural = naturalBackground(column);
+      (natural === undefined ? held : heldAtMean).push(column);
+      const last = hs[hLast - h0];
+      const level = natural ?? last;
       for (let i = 0; i < count; i++) {
         const y = years[i];
-        out[i] = y <= hLast ? hs[y - h0] : level;
+        const ramp = Math.min(1, (y - hLast) / NATURAL_BACKGROUND_RAMP_YEARS);
+        out[i] = y <= hLast ? hs[y - h0] : last + (level - last) * ramp;
       }
     }
     series[column] = out;
@@ -135,7 +145,13 @@ export function spliceOntoHistory(future: Pathway, history: Pathway): Pathway {
   } else {
     if (held.length > 0) notes.push(`${held.join(', ')} not in file: taken from history to ${hLast}, then held at the ${hLast} value`);
     if (heldAtMean.length > 0) {
-      notes.push(`${heldAtMean.join(', ')} not in file: taken from history to ${hLast}, then held at the mean of ${Math.max(h0, hLast - HELD_MEAN_YEARS + 1)}-${hLast}`);
+      const [from, to] = NATURAL_BACKGROUND_YEARS;
+      const levels = heldAtMean.map((c) => `${c} ${naturalBackground(c)!.toFixed(3)}`).join(', ');
+      const volcanic = heldAtMean.includes('volcanic_wm2')
+        ? '; volcanic forcing is relative to the long pre-industrial mean, so this stands for eruptions at the rate of those years, not a quiet stratosphere'
+        : '';
+      notes.push(`${heldAtMean.join(', ')} not in file: taken from history to ${hLast}, then ramped linearly over ${NATURAL_BACKGROUND_RAMP_YEARS} years `
+        + `(to ${hLast + NATURAL_BACKGROUND_RAMP_YEARS}) to the pre-industrial background, the ${from}-${to} mean of the IPCC AR6 series (${levels} W m-2${volcanic})`);
     }
   }
   if (backfilled.length > 0) {
@@ -200,10 +216,21 @@ function joinSteps(future: Pathway, history: Pathway): string[] {
     const size = isConcentration
       ? `${Math.abs(100 * step).toFixed(1)} % ${step > 0 ? 'higher' : 'lower'}; a step of more than ${100 * JOIN_STEP_RELATIVE} % is noted`
       : `${Math.abs(step).toFixed(3)} ${unit} ${step > 0 ? 'higher' : 'lower'}; a step of more than ${JOIN_STEP_FORCING_WM2} ${unit} is noted`;
-    notes.push(`${column} steps at the join: ${values} (${size})`);
+    notes.push(`${column} steps at the join: ${values} (${size})${CONVENTION_HINT[column] ?? ''}`);
   }
   return notes;
 }
+
+/**
+ * What a step in a natural forcing column most often means: a file written in another convention.
+ * IPCC AR6 (and the history) measure both from long pre-industrial means, so a quiet stratosphere
+ * reads about +0.2 W m-2, not 0 (pathways/records/README.md).
+ */
+const CONVENTION_HINT: Partial<Record<PathwayColumn, string>> = {
+  volcanic_wm2: '; the history follows IPCC AR6, where volcanic forcing is relative to the long pre-industrial mean: '
+    + `about +0.2 W m-2 in years without eruptions, ${NATURAL_BACKGROUND_WM2.volcanic_wm2.toFixed(3)} for eruptions at the 1850-1900 rate, not 0`,
+  solar_wm2: '; the history follows IPCC AR6, where solar forcing is relative to the Sun\'s long-term mean',
+};
 
 /** `2025-2029`, or `2025` for a single year. */
 function yearSpan(first: number, last: number): string {
@@ -219,17 +246,17 @@ function otherForm(column: PathwayColumn): PathwayColumn | undefined {
   return undefined;
 }
 
-/** Years averaged for a column held beyond the history: one 11-year solar cycle (Hathaway 2015, Living Rev. Sol. Phys. 12, 4: mean cycle length about 11 years; from memory). */
-const HELD_MEAN_YEARS = 11;
+/**
+ * Years over which solar and volcanic forcing go linearly from the history's last value to their
+ * background, so the join makes no step (a recent eruption or a solar maximum fades out). Common
+ * practice: CMIP7 ramps future stratospheric aerosol to its background over 9 years (Aubry et al.
+ * 2026, GMD 19, 3725; seen in the abstract); 10 here, about one solar cycle.
+ */
+const NATURAL_BACKGROUND_RAMP_YEARS = 10;
 
-/** Columns that vary in cycles or spikes and are continued at their recent mean, not their last value. */
-const CYCLE_MEAN_COLUMNS: readonly PathwayColumn[] = ['solar_wm2', 'volcanic_wm2'];
-
-function tailMean(values: Float64Array, years: number): number {
-  const n = Math.min(years, values.length);
-  let sum = 0;
-  for (let i = values.length - n; i < values.length; i++) sum += values[i];
-  return sum / n;
+/** The background a natural forcing column goes to beyond the history, or undefined for other columns. */
+function naturalBackground(column: PathwayColumn): number | undefined {
+  return column === 'solar_wm2' || column === 'volcanic_wm2' ? NATURAL_BACKGROUND_WM2[column] : undefined;
 }
 
 /** `bundled:history` -> `history.csv`; a path -> its last segment. */

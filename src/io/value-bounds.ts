@@ -81,17 +81,25 @@ export const VALUE_BOUNDS: Readonly<Record<PathwayColumn, ValueBounds>> = {
       'present total emissions are about 27 Mt N2O yr-1 (17 Tg N yr-1, Global N2O Budget; from memory); '
       + 'an emission rate cannot be negative; 200 is about 7 times present (common practice, no source)',
   },
-  // The four forcing bounds below are ours (common practice, no source): several times the widest
-  // value of each column in pathways/history.csv (aerosol -1.3 to 0, other -0.01 to 0.89, solar
-  // -0.07 to 0.13, volcanic -4.5 to 0 W m-2), wide enough for any scenario we know of, narrow enough
-  // that a value in the wrong unit or with a slipped sign or decimal point fails.
+  // The forcing bounds below are ours (common practice, no source): several times the widest value of
+  // each agent in pathways/history.csv (the IPCC AR6 ERF record; pathways/README.md gives the ranges),
+  // wide enough for any scenario we know of, narrow enough that a value in the wrong unit or with a
+  // slipped sign or decimal point fails.
+  other_ghg_wm2: agentBounds(-1, 5, 'an effective radiative forcing of halogenated and other minor greenhouse gases', 'at most 0.41 W m-2 in the history (2024); 5 W m-2 is over 10 times that'),
+  ozone_wm2: agentBounds(-2, 3, 'an ozone effective radiative forcing', 'at most 0.47 W m-2 in the history; 3 W m-2 is over 6 times that'),
+  strat_h2o_wm2: agentBounds(-0.5, 1, 'a stratospheric water-vapour effective radiative forcing', 'at most 0.05 W m-2 in the history'),
+  contrails_wm2: agentBounds(-0.5, 1, 'a contrail effective radiative forcing', 'at most 0.06 W m-2 in the history'),
+  aerosol_ari_wm2: agentBounds(-3, 1, 'an aerosol-radiation effective radiative forcing', 'as low as -0.41 W m-2 in the history; aerosols cool on balance'),
+  aerosol_aci_wm2: agentBounds(-4, 1, 'an aerosol-cloud effective radiative forcing', 'as low as -1.13 W m-2 in the history; aerosols cool on balance'),
+  bc_snow_wm2: agentBounds(-0.5, 1, 'a black-carbon-on-snow effective radiative forcing', 'at most 0.09 W m-2 in the history'),
+  land_use_wm2: agentBounds(-2, 1, 'a land-use effective radiative forcing', 'as low as -0.2 W m-2 in the history'),
   aerosol_wm2: {
     min: -5,
     max: 1,
     quantity: 'an aerosol effective radiative forcing',
     unit: 'W m-2',
     source:
-      'low end: about 4 times the strongest aerosol forcing in pathways/history.csv (-1.3 W m-2); high end: '
+      'low end: about 4 times the strongest aerosol forcing in pathways/history.csv (-1.5 W m-2, ari + aci); high end: '
       + 'aerosols cool on balance, and 1 W m-2 leaves room for a scenario dominated by absorbing aerosol '
       + '(common practice, no source)',
   },
@@ -101,7 +109,7 @@ export const VALUE_BOUNDS: Readonly<Record<PathwayColumn, ValueBounds>> = {
     quantity: 'an effective radiative forcing',
     unit: 'W m-2',
     source:
-      'the column collects every other agent (ozone, halocarbons, land use, contrails, ...), about 0.9 W m-2 at '
+      'the column collects every other agent (ozone, halocarbons, land use, contrails, ...), about 0.95 W m-2 at '
       + 'the end of pathways/history.csv; 10 W m-2 is more than 10 times that and above the ERF of 4 x CO2, '
       + 'and -5 W m-2 leaves room for a deliberate cooling scenario (common practice, no source)',
   },
@@ -111,7 +119,7 @@ export const VALUE_BOUNDS: Readonly<Record<PathwayColumn, ValueBounds>> = {
     quantity: 'a solar effective radiative forcing anomaly (not an irradiance)',
     unit: 'W m-2',
     source:
-      'the solar column of pathways/history.csv spans -0.07 to 0.13 W m-2; 3 W m-2 is over 20 times that, '
+      'the solar column of pathways/history.csv spans -0.07 to 0.15 W m-2 (IPCC AR6); 3 W m-2 is over 20 times that, '
       + 'room for any grand-minimum or -maximum scenario, and rejects a total irradiance (about 1361 W m-2) '
       + '(common practice, no source)',
   },
@@ -121,11 +129,10 @@ export const VALUE_BOUNDS: Readonly<Record<PathwayColumn, ValueBounds>> = {
     quantity: 'a volcanic effective radiative forcing',
     unit: 'W m-2',
     source:
-      'low end: the strongest eruption year in pathways/history.csv is -4.5 W m-2 (its origin is in '
-      + 'pathways/README.md); -15 W m-2 is more than 3 times that, room for eruptions larger than any in that '
-      + 'record; '
-      + 'high end: volcanic forcing only cools, but some records measure it from a mean background, which '
-      + 'makes quiet years a few tenths positive (common practice, no source)',
+      'low end: the strongest eruption year in pathways/history.csv (Tambora, 1816, in the IPCC AR6 record) '
+      + 'is -4.8 W m-2; -15 W m-2 is 3 times that, room for eruptions larger than any in that record; '
+      + 'high end: volcanic forcing is measured from the long pre-industrial mean (IPCC AR6), which makes quiet '
+      + 'years about +0.2 W m-2 (common practice, no source)',
   },
 };
 
@@ -140,4 +147,9 @@ export function outOfBounds(column: PathwayColumn, value: number): { message: st
   const b = VALUE_BOUNDS[column];
   if (value >= b.min && value <= b.max) return undefined;
   return { message: `must be a plausible value for ${b.quantity}`, expected: `a value from ${b.min} to ${b.max} ${b.unit}` };
+}
+
+/** Bounds of a per-agent forcing column (common practice, no source; `why` names the history's extreme). */
+function agentBounds(min: number, max: number, quantity: string, why: string): ValueBounds {
+  return { min, max, quantity, unit: 'W m-2', source: `${why} (IPCC AR6 record in pathways/history.csv); the bounds leave room for any scenario we know of (common practice, no source)` };
 }

@@ -5,8 +5,12 @@ import { ConfigError } from '../errors.js';
 import { FORCING_AGENTS, forcingByAgent, type ForcingAgent, type ForcingOptions } from '../forcing/agents.js';
 import { PREINDUSTRIAL } from '../forcing/constants.js';
 import { DEFAULT_TOLERANCES, type OdeTolerances } from '../numerics/integrate-steps.js';
-import { EMISSION_COLUMNS, FORCING_COLUMNS, GASES, type Pathway, type PathwayProvenance } from '../pathway.js';
+import { forcingColumnsNotGiven } from '../forcing/lumped-forcing.js';
+import { EMISSION_COLUMNS, GASES, type Pathway, type PathwayProvenance } from '../pathway.js';
+import { energyBudget, energyBudgetNote } from './energy-budget.js';
 import { startFromRestNote } from './start-from-rest-note.js';
+
+type BudgetColumns = Parameters<typeof energyBudget>[1];
 
 /** Options of {@link projectPathway}. */
 export interface ProjectionOptions {
@@ -37,6 +41,7 @@ export const PROJECTION_COLUMNS = [
   'ch4_ppb',
   'n2o_ppb',
   ...FORCING_AGENTS.map((a) => `forcing_${a}_wm2` as const),
+  'forcing_aerosol_wm2',
 ] as const;
 
 /** A year-by-year warming projection for one pathway. */
@@ -68,8 +73,9 @@ export interface Projection {
  * energy balance integrated by odex from rest at the first year (T = T_d = 0, the pre-industrial
  * equilibrium, whatever that year's forcing: a pathway starting after 1750 without the history
  * splice misses the warming already reached by then) -> warming relative to the baseline mean.
- * Notes name the gases held at their 1750 values and the forcing columns taken as zero, and, for a
- * first year after 1750, what the run starts from (startFromRestNote).
+ * Notes name the gases held at their 1750 values and the forcing columns taken as zero, for a
+ * first year after 1750 what the run starts from (startFromRestNote), and for a run covering
+ * 1971-2018 its energy budget beside IPCC AR6's (energyBudgetNote).
  *
  * @param pathway annual pathway (concentrations and prescribed forcing)
  * @param options parameters, baseline, method
@@ -87,7 +93,7 @@ export function projectPathway(pathway: Pathway, options: ProjectionOptions): Pr
     if (!s[cols.concentration] && !s[cols.emission]) notes.push(`${gas.toUpperCase()} not given: held at its 1750 value`);
   }
   // forcingByAgent adds nothing for an absent forcing column; say so, as for the gases above.
-  const zeroForcing = FORCING_COLUMNS.filter((c) => !s[c]);
+  const zeroForcing = forcingColumnsNotGiven(s);
   if (zeroForcing.length > 0) notes.push(`${zeroForcing.join(', ')} not given: taken as zero`);
   const forcingOptions: ForcingOptions = { co2Formula: params.co2Formula, forcing2xWm2: params.forcing2xWm2, aerosolScale: options.aerosolScale };
   const tolerances = options.tolerances ?? DEFAULT_TOLERANCES;
@@ -105,6 +111,7 @@ export function projectPathway(pathway: Pathway, options: ProjectionOptions): Pr
       n2o_ppb: r.n2oPpb,
     };
     for (const a of FORCING_AGENTS) columns[`forcing_${a}_wm2`] = r.forcing.byAgent[a as ForcingAgent];
+    columns.forcing_aerosol_wm2 = r.forcing.aerosol;
     const fromRest = startFromRestNote(pathway, { subject: 'the run', forcingWm2: r.forcing.total[0] });
     if (fromRest) notes.push(fromRest);
     columns.co2_gtco2 = r.co2EmissionsGtco2;
@@ -112,7 +119,9 @@ export function projectPathway(pathway: Pathway, options: ProjectionOptions): Pr
     columns.n2o_mt = r.n2oEmissionsMt;
     columns.cumulative_co2_gtco2 = r.cumulativeCo2Gtco2;
     columns.airborne_fraction = r.airborneFraction;
-    return { name: pathway.name, provenance: pathway.provenance, params, baseline, years, columns, notes: [...notes, ...r.notes], carbon: r };
+    const budget = energyBudget(years, columns as BudgetColumns, params);
+    const budgetNotes = budget ? [energyBudgetNote(budget)] : [];
+    return { name: pathway.name, provenance: pathway.provenance, params, baseline, years, columns, notes: [...notes, ...r.notes, ...budgetNotes], carbon: r };
   }
 
   const forcing = forcingByAgent(n, { co2Ppm: s.co2_ppm, ch4Ppb: s.ch4_ppb, n2oPpb: s.n2o_ppb, prescribed: s }, forcingOptions);
@@ -130,6 +139,9 @@ export function projectPathway(pathway: Pathway, options: ProjectionOptions): Pr
     n2o_ppb: s.n2o_ppb ?? new Float64Array(n).fill(PREINDUSTRIAL.n2oPpb),
   };
   for (const a of FORCING_AGENTS) columns[`forcing_${a}_wm2`] = forcing.byAgent[a as ForcingAgent];
+  columns.forcing_aerosol_wm2 = forcing.aerosol;
+  const budget = energyBudget(years, columns as BudgetColumns, params);
+  if (budget) notes.push(energyBudgetNote(budget));
   return { name: pathway.name, provenance: pathway.provenance, params, baseline, years, columns, notes };
 }
 

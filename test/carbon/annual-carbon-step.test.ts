@@ -15,10 +15,10 @@ function annualRun(name: string) {
   const { input } = ensembleInput(pathway, params);
   const a = input.forcing.byAgent;
   const n = pathway.years.length;
-  const other = Float64Array.from({ length: n }, (_, k) => a.other[k] + a.solar[k] + a.volcanic[k]);
+  const other = Float64Array.from({ length: n }, (_, k) => input.forcing.total[k] - a.co2[k] - a.ch4[k] - a.n2o[k] - input.forcing.aerosol[k]);
   const surfaceK = new Float64Array(n);
   const co2Ppm = new Float64Array(n);
-  emissionMemberWarmingInto(input.carbon!, 'ar6', other, a.aerosol, twoBoxPropagator(params), 1, 1, 1, annualCarbonState(), surfaceK, co2Ppm);
+  emissionMemberWarmingInto(input.carbon!, 'ar6', other, input.forcing.aerosol, twoBoxPropagator(params), 1, 1, 1, annualCarbonState(), surfaceK, co2Ppm);
   return { pathway, surfaceK, co2Ppm };
 }
 

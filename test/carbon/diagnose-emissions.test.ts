@@ -37,7 +37,10 @@ describe('diagnoseEmissions round trip', () => {
 
   it('the emission pathway has emission columns and the prescribed forcing, no concentrations', () => {
     const { emissions } = diagnoseEmissions(history, params, { forcing });
-    expect(Object.keys(emissions.series).sort()).toEqual(['aerosol_wm2', 'ch4_mt', 'co2_gtco2', 'n2o_mt', 'other_wm2', 'solar_wm2', 'volcanic_wm2']);
+    expect(Object.keys(emissions.series).sort()).toEqual([
+      'aerosol_aci_wm2', 'aerosol_ari_wm2', 'bc_snow_wm2', 'ch4_mt', 'co2_gtco2', 'contrails_wm2', 'land_use_wm2', 'n2o_mt', 'other_ghg_wm2', 'ozone_wm2',
+      'solar_wm2', 'strat_h2o_wm2', 'volcanic_wm2',
+    ]);
     expect(emissions.provenance.notes).toContain('emissions diagnosed from concentrations by the carbon cycle');
   });
 

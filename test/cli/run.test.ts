@@ -358,7 +358,7 @@ describe('warmcast run --no-splice', () => {
     writeFileSync(file, '# name: My sparse pathway\nyear,co2_ppm,aerosol_wm2\n2030,440,-0.8\n2050,470,-0.6\n2100,450,-0.3\n');
     const io = captureIo();
     expect(await main(['run', file, '--no-splice', '--baseline', '2030-2040', '--no-chart'], io)).toBe(0);
-    expect(io.out).toContain('  note: other_wm2, solar_wm2, volcanic_wm2 not given: taken as zero\n');
+    expect(io.out).toContain('  note: other_ghg_wm2, ozone_wm2, strat_h2o_wm2, contrails_wm2, bc_snow_wm2, land_use_wm2, solar_wm2, volcanic_wm2 not given: taken as zero\n');
     expect(io.out).toContain('  note: CH4 not given: held at its 1750 value\n');
   });
 

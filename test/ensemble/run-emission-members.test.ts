@@ -24,7 +24,7 @@ function deterministicWarming(): Float64Array {
   const state = annualCarbonState();
   const forcing = (k: number, ppm: number) => {
     const f = ghg(ppm, c.ch4Ppb[k], c.n2oPpb[k]);
-    return f.co2 + f.ch4 + f.n2o + a.aerosol[k] + a.other[k] + a.solar[k] + a.volcanic[k];
+    return f.co2 + f.ch4 + f.n2o + input.forcing.total[k] - a.co2[k] - a.ch4[k] - a.n2o[k];
   };
   const t = new Float64Array(n);
   let d = 0;

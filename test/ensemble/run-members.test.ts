@@ -28,7 +28,7 @@ const series = (b: MemberBlock, r: number) => Float64Array.from({ length: n }, (
 
 /** The member's forcing and rebased warming computed independently of run-members.ts. */
 function reference(p: TwoBoxParams, co2Scale: number, aerosolScale: number, surface: (f: Float64Array) => Float64Array): Float64Array {
-  const f = Float64Array.from({ length: n }, (_, k) => co2Scale * a.co2[k] + a.ch4[k] + a.n2o[k] + aerosolScale * a.aerosol[k] + a.other[k] + a.solar[k] + a.volcanic[k]);
+  const f = Float64Array.from({ length: n }, (_, k) => co2Scale * a.co2[k] + aerosolScale * (a.aerosol_ari[k] + a.aerosol_aci[k]) + a.ch4[k] + a.n2o[k] + a.other_ghg[k] + a.ozone[k] + a.strat_h2o[k] + a.contrails[k] + a.bc_snow[k] + a.land_use[k] + a.solar[k] + a.volcanic[k]);
   const t = surface(f);
   let sum = 0;
   for (let k = 100; k <= 150; k++) sum += t[k];

@@ -40,14 +40,15 @@ export function syntheticInput(firstYear = 1750, lastYear = 2150): EnsembleInput
  * runEnsemble builds it), plus `extraOtherWm2(k)` in year k when given.
  */
 export function syntheticTask(seed: number, extraOtherWm2: (k: number) => number = () => 0): MemberTask {
-  const a = syntheticInput(1750, 2150).forcing.byAgent;
+  const forcing = syntheticInput(1750, 2150).forcing;
+  const a = forcing.byAgent;
   return {
     seed,
     sampling: AR6_SAMPLING,
     co2Formula: 'ar6',
     co2Wm2: a.co2,
-    aerosolWm2: a.aerosol,
-    otherWm2: a.ch4.map((v, k) => v + a.n2o[k] + a.other[k] + a.solar[k] + a.volcanic[k] + extraOtherWm2(k)),
+    aerosolWm2: forcing.aerosol,
+    otherWm2: forcing.total.map((v, k) => v - a.co2[k] - forcing.aerosol[k] + extraOtherWm2(k)),
     baselineFrom: 100,
     baselineTo: 150,
   };

@@ -28,13 +28,15 @@ describe('forcingByAgent', () => {
     expectClose(f.byAgent.co2[0], 4.5, 1e-12);
   });
 
-  it('adds prescribed columns as given and scales aerosol', () => {
+  it('adds prescribed agent columns as given and scales both aerosol agents', () => {
     const f = forcingByAgent(
       2,
-      { prescribed: { aerosol_wm2: Float64Array.of(-1, -2), other_wm2: Float64Array.of(0.5, 0.25), solar_wm2: Float64Array.of(0.1, 0), volcanic_wm2: Float64Array.of(0, -1) } },
+      { prescribed: { aerosol_ari_wm2: Float64Array.of(-0.25, -0.5), aerosol_aci_wm2: Float64Array.of(-0.75, -1.5), ozone_wm2: Float64Array.of(0.5, 0.25), solar_wm2: Float64Array.of(0.125, 0), volcanic_wm2: Float64Array.of(0, -1) } },
       { co2Formula: 'ar6', aerosolScale: 0.5 },
     );
-    expect(Array.from(f.byAgent.aerosol)).toEqual([-0.5, -1]);
-    expect(Array.from(f.total)).toEqual([-0.5 + 0.5 + 0.1, -1 + 0.25 - 1]);
+    expect(Array.from(f.byAgent.aerosol_ari)).toEqual([-0.125, -0.25]);
+    expect(Array.from(f.byAgent.aerosol_aci)).toEqual([-0.375, -0.75]);
+    expect(Array.from(f.aerosol)).toEqual([-0.5, -1]);
+    expect(Array.from(f.total)).toEqual([-0.5 + 0.5 + 0.125, -1 + 0.25 - 1]);
   });
 });

@@ -45,3 +45,23 @@ describe('bundled pathways', () => {
     }
   });
 });
+
+describe('bundled futures and the pre-industrial natural background', () => {
+  it('every bundled future carries solar -0.0127 and volcanic +0.035 W m-2 (1850-1900 means of the AR6 series) from 2034, ramped from the history\'s 2024 values', async () => {
+    const { loadPathway } = await import('../../src/io/load-pathway.js');
+    const history = loadHistory();
+    const at = (s: Float64Array, years: Float64Array, y: number) => s[y - years[0]];
+    for (const name of bundledPathwayNames().filter((n) => n !== 'history')) {
+      const p = loadPathway(name);
+      for (const [column, background] of [['solar_wm2', -0.0127], ['volcanic_wm2', 0.035]] as const) {
+        const s = p.series[column]!;
+        const h2024 = at(history.series[column]!, history.years, 2024);
+        expect(at(s, p.years, 2024), `${name} ${column} 2024`).toBe(h2024);
+        // Half-way through the 10-year ramp.
+        expect(at(s, p.years, 2029), `${name} ${column} 2029`).toBeCloseTo((h2024 + background) / 2, 12);
+        for (const y of [2034, 2100, 2150]) expect(at(s, p.years, y), `${name} ${column} ${y}`).toBeCloseTo(background, 12);
+      }
+      expect(p.provenance.notes.some((n) => n.startsWith('solar_wm2, volcanic_wm2 not in file: taken from history to 2024, then ramped linearly over 10 years'))).toBe(true);
+    }
+  });
+});

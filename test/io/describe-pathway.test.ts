@@ -27,12 +27,13 @@ describe('describePathway', () => {
       '  aerosol_wm2 (W m-2): -1.1 to -0.5',
       'splice: spliced onto bundled history at 2023 (2020-2022 from history.csv)',
       'run covers: 2020 to 2033 (14 years)',
+      "note: aerosol_wm2 split over aerosol_ari_wm2 (20.4 %), aerosol_aci_wm2 (79.6 %): the shares of AR6's 2019 ERF",
       'note: ch4_ppb not in file: taken from history to 2022, then held at the 2022 value',
-      'note: solar_wm2 not in file: taken from history to 2022, then held at the mean of 2020-2022',
+      'note: solar_wm2 not in file: taken from history to 2022, then ramped linearly over 10 years (to 2032) to the pre-industrial background, the 1850-1900 mean of the IPCC AR6 series (solar_wm2 -0.013 W m-2)',
       "note: co2_gtco2 given instead of the history's co2_ppm: a run follows the history's co2_ppm to 2022, diagnosing co2_gtco2 from it, and from 2023 computes co2_ppm from the given co2_gtco2",
-      'note: aerosol_wm2 not in history: NaN before 2023',
+      'note: aerosol_ari_wm2, aerosol_aci_wm2 not in history: NaN before 2023',
       'gases not given (held at pre-industrial): N2O',
-      'forcing not given (taken as zero): other_wm2, volcanic_wm2',
+      'forcing not given (taken as zero): other_ghg_wm2, ozone_wm2, strat_h2o_wm2, contrails_wm2, bc_snow_wm2, land_use_wm2, volcanic_wm2',
     ]);
   });
 

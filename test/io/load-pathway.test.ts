@@ -39,7 +39,8 @@ describe('loadPathway', () => {
       notes: [
         'interpolated linearly from 2 rows (10-year steps) to 11 annual values',
         'spliced onto bundled history at 2023 (2020-2022 from history.csv)',
-        'solar_wm2, volcanic_wm2 not in file: taken from history to 2022, then held at the mean of 2020-2022',
+        'solar_wm2, volcanic_wm2 not in file: taken from history to 2022, then ramped linearly over 10 years (to 2032) to the pre-industrial background, the 1850-1900 mean of the IPCC AR6 series '
+          + '(solar_wm2 -0.013, volcanic_wm2 0.035 W m-2; volcanic forcing is relative to the long pre-industrial mean, so this stands for eruptions at the rate of those years, not a quiet stratosphere)',
       ],
     });
     expect(loadPathway('calm.csv', { pathwaysDir }).provenance.source).toBe('bundled:calm');

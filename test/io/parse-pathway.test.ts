@@ -21,7 +21,7 @@ function problemsOf(text: string, file: string): InputProblem[] {
 }
 
 const NUMBER = 'a number such as 415.2, with a decimal point and without units or thousands separators';
-const KNOWN = 'one of year, date, co2_ppm, ch4_ppb, n2o_ppb, co2_gtco2, ch4_mt, n2o_mt, aerosol_wm2, other_wm2, solar_wm2, volcanic_wm2';
+const KNOWN = 'one of year, date, co2_ppm, ch4_ppb, n2o_ppb, co2_gtco2, ch4_mt, n2o_mt, other_ghg_wm2, ozone_wm2, strat_h2o_wm2, contrails_wm2, aerosol_ari_wm2, aerosol_aci_wm2, bc_snow_wm2, land_use_wm2, solar_wm2, volcanic_wm2, aerosol_wm2, other_wm2';
 
 type Expected = Omit<InputProblem, 'file'>;
 const badCases: [fixture: string, problem: Expected][] = [
@@ -71,13 +71,18 @@ const badCases: [fixture: string, problem: Expected][] = [
     message: 'must give CO2 either as a concentration (co2_ppm) or as emissions (co2_gtco2), not both',
     expected: 'one column per gas: co2_ppm or co2_gtco2',
   }],
+  ['forcing-twice.csv', {
+    code: 'input.forcing-twice', line: 2, column: 'aerosol_wm2', value: 'aerosol_wm2',
+    message: 'must give aerosol_wm2 or its agent columns (aerosol_ari_wm2, aerosol_aci_wm2), not both',
+    expected: 'either aerosol_wm2 alone or agent columns only',
+  }],
   ['duplicate-column.csv', {
     code: 'input.duplicate-column', line: 1, column: 'CO2_ppm', value: 'CO2_ppm',
     message: 'must name each column once: header cells 2 and 3 are both "co2_ppm"', expected: 'each column once',
   }],
   ['no-data-columns.csv', {
     code: 'input.no-data-columns', line: 1, message: 'must have at least one data column besides the time column',
-    expected: 'one or more of co2_ppm, ch4_ppb, n2o_ppb, co2_gtco2, ch4_mt, n2o_mt, aerosol_wm2, other_wm2, solar_wm2, volcanic_wm2',
+    expected: 'one or more of co2_ppm, ch4_ppb, n2o_ppb, co2_gtco2, ch4_mt, n2o_mt, other_ghg_wm2, ozone_wm2, strat_h2o_wm2, contrails_wm2, aerosol_ari_wm2, aerosol_aci_wm2, bc_snow_wm2, land_use_wm2, solar_wm2, volcanic_wm2, aerosol_wm2, other_wm2',
   }],
   ['text-in-number.csv', {
     code: 'input.bad-number', line: 3, column: 'co2_ppm', value: 'about 430', message: 'must be a number', expected: NUMBER,

@@ -14,10 +14,10 @@ function pathway(first: number, series: Partial<Record<PathwayColumn, number[]>>
   };
 }
 
-/** History 2000-2004: CO2 370-374 ppm, solar 0.1-0.5, aerosol -1.0 to -1.4 W m-2. */
+/** History 2000-2004: CO2 370-374 ppm, solar 0.1-0.5, ozone -1.0 to -1.4 W m-2. */
 const history = pathway(2000, {
   co2_ppm: [370, 371, 372, 373, 374],
-  aerosol_wm2: [-1.0, -1.1, -1.2, -1.3, -1.4],
+  ozone_wm2: [-1.0, -1.1, -1.2, -1.3, -1.4],
   solar_wm2: [0.1, 0.2, 0.3, 0.4, 0.5],
 }, 'bundled:history');
 
@@ -25,25 +25,44 @@ const values = (p: Pathway, c: PathwayColumn) => Array.from(p.series[c]!);
 
 describe('spliceOntoHistory', () => {
   it('spliceOntoHistory puts history before the first future year and the future from it on', () => {
-    const future = pathway(2005, { co2_ppm: [380, 381, 382], aerosol_wm2: [-0.5, -0.4, -0.3] }, 'plan.csv');
+    const future = pathway(2005, { co2_ppm: [380, 381, 382], ozone_wm2: [-0.5, -0.4, -0.3] }, 'plan.csv');
     const s = spliceOntoHistory(future, history);
     expect(Array.from(s.years)).toEqual([2000, 2001, 2002, 2003, 2004, 2005, 2006, 2007]);
     expect(values(s, 'co2_ppm')).toEqual([370, 371, 372, 373, 374, 380, 381, 382]);
-    expect(values(s, 'aerosol_wm2')).toEqual([-1.0, -1.1, -1.2, -1.3, -1.4, -0.5, -0.4, -0.3]);
+    expect(values(s, 'ozone_wm2')).toEqual([-1.0, -1.1, -1.2, -1.3, -1.4, -0.5, -0.4, -0.3]);
     expect(s.provenance.source).toBe('plan.csv');
     expect(s.provenance.spliceYear).toBe(2005);
     expect(s.name).toBe('plan.csv');
   });
 
-  it('spliceOntoHistory continues a column the future lacks from history, then holds its last value, or for solar the mean of its last 11 years (here all 5)', () => {
-    const future = pathway(2005, { co2_ppm: [380, 381, 382] }, 'plan.csv');
+  it('spliceOntoHistory continues a column the future lacks from history, then holds its last value, or for solar ramps over 10 years to its pre-industrial background (the 1850-1900 mean of the AR6 series)', () => {
+    const future = pathway(2005, { co2_ppm: Array.from({ length: 12 }, (_, i) => 380 + i) }, 'plan.csv');
     const s = spliceOntoHistory(future, history);
-    expect(values(s, 'solar_wm2').map((v) => +v.toFixed(12))).toEqual([0.1, 0.2, 0.3, 0.4, 0.5, 0.3, 0.3, 0.3]);
+    const ramp = (k: number) => 0.5 + ((-0.0127 - 0.5) * k) / 10;
+    expect(values(s, 'solar_wm2').map((v) => +v.toFixed(12))).toEqual([0.1, 0.2, 0.3, 0.4, 0.5, ...Array.from({ length: 10 }, (_, k) => +ramp(k + 1).toFixed(12)), -0.0127, -0.0127]);
     expect(s.provenance.notes).toEqual([
       'spliced onto bundled history at 2005 (2000-2004 from history.csv)',
-      'aerosol_wm2 not in file: taken from history to 2004, then held at the 2004 value',
-      'solar_wm2 not in file: taken from history to 2004, then held at the mean of 2000-2004',
+      'ozone_wm2 not in file: taken from history to 2004, then held at the 2004 value',
+      'solar_wm2 not in file: taken from history to 2004, then ramped linearly over 10 years (to 2014) to the pre-industrial background, the 1850-1900 mean of the IPCC AR6 series (solar_wm2 -0.013 W m-2)',
     ]);
+  });
+
+  it('spliceOntoHistory splits a lumped aerosol_wm2 over the agents it stands for, which replace the history\'s', () => {
+    const agents = pathway(2000, { co2_ppm: [370, 371, 372, 373, 374], aerosol_ari_wm2: [-0.2, -0.2, -0.2, -0.2, -0.2], aerosol_aci_wm2: [-0.8, -0.8, -0.8, -0.8, -0.8] }, 'bundled:history');
+    const s = spliceOntoHistory(pathway(2005, { co2_ppm: [380, 381], aerosol_wm2: [-0.5, -0.5] }, 'plan.csv'), agents);
+    expect(s.series.aerosol_wm2).toBeUndefined();
+    const total = Array.from(s.years, (_, i) => s.series.aerosol_ari_wm2![i] + s.series.aerosol_aci_wm2![i]);
+    expect(total.map((v) => +v.toFixed(12))).toEqual([-1, -1, -1, -1, -1, -0.5, -0.5]);
+    expect(s.provenance.notes[0]).toMatch(/^aerosol_wm2 split over aerosol_ari_wm2 \(20\.4 %\), aerosol_aci_wm2 \(79\.6 %\)/);
+  });
+
+  it('spliceOntoHistory notes a volcanic column in the quiet-stratosphere convention (0 between eruptions) with the AR6 convention the history follows', () => {
+    const quiet = pathway(2000, { co2_ppm: [370, 371, 372, 373, 374], volcanic_wm2: [0.2, 0.2, 0.2, 0.2, 0.2] }, 'bundled:history');
+    const s = spliceOntoHistory(pathway(2005, { co2_ppm: [380, 381], volcanic_wm2: [0, 0] }, 'plan.csv'), quiet);
+    expect(s.provenance.notes).toContain(
+      'volcanic_wm2 steps at the join: the history gives 0.200 W m-2 for 2004, the file 0.000 W m-2 for 2005 (0.200 W m-2 lower; a step of more than 0.1 W m-2 is noted); '
+        + 'the history follows IPCC AR6, where volcanic forcing is relative to the long pre-industrial mean: about +0.2 W m-2 in years without eruptions, 0.035 for eruptions at the 1850-1900 rate, not 0',
+    );
   });
 
   it('spliceOntoHistory keeps both forms when the future gives CO2 emissions and history concentrations', () => {
@@ -70,7 +89,7 @@ describe('spliceOntoHistory', () => {
     const s = spliceOntoHistory(future, history);
     expect(Array.from(s.years)).toEqual([2000, 2001, 2002, 2003, 2004, 2005, 2006, 2007]);
     expect(values(s, 'co2_ppm')).toEqual([370, 371, 400, 401, 402, 403, 404, 405]);
-    expect(values(s, 'solar_wm2').map((v) => +v.toFixed(12))).toEqual([0.1, 0.2, 0.3, 0.4, 0.5, 0.3, 0.3, 0.3]);
+    expect(values(s, 'solar_wm2').map((v) => +v.toFixed(12))).toEqual([0.1, 0.2, 0.3, 0.4, 0.5, 0.44873, 0.39746, 0.34619]);
     expect(s.provenance.notes[0]).toBe('spliced onto bundled history at 2002 (2000-2001 from history.csv)');
   });
 
@@ -79,7 +98,7 @@ describe('spliceOntoHistory', () => {
     const s = spliceOntoHistory(future, history);
     expect(Array.from(s.years)).toEqual([2000, 2001, 2002]);
     expect(values(s, 'solar_wm2')).toEqual([0.1, 0.2, 0.3]);
-    expect(s.provenance.notes).toContain('aerosol_wm2, solar_wm2 not in file: taken from history');
+    expect(s.provenance.notes).toContain('ozone_wm2, solar_wm2 not in file: taken from history');
   });
 
   it('spliceOntoHistory notes a concentration that steps by more than 2 % at the join, with the history\'s and the file\'s value for the same year', () => {
@@ -101,7 +120,7 @@ describe('spliceOntoHistory', () => {
 
   it('spliceOntoHistory says nothing of steps within 2 % (concentrations) or 0.1 W m-2 (forcing), nor across a bridged gap', () => {
     // 380 against 374 ppm is 1.6 %; -1.45 against -1.4 W m-2 is 0.05 W m-2.
-    const near = spliceOntoHistory(pathway(2005, { co2_ppm: [380, 381], aerosol_wm2: [-1.45, -1.4] }, 'plan.csv'), history);
+    const near = spliceOntoHistory(pathway(2005, { co2_ppm: [380, 381], ozone_wm2: [-1.45, -1.4] }, 'plan.csv'), history);
     expect(near.provenance.notes.filter((n) => n.includes('at the join'))).toEqual([]);
     // 2005-2006 are bridged from 374 to 400 ppm: a slope, not a step.
     const gap = spliceOntoHistory(pathway(2007, { co2_ppm: [400, 401] }, 'plan.csv'), history);
@@ -109,9 +128,9 @@ describe('spliceOntoHistory', () => {
   });
 
   it('spliceOntoHistory notes a forcing column that steps by more than 0.1 W m-2 at the join', () => {
-    const s = spliceOntoHistory(pathway(2005, { co2_ppm: [380, 381], aerosol_wm2: [-0.5, -0.4] }, 'plan.csv'), history);
+    const s = spliceOntoHistory(pathway(2005, { co2_ppm: [380, 381], ozone_wm2: [-0.5, -0.4] }, 'plan.csv'), history);
     expect(s.provenance.notes).toContain(
-      'aerosol_wm2 steps at the join: the history gives -1.400 W m-2 for 2004, the file -0.500 W m-2 for 2005 (0.900 W m-2 higher; a step of more than 0.1 W m-2 is noted)',
+      'ozone_wm2 steps at the join: the history gives -1.400 W m-2 for 2004, the file -0.500 W m-2 for 2005 (0.900 W m-2 higher; a step of more than 0.1 W m-2 is noted)',
     );
   });
 
@@ -123,11 +142,11 @@ describe('spliceOntoHistory', () => {
   });
 
   it('spliceOntoHistory leaves a column in neither absent and a future-only column NaN before the splice', () => {
-    const future = pathway(2005, { co2_ppm: [380, 381], other_wm2: [0.4, 0.5] }, 'plan.csv');
+    const future = pathway(2005, { co2_ppm: [380, 381], land_use_wm2: [-0.4, -0.5] }, 'plan.csv');
     const s = spliceOntoHistory(future, history);
     expect(s.series.ch4_ppb).toBeUndefined();
-    expect(values(s, 'other_wm2')).toEqual([NaN, NaN, NaN, NaN, NaN, 0.4, 0.5]);
-    expect(s.provenance.notes).toContain('other_wm2 not in history: NaN before 2005');
+    expect(values(s, 'land_use_wm2')).toEqual([NaN, NaN, NaN, NaN, NaN, -0.4, -0.5]);
+    expect(s.provenance.notes).toContain('land_use_wm2 not in history: NaN before 2005');
   });
 
   it('spliceOntoHistory bridges a gap between history and future linearly', () => {
@@ -161,10 +180,10 @@ describe('spliceOntoHistory', () => {
 
   it('spliceOntoHistory refuses a gap it cannot bridge (a column the history has in neither form)', () => {
     const noAerosol = { ...history, series: { co2_ppm: history.series.co2_ppm } };
-    const future = pathway(2007, { co2_ppm: [383, 384], aerosol_wm2: [-1, -1] }, 'plan.csv');
+    const future = pathway(2007, { co2_ppm: [383, 384], ozone_wm2: [-1, -1] }, 'plan.csv');
     expect(() => spliceOntoHistory(future, noAerosol)).toThrow(InputError);
     expect(() => spliceOntoHistory(future, noAerosol)).toThrow(
-      'plan.csv: column "aerosol_wm2": must start by 2005 to follow the history, which ends in 2004',
+      'plan.csv: column "ozone_wm2": must start by 2005 to follow the history, which ends in 2004',
     );
   });
 });

@@ -19,9 +19,12 @@ function problemsOf(text: string) {
 }
 
 describe('VALUE_BOUNDS', () => {
-  it('VALUE_BOUNDS of the prescribed forcing columns: aerosol -5..1, other -5..10, solar -3..3, volcanic -15..1 W m-2 (common practice, no source)', () => {
+  it('VALUE_BOUNDS of the prescribed forcing columns: per agent, plus aerosol -5..1, other -5..10, solar -3..3, volcanic -15..1 W m-2 (common practice, no source)', () => {
     const ranges = Object.fromEntries(FORCING_COLUMNS.map((c) => [c, [VALUE_BOUNDS[c].min, VALUE_BOUNDS[c].max]]));
-    expect(ranges).toEqual({ aerosol_wm2: [-5, 1], other_wm2: [-5, 10], solar_wm2: [-3, 3], volcanic_wm2: [-15, 1] });
+    expect(ranges).toEqual({
+      other_ghg_wm2: [-1, 5], ozone_wm2: [-2, 3], strat_h2o_wm2: [-0.5, 1], contrails_wm2: [-0.5, 1], aerosol_ari_wm2: [-3, 1], aerosol_aci_wm2: [-4, 1],
+      bc_snow_wm2: [-0.5, 1], land_use_wm2: [-2, 1], solar_wm2: [-3, 3], volcanic_wm2: [-15, 1], aerosol_wm2: [-5, 1], other_wm2: [-5, 10],
+    });
     for (const c of FORCING_COLUMNS) expect(VALUE_BOUNDS[c].source).toMatch(/common practice, no source/);
   });
 

@@ -32,11 +32,12 @@ describe('projectPathway', () => {
     expectAllClose(run.columns.forcing_ch4_wm2, new Float64Array(years.length), 1e-15);
   });
 
-  it('takes a forcing column that is not given as zero and says which, in one note; none when all four are given', () => {
+  it('takes a forcing column that is not given as zero and says which, in one note; none when all are given', () => {
     const n = years.length;
     const run = projectPathway(pathway(years, { co2_ppm: new Float64Array(n).fill(400), aerosol_wm2: new Float64Array(n).fill(-0.5) }), { params });
-    expect(run.notes).toContain('other_wm2, solar_wm2, volcanic_wm2 not given: taken as zero');
-    for (const agent of ['other', 'solar', 'volcanic']) expectAllClose(run.columns[`forcing_${agent}_wm2`], new Float64Array(n), 0, agent);
+    expect(run.notes).toContain('other_ghg_wm2, ozone_wm2, strat_h2o_wm2, contrails_wm2, bc_snow_wm2, land_use_wm2, solar_wm2, volcanic_wm2 not given: taken as zero');
+    for (const agent of ['other_ghg', 'ozone', 'land_use', 'solar', 'volcanic']) expectAllClose(run.columns[`forcing_${agent}_wm2`], new Float64Array(n), 0, agent);
+    expectAllClose(run.columns.forcing_aerosol_wm2, new Float64Array(n).fill(-0.5), 1e-15, 'aerosol');
     const zero = () => new Float64Array(n);
     const all = projectPathway(
       pathway(years, { co2_ppm: new Float64Array(n).fill(400), aerosol_wm2: zero(), other_wm2: zero(), solar_wm2: zero(), volcanic_wm2: zero() }),

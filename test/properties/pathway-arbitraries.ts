@@ -8,10 +8,11 @@
  */
 import fc from 'fast-check';
 import { parsePathway, toAnnual, VALUE_BOUNDS } from '../../src/io/index.js';
-import { FORCING_COLUMNS, type Pathway, type PathwayColumn } from '../../src/pathway.js';
+import type { Pathway, PathwayColumn } from '../../src/pathway.js';
 
 /** Columns a concentration-driven pathway may hold (emission columns are not generated here). */
-export const CONCENTRATION_RUN_COLUMNS = ['co2_ppm', 'ch4_ppb', 'n2o_ppb', ...FORCING_COLUMNS] as const satisfies readonly PathwayColumn[];
+// The lumped aerosol and other columns stand for the agent columns they split into (a file may not give both).
+export const CONCENTRATION_RUN_COLUMNS = ['co2_ppm', 'ch4_ppb', 'n2o_ppb', 'aerosol_wm2', 'other_wm2', 'solar_wm2', 'volcanic_wm2'] as const satisfies readonly PathwayColumn[];
 export type ConcentrationRunColumn = (typeof CONCENTRATION_RUN_COLUMNS)[number];
 
 /** Rows of a pathway file: times and, per column, one value per row. */
