@@ -14,7 +14,6 @@ const DRIVERS: Readonly<Record<string, readonly string[]>> = {
   other_ghg: ['fgas_mtco2e', '*_kt', '*_ppt', 'other_ghg_wm2'],
   other: ['other_wm2'],
   ozone: ['nox_mt', 'co_mt', 'nmvoc_mt', 'ozone_wm2'],
-  strat_h2o: ['ch4_mt', 'ch4_ppb', 'strat_h2o_wm2'],
   aerosol: ['so2_mt', 'bc_mt', 'oc_mt', 'nh3_mt', 'aerosol_wm2'],
   aerosol_ari: ['so2_mt', 'bc_mt', 'oc_mt', 'nh3_mt', 'aerosol_ari_wm2', 'aerosol_wm2'],
   aerosol_aci: ['so2_mt', 'bc_mt', 'oc_mt', 'aerosol_aci_wm2', 'aerosol_wm2'],

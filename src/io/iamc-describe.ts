@@ -38,7 +38,13 @@ export function describeScenarioTable(table: IamcTable, options: LoadPathwayOpti
     for (const v of s.variables) variableOf.set(v.column, variableOf.has(v.column) ? `${variableOf.get(v.column)} + ${v.variable}` : v.variable);
     const coverage = pathwayCoverage(read, s.notes);
     lines.push(`  gives: ${coverage.given.map((g) => `${g.agent} (${g.columns.map((c) => variableOf.get(c) ?? c).join(', ')})`).join('; ') || 'no forcing agent'}`);
-    for (const f of coverage.filled) lines.push(`  filled: ${f.agent}: ${f.how.length > 0 ? f.how.join('; ') : 'not given (see the notes of a run)'}`);
+    // Agents filled the same way share one line.
+    const groups = new Map<string, string[]>();
+    for (const f of coverage.filled) {
+      const how = f.how.length > 0 ? f.how.join('; ') : 'not given (see the notes of a run)';
+      groups.set(how, [...(groups.get(how) ?? []), f.agent]);
+    }
+    for (const [how, agents] of groups) lines.push(`  filled: ${agents.join(', ')}: ${how}`);
     for (const note of s.notes) lines.push(`  note: ${note}`);
   }
   lines.push('', bad === 0 ? `all ${table.scenarios.length} scenarios can be run` : `${bad} of ${table.scenarios.length} scenarios have problems (listed above); the others can be run`);
