@@ -2,7 +2,7 @@ import { Command } from 'commander';
 import { ConfigError } from '../errors.js';
 import { formatCsv } from '../io/index.js';
 import { comparePathways, milestoneYears, type PathwayWarming } from '../metrics/index.js';
-import { defaultWorkerCount, runEnsemble, startEnsembleThreads, type EnsembleThreads } from '../ensemble/index.js';
+import { runEnsemble } from '../ensemble/index.js';
 import { ensembleInput, projectPathway } from '../projection/index.js';
 import { comparisonCharts, comparisonHtml, comparisonJson, comparisonLongTable, comparisonSummary, comparisonMarkdown, comparisonText, comparisonUncertainty, scopedNotes, standardCautions, thresholdBaselineNote, type ScopedNote } from '../report/index.js';
 import type { CliIo } from './cli-io.js';
@@ -73,10 +73,6 @@ export function compareCommand(io: CliIo): Command {
       const pathways: PathwayWarming[] = [];
       // With ensembles no single parameter set was used: provenance records what the members share.
       let shared: Record<string, number | string> | undefined;
-      // One set of worker threads for every pathway's ensemble, when their total size pays for it.
-      const anyEmissions = runs.some((r) => r.projection.columns.co2_gtco2 !== undefined);
-      const threads = opts.members !== undefined ? ensembleThreadsFor(opts.members * ref.years.length * runs.length, anyEmissions) : undefined;
-      try {
         for (const { projection: p, pathway } of runs) {
           const base: PathwayWarming = { label: p.name, years: p.years, warmingK: p.columns.warming_k, ...(p.columns.co2_gtco2 ? { co2Gtco2: p.columns.co2_gtco2 } : {}) };
           if (opts.members === undefined) {
@@ -85,7 +81,7 @@ export function compareCommand(io: CliIo): Command {
           }
           // With an ensemble, the line is its median and the ranges its percentiles (same seed per pathway).
           const { input, notes: inputNotes } = ensembleInput(pathway, params, { baseline: opts.baseline });
-          const e = await runEnsemble(input, { members: opts.members, seed: opts.seed, thresholds: opts.thresholds, baseline: opts.baseline, ...(threads ? { threads } : {}) });
+          const e = await runEnsemble(input, { members: opts.members, seed: opts.seed, thresholds: opts.thresholds, baseline: opts.baseline });
           scoped.push(...[...inputNotes, ...e.notes].map((text) => ({ pathway: p.name, ensemble: true, text })));
           shared ??= ensembleParameters(e.config);
           const pc = e.percentiles;
@@ -100,9 +96,6 @@ export function compareCommand(io: CliIo): Command {
           const membersPeak = { warmingK: e.peak.warmingK, year: e.peak.year, stillRising: e.peak.stillRising };
           pathways.push({ ...base, warmingK: pc.p50, range: { p05: pc.p05, p17: pc.p17, p83: pc.p83, p95: pc.p95 }, crossingOdds, membersPeak });
         }
-      } finally {
-        await threads?.close();
-      }
       const medianNote =
         opts.members !== undefined
           ? ['warming_k and the milestone values are the ensemble median of each pathway; its crossing years are the first years by which half of the members have crossed']
@@ -167,15 +160,6 @@ export function compareCommand(io: CliIo): Command {
       write(notesAndCautions(notes, standardCautions(comparisonUncertainty(c, 'text')), opts.out === '-' ? undefined : io.stdoutColumns));
     });
   return cmd;
-}
-
-/**
- * Worker threads shared by several ensembles of `memberYears` in all (weighted as emission-driven
- * when any is), or none when one thread is enough.
- */
-function ensembleThreadsFor(memberYears: number, emissionDriven: boolean): EnsembleThreads | undefined {
-  const count = defaultWorkerCount(memberYears, emissionDriven);
-  return count > 1 ? startEnsembleThreads(count) : undefined;
 }
 
 /**

@@ -2,7 +2,7 @@ import { Command, InvalidArgumentError, Option } from 'commander';
 import { readFileSync } from 'node:fs';
 import { resolve } from 'node:path';
 import { ConfigError, InputError } from '../errors.js';
-import { defaultWorkerCount, ensembleHeadlines, ensembleTable, fewMembersWarning, runEnsemble, shardFromJson, shardMerger, shardRange, shardToJson, summarizeEnsemble, type EnsembleConfig, type EnsembleHeadlines, type EnsembleOrigin, type EnsembleResult } from '../ensemble/index.js';
+import { ensembleHeadlines, ensembleTable, fewMembersWarning, runEnsemble, shardFromJson, shardMerger, shardRange, shardToJson, summarizeEnsemble, type EnsembleConfig, type EnsembleHeadlines, type EnsembleOrigin, type EnsembleResult } from '../ensemble/index.js';
 import type { Table } from '../io/index.js';
 import { ensembleInput } from '../projection/index.js';
 import { ensembleHeadlineLines, ensembleHeadlinesMarkdown, standardCautions, terminalChart, thresholdBaselineNote } from '../report/index.js';
@@ -24,7 +24,6 @@ interface EnsembleCliOptions extends ScenarioOptions {
   thresholds: number[];
   baseline: [number, number];
   shard?: { index: number; count: number };
-  workers?: number;
   out?: string;
   splice: boolean;
   chart: boolean;
@@ -72,11 +71,10 @@ export function ensembleCommand(io: CliIo): Command {
     .description('run a seeded parameter ensemble (AR6-matched ECS, TCR, 2xCO2 and aerosol forcing): warming percentiles and threshold probabilities')
     .argument('<pathway>', 'pathway CSV file or bundled name')
     .option('-n, --members <count>', 'ensemble members', wholeNumberOption('--members', 1), 1000)
-    .option('--seed <integer>', 'random seed (same seed, same output on any machine and any number of workers)', wholeNumberOption('--seed', 0), 1)
+    .option('--seed <integer>', 'random seed (same seed, same output on any machine, and shards merged equal one run)', wholeNumberOption('--seed', 0), 1)
     .addOption(thresholdsOption('warming levels in K above the baseline (above 0) for exceedance probabilities', [1.5, 2, 3]))
     .addOption(baselineOption())
     .option('--shard <K/N>', 'run only the K-th of N equal slices of the members and write them as a shard file (.json) for `warmcast merge`', shardOption)
-    .option('--workers <count>', 'threads (default: chosen by run size; the output does not depend on it)', wholeNumberOption('--workers', 1))
     .option('-o, --out <file>', 'write the headline figures and the yearly percentiles and probabilities: .csv (+ .meta.json), .json, .md; with --shard a .json shard file')
     .option('--no-splice', 'do not splice a pathway that starts late onto the bundled history')
     .option('--no-chart', 'omit the terminal chart')
@@ -101,8 +99,7 @@ export function ensembleCommand(io: CliIo): Command {
       const years = input.years.length;
       const emissionDriven = input.carbon !== undefined;
       const count = opts.shard ? shardSize(opts.members, opts.shard) : opts.members;
-      const threads = opts.workers ?? defaultWorkerCount(count * years, emissionDriven);
-      checkEnsembleMemory({ members: opts.members, count, years, emissionDriven, shard: opts.shard, threads });
+      checkEnsembleMemory({ members: opts.members, count, years, emissionDriven, shard: opts.shard });
       const result = await outOfMemoryAsInput(`an ensemble of ${count} members over ${years} years`, () =>
         runEnsemble(input, {
           members: opts.members,
@@ -110,7 +107,6 @@ export function ensembleCommand(io: CliIo): Command {
           thresholds: opts.thresholds,
           baseline: opts.baseline,
           shard: opts.shard,
-          workers: opts.workers,
           onProgress: progressBar(io, 'members', 20_000),
         }),
       );

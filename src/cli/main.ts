@@ -8,6 +8,7 @@ import { ensembleCommand, mergeCommand } from './ensemble.js';
 import type { CliIo } from './cli-io.js';
 import { pathwaysCommand } from './pathways.js';
 import { runCommand } from './run.js';
+import { verifyCommand } from './verify.js';
 import { packageVersion } from './version.js';
 
 /**
@@ -28,7 +29,7 @@ export async function main(argv: string[], io: CliIo): Promise<number> {
     .option('--debug', 'show stack traces for errors')
     .showHelpAfterError('(add --help for usage)')
     .addHelpText('after', '\nExamples:\n  warmcast run                      # the default bundled pathway\n  warmcast run swift --out swift.csv\n  warmcast compare steady delayed swift --out report.html\n  warmcast ensemble swift --members 2000 --seed 7 --out swift-ens.csv\n  warmcast batch pathways/examples/invented-scenarios.csv --out summary.csv\n  warmcast pathways\n');
-  for (const make of [runCommand, compareCommand, ensembleCommand, batchCommand, mergeCommand, calibrateCommand, checkCommand, pathwaysCommand]) {
+  for (const make of [runCommand, compareCommand, ensembleCommand, batchCommand, mergeCommand, calibrateCommand, checkCommand, verifyCommand, pathwaysCommand]) {
     program.addCommand(make(io));
   }
   const configure = (cmd: Command) => {

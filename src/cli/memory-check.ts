@@ -29,8 +29,6 @@ export interface EnsembleRunSize {
   emissionDriven: boolean;
   /** The shard this command runs, if any. */
   shard?: { index: number; count: number };
-  /** Threads that compute percentiles. */
-  threads: number;
 }
 
 /**
@@ -42,14 +40,14 @@ export interface EnsembleRunSize {
  * @throws ConfigError (exit 2) when the run does not fit
  */
 export function checkEnsembleMemory(run: EnsembleRunSize, limits: MemoryLimits = machineLimits()): void {
-  const estimate = ensembleMemory(run.count, run.years, { emissionDriven: run.emissionDriven, shard: run.shard !== undefined, threads: run.threads });
+  const estimate = ensembleMemory(run.count, run.years, { emissionDriven: run.emissionDriven, shard: run.shard !== undefined });
   const why = exceeds(estimate, limits);
   if (!why) return;
   const what = run.shard
     ? `shard ${run.shard.index}/${run.shard.count} (${run.count} of ${run.members} members) over ${run.years} years`
     : `--members ${run.members} over ${run.years} years`;
   // The largest shard (every member-year kept, its file written) that fits.
-  const fitting = largestFitting(run.members, (m) => ensembleMemory(m, run.years, { emissionDriven: run.emissionDriven, shard: true, threads: run.threads }), limits);
+  const fitting = largestFitting(run.members, (m) => ensembleMemory(m, run.years, { emissionDriven: run.emissionDriven, shard: true }), limits);
   const shards = fitting > 0 ? Math.ceil(run.members / fitting) : 0;
   const advice = shards > 0 ? `run it in slices of at most ${fitting} members with --shard K/N, N at least ${shards}, and combine them with \`warmcast merge\`` : 'use fewer members';
   throw new ConfigError(`${what} would need ${why}; ${advice}${mergeCaveat(run.members, run.years, Math.max(1, fitting), limits)}`, run.shard ? 'shard' : 'members');

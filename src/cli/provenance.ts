@@ -82,14 +82,8 @@ export function buildProvenance(args: ProvenanceInput): Provenance {
 
 /**
  * The parameters an ensemble's provenance records: only what every member shares, as `--params`
- * keys (the CO2 formula and the fixed heat capacities and efficacy); the notes describe the sampled
- * quantities.
+ * keys (the CO2 formula); the notes describe where the members' own parameters come from.
  */
 export function ensembleParameters(c: EnsembleConfig): Record<string, number | string> {
-  return {
-    co2_formula: c.co2Formula,
-    upper_heat_capacity: c.sampling.upperHeatCapacity,
-    deep_heat_capacity: c.sampling.deepHeatCapacity,
-    deep_efficacy: c.sampling.deepEfficacy,
-  };
+  return { co2_formula: c.co2Formula };
 }

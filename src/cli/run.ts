@@ -38,7 +38,7 @@ export function runCommand(io: CliIo): Command {
     .option('--no-carbon-feedback', 'emission-driven runs: switch off the carbon-climate feedback on uptake')
     .option('--no-chart', 'omit the terminal chart');
   addScenarioOptions(addModelOptions(cmd), true)
-    .addOption(new Option('--method <name>', 'temperature stepping: odex (ODE solver) or exact (matrix-exponential propagator)').choices(['odex', 'exact']).default('odex', 'odex'))
+    .addOption(new Option('--method <name>', 'temperature stepping: exact (closed-form one-year propagator) or odex (ODE solver, the reference)').choices(['exact', 'odex']).default('exact', 'exact'))
     .option('--rtol <value>', 'odex relative tolerance', numberOption('--rtol'), 1e-10)
     .option('--atol <value>', 'odex absolute tolerance, K', numberOption('--atol'), 1e-10)
     .addHelpText(

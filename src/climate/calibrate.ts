@@ -2,7 +2,7 @@ import { ConfigError, NumericalError } from '../errors.js';
 import { co2Forcing, forcingOfDoubling } from '../forcing/co2.js';
 import { PREINDUSTRIAL } from '../forcing/constants.js';
 import { findRoot } from '../numerics/find-root.js';
-import { twoBoxPropagator, propagateTwoBoxInto } from './exact-propagator.js';
+import { propagateTwoBoxInto } from './two-box-step.js';
 import { CALIBRATION_DEFAULTS, PARAM_KEYS, type ClimateParams } from './params.js';
 import type { TwoBoxParams } from './two-box.js';
 
@@ -30,7 +30,7 @@ export function transientResponse(p: TwoBoxParams & Pick<ClimateParams, 'co2Form
   const f = onePercentForcing(p.co2Formula, p.forcing2xWm2);
   const t = new Float64Array(f.length);
   const d = new Float64Array(f.length);
-  propagateTwoBoxInto(twoBoxPropagator(p), f, t, d);
+  propagateTwoBoxInto(p, f, t, d);
   // Year 1 of the experiment ends at node 1; years 61-80 are the annual means around nodes 60.5-79.5,
   // taken as the mean of the node-centred averages (t[k] + t[k+1]) / 2 for k = 60..79.
   let sum = 0;

@@ -1,6 +1,6 @@
 import { NumericalError } from '../errors.js';
 import { DEFAULT_TOLERANCES, integrateSteps, type OdeTolerances } from '../numerics/integrate-steps.js';
-import { twoBoxPropagator, propagateTwoBoxInto } from './exact-propagator.js';
+import { propagateTwoBoxInto } from './two-box-step.js';
 import { topOfAtmosphereImbalance, twoBoxDerivativesInto, type TwoBoxParams } from './two-box.js';
 
 /** Temperature response of the two-box model on an annual grid. */
@@ -21,19 +21,20 @@ export type EnergyBalanceMethod = 'odex' | 'exact';
 /**
  * Integrates the two-box energy balance model from equilibrium (T = T_d = 0 at the first year) through
  * annual forcing values, forcing linear in time between consecutive year nodes; temperatures are
- * reported at the year nodes. `odex` integrates the ODE (the reference path); `exact` uses the
- * matrix-exponential propagator (same answer to solver tolerance, much faster).
+ * reported at the year nodes. `exact` (the default) steps the closed-form one-year propagator of
+ * two-box-step.ts, the step every run and ensemble uses; `odex` integrates the ODE, the reference it
+ * is checked against (same answer to solver tolerance, much slower).
  *
  * @param p model parameters
  * @param forcingWm2 total ERF at each year node, W m-2
- * @param method `odex` (default) or `exact`
+ * @param method `exact` (default) or `odex`
  * @param tolerances odex tolerances
  * @throws NumericalError if odex exceeds its step bound or produces non-finite values
  */
 export function energyBalance(
   p: TwoBoxParams,
   forcingWm2: Float64Array,
-  method: EnergyBalanceMethod = 'odex',
+  method: EnergyBalanceMethod = 'exact',
   tolerances: OdeTolerances = DEFAULT_TOLERANCES,
 ): EnergyBalanceResult {
   const n = forcingWm2.length;
@@ -41,7 +42,7 @@ export function energyBalance(
   const deepK = new Float64Array(n);
   let evaluations = 0;
   if (method === 'exact') {
-    propagateTwoBoxInto(twoBoxPropagator(p), forcingWm2, surfaceK, deepK);
+    propagateTwoBoxInto(p, forcingWm2, surfaceK, deepK);
   } else {
     const dy = [0, 0];
     try {
@@ -78,7 +79,7 @@ function explainFailure(p: TwoBoxParams, e: NumericalError): NumericalError {
   return new NumericalError(
     `${e.message}. The fastest time scale is ${fastYears.toExponential(2)} yr (upper_heat_capacity ${p.upperHeatCapacity} W yr m-2 K-1 ` +
       `over feedback_wm2k + deep_efficacy x exchange_wm2k = ${(p.feedbackWm2K + p.deepEfficacy * p.exchangeWm2K).toPrecision(4)} W m-2 K-1): ` +
-      'raise upper_heat_capacity, or use --method exact',
+      'raise upper_heat_capacity, or use the default --method exact',
     e.code,
   );
 }

@@ -2,8 +2,8 @@ export { calibrate, onePercentForcing, transientResponse } from './calibrate.js'
 export type { CalibrationTargets } from './calibrate.js';
 export { energyBalance } from './energy-balance.js';
 export type { EnergyBalanceMethod, EnergyBalanceResult } from './energy-balance.js';
-export { propagateTwoBoxInto, twoBoxPropagator } from './exact-propagator.js';
-export type { TwoBoxPropagator } from './exact-propagator.js';
+export { emptyTwoBoxSteps, propagateTwoBoxInto, rampGain, stepTwoBoxInto, twoBoxStepModes, twoBoxSteps, twoBoxStepsInto } from './two-box-step.js';
+export type { StepMode, TwoBoxParamArrays, TwoBoxSteps } from './two-box-step.js';
 export { CALIBRATION_DEFAULTS, PARAM_KEYS, paramsToJson } from './params.js';
 export type { ClimateParams, ClimateParamsJson } from './params.js';
 export { abruptResponse, topOfAtmosphereImbalance, twoBoxDerivativesInto, twoBoxMatrix, twoBoxModes } from './two-box.js';

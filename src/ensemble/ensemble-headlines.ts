@@ -110,9 +110,9 @@ export function ensembleHeadlines(result: EnsembleResult): EnsembleHeadlines {
     }),
     peak: { warming_k: { ...result.peak.warmingK }, year: { ...result.peak.year }, still_rising: result.peak.stillRising },
     sampled: {
-      ecs_k: percentiles('ecsK'),
-      tcr_k: percentiles('tcrK'),
-      ...(c.emissionDriven ? { irf100_scale: percentiles('irf100Scale') } : {}),
+      ecs_k: percentiles('ecs_k'),
+      tcr_k: percentiles('tcr_k'),
+      ...(c.emissionDriven && result.parameters.irf100_scale ? { irf100_scale: percentiles('irf100_scale') } : {}),
     },
     ecs_tcr_correlation: result.memberCount >= 3 && Number.isFinite(result.ecsTcrCorrelation) ? result.ecsTcrCorrelation : null,
   };

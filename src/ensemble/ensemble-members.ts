@@ -1,15 +1,16 @@
 import type { Co2Formula } from '../forcing/co2.js';
+import type { MemberParameters } from './member-parameters.js';
 import type { MemberPeaks } from './member-peaks.js';
-import type { MemberParameter } from './sample-members.js';
-import type { EnsembleSampling } from './sampling.js';
 
 /**
  * What defines an ensemble, apart from which members a piece of it holds. Two pieces merge only
  * when their configurations are identical.
  */
 export interface EnsembleConfig {
-  /** How member streams and draws are made (MEMBER_STREAM_SCHEME and the draw layout). */
+  /** Where the members come from and how they are drawn (MemberSource.scheme). */
   scheme: string;
+  /** How the members were made, one sentence each (MemberSource.notes). */
+  sourceNotes: string[];
   /** Random seed, integer in [0, 2^32). */
   seed: number;
   /** Members of the whole ensemble (all shards together). */
@@ -26,8 +27,6 @@ export interface EnsembleConfig {
   milestones: number[];
   /** CO2 formula of the input forcing. */
   co2Formula: Co2Formula;
-  /** Sampling of the parameters. */
-  sampling: EnsembleSampling;
   /**
    * True when members run the carbon cycle on the pathway's CO2 emissions (and draw the carbon-cycle
    * multiplier); false for concentration-driven ensembles.
@@ -67,7 +66,7 @@ export interface EnsembleMembers {
   /** Warming relative to the baseline mean, K, year-major: year k of member memberStart + r at k * memberCount + r. */
   warmingK: Float64Array;
   /** Each member's parameters. */
-  parameters: Record<MemberParameter, Float64Array>;
+  parameters: MemberParameters;
   /**
    * Each member's peak (highest annual warming and its year index), as the run found it; absent for
    * merged shards (shard files do not hold it), whose summary finds it in `warmingK`, bit for bit the same.

@@ -1,5 +1,3 @@
-import { streamRows } from './member-stream.js';
-import { MEMBER_PARAMETERS } from './sample-members.js';
 import { shardFileBytes } from './shard-file.js';
 
 /** What an ensemble run or a merge would allocate, estimated before it starts. */
@@ -12,11 +10,15 @@ export interface MemoryEstimate {
   largestText: number;
 }
 
-/** Per member: the parameters kept for the summary, and one scratch value of each percentile selection. */
-const PARAMETER_BYTES = MEMBER_PARAMETERS.length * 8;
-const SELECTOR_BYTES = 8;
-/** Per member of a streamed run: the propagator, forcing scales and state (14 Float64 and 2 Int32 values; member-stream.ts). */
-const STREAM_STATE_BYTES = 14 * 8 + 2 * 4;
+/**
+ * Per member: its parameters (up to about 24 values: the two-box ones, a scale per forcing agent and
+ * a few more) and the run's per-member scratch (state, step coefficients, forcing at both ends of
+ * the year, 14 values), Float64 each.
+ */
+const PARAMETER_BYTES = 24 * 8;
+const SCRATCH_BYTES = 14 * 8;
+/** Per member of an emission-driven run: its carbon-cycle state (four boxes and a few sums). */
+const CARBON_STATE_BYTES = 200;
 /**
  * Copies of a shard file's text alive at once while it is written or read: the base64 strings, the
  * JSON text (built with room to grow) and its UTF-8 bytes; 5 covers the measured 4.2 (a 20,000-member
@@ -25,31 +27,20 @@ const STREAM_STATE_BYTES = 14 * 8 + 2 * 4;
 const SHARD_TEXT_COPIES = 5;
 
 /**
- * Estimates the memory of an ensemble run of `members` members over `years` years, as
- * runEnsemble allocates it: a streamed concentration run holds a ring of 36 year-rows of all members
- * plus about 120 bytes of state per member (about 480 bytes per member: 0.48 GB for a million, of
- * which 0.46 GB measured for `warmcast ensemble swift`, 1 or 2 million members); a run that keeps
- * every member-year (a shard, or an emission pathway) holds 8 bytes per member-year, and a shard
- * also builds its file's text (about 5 copies of shardFileBytes).
+ * Estimates the memory of an ensemble run of `members` members over `years` years, as runEnsemble
+ * allocates it: every member-year of warming (8 bytes each: 44 MB for 10,000 members over
+ * 1750-2300), the members' parameters and scratch, and for a shard its file's text (about 5 copies
+ * of shardFileBytes).
  *
  * @param members members this run computes (a shard's own, not the whole ensemble's)
  * @param years years of the run
- * @param options `keep`: every member-year is kept (a shard or keepMembers); `emissionDriven`
- *   (always kept); `shard`: the members are written as a shard file; `threads` that compute
- *   percentiles (each has its own scratch, default 1)
- * @example ensembleMemory(1_000_000, 401, {}).bytes // 480,000,000 (0.48 GB)
+ * @param options `emissionDriven`: members carry a carbon cycle; `shard`: the members are written as a shard file
+ * @example ensembleMemory(10_000, 551, {}).bytes // ≈ 47 MB
  */
-export function ensembleMemory(
-  members: number,
-  years: number,
-  options: { keep?: boolean; emissionDriven?: boolean; shard?: boolean; threads?: number },
-): MemoryEstimate {
-  const kept = options.keep === true || options.shard === true || options.emissionDriven === true;
-  const rows = streamRows(years, kept);
-  const stream = options.emissionDriven ? 0 : STREAM_STATE_BYTES;
+export function ensembleMemory(members: number, years: number, options: { emissionDriven?: boolean; shard?: boolean }): MemoryEstimate {
   const text = options.shard ? shardFileBytes(members, years) : 0;
-  const perMember = rows * 8 + PARAMETER_BYTES + stream + SELECTOR_BYTES * ((options.threads ?? 1) + 1);
-  return { bytes: members * perMember + SHARD_TEXT_COPIES * text, largestArray: rows * members, largestText: text };
+  const perMember = years * 8 + PARAMETER_BYTES + SCRATCH_BYTES + (options.emissionDriven ? CARBON_STATE_BYTES : 0);
+  return { bytes: members * perMember + SHARD_TEXT_COPIES * text, largestArray: years * members, largestText: text };
 }
 
 /**
@@ -74,7 +65,7 @@ const MERGE_TEXT_COPIES = 8;
  */
 export function mergeMemory(membersTotal: number, years: number, shardMembers: number): MemoryEstimate {
   const text = shardFileBytes(shardMembers, years);
-  const perMember = years * 8 + PARAMETER_BYTES + 2 * SELECTOR_BYTES;
+  const perMember = years * 8 + PARAMETER_BYTES;
   const shard = MERGE_TEXT_COPIES * text + shardMembers * (years * 8 + PARAMETER_BYTES);
   return { bytes: membersTotal * perMember + shard, largestArray: membersTotal * years, largestText: text };
 }

@@ -1,8 +1,8 @@
 import { onePercentForcing } from '../climate/calibrate.js';
+import { twoBoxStepModes, type StepMode } from '../climate/two-box-step.js';
 import type { TwoBoxParams } from '../climate/two-box.js';
 import type { Co2Formula } from '../forcing/co2.js';
 import { findRoot } from '../numerics/find-root.js';
-import { rampGain } from './modal-propagator.js';
 
 /** Bracket for the exchange coefficient gamma, W m-2 K-1: the same as `calibrate` searches. */
 export const EXCHANGE_RANGE = [1e-6, 50] as const;
@@ -61,9 +61,9 @@ export function tcrSolver(formula: Co2Formula): TcrSolver {
  * CO2 run (IPCC AR6 WG1 glossary), defined exactly as `transientResponse` in src/climate defines it
  * (annual means (T[k] + T[k+1]) / 2 of the exact one-year propagation, k = 60..79), but evaluated
  * from the model's two modes: the surface warming is the sum of the modes (the first row of the
- * eigenvector matrix V of modal-propagator.ts is [1, 1]), each mode is a first-order recursive
+ * eigenvector matrix V of climate/two-box-step.ts is [1, 1]), each mode is a first-order recursive
  * filter of the forcing, and its 20-year mean is a fixed polynomial in the mode's decay factor
- * (from {@link tcrSolver}), evaluated by Horner's rule. About 0.2 µs and no allocation per call.
+ * (from {@link tcrSolver}), evaluated by Horner's rule.
  *
  * @param solver from {@link tcrSolver}
  * @param p two-box parameters (lambda, gamma > 0)
@@ -77,64 +77,21 @@ export function solverTransientResponse(solver: TcrSolver, p: TwoBoxParams, forc
 
 /** TCR per W m-2 of 2xCO2 forcing, K / (W m-2), for scalar parameters (see solverTransientResponse). */
 function unitResponse(solver: TcrSolver, c: number, cd: number, eps: number, lambda: number, gamma: number): number {
-  // The modes as twoBoxModes computes them (Geoffroy et al. 2013a, eqs. 9-14; efficacy version 2013b),
-  // inlined so that nothing is allocated.
-  const b = (lambda + eps * gamma) / c + gamma / cd;
-  const bStar = (lambda + eps * gamma) / c - gamma / cd;
-  const root = Math.sqrt(b * b - (4 * lambda * gamma) / (c * cd));
-  const tauFast = (c * cd * (b - root)) / (2 * lambda * gamma);
-  const tauSlow = (c * cd * (b + root)) / (2 * lambda * gamma);
-  const phiFast = (c * (bStar - root)) / (2 * eps * gamma);
-  const phiSlow = (c * (bStar + root)) / (2 * eps * gamma);
-  const d = phiSlow - phiFast;
-  const hf = 1 / tauFast;
-  const hs = 1 / tauSlow;
-  // One transcendental call per mode: e^-h = 1 + expm1(-h), and the gains from the same value.
-  const mf = Math.expm1(-hf);
-  const ms = Math.expm1(-hs);
-  const ef = 1 + mf;
-  const es = 1 + ms;
-  // The surface gains of each mode, as in modalTwoBoxPropagatorInto.
-  const bf = (phiSlow / (c * d)) * tauFast;
-  const bs = (-phiFast / (c * d)) * tauSlow;
-  const pw = solver.levelWeights;
-  const qw = solver.rampWeights;
-  // Horner's rule in e^2 on the even and odd coefficients separately (P(e) = E(e^2) + e O(e^2)):
-  // eight independent chains of 40 steps instead of four of 80, half the latency.
-  const ef2 = ef * ef;
-  const es2 = es * es;
-  let pfe = 0;
-  let pfo = 0;
-  let qfe = 0;
-  let qfo = 0;
-  let pse = 0;
-  let pso = 0;
-  let qse = 0;
-  let qso = 0;
-  for (let m = STEPS - 2; m >= 0; m -= 2) {
-    const p0 = pw[m];
-    const p1 = pw[m + 1];
-    const q0 = qw[m];
-    const q1 = qw[m + 1];
-    pfe = pfe * ef2 + p0;
-    pfo = pfo * ef2 + p1;
-    qfe = qfe * ef2 + q0;
-    qfo = qfo * ef2 + q1;
-    pse = pse * es2 + p0;
-    pso = pso * es2 + p1;
-    qse = qse * es2 + q0;
-    qso = qso * es2 + q1;
-  }
-  const pf = pfe + ef * pfo;
-  const qf = qfe + ef * qfo;
-  const ps = pse + es * pso;
-  const qs = qse + es * qso;
-  return bf * (rampGainOf(hf, mf) * qf - mf * pf) + bs * (rampGainOf(hs, ms) * qs - ms * ps);
+  // The surface warming is the sum of the step's two modes (climate/two-box-step.ts).
+  const { fast, slow } = twoBoxStepModes({ upperHeatCapacity: c, deepHeatCapacity: cd, deepEfficacy: eps, feedbackWm2K: lambda, exchangeWm2K: gamma });
+  return modeResponse(solver, fast) + modeResponse(solver, slow);
 }
 
-/** rampGain(h) of modal-propagator.ts given expm1(-h) = m already computed. */
-function rampGainOf(h: number, m: number): number {
-  return h < 1e-2 ? rampGain(h) : 1 + m / h;
+/** One mode's mean over years 61-80: level P(e) + ramp Q(e), the polynomials by Horner's rule. */
+function modeResponse(solver: TcrSolver, mode: StepMode): number {
+  const { levelWeights: pw, rampWeights: qw } = solver;
+  let p = 0;
+  let q = 0;
+  for (let m = STEPS - 1; m >= 0; m--) {
+    p = p * mode.decay + pw[m];
+    q = q * mode.decay + qw[m];
+  }
+  return mode.level * p + mode.ramp * q;
 }
 
 /**

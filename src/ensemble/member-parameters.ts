@@ -28,7 +28,7 @@ export type ForcingScaleKey = `scale_${ForcingAgent}`;
  * const block: MemberParameters = { count: 2, values: {
  *   feedback_wm2k: Float64Array.of(1.3, 1.1), upper_heat_capacity: Float64Array.of(8, 7),
  *   deep_heat_capacity: Float64Array.of(100, 110), exchange_wm2k: Float64Array.of(0.7, 0.8),
- *   deep_efficacy: Float64Array.of(1.2, 1.3), scale_aerosol: Float64Array.of(0.9, 1.2) } };
+ *   deep_efficacy: Float64Array.of(1.2, 1.3), scale_aerosol_aci: Float64Array.of(0.9, 1.2) } };
  */
 export interface MemberParameters {
   /** Members in the block. */
@@ -62,7 +62,7 @@ export interface MemberSource {
 
 /**
  * The key of an agent's forcing multiplier.
- * @example forcingScaleKey('aerosol') // 'scale_aerosol'
+ * @example forcingScaleKey('aerosol_aci') // 'scale_aerosol_aci'
  */
 export function forcingScaleKey(agent: ForcingAgent): ForcingScaleKey {
   return `scale_${agent}`;

@@ -1,7 +1,7 @@
 import { InputError, type InputProblem } from '../errors.js';
 import type { EnsembleConfig, EnsembleMembers, EnsembleOrigin } from './ensemble-members.js';
 import { shardRange } from './run-ensemble.js';
-import { MEMBER_PARAMETERS, emptyParameters, type MemberParameter } from './sample-members.js';
+import { emptyMemberParameters } from './member-parameters.js';
 
 /** One shard as read from a file. */
 export interface ShardInput {
@@ -77,7 +77,7 @@ export function shardMerger(): ShardMerger {
           memberStart: 0,
           memberCount: m.config.membersTotal,
           warmingK: new Float64Array(m.config.membersTotal * n),
-          parameters: emptyParameters(m.config.membersTotal),
+          parameters: emptyMemberParameters(m.config.membersTotal, Object.keys(m.parameters.values)),
           redraws: 0,
         };
       }
@@ -123,7 +123,12 @@ export function shardMerger(): ShardMerger {
       for (let k = 0; k < m.config.yearCount; k++) {
         out.warmingK.set(m.warmingK.subarray(k * m.memberCount, (k + 1) * m.memberCount), k * total + m.memberStart);
       }
-      for (const name of MEMBER_PARAMETERS as readonly MemberParameter[]) out.parameters[name].set(m.parameters[name], m.memberStart);
+      const keys = Object.keys(m.parameters.values);
+      if (keys.join() !== Object.keys(out.parameters.values).join()) {
+        problems.push({ file: s.file, code: 'input.shard-mismatch', message: `must hold the same member parameters as ${first.file} (${Object.keys(out.parameters.values).join(', ')}), got ${keys.join(', ')}` });
+        return;
+      }
+      for (const key of keys) out.parameters.values[key]!.set(m.parameters.values[key]!, m.memberStart);
       out.redraws += m.redraws;
     },
 
@@ -169,7 +174,7 @@ function configDifferences(c: EnsembleConfig, ref: EnsembleConfig): string[] {
   }
   option('milestones', 'the milestone years of the crossing probabilities', (x) => x.milestones.join(','));
   // An emission-driven ensemble also samples the carbon cycle: that is the kind of pathway, said above.
-  if (differ('scheme') || (differ('sampling') && !differ('emissionDriven'))) out.push('the parameter sampling (the shards come from different warmcast versions or sampling settings)');
+  if (differ('scheme') || differ('sourceNotes')) out.push('where the members come from (the shards come from different warmcast versions, parameter sets or sampling settings)');
   return out;
 }
 

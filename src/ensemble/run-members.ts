@@ -1,109 +1,186 @@
+import { annualCarbonState, annualCarbonStepForIncreaseInto, annualCarbonStepInto, atmosphericGtc } from '../carbon/annual-carbon-step.js';
+import { GTC_PER_PPM } from '../carbon/units.js';
+import { emptyTwoBoxSteps, stepTwoBoxInto, twoBoxStepsInto, type TwoBoxSteps } from '../climate/two-box-step.js';
+import { FORCING_AGENTS, ghgForcingFunction, type ForcingAgent } from '../forcing/agents.js';
 import type { Co2Formula } from '../forcing/co2.js';
-import type { ExceedanceCounter } from './exceedance-counter.js';
-import type { MemberParameter } from './sample-members.js';
-import { runMemberLoop } from './member-stage.js';
-import { runEmissionMembersInto, type MemberCarbonTask } from './run-emission-members.js';
-import type { EnsembleSampling } from './sampling.js';
+import { forcingScaleKey, sliceMemberParameters, type MemberParameters } from './member-parameters.js';
 
 /**
- * Everything a member run needs, as plain data (it is sent to worker threads as is).
- *
- * Concentration-driven runs: a member's forcing is its CO2 multiplier times the CO2 agent, its
- * aerosol multiplier times the aerosol agent, plus the sum of the other agents, all precomputed once
- * per pathway. Emission-driven runs carry `carbon`: each member then steps its own CO2 concentration
- * with the annual carbon-cycle step (run-emission-members.ts), driven by its own warming and its
- * carbon-cycle multiplier (drawn after its climate parameters, so the climate draws of member i
- * stay the same); `co2Wm2` is then unused and `otherWm2` holds the agents other than CO2.
+ * What each member of an emission-driven ensemble needs to run its own carbon cycle, as plain data.
+ * Node values on the ensemble's annual grid.
  */
+export interface MemberCarbonTask {
+  /** CO2 concentration at nodes where it is given (the spliced history), ppm; NaN where emissions are. */
+  co2Ppm: Float64Array;
+  /** CO2 emission rate at nodes where it is given, Gt C yr-1; NaN where the concentration is. */
+  co2EmissionGtcPerYr: Float64Array;
+  /** CO2 of the starting equilibrium, ppm (the first node's, or pre-industrial when it is an emission node). */
+  co2StartPpm: number;
+  /** CH4 and N2O concentrations at every node, ppb (from the central run: they have no climate feedback). */
+  ch4Ppb: Float64Array;
+  n2oPpb: Float64Array;
+}
+
+/** The forcing members share, as plain data. */
 export interface MemberTask {
-  seed: number;
-  sampling: EnsembleSampling;
-  /** Formula the CO2 agent was computed with, at its own 2xCO2 forcing. */
+  /** Formula the CO2 agent was computed with (at its own 2xCO2 forcing). */
   co2Formula: Co2Formula;
-  /** CO2 ERF at each year, W m-2 (unscaled). */
-  co2Wm2: Float64Array;
-  /** Aerosol ERF at each year, W m-2 (unscaled). */
-  aerosolWm2: Float64Array;
-  /** Sum of every other agent's ERF at each year, W m-2. */
-  otherWm2: Float64Array;
-  /** Indices of the first and last baseline years (inclusive). */
-  baselineFrom: number;
-  baselineTo: number;
-  /** Emission-driven runs: the CO2 drivers of each member's carbon cycle (absent for concentration runs). */
+  /** ERF of each agent at each year node, W m-2, unscaled. */
+  forcing: Record<ForcingAgent, Float64Array>;
+  /**
+   * Emission-driven runs: the drivers of each member's own carbon cycle. Members then compute their
+   * CO2, CH4 and N2O forcing from their own CO2 and the central CH4 and N2O (`forcing`'s values of
+   * those three agents are not used).
+   */
   carbon?: MemberCarbonTask;
 }
 
+/** The greenhouse gases an emission-driven member computes itself. */
+const OWN_GASES: readonly ForcingAgent[] = ['co2', 'ch4', 'n2o'];
+
 /**
- * Where member results go: a block of `memberCount` members starting at member `blockStart`, stored
- * year-major (all members of year 0, then of year 1, ...), the layout per-year statistics read.
+ * Members stepped together through all the years before the next ones start: their step
+ * coefficients, state and forcing (about 14 values each, 56 kB) then stay in the processor's cache.
  */
-export interface MemberBlock {
-  /** Global index of the block's first member. */
-  blockStart: number;
-  /** Members in the block (the length of each year's row). */
-  memberCount: number;
-  /** Warming relative to the baseline mean, K: year k of member blockStart + r at k * memberCount + r. */
-  warmingK: Float64Array;
-  /** Parameters of each member, indexed by r. */
-  parameters: Record<MemberParameter, Float64Array>;
-}
-
-/** How often (in members) a member run reports progress. */
-export const PROGRESS_EVERY = 250;
+const BLOCK_MEMBERS = 512;
 
 /**
- * Runs members [from, to): draws each member's parameters from its own stream (so the result of
- * member i depends only on the seed and i), builds its exact one-year propagator (the closed-form
- * modal one, equal to `twoBoxPropagator` to rounding) and steps the two-box model from equilibrium
- * exactly as `propagateTwoBoxInto` does, assembling the member's forcing year by year on the way,
- * then stores the surface warming relative to the member's own baseline mean.
+ * Runs every member from rest through the years: year by year, each member's forcing is the sum over
+ * agents of its `scale_<agent>` times the agent's series (members of an emission-driven run first
+ * step their own carbon cycle, see {@link MemberTask}), then the one two-box step of
+ * src/climate/two-box-step.ts advances the members together. Members go in blocks of 512.
  *
- * @param task the shared inputs
- * @param from first member (global index)
- * @param to end member, exclusive
- * @param block receives members from..to-1 (which must lie within it)
- * @param onProgress called with the number of members done so far in this call
- * @param exceedance receives each member's threshold exceedances, counted while its row is in cache (optional)
- * @returns unphysical draws discarded in total
+ * @param task the forcing the members share
+ * @param members the members' parameters (two-box keys, scale_<agent>, `irf100_scale` for carbon)
+ * @param onProgress called after each block with the members done
+ * @param co2Out emission-driven runs: receives each member's CO2, ppm, in the same layout (optional)
+ * @returns the surface temperature anomaly from rest, K, year-major: year k of member r at k * count + r
+ * @example runMembers(task, members)[k * members.count + r] // member r in year k
  */
-export function runMembersInto(
-  task: MemberTask,
-  from: number,
-  to: number,
-  block: MemberBlock,
-  onProgress?: (done: number) => void,
-  exceedance?: ExceedanceCounter,
-): number {
-  if (task.carbon) return runEmissionMembersInto(task, task.carbon, from, to, block, onProgress, exceedance);
-  const n = task.co2Wm2.length;
-  const { co2Wm2, aerosolWm2, otherWm2 } = task;
-  return runMemberLoop(task, n, from, to, block, false, onProgress, exceedance, (draw, prop, stage, row) => {
-    const { phi, g0, g1 } = prop;
-    const co2Scale = draw.forcing2xScale;
-    const aerosolScale = draw.aerosolScale;
-    // propagateTwoBoxInto (src/climate/exact-propagator.ts) with the member's forcing assembled as it
-    // goes, operation for operation, so that no forcing or deep-ocean series is stored.
-    const p00 = phi[0];
-    const p01 = phi[1];
-    const p10 = phi[2];
-    const p11 = phi[3];
-    const g0t = g0[0];
-    const g0d = g0[1];
-    const g1t = g1[0];
-    const g1d = g1[1];
-    let t = 0;
-    let d = 0;
-    let f0 = co2Scale * co2Wm2[0] + aerosolScale * aerosolWm2[0] + otherWm2[0];
-    stage[row] = 0;
-    for (let k = 0; k + 1 < n; k++) {
-      const f1 = co2Scale * co2Wm2[k + 1] + aerosolScale * aerosolWm2[k + 1] + otherWm2[k + 1];
-      const df = f1 - f0;
-      const tn = p00 * t + p01 * d + g0t * f0 + g1t * df;
-      d = p10 * t + p11 * d + g0d * f0 + g1d * df;
-      t = tn;
-      stage[row + k + 1] = t;
-      f0 = f1;
-    }
-  });
+export function runMembers(task: MemberTask, members: MemberParameters, onProgress?: (done: number) => void, co2Out?: Float64Array): Float64Array {
+  const m = members.count;
+  const n = task.forcing.co2.length;
+  const surfaceK = new Float64Array(m * n);
+  for (let r0 = 0; r0 < m; r0 += BLOCK_MEMBERS) {
+    const r1 = Math.min(m, r0 + BLOCK_MEMBERS);
+    const block = sliceMemberParameters(members, r0, r1);
+    // Year k of the block's member j goes to k * m + r0 + j.
+    const store = (k: number, t: Float64Array) => surfaceK.set(t, k * m + r0);
+    if (task.carbon) runWithCarbon(task, block, store, co2Out && ((k, ppm) => co2Out.set(ppm, k * m + r0)));
+    else runBlock(task, block, store);
+    onProgress?.(r1);
+  }
+  return surfaceK;
 }
 
+/** The block's two-box step coefficients. */
+function blockSteps(block: MemberParameters): TwoBoxSteps {
+  const v = block.values;
+  return twoBoxStepsInto(
+    { feedbackWm2K: v.feedback_wm2k, upperHeatCapacity: v.upper_heat_capacity, deepHeatCapacity: v.deep_heat_capacity, exchangeWm2K: v.exchange_wm2k, deepEfficacy: v.deep_efficacy },
+    emptyTwoBoxSteps(block.count),
+  );
+}
+
+/**
+ * The forcing of the block's members in year k, into `out`: agents without a scale add the same to
+ * every member (one sum per year, made once); the others are scaled member by member. Agents in
+ * `skip` are left out (the gases emission-driven members compute themselves).
+ */
+function blockForcing(task: MemberTask, block: MemberParameters, skip: readonly ForcingAgent[]): (k: number, out: Float64Array) => void {
+  const n = task.forcing.co2.length;
+  const shared = new Float64Array(n);
+  const scaled: { series: Float64Array; scale: Float64Array }[] = [];
+  for (const agent of FORCING_AGENTS) {
+    if (skip.includes(agent)) continue;
+    const scale = block.values[forcingScaleKey(agent)];
+    if (scale) scaled.push({ series: task.forcing[agent], scale });
+    else for (let k = 0; k < n; k++) shared[k] += task.forcing[agent][k];
+  }
+  return (k, out) => {
+    out.fill(shared[k]);
+    for (const { series, scale } of scaled) {
+      const f = series[k];
+      for (let r = 0; r < out.length; r++) out[r] += scale[r] * f;
+    }
+  };
+}
+
+/** The year loop of concentration-driven members: forcing, then the two-box step. */
+function runBlock(task: MemberTask, block: MemberParameters, store: (k: number, t: Float64Array) => void): void {
+  const n = task.forcing.co2.length;
+  const steps = blockSteps(block);
+  const forcingInto = blockForcing(task, block, []);
+  let start = new Float64Array(block.count);
+  let end = new Float64Array(block.count);
+  const t = new Float64Array(block.count);
+  const d = new Float64Array(block.count);
+  forcingInto(0, start);
+  for (let k = 0; k + 1 < n; k++) {
+    forcingInto(k + 1, end);
+    stepTwoBoxInto(steps, start, end, t, d);
+    store(k + 1, t);
+    [start, end] = [end, start];
+  }
+}
+
+/**
+ * The year loop of emission-driven members. Year k -> k+1: each member's carbon cycle steps with its
+ * warming at node k (annualCarbonStepInto; in concentration years annualCarbonStepForIncreaseInto,
+ * which diagnoses the emission that reproduces the given concentration), its CO2, CH4 and N2O ERF at
+ * node k+1 follow from its own CO2 (scaled by its scale_co2, scale_ch4, scale_n2o), then the two-box
+ * step. Emission years use the mean of the node rates (the integral of emissions linear between
+ * nodes); the year after the last concentration node uses the mean of the last diagnosed rate and
+ * the first given one, as runEmissionDriven joins them.
+ */
+function runWithCarbon(
+  task: MemberTask,
+  block: MemberParameters,
+  store: (k: number, t: Float64Array) => void,
+  storeCo2?: (k: number, ppm: Float64Array) => void,
+): void {
+  const carbon = task.carbon!;
+  const m = block.count;
+  const n = carbon.co2Ppm.length;
+  const v = block.values;
+  const steps = blockSteps(block);
+  const otherForcingInto = blockForcing(task, block, OWN_GASES);
+  const ones = new Float64Array(m).fill(1);
+  const irf100 = v.irf100_scale ?? ones;
+  const [co2Scale, ch4Scale, n2oScale] = OWN_GASES.map((a) => v[forcingScaleKey(a)] ?? ones);
+  const ghg = ghgForcingFunction({ co2Formula: task.co2Formula });
+  const { co2Ppm: given, co2EmissionGtcPerYr: emission, co2StartPpm, ch4Ppb, n2oPpb } = carbon;
+  const states = Array.from({ length: m }, () => annualCarbonState());
+  const lastRate = new Float64Array(m);
+  const ppm = new Float64Array(m).fill(Number.isNaN(given[0]) ? co2StartPpm : given[0]);
+  const forcingInto = (k: number, out: Float64Array) => {
+    otherForcingInto(k, out);
+    for (let r = 0; r < m; r++) {
+      const f = ghg(ppm[r], ch4Ppb[k], n2oPpb[k]);
+      out[r] += co2Scale[r] * f.co2 + ch4Scale[r] * f.ch4 + n2oScale[r] * f.n2o;
+    }
+  };
+  let start = new Float64Array(m);
+  let end = new Float64Array(m);
+  const t = new Float64Array(m);
+  const d = new Float64Array(m);
+  forcingInto(0, start);
+  storeCo2?.(0, ppm);
+  for (let k = 0; k + 1 < n; k++) {
+    for (let r = 0; r < m; r++) {
+      if (!Number.isNaN(given[k + 1])) {
+        lastRate[r] = annualCarbonStepForIncreaseInto(states[r], t[r], irf100[r], GTC_PER_PPM * (given[k + 1] - given[k]));
+        ppm[r] = given[k + 1];
+      } else {
+        const rate = Number.isNaN(emission[k]) ? lastRate[r] : emission[k];
+        annualCarbonStepInto(states[r], t[r], irf100[r], 0.5 * (rate + emission[k + 1]));
+        ppm[r] = co2StartPpm + atmosphericGtc(states[r]) / GTC_PER_PPM;
+      }
+    }
+    storeCo2?.(k + 1, ppm);
+    forcingInto(k + 1, end);
+    stepTwoBoxInto(steps, start, end, t, d);
+    store(k + 1, t);
+    [start, end] = [end, start];
+  }
+}

@@ -1,37 +1,23 @@
 import { InputError, type InputProblem } from '../errors.js';
 import type { EnsembleConfig, EnsembleMembers, EnsembleOrigin } from './ensemble-members.js';
-import type { AssessedRange } from './assessed-range.js';
-import { MEMBER_PARAMETERS, MEMBER_PARAMETER_KEYS, type MemberParameter } from './sample-members.js';
-import type { EnsembleSampling } from './sampling.js';
+import { TWO_BOX_KEYS, type MemberParameters } from './member-parameters.js';
 
 /** The `format` field of a shard file. */
 export const SHARD_FORMAT = 'warmcast-ensemble-shard';
 /** Version of the shard layout. */
-export const SHARD_VERSION = 2;
+export const SHARD_VERSION = 3;
 
-/** JSON keys of the sampling description. */
-const SAMPLING_KEYS = {
-  ecsK: 'ecs_k',
-  tcrK: 'tcr_k',
-  forcing2xScale: 'forcing_2x_scale',
-  aerosolScale: 'aerosol_scale',
-  irf100Scale: 'irf100_scale',
-  ecsTcrCorrelation: 'ecs_tcr_correlation',
-  upperHeatCapacity: 'upper_heat_capacity',
-  deepHeatCapacity: 'deep_heat_capacity',
-  deepEfficacy: 'deep_efficacy',
-} as const satisfies Record<keyof EnsembleSampling, string>;
-const RANGE_FIELDS = ['ecsK', 'tcrK', 'forcing2xScale', 'aerosolScale', 'irf100Scale'] as const;
-const PERCENTILE_FIELDS = ['p05', 'p17', 'p50', 'p83', 'p95'] as const;
+/** Member parameters a shard file is sized for (the two-box ones, a scale per agent and a few more). */
+const PARAMETERS_PER_MEMBER = 24;
 
 /**
- * Bytes of a shard file: every member's yearly warming and its seven parameters as little-endian
- * Float64 in base64 (4/3 of 8 bytes per value), plus under 4 kB of description (the pathway's name,
- * files and notes included).
- * @example shardFileBytes(10_000, 551) // ≈ 59.4 MB
+ * Bytes of a shard file: every member's yearly warming and its parameters (up to about 24) as
+ * little-endian Float64 in base64 (4/3 of 8 bytes per value), plus under 8 kB of description (the
+ * pathway's name, files and notes, where the members come from).
+ * @example shardFileBytes(10_000, 551) // ≈ 60 MB
  */
 export function shardFileBytes(members: number, years: number): number {
-  return Math.ceil(((members * (years + MEMBER_PARAMETERS.length) * 8) / 3) * 4) + 4000;
+  return Math.ceil(((members * (years + PARAMETERS_PER_MEMBER) * 8) / 3) * 4) + 8000;
 }
 
 /**
@@ -47,7 +33,6 @@ export function shardFileBytes(members: number, years: number): number {
  */
 export function shardToJson(members: EnsembleMembers): string {
   const c = members.config;
-  const sampling = Object.fromEntries(Object.entries(SAMPLING_KEYS).map(([field, key]) => [key, c.sampling[field as keyof EnsembleSampling]]));
   return JSON.stringify({
     format: SHARD_FORMAT,
     version: SHARD_VERSION,
@@ -62,7 +47,7 @@ export function shardToJson(members: EnsembleMembers): string {
       thresholds: c.thresholds,
       milestones: c.milestones,
       co2_formula: c.co2Formula,
-      sampling,
+      source_notes: c.sourceNotes,
       emission_driven: c.emissionDriven,
       input_checksum: c.inputChecksum,
     },
@@ -73,7 +58,7 @@ export function shardToJson(members: EnsembleMembers): string {
     redraws: members.redraws,
     encoding: 'float64 little-endian, base64; warming_k year-major (year k of member member_start + r at k * member_count + r)',
     warming_k: float64ToBase64(members.warmingK),
-    parameters: Object.fromEntries(MEMBER_PARAMETERS.map((name) => [MEMBER_PARAMETER_KEYS[name], float64ToBase64(members.parameters[name])])),
+    parameters: Object.fromEntries(Object.entries(members.parameters.values).map(([key, values]) => [key, float64ToBase64(values!)])),
   });
 }
 
@@ -125,7 +110,8 @@ export function shardFromJson(text: string, file: string): EnsembleMembers {
   if (typeof cfg.scheme !== 'string') problem('config.scheme', 'must be a string');
   if (typeof cfg.emission_driven !== 'boolean') problem('config.emission_driven', 'must be true or false');
   if (typeof cfg.input_checksum !== 'string') problem('config.input_checksum', 'must be a string');
-  const sampling = readSampling(cfg.sampling, problem);
+  const sourceNotes = Array.isArray(cfg.source_notes) && cfg.source_notes.every((x) => typeof x === 'string') ? (cfg.source_notes as string[]) : [];
+  if (sourceNotes !== cfg.source_notes) problem('config.source_notes', 'must be a list of strings');
 
   let shard: { index: number; count: number } | undefined;
   if (doc.shard !== null) {
@@ -138,9 +124,9 @@ export function shardFromJson(text: string, file: string): EnsembleMembers {
   const redraws = int(doc.redraws, 'redraws');
   const warmingK = base64ToFloat64(doc.warming_k, memberCount * yearCount, 'warming_k', problem);
   const stored = (isObject(doc.parameters) ? doc.parameters : {}) as Record<string, unknown>;
-  const parameters = Object.fromEntries(
-    MEMBER_PARAMETERS.map((name) => [name, base64ToFloat64(stored[MEMBER_PARAMETER_KEYS[name]], memberCount, `parameters.${MEMBER_PARAMETER_KEYS[name]}`, problem)]),
-  ) as Record<MemberParameter, Float64Array>;
+  for (const key of TWO_BOX_KEYS) if (!(key in stored)) problem(`parameters.${key}`, 'must be given (base64 Float64 values, one per member)');
+  const values = Object.fromEntries(Object.entries(stored).map(([key, text]) => [key, base64ToFloat64(text, memberCount, `parameters.${key}`, problem)]));
+  const parameters: MemberParameters = { count: memberCount, values: values as MemberParameters['values'] };
   if (problems.length > 0) throw new InputError(problems);
 
   const config: EnsembleConfig = {
@@ -153,7 +139,7 @@ export function shardFromJson(text: string, file: string): EnsembleMembers {
     thresholds,
     milestones,
     co2Formula: cfg.co2_formula as EnsembleConfig['co2Formula'],
-    sampling: sampling!,
+    sourceNotes,
     emissionDriven: cfg.emission_driven as boolean,
     inputChecksum: cfg.input_checksum as string,
   };
@@ -175,27 +161,6 @@ function readOrigin(value: unknown, problem: (field: string, message: string) =>
     inputs: (inputs as { path: string; sha256: string }[]).map(({ path, sha256 }) => ({ path, sha256 })),
     notes: [...(v.notes as string[])],
   };
-}
-
-function readSampling(value: unknown, problem: (field: string, message: string) => void): EnsembleSampling | undefined {
-  if (!isObject(value)) {
-    problem('config.sampling', 'must be an object');
-    return undefined;
-  }
-  const v = value as Record<string, unknown>;
-  const out: Record<string, unknown> = {};
-  for (const [field, key] of Object.entries(SAMPLING_KEYS)) {
-    const x = v[key];
-    if ((RANGE_FIELDS as readonly string[]).includes(field)) {
-      const r = (isObject(x) ? x : {}) as Record<string, unknown>;
-      if (!PERCENTILE_FIELDS.every((p) => typeof r[p] === 'number')) problem(`config.sampling.${key}`, 'must have numbers p05, p17, p50, p83, p95');
-      out[field] = Object.fromEntries(PERCENTILE_FIELDS.map((p) => [p, r[p]])) as unknown as AssessedRange;
-    } else {
-      if (typeof x !== 'number') problem(`config.sampling.${key}`, 'must be a number');
-      out[field] = x;
-    }
-  }
-  return out as unknown as EnsembleSampling;
 }
 
 function isObject(value: unknown): value is object {

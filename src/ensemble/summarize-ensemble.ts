@@ -1,12 +1,9 @@
 import { ConfigError } from '../errors.js';
-import { QuantileSelector, quantilesInPlace } from '../numerics/quantiles.js';
-import { ExceedanceCounter } from './exceedance-counter.js';
+import { quantilesInPlace } from '../numerics/quantiles.js';
+import { memberSensitivities } from './member-sensitivities.js';
 import { emptyMemberPeaks, memberPeaksInto, type MemberPeaks } from './member-peaks.js';
 import type { EnsembleConfig, EnsembleMemberParameters, EnsembleMembers } from './ensemble-members.js';
 import { RUNNING_MEAN_WINDOW } from './running-mean.js';
-import { MEMBER_PARAMETERS, type MemberParameter } from './sample-members.js';
-import { describeSampling } from './sampling.js';
-import { MEMBER_STREAM_SCHEME } from './member-generators.js';
 
 /** The percentiles every ensemble reports, as probabilities, and their names. */
 export const PERCENTILES = [0.05, 0.17, 0.5, 0.83, 0.95] as const;
@@ -80,8 +77,8 @@ export interface EnsembleResult {
   crossings: ThresholdCrossing[];
   /** Unphysical draws discarded (redrawn) while sampling these members. */
   redraws: number;
-  /** Quantiles and mean of each sampled or derived parameter. */
-  parameters: Record<MemberParameter, ParameterSummary>;
+  /** Quantiles and mean of each member parameter, by key (MemberParameters.values). */
+  parameters: Record<string, ParameterSummary>;
   /** Pearson correlation of the members' ECS and TCR. */
   ecsTcrCorrelation: number;
   /** Percentiles of the members' own peak warming and peak year, and the share still rising at the end. */
@@ -99,10 +96,7 @@ export interface EnsembleResult {
   workersUsed: number;
 }
 
-/**
- * The parts of a summary that scan every member-year, as computed by {@link yearPercentilesInto} and
- * {@link exceedanceCountsInto} (possibly split over threads: percentiles by years, counts by members).
- */
+/** The parts of a summary that scan every member-year: {@link yearPercentilesInto} and {@link exceedanceCountsInto}. */
 export interface MemberStatistics {
   /** The five percentiles (PERCENTILES order), each one value per year. */
   percentiles: Float64Array[];
@@ -134,7 +128,7 @@ export function summarizeEnsemble(members: EnsembleMembers | EnsembleMemberParam
     if (!warmingK) throw new ConfigError('summarizeEnsemble needs the members\' yearly warming (run with keepMembers) or their statistics', 'members');
     stats = { percentiles: PERCENTILES.map(() => new Float64Array(n)), counts: new Float64Array(exceedanceCountsLength(thresholds.length, n)) };
     yearPercentilesInto(warmingK, m, 0, n, stats.percentiles);
-    exceedanceCountsInto(warmingK, m, n, thresholds, 0, m, stats.counts);
+    exceedanceCountsInto(warmingK, m, n, thresholds, stats.counts);
   }
   const percentiles = Object.fromEntries(PERCENTILE_NAMES.map((name, j) => [name, stats.percentiles[j]])) as Record<PercentileName, Float64Array>;
   let peaks = members.peaks;
@@ -177,10 +171,9 @@ export function summarizeEnsemble(members: EnsembleMembers | EnsembleMemberParam
     };
   });
 
-  const parameters = Object.fromEntries(MEMBER_PARAMETERS.map((name) => [name, summarizeValues(members.parameters[name])])) as Record<
-    MemberParameter,
-    ParameterSummary
-  >;
+  const { ecs_k: ecs, tcr_k: tcr } = memberSensitivities(members.parameters, config.co2Formula);
+  const parameters: Record<string, ParameterSummary> = { ecs_k: summarizeValues(ecs), tcr_k: summarizeValues(tcr) };
+  for (const [key, values] of Object.entries(members.parameters.values)) if (values) parameters[key] = summarizeValues(values);
 
   return {
     years,
@@ -192,7 +185,7 @@ export function summarizeEnsemble(members: EnsembleMembers | EnsembleMemberParam
     crossings,
     redraws: members.redraws,
     parameters,
-    ecsTcrCorrelation: pearson(members.parameters.ecsK, members.parameters.tcrK),
+    ecsTcrCorrelation: pearson(ecs, tcr),
     peak: summarizePeaks(peaks, config.firstYear, n),
     notes: ensembleNotes(members),
     ...(warmingK ? { members: { ...members, warmingK, peaks } } : {}),
@@ -202,8 +195,8 @@ export function summarizeEnsemble(members: EnsembleMembers | EnsembleMemberParam
 }
 
 /**
- * Warming percentiles (PERCENTILES) of years [yearFrom, yearTo) across all m members, each year by
- * bucket selection over its row of member values (read in place).
+ * Warming percentiles (PERCENTILES) of years [yearFrom, yearTo) across all m members: each year's
+ * row of member values copied and its percentiles found by quickselect (quantilesInPlace).
  *
  * @param warmingK year-major member values (year k of member r at k * m + r)
  * @param m members
@@ -212,46 +205,13 @@ export function summarizeEnsemble(members: EnsembleMembers | EnsembleMemberParam
  * @param out one array per percentile, indexed by year
  */
 export function yearPercentilesInto(warmingK: Float64Array, m: number, yearFrom: number, yearTo: number, out: Float64Array[]): void {
-  new YearPercentiles(m).into(warmingK, yearFrom, yearTo, out);
-}
-
-/**
- * The warming percentiles (PERCENTILES) of year after year of members' values, one bucket selection
- * per year whose buckets the year computed just before it guides (see {@link expectedRange}), with
- * its scratch memory allocated once.
- */
-export class YearPercentiles {
-  private readonly selector: QuantileSelector;
-  /** The percentiles of the year computed last (zero before the first). */
-  private readonly q = new Float64Array(PERCENTILES.length);
-
-  /** @param members values per year */
-  constructor(private readonly members: number) {
-    this.selector = new QuantileSelector(PERCENTILES, members);
+  const row = new Float64Array(m);
+  const q = new Float64Array(PERCENTILES.length);
+  for (let k = yearFrom; k < yearTo; k++) {
+    row.set(warmingK.subarray(k * m, (k + 1) * m));
+    quantilesInPlace(row, PERCENTILES, q);
+    for (let j = 0; j < out.length; j++) out[j][k] = q[j];
   }
-
-  /**
-   * The percentiles of years [yearFrom, yearTo) of year-major `rows` (year k's members in row k,
-   * or in row k mod rowCount when the rows are a ring of rowCount years), into out[j][k].
-   */
-  into(rows: Float64Array, yearFrom: number, yearTo: number, out: Float64Array[], rowCount?: number): void {
-    const { selector, q, members } = this;
-    for (let k = yearFrom; k < yearTo; k++) {
-      selector.quantilesInto(rows, (rowCount === undefined ? k : k % rowCount) * members, q, ...expectedRange(q));
-      for (let j = 0; j < out.length; j++) out[j][k] = q[j];
-    }
-  }
-}
-
-/**
- * The range a year's member values probably span, from the percentiles of the year computed just
- * before it (PERCENTILES order, so q[0] is the 5th and q[4] the 95th): the 5-95 % range widened by
- * twice its width on each side. Only a guide for the buckets of QuantileSelector (the result does
- * not depend on it); none before the first year.
- */
-function expectedRange(q: Float64Array): [number, number] | [] {
-  const spread = q[4] - q[0];
-  return spread > 0 ? [q[0] - 2 * spread, q[4] + 2 * spread] : [];
 }
 
 /** Length of the counts array of {@link exceedanceCountsInto}. */
@@ -259,45 +219,55 @@ export function exceedanceCountsLength(thresholds: number, n: number): number {
   return 2 * thresholds * n;
 }
 
-/** Members copied out of the year-major layout together (their rows stay in cache). */
-const MEMBER_CHUNK = 64;
-
 /**
- * Adds, for members [memberFrom, memberTo), the count of members whose 20-year mean warming around
- * each year exceeds each threshold (counts[j * n + c]) and a histogram of the year index at which
- * each member's 20-year mean first exceeds it (counts[(T + j) * n + c]), by ExceedanceCounter on
- * each member's row (the same arithmetic as member runs use while the row is fresh, so the counts of
- * a run and of its merged shards are identical). Counts are whole numbers, so partial counts from
- * threads add up exactly in any order.
+ * Adds, for every member, whether its 20-year mean warming around each year exceeds each threshold
+ * (counts[j * n + c], the members above threshold j in year c) and the year its 20-year mean first
+ * exceeds it (counts[(T + j) * n + c], the members first above in year c), T thresholds. The 20-year
+ * mean of years c-9 .. c+10 stands for year c (IPCC AR6 WG1 convention for reaching a warming
+ * level); each member's 20-year sum slides along the years, all members of a year at a time. Years
+ * whose window leaves the run get nothing. Counts are whole numbers, so those of merged shards add
+ * up to exactly what one run gives.
  *
- * @param warmingK year-major member values
- * @param m members in the layout
+ * @param warmingK year-major member values (year k of member r at k * m + r)
+ * @param m members
  * @param n years
  * @param thresholds levels, K
- * @param memberFrom first member
- * @param memberTo end member, exclusive
  * @param counts receives the counts (added to; length exceedanceCountsLength)
  */
-export function exceedanceCountsInto(
-  warmingK: Float64Array,
-  m: number,
-  n: number,
-  thresholds: readonly number[],
-  memberFrom: number,
-  memberTo: number,
-  counts: Float64Array,
-): void {
-  const counter = new ExceedanceCounter(thresholds, n);
-  const rows = new Float64Array(MEMBER_CHUNK * n);
-  for (let r0 = memberFrom; r0 < memberTo; r0 += MEMBER_CHUNK) {
-    const size = Math.min(MEMBER_CHUNK, memberTo - r0);
-    for (let k = 0; k < n; k++) {
-      const base = k * m + r0;
-      for (let j = 0; j < size; j++) rows[j * n + k] = warmingK[base + j];
+export function exceedanceCountsInto(warmingK: Float64Array, m: number, n: number, thresholds: readonly number[], counts: Float64Array): void {
+  const { before, after } = RUNNING_MEAN_WINDOW;
+  const width = before + after + 1;
+  if (n < width) return;
+  const t = thresholds.length;
+  const sum = new Float64Array(m);
+  const mean = new Float64Array(m);
+  const crossed = thresholds.map(() => new Uint8Array(m));
+  for (let k = 0; k < width; k++) for (let r = 0; r < m; r++) sum[r] += warmingK[k * m + r];
+  for (let c = before; c + after < n; c++) {
+    if (c > before) {
+      const enter = (c + after) * m;
+      const leave = (c - before - 1) * m;
+      for (let r = 0; r < m; r++) sum[r] += warmingK[enter + r] - warmingK[leave + r];
     }
-    for (let j = 0; j < size; j++) counter.addMember(rows, j * n);
+    for (let r = 0; r < m; r++) mean[r] = sum[r] / width;
+    for (let j = 0; j < t; j++) {
+      const level = thresholds[j];
+      const first = crossed[j];
+      let above = 0;
+      let firsts = 0;
+      for (let r = 0; r < m; r++) {
+        if (mean[r] > level) {
+          above++;
+          if (first[r] === 0) {
+            first[r] = 1;
+            firsts++;
+          }
+        }
+      }
+      counts[j * n + c] += above;
+      counts[(t + j) * n + c] += firsts;
+    }
   }
-  counter.addCountsTo(counts);
 }
 
 /**
@@ -329,14 +299,14 @@ function ensembleNotes(members: EnsembleMemberParameters): string[] {
   const held = members.shard ? `shard ${members.shard.index}/${members.shard.count}: members ${members.memberStart}-${members.memberStart + members.memberCount - 1} of ${c.membersTotal}` : `${c.membersTotal} members`;
   const few = fewMembersWarning(c.membersTotal);
   return [
-    `ensemble of ${held}, seed ${c.seed}; member i draws from ${MEMBER_STREAM_SCHEME} (pure-rand), so it depends only on the seed and i`,
+    `ensemble of ${held}, seed ${c.seed}; member i depends only on the seed and i`,
     ...(few ? [`warning: ${few}`] : []),
-    `${members.redraws} unphysical parameter draws were redrawn (TCR not below ECS, non-positive forcing or sensitivity, or a TCR the two-box model cannot reach)`,
+    ...(members.redraws > 0 ? [`${members.redraws} unphysical parameter draws were redrawn`] : []),
     'warming_pXX_k: percentiles across members of each year\'s warming, by linear interpolation between order statistics (Hyndman & Fan 1996, definition 7)',
     `prob_above_<t>: share of members whose 20-year mean warming (years y-${before} to y+${after}) exceeds t K, the IPCC AR6 convention for reaching a warming level; empty where the 20-year window leaves the run`,
     'crossing year: the labelled year of the first 20-year mean above the level; median crossing year: the first year by which at least half of the members have crossed',
     'peak warming (members\' own): each member\'s highest annual warming over the whole run and its year (the first such year on ties), then their percentiles across members; a member whose peak is the last year is still rising',
-    ...describeSampling(c.sampling, c.emissionDriven),
+    ...c.sourceNotes,
   ];
 }
 
@@ -351,7 +321,7 @@ function summarizePeaks(peaks: MemberPeaks, firstYear: number, n: number): PeakS
   for (let r = 0; r < m; r++) if (peaks.yearIndex[r] === n - 1) rising++;
   const percentilesOf = (values: Float64Array) => {
     const q = new Float64Array(PERCENTILES.length);
-    quantilesInPlace(values, PERCENTILES, q);
+    quantilesInPlace(Float64Array.from(values), PERCENTILES, q);
     return Object.fromEntries(PERCENTILE_NAMES.map((name, j) => [name, q[j]])) as Record<PercentileName, number>;
   };
   // Years by the inverse empirical distribution (Hyndman & Fan 1996, definition 1): each percentile
@@ -365,7 +335,7 @@ function summarizePeaks(peaks: MemberPeaks, firstYear: number, n: number): PeakS
 
 function summarizeValues(values: Float64Array): ParameterSummary {
   const q = new Float64Array(PERCENTILES.length);
-  quantilesInPlace(values, PERCENTILES, q);
+  quantilesInPlace(Float64Array.from(values), PERCENTILES, q);
   let sum = 0;
   for (const v of values) sum += v;
   const summary = { mean: values.length > 0 ? sum / values.length : NaN } as ParameterSummary;

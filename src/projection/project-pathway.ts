@@ -18,7 +18,7 @@ export interface ProjectionOptions {
   params: ClimateParams;
   /** Baseline period for `warming_k`, inclusive years. Default 1850-1900 (IPCC AR6 convention). */
   baseline?: readonly [number, number];
-  /** Temperature stepping: `odex` (default) or the exact propagator. */
+  /** Temperature stepping: the exact one-year propagator (`exact`, default) or the odex reference. */
   method?: EnergyBalanceMethod;
   /** odex tolerances. */
   tolerances?: OdeTolerances;
@@ -70,7 +70,7 @@ export interface Projection {
 
 /**
  * Projects warming for a pathway: concentrations -> ERF by agent (IPCC AR6 formulas) -> two-box
- * energy balance integrated by odex from rest at the first year (T = T_d = 0, the pre-industrial
+ * energy balance stepped by the exact one-year propagator (climate/two-box-step.ts) from rest at the first year (T = T_d = 0, the pre-industrial
  * equilibrium, whatever that year's forcing: a pathway starting after 1750 without the history
  * splice misses the warming already reached by then) -> warming relative to the baseline mean.
  * Notes name the gases held at their 1750 values and the forcing columns taken as zero, for a
@@ -125,7 +125,7 @@ export function projectPathway(pathway: Pathway, options: ProjectionOptions): Pr
   }
 
   const forcing = forcingByAgent(n, { co2Ppm: s.co2_ppm, ch4Ppb: s.ch4_ppb, n2oPpb: s.n2o_ppb, prescribed: s }, forcingOptions);
-  const eb = energyBalance(params, forcing.total, options.method ?? 'odex', tolerances);
+  const eb = energyBalance(params, forcing.total, options.method ?? 'exact', tolerances);
   const fromRest = startFromRestNote(pathway, { subject: 'the run', forcingWm2: forcing.total[0] });
   if (fromRest) notes.push(fromRest);
 

@@ -2,8 +2,8 @@ import { describe, expect, it } from 'vitest';
 import { annualCarbonState, annualCarbonStepForIncreaseInto, annualCarbonStepInto, atmosphericGtc } from '../../src/carbon/annual-carbon-step.js';
 import { runEmissionDriven } from '../../src/carbon/run-emission-driven.js';
 import { calibrate } from '../../src/climate/calibrate.js';
-import { twoBoxPropagator } from '../../src/climate/exact-propagator.js';
-import { emissionMemberWarmingInto } from '../../src/ensemble/run-emission-members.js';
+import { runMembers } from '../../src/ensemble/run-members.js';
+import { centralMember } from '../ensemble/central-member.js';
 import { loadPathway } from '../../src/io/index.js';
 import { ensembleInput } from '../../src/projection/ensemble-input.js';
 
@@ -13,12 +13,8 @@ const params = calibrate();
 function annualRun(name: string) {
   const pathway = loadPathway(name);
   const { input } = ensembleInput(pathway, params);
-  const a = input.forcing.byAgent;
-  const n = pathway.years.length;
-  const other = Float64Array.from({ length: n }, (_, k) => input.forcing.total[k] - a.co2[k] - a.ch4[k] - a.n2o[k] - input.forcing.aerosol[k]);
-  const surfaceK = new Float64Array(n);
-  const co2Ppm = new Float64Array(n);
-  emissionMemberWarmingInto(input.carbon!, 'ar6', other, input.forcing.aerosol, twoBoxPropagator(params), 1, 1, 1, annualCarbonState(), surfaceK, co2Ppm);
+  const co2Ppm = new Float64Array(pathway.years.length);
+  const surfaceK = runMembers({ co2Formula: 'ar6', forcing: input.forcing.byAgent, carbon: input.carbon }, centralMember(params), undefined, co2Ppm);
   return { pathway, surfaceK, co2Ppm };
 }
 

@@ -66,7 +66,7 @@ describe('warmcast compare', () => {
     // No single parameter set was used: provenance records what the members share, not ECS 3 / TCR 1.8.
     expect(doc.provenance.caution).toMatch(/Ranges are shown for Steady growth, Swift transition/);
     expect(doc.provenance.caution).not.toMatch(/No uncertainty range is shown/);
-    expect(doc.provenance.parameters).toEqual({ co2_formula: 'ar6', upper_heat_capacity: 8, deep_heat_capacity: 100, deep_efficacy: 1 });
+    expect(doc.provenance.parameters).toEqual({ co2_formula: 'ar6' });
     expect(doc.provenance.notes).toContain('warming_k and the milestone values are the ensemble median of each pathway; its crossing years are the first years by which half of the members have crossed');
   });
 

@@ -56,7 +56,6 @@ describe('commands refuse non-decimal numbers with exit 2', () => {
     ['ensemble', 'swift', '--members', '0x10'],
     ['ensemble', 'swift', '--members', ' '],
     ['ensemble', 'swift', '--thresholds', '0x2'],
-    ['ensemble', 'swift', '--workers', '0b1'],
     ['run', 'swift', '--to', '0x834'],
     ['run', 'swift', '--rtol', ''],
     ['compare', 'steady', 'swift', '--members', '0x10'],

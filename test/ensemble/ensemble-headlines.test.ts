@@ -18,8 +18,8 @@ describe('ensembleHeadlines', () => {
     expect(h.thresholds[0]).toMatchObject({ median_crossing: 'crosses', median_crossing_year: r.crossings[0].medianYear });
     // 6 K is out of reach of the synthetic pathway's members.
     expect(h.thresholds[3]).toMatchObject({ median_crossing: 'fewer-than-half-cross', median_crossing_year: null });
-    expect(h.sampled.ecs_k).toEqual({ p05: r.parameters.ecsK.p05, p17: r.parameters.ecsK.p17, p50: r.parameters.ecsK.p50, p83: r.parameters.ecsK.p83, p95: r.parameters.ecsK.p95 });
-    expect(h.sampled.tcr_k.p50).toBe(r.parameters.tcrK.p50);
+    expect(h.sampled.ecs_k).toEqual({ p05: r.parameters.ecs_k.p05, p17: r.parameters.ecs_k.p17, p50: r.parameters.ecs_k.p50, p83: r.parameters.ecs_k.p83, p95: r.parameters.ecs_k.p95 });
+    expect(h.sampled.tcr_k.p50).toBe(r.parameters.tcr_k.p50);
     expect(h.sampled.irf100_scale).toBeUndefined();
     expect(h.ecs_tcr_correlation).toBe(r.ecsTcrCorrelation);
     // JSON has no NaN or Infinity: the headlines must survive a round trip unchanged.

@@ -15,7 +15,7 @@ describe('mergeShards', () => {
     const whole = (await runEnsemble(input, options)).members!;
     const merged = mergeShards([await shard(3), await shard(1), await shard(2)]);
     expect(Array.from(merged.warmingK)).toEqual(Array.from(whole.warmingK));
-    expect(Array.from(merged.parameters.tcrK)).toEqual(Array.from(whole.parameters.tcrK));
+    expect(Array.from(merged.parameters.values.tcr_k!)).toEqual(Array.from(whole.parameters.values.tcr_k!));
     expect(merged.redraws).toBe(whole.redraws);
     expect(merged.shard).toBeUndefined();
   });

@@ -27,7 +27,7 @@ describe('runEnsemble', () => {
     const fixed: EnsembleSampling = { ...AR6_SAMPLING, ecsK: pointRange(3), tcrK: pointRange(1.8), forcing2xScale: pointRange(1), aerosolScale: pointRange(1) };
     const result = await runEnsemble(input, { ...base, members: 20, sampling: fixed });
     const params = calibrate({ ecsK: 3, tcrK: 1.8 });
-    const odex = projectPathway(pathway, { params, baseline: [1850, 1900] }).columns.warming_k;
+    const odex = projectPathway(pathway, { params, baseline: [1850, 1900], method: 'odex' }).columns.warming_k;
     const exact = projectPathway(pathway, { params, baseline: [1850, 1900], method: 'exact' }).columns.warming_k;
     for (const name of ['p05', 'p17', 'p50', 'p83', 'p95'] as const) {
       // 1e-6 K: the odex tolerance check of the issue; 1e-9 K: gamma is solved to 1e-12 by both.
@@ -92,7 +92,6 @@ describe('runEnsemble', () => {
       { baseline: [1700, 1750] },
       { shard: { index: 0, count: 3 } },
       { shard: { index: 1, count: 400 } },
-      { workers: 0 },
       { sampling: { ...AR6_SAMPLING, ecsTcrCorrelation: 2 } },
     ];
     for (const b of bad) await expect(runEnsemble(input, { ...base, ...b }), JSON.stringify(b)).rejects.toThrow(ConfigError);

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { MEMBER_PARAMETERS, runEnsemble, SHARD_FORMAT, shardFileBytes, shardFromJson, shardToJson } from '../../src/ensemble/index.js';
+import { runEnsemble, SHARD_FORMAT, shardFileBytes, shardFromJson, shardToJson } from '../../src/ensemble/index.js';
 import { InputError } from '../../src/errors.js';
 import { syntheticInput } from './synthetic-input.js';
 
@@ -20,14 +20,16 @@ describe('shardToJson / shardFromJson', () => {
     expect(back.memberCount).toBe(30);
     expect(back.redraws).toBe(members.redraws);
     expect(Buffer.from(back.warmingK.buffer).equals(Buffer.from(members.warmingK.buffer))).toBe(true);
-    for (const p of MEMBER_PARAMETERS) expect(Array.from(back.parameters[p])).toEqual(Array.from(members.parameters[p]));
+    expect(Object.keys(back.parameters.values)).toEqual(Object.keys(members.parameters.values));
+    for (const [key, values] of Object.entries(members.parameters.values)) expect(Array.from(back.parameters.values[key]!), key).toEqual(Array.from(values!));
   });
 
-  it('shardFileBytes predicts the size of the written text (4/3 of 8 bytes per stored value, plus under 4 kB with the pathway record)', () => {
+  it('shardFileBytes bounds the size of the written text from above (4/3 of 8 bytes per stored value, up to 24 parameters per member, 8 kB of description)', () => {
     const predicted = shardFileBytes(members.memberCount, members.config.yearCount);
+    const warmingOnly = (members.memberCount * members.config.yearCount * 8 * 4) / 3;
     for (const text of [shardToJson(members), shardToJson({ ...members, origin })]) {
       expect(text.length).toBeLessThanOrEqual(predicted);
-      expect(text.length).toBeGreaterThan(predicted - 4000);
+      expect(text.length).toBeGreaterThan(warmingOnly);
     }
   });
 
@@ -45,7 +47,7 @@ describe('shardToJson / shardFromJson', () => {
     expect(() => shardFromJson('{', 'a.json')).toThrow(InputError);
     expect(() => shardFromJson('{"format":"other"}', 'a.json')).toThrow(/a\.json: must be a warmcast ensemble shard file/);
     const doc = JSON.parse(shardToJson(members));
-    expect(() => shardFromJson(JSON.stringify({ ...doc, version: 9 }), 'b.json')).toThrow(/must be shard format version 2/);
+    expect(() => shardFromJson(JSON.stringify({ ...doc, version: 9 }), 'b.json')).toThrow(/must be shard format version 3/);
     expect(() => shardFromJson(JSON.stringify({ ...doc, warming_k: doc.warming_k.slice(0, 400) }), 'c.json')).toThrow(/key "warming_k": must hold 10530 Float64 values/);
     expect(() => shardFromJson(JSON.stringify({ ...doc, member_count: -1 }), 'd.json')).toThrow(/key "member_count": must be a whole number/);
     expect(() => shardFromJson(JSON.stringify({ ...doc, config: { ...doc.config, seed: 'x' } }), 'e.json')).toThrow(/config\.seed/);

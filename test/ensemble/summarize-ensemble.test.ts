@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { AR6_SAMPLING, FEW_MEMBERS, fewMembersWarning, MEMBER_PARAMETERS, PERCENTILES, summarizeEnsemble, type EnsembleMembers } from '../../src/ensemble/index.js';
+import { FEW_MEMBERS, fewMembersWarning, PERCENTILES, summarizeEnsemble, TWO_BOX_KEYS, type EnsembleMembers } from '../../src/ensemble/index.js';
 import { runningMeanInto } from '../../src/ensemble/running-mean.js';
 import { quantileSorted } from '../../src/numerics/quantiles.js';
 
@@ -15,11 +15,11 @@ function members(m: number, thresholds = [0.5, 1, 1.5]): EnsembleMembers {
     for (let k = 0; k < n; k++) warmingK[k * m + r] = v += drift + 0.1 * (random() - 0.5);
   }
   return {
-    config: { scheme: 'test', seed: 0, membersTotal: m, firstYear: 1900, yearCount: n, baseline: [1900, 1910], thresholds, milestones: [1950, 1990, 1995, 2000], co2Formula: 'ar6', sampling: AR6_SAMPLING, emissionDriven: false, inputChecksum: '' },
+    config: { scheme: 'test', seed: 0, membersTotal: m, firstYear: 1900, yearCount: n, baseline: [1900, 1910], thresholds, milestones: [1950, 1990, 1995, 2000], co2Formula: 'ar6', sourceNotes: ['test members'], emissionDriven: false, inputChecksum: '' },
     memberStart: 0,
     memberCount: m,
     warmingK,
-    parameters: Object.fromEntries(MEMBER_PARAMETERS.map((p) => [p, Float64Array.from({ length: m }, () => random())])) as EnsembleMembers['parameters'],
+    parameters: { count: m, values: Object.fromEntries([...TWO_BOX_KEYS, 'ecs_k', 'tcr_k'].map((p) => [p, Float64Array.from({ length: m }, () => random())])) as EnsembleMembers['parameters']['values'] },
     redraws: 3,
   };
 }
@@ -102,8 +102,8 @@ describe('summarizeEnsemble', () => {
 
   it('summarizeEnsemble reports the redraws, parameter quantiles and conventions it used', () => {
     expect(result.redraws).toBe(3);
-    const ecs = Float64Array.from(e.parameters.ecsK).sort();
-    expect(result.parameters.ecsK.p50).toBe(quantileSorted(ecs, 0.5));
+    const ecs = Float64Array.from(e.parameters.values.ecs_k!).sort();
+    expect(result.parameters.ecs_k.p50).toBe(quantileSorted(ecs, 0.5));
     expect(result.notes.join('\n')).toMatch(/20-year mean/);
     expect(result.notes.join('\n')).toMatch(/3 unphysical parameter draws were redrawn/);
   });

@@ -1,7 +1,7 @@
 // A synthetic concentration-driven pathway for ensemble tests: smooth CO2, CH4 and N2O rising to a
 // peak and falling, aerosol forcing growing then fading, two volcanic eruptions and a solar cycle.
 // Not a real pathway; the tests using it check properties, not published values.
-import { AR6_SAMPLING, type EnsembleInput, type MemberTask } from '../../src/ensemble/index.js';
+import type { EnsembleInput } from '../../src/ensemble/index.js';
 import { forcingByAgent } from '../../src/forcing/agents.js';
 import type { Pathway } from '../../src/pathway.js';
 
@@ -34,22 +34,3 @@ export function syntheticInput(firstYear = 1750, lastYear = 2150): EnsembleInput
   return ensembleInputOf(syntheticPathway(firstYear, lastYear));
 }
 
-/**
- * A concentration-driven member task on the synthetic pathway over 1750-2150 with the AR6 sampling
- * and a 1850-1900 baseline, its CO2 and aerosol forcing apart and every other agent summed (as
- * runEnsemble builds it), plus `extraOtherWm2(k)` in year k when given.
- */
-export function syntheticTask(seed: number, extraOtherWm2: (k: number) => number = () => 0): MemberTask {
-  const forcing = syntheticInput(1750, 2150).forcing;
-  const a = forcing.byAgent;
-  return {
-    seed,
-    sampling: AR6_SAMPLING,
-    co2Formula: 'ar6',
-    co2Wm2: a.co2,
-    aerosolWm2: forcing.aerosol,
-    otherWm2: forcing.total.map((v, k) => v - a.co2[k] - forcing.aerosol[k] + extraOtherWm2(k)),
-    baselineFrom: 100,
-    baselineTo: 150,
-  };
-}

@@ -1,8 +1,8 @@
-import { expm } from '../numerics/expm.js';
-import { twoBoxMatrix, type TwoBoxParams } from './two-box.js';
+import { twoBoxMatrix, type TwoBoxParams } from '../../src/climate/two-box.js';
+import { expm } from '../../src/numerics/expm.js';
 
 /**
- * One-year exact propagator of the linear two-box model for forcing linear within the year:
+ * Test oracle for src/climate/two-box-step.ts. One-year exact propagator of the linear two-box model for forcing linear within the year:
  *   x(k+1) = Phi x(k) + g0 F_k + g1 (F_{k+1} - F_k),
  * with Phi = e^A, g0 = ∫0^1 e^{A(1-s)} b ds and g1 = ∫0^1 e^{A(1-s)} b s ds, all read off one
  * exponential of the augmented 4 x 4 matrix [[A, b, 0], [0, 0, 1], [0, 0, 0]] (Van Loan 1978,
@@ -41,29 +41,19 @@ export function twoBoxPropagator(p: TwoBoxParams, stepYears = 1): TwoBoxPropagat
 }
 
 /**
- * Runs the linear two-box model exactly over annual forcing values, from the equilibrium T = T_d = 0
- * at the first year, forcing linear between consecutive years.
- *
- * @param prop propagator from {@link twoBoxPropagator}
- * @param forcingWm2 forcing at each year node, W m-2
- * @param surfaceOut receives T at each year node, K (same length as forcing)
- * @param deepOut receives T_d at each year node, K
+ * Runs the two-box model from rest through forcing at year nodes (linear between them) with the
+ * matrix-exponential propagator: the oracle of propagateTwoBoxInto.
  */
-export function propagateTwoBoxInto(prop: TwoBoxPropagator, forcingWm2: ArrayLike<number>, surfaceOut: Float64Array, deepOut: Float64Array): void {
-  const [p00, p01, p10, p11] = prop.phi;
-  const [g0t, g0d] = prop.g0;
-  const [g1t, g1d] = prop.g1;
-  let t = 0;
-  let d = 0;
-  surfaceOut[0] = 0;
-  deepOut[0] = 0;
-  for (let k = 0; k + 1 < forcingWm2.length; k++) {
+export function expmTwoBoxRun(p: TwoBoxParams, forcingWm2: ArrayLike<number>): { surfaceK: Float64Array; deepK: Float64Array } {
+  const { phi, g0, g1 } = twoBoxPropagator(p);
+  const n = forcingWm2.length;
+  const surfaceK = new Float64Array(n);
+  const deepK = new Float64Array(n);
+  for (let k = 0; k + 1 < n; k++) {
     const f0 = forcingWm2[k];
     const df = forcingWm2[k + 1] - f0;
-    const tn = p00 * t + p01 * d + g0t * f0 + g1t * df;
-    d = p10 * t + p11 * d + g0d * f0 + g1d * df;
-    t = tn;
-    surfaceOut[k + 1] = t;
-    deepOut[k + 1] = d;
+    surfaceK[k + 1] = phi[0] * surfaceK[k] + phi[1] * deepK[k] + g0[0] * f0 + g1[0] * df;
+    deepK[k + 1] = phi[2] * surfaceK[k] + phi[3] * deepK[k] + g0[1] * f0 + g1[1] * df;
   }
+  return { surfaceK, deepK };
 }

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { annualCarbonState, annualCarbonStepForIncreaseInto, annualCarbonStepInto, atmosphericGtc } from '../../src/carbon/annual-carbon-step.js';
 import { calibrate } from '../../src/climate/calibrate.js';
-import { twoBoxPropagator } from '../../src/climate/exact-propagator.js';
+import { twoBoxPropagator } from '../climate/expm-propagator.js';
 import { AR6_SAMPLING, pointRange, runEnsemble, shardToJson, type EnsembleSampling } from '../../src/ensemble/index.js';
 import { ghgForcingFunction } from '../../src/forcing/agents.js';
 import { loadPathway } from '../../src/io/index.js';
@@ -15,7 +15,7 @@ const n = years.length;
 const at = (y: number) => y - years[0];
 const options = { seed: 11, thresholds: [1.5, 2], baseline: [1850, 1900] as const, keepMembers: true };
 
-/** Deterministic run written out from the parts: annual carbon step, AR6 forcing, exact propagator. */
+/** Deterministic run written out from the parts: annual carbon step, AR6 forcing, the matrix-exponential propagator (oracle). */
 function deterministicWarming(): Float64Array {
   const c = input.carbon!;
   const a = input.forcing.byAgent;
@@ -76,7 +76,7 @@ describe('runEnsemble on an emission pathway', () => {
     expect(spread(narrow)).toBeLessThan(1e-9);
     expect(spread(wide)).toBeGreaterThan(0.05);
     // A larger iIRF100 keeps more CO2 airborne: warming rises with the multiplier (Millar et al. 2017, eq. 7).
-    const p = wide.members!.parameters.irf100Scale;
+    const p = wide.members!.parameters.values.irf100_scale!;
     const hi = p.indexOf(Math.max(...p));
     const lo = p.indexOf(Math.min(...p));
     expect(wide.members!.warmingK[k * 400 + hi]).toBeGreaterThan(wide.members!.warmingK[k * 400 + lo]);
@@ -87,7 +87,7 @@ describe('runEnsemble on an emission pathway', () => {
     const b = await runEnsemble(input, { ...options, members: 50 });
     expect(shardToJson(a.members!)).toBe(shardToJson(b.members!));
     expect(a.config.emissionDriven).toBe(true);
-    expect(a.parameters.irf100Scale.p95).toBeGreaterThan(a.parameters.irf100Scale.p05);
+    expect(a.parameters.irf100_scale.p95).toBeGreaterThan(a.parameters.irf100_scale.p05);
   });
 
   it('shards of an emission ensemble merge into exactly the whole run', async () => {

@@ -1,0 +1,110 @@
+import { co2PulseResponse } from '../carbon/pulse-response.js';
+import { runEmissionDriven } from '../carbon/run-emission-driven.js';
+import type { EmissionRunOptions } from '../carbon/run-emission-driven.js';
+import { calibrate } from '../climate/calibrate.js';
+import { loadHistory } from '../io/bundled-pathways.js';
+import type { Pathway } from '../pathway.js';
+import { withinRange, type PublishedCheck } from './published-check.js';
+
+const GTCO2_PER_GTC = 44.009 / 12.011;
+
+/** The default model's options for the emission-driven runs below (ECS 3 K, TCR 1.8 K, feedback on). */
+function defaults(): { params: ReturnType<typeof calibrate>; options: EmissionRunOptions } {
+  const params = calibrate();
+  return { params, options: { forcing: { co2Formula: params.co2Formula, forcing2xWm2: params.forcing2xWm2 } } };
+}
+
+function pathwayFrom1850(series: Pathway['series'], length: number, name: string): Pathway {
+  const years = Float64Array.from({ length }, (_, i) => 1850 + i);
+  return { name, years, series, metadata: {}, provenance: { source: name, notes: [] } };
+}
+
+const mean = (a: Float64Array, from: number, to: number) => a.slice(from, to + 1).reduce((s, v) => s + v, 0) / (to - from + 1);
+
+/**
+ * The airborne fraction of a 100 Gt C pulse on a 389 ppm background (the PD100 protocol of Joos et
+ * al. 2013, ACP 13, 2793: history to 2010, then 389 ppm; pulse in 2015), default model with the
+ * carbon-climate feedback, against the multi-model means ± spreads 0.60 ± 0.14 (20 yr), 0.41 ± 0.13
+ * (100 yr), 0.25 ± 0.09 (1000 yr) (quoted by secondary sources).
+ */
+export const joosPulse: PublishedCheck = {
+  id: 'joos-2013-pulse',
+  run: () => {
+    const history = loadHistory();
+    const first = history.years[0];
+    const length = 2015 + 1000 - first + 1;
+    const years = Float64Array.from({ length }, (_, i) => first + i);
+    const recorded = history.series.co2_ppm!;
+    const co2 = years.map((y) => (y <= 2010 ? recorded[y - first] : 389));
+    const background: Pathway = { name: 'PD100 background', years, series: { co2_ppm: co2 }, metadata: {}, provenance: { source: 'verify', notes: [] } };
+    const { params, options } = defaults();
+    const r = co2PulseResponse(background, 2015, params, { ...options, feedback: true, pulseGtc: 100 });
+    const source = 'Joos et al. 2013, ACP 13, 2793 (multi-model mean ± spread)';
+    return [
+      [20, 0.6, 0.14],
+      [100, 0.41, 0.13],
+      [1000, 0.25, 0.09],
+    ].map(([y, m, s]) => withinRange(`airborne fraction ${y} yr after a 100 Gt C pulse on 389 ppm`, source, `${m} ± ${s}`, r.airborneFraction[y], +(m - s).toFixed(2), +(m + s).toFixed(2), '', 3));
+  },
+};
+
+/**
+ * Cumulative CO2 emissions 1850-2019 diagnosed by the default model from the bundled history's
+ * concentrations (the carbon sinks the history implies), against 2390 ± 240 Gt CO2 (IPCC AR6 WG1
+ * SPM; from memory).
+ */
+export const historicalEmissions: PublishedCheck = {
+  id: 'historical-emissions',
+  run: () => {
+    const history = loadHistory();
+    const { params, options } = defaults();
+    const run = runEmissionDriven(history, params, options);
+    let sum = 0;
+    for (let y = 1850; y <= 2019; y++) sum += run.co2EmissionsGtco2[y - history.years[0]];
+    return [withinRange('cumulative CO2 emissions 1850-2019 diagnosed from the history (carbon sinks)', 'IPCC AR6 WG1 SPM (from memory)', '2390 ± 240', sum, 2150, 2630, 'Gt CO2', 0)];
+  },
+};
+
+/**
+ * TCRE of the default model: warming over years 61-80 of the 1 %/yr CO2 run per cumulative
+ * emission to year 70 (IPCC AR6 WG1 Box 5.2), against the AR6 likely range 1.0-2.3 K per 1000 Pg C.
+ */
+export const tcre: PublishedCheck = {
+  id: 'tcre',
+  run: () => {
+    const n = 141;
+    const { params, options } = defaults();
+    const run = runEmissionDriven(pathwayFrom1850({ co2_ppm: Float64Array.from({ length: n }, (_, t) => 278.3 * 1.01 ** t) }, n, '1pctCO2'), params, options);
+    let warming = 0;
+    for (let k = 60; k < 80; k++) warming += 0.5 * (run.surfaceK[k] + run.surfaceK[k + 1]);
+    warming /= 20;
+    const perTtc = (1000 * warming) / run.carbonBudget.emittedGtc[70];
+    return [withinRange('TCRE, default model (1 %/yr CO2, compatible emissions)', 'IPCC AR6 WG1 SPM D.1.1 (likely range)', '1.65 [1.0-2.3]', perTtc, 1.0, 2.3, 'K per 1000 Pg C', 2)];
+  },
+};
+
+/**
+ * The zero-emissions commitment 50 years after 1000 Pg C have been emitted along 1 %/yr CO2
+ * (ZECMIP protocol, MacDougall et al. 2020, BG 17, 2987), default model, against the AR6 likely
+ * range -0.3 to +0.3 K (SPM D.1.1; from memory).
+ */
+export const zeroEmissionsCommitment: PublishedCheck = {
+  id: 'zec50',
+  run: () => {
+    const n = 300;
+    const { params, options } = defaults();
+    const ramp = Float64Array.from({ length: n }, (_, t) => 278.3 * 1.01 ** t);
+    const onePercent = runEmissionDriven(pathwayFrom1850({ co2_ppm: ramp }, n, '1pctCO2'), params, options);
+    const emitted = onePercent.carbonBudget.emittedGtc;
+    const atStop = (k: number) => emitted[k] + onePercent.co2EmissionsGtco2[k] / GTCO2_PER_GTC / 2;
+    let stop = 1;
+    while (Math.abs(atStop(stop + 1) - 1000) < Math.abs(atStop(stop) - 1000)) stop++;
+    const zero = runEmissionDriven(
+      pathwayFrom1850({ co2_ppm: ramp.map((v, k) => (k <= stop ? v : NaN)), co2_gtco2: ramp.map((_, k) => (k <= stop ? NaN : 0)) }, n, 'esm-1pct-brch-1000PgC'),
+      params,
+      options,
+    );
+    const zec50 = mean(zero.surfaceK, stop + 40, stop + 59) - mean(onePercent.surfaceK, stop - 10, stop + 9);
+    return [withinRange('zero-emissions commitment ZEC50 after 1000 Pg C, default model', 'IPCC AR6 WG1 SPM D.1.1 (likely range; from memory); MacDougall et al. 2020', 'about 0 [-0.3 to 0.3]', zec50, -0.3, 0.3, 'K', 3)];
+  },
+};
