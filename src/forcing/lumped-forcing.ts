@@ -1,3 +1,4 @@
+import { ConfigError } from '../errors.js';
 import { AGENT_FORCING_COLUMNS, type AgentForcingColumn, type LumpedForcingColumn, type Pathway, type PathwayColumn } from '../pathway.js';
 
 /**
@@ -50,7 +51,7 @@ export function lumpedShare(lumped: LumpedForcingColumn, agent: AgentForcingColu
  *
  * @param pathway annual pathway, possibly with lumped columns
  * @returns a new pathway with the agent columns in place of the lumped ones
- * @throws Error when a pathway holds a lumped column and one of its agents (readers refuse such files first)
+ * @throws ConfigError when a pathway holds a lumped column and one of its agents (file readers refuse such files first, with the line)
  * @example splitLumpedForcing(p).series.aerosol_aci_wm2 // 0.796 x p.series.aerosol_wm2
  */
 export function splitLumpedForcing(pathway: Pathway): Pathway {
@@ -62,7 +63,9 @@ export function splitLumpedForcing(pathway: Pathway): Pathway {
     const values = pathway.series[lumped]!;
     const parts = LUMPED_PARTS[lumped];
     const clash = parts.find((p) => pathway.series[p]);
-    if (clash) throw new Error(`${pathway.name}: ${lumped} and ${clash} must not both be given (${lumped} stands for ${parts.join(', ')})`);
+    if (clash) {
+      throw new ConfigError(`${pathway.name}: ${lumped} and ${clash} must not both be given (${lumped} stands for ${parts.join(', ')})`, lumped, 'pathway.forcing-twice');
+    }
     for (const part of parts) {
       const share = lumpedShare(lumped, part);
       series[part] = values.map((v) => share * v);
