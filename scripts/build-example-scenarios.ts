@@ -1,4 +1,4 @@
-// Writes pathways/examples/invented-scenarios.csv: 50 invented scenarios (three invented models, five
+// Writes pathways/examples/invented-scenarios.csv: 50 invented scenarios (three invented models, six
 // storyline families) in the IAMC wide layout, the example `warmcast batch` assesses. Deterministic:
 // running it again gives the same file.
 //

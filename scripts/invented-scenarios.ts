@@ -12,6 +12,7 @@ const MODELS = ['Gridline 2.1', 'Tessera 0.9', 'Larkspur 1.4'];
 
 /** Storyline families and the ranges their invented parameters are drawn from. */
 const FAMILIES = [
+  { name: 'Immediate', peak: [2020, 2022], zero: [2035, 2045], floor: [-12, -6], ch4: [0.3, 0.45], so2: [0.05, 0.1] },
   { name: 'Rapid', peak: [2020, 2025], zero: [2045, 2060], floor: [-8, -3], ch4: [0.35, 0.55], so2: [0.05, 0.15] },
   { name: 'Orderly', peak: [2022, 2030], zero: [2060, 2075], floor: [-6, -1], ch4: [0.5, 0.7], so2: [0.1, 0.25] },
   { name: 'Delayed', peak: [2030, 2040], zero: [2070, 2095], floor: [-5, 0], ch4: [0.6, 0.85], so2: [0.15, 0.35] },
@@ -42,7 +43,7 @@ function generator(seed: number): () => number {
 }
 
 /**
- * `count` invented scenarios spread over three invented models and five storyline families: total
+ * `count` invented scenarios spread over three invented models and six storyline families: total
  * CO2 rising to a peak, falling linearly to net zero and on to a floor of net removals; CH4, N2O and
  * the aerosol and ozone precursors falling towards a fraction of their 2020 level by 2100;
  * F-gases and HFC-134a. The second model reports CO2 only by its two sectors; the third adds rows
