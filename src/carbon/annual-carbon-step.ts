@@ -1,9 +1,10 @@
 import { CO2_BOX_COUNT, JOOS_2013 } from './co2-impulse-response.js';
-import { irf100Target, MILLAR_2017, uptakeTimescaleScaling } from './uptake-feedback.js';
+import { CARBON_CYCLE, irf100Target, uptakeTimescaleScaling, type CarbonCycleParams } from './uptake-feedback.js';
 
 /**
  * The CO2 state that {@link annualCarbonStepInto} advances, all anomalies from the starting
- * equilibrium: the four Joos et al. 2013 boxes and the cumulative bookkeeping.
+ * equilibrium: the four Joos et al. 2013 boxes and the cumulative bookkeeping, at the start of a
+ * calendar year (1 January) between steps.
  */
 export interface AnnualCarbonState {
   /** Box contents, Gt C (Joos et al. 2013 order: permanent, 394.4, 36.54, 4.304 yr). */
@@ -12,8 +13,16 @@ export interface AnnualCarbonState {
   uptakeGtc: number;
   /** CO2 emitted since the start, Gt C. */
   emittedGtc: number;
+  /** Annual-mean atmospheric anomaly over the last year stepped, Gt C (the mean of the boxes' sum over the year). */
+  meanGtc: number;
+  /** Emission total of the last year stepped, Gt C (given or diagnosed). */
+  lastEmissionGtc: number;
   /** Time-scale multiplier alpha of the last step (the warm start of the next solve). */
   alpha: number;
+  /** The iIRF100 coefficients (Millar et al. 2017 form). */
+  cycle: CarbonCycleParams;
+  /** Carbon-climate feedback on uptake; false keeps alpha = 1 (the fixed Joos et al. 2013 response). */
+  feedback: boolean;
   /** Scratch of one step: decay factors d_i = exp(-1 / (alpha tau_i)). */
   decay: Float64Array;
   /** Scratch of one step: growth factors g_i = alpha tau_i (1 - d_i) (1 for the permanent box). */
@@ -22,29 +31,54 @@ export interface AnnualCarbonState {
 
 /**
  * A fresh state at the starting equilibrium (empty boxes, nothing emitted or taken up).
+ *
+ * @param cycle iIRF100 coefficients (default {@link CARBON_CYCLE}, warmcast's fitted defaults)
+ * @param feedback carbon-climate feedback on uptake (default true)
  * @example annualCarbonState().boxesGtc // Float64Array [0, 0, 0, 0]
  */
-export function annualCarbonState(): AnnualCarbonState {
-  return { boxesGtc: new Float64Array(CO2_BOX_COUNT), uptakeGtc: 0, emittedGtc: 0, alpha: 1, decay: new Float64Array(CO2_BOX_COUNT), growth: new Float64Array(CO2_BOX_COUNT) };
+export function annualCarbonState(cycle: CarbonCycleParams = CARBON_CYCLE, feedback = true): AnnualCarbonState {
+  return {
+    boxesGtc: new Float64Array(CO2_BOX_COUNT),
+    uptakeGtc: 0,
+    emittedGtc: 0,
+    meanGtc: 0,
+    lastEmissionGtc: 0,
+    alpha: 1,
+    cycle,
+    feedback,
+    decay: new Float64Array(CO2_BOX_COUNT),
+    growth: new Float64Array(CO2_BOX_COUNT),
+  };
+}
+
+/**
+ * Empties a state back to the starting equilibrium, keeping its coefficients and scratch arrays
+ * (an ensemble reuses one state for every member).
+ */
+export function resetAnnualCarbonState(state: AnnualCarbonState): void {
+  state.boxesGtc.fill(0);
+  state.uptakeGtc = 0;
+  state.emittedGtc = 0;
+  state.meanGtc = 0;
+  state.lastEmissionGtc = 0;
+  state.alpha = 1;
 }
 
 /**
  * The Millar et al. 2017 time-scale multiplier alpha for a state and warming, with the pre-industrial
  * iIRF100 r0 multiplied by `irf100Scale`: alpha solves iIRF100(alpha) = s r0 + rC U + rT T (clamped
- * as {@link irf100Target} clamps). Written as irf100Target at an uptake shifted by (s - 1) r0 / rC,
- * which is the same linear target and reuses its clamp; s = 1 gives exactly the central target.
- * Updates `state.alpha` (the warm start).
+ * as {@link irf100Target} clamps); 1 when the state's feedback is off. Updates `state.alpha` (the
+ * warm start).
  *
- * @param state carbon state (its uptake is read, its alpha written)
+ * @param state carbon state (its uptake and coefficients are read, its alpha written)
  * @param surfaceK surface warming, K
- * @param irf100Scale multiplier s on r0 = 32.4 yr, > 0
+ * @param irf100Scale multiplier s on r0, > 0
  * @returns alpha, dimensionless
  * @example annualTimescaleScaling(annualCarbonState(), 0, 1) // ≈ 0.120 (iIRF100 32.4 yr)
  */
 export function annualTimescaleScaling(state: AnnualCarbonState, surfaceK: number, irf100Scale: number): number {
-  const m = MILLAR_2017;
-  const shift = irf100Scale === 1 ? 0 : ((irf100Scale - 1) * m.r0Yr) / m.rUptakeYrPerGtc;
-  state.alpha = uptakeTimescaleScaling(irf100Target(state.uptakeGtc + shift, surfaceK), state.alpha);
+  if (!state.feedback) return (state.alpha = 1);
+  state.alpha = uptakeTimescaleScaling(irf100Target(state.uptakeGtc, surfaceK, state.cycle, irf100Scale), state.alpha);
   return state.alpha;
 }
 
@@ -68,39 +102,42 @@ function stepFactors(state: AnnualCarbonState, alpha: number): void {
 }
 
 /**
- * Advances the CO2 boxes exactly over one year with a constant emission rate and the time scales
- * frozen at the start-of-year state (alpha from the uptake and warming at the start, as
- * {@link annualTimescaleScaling}): each decaying box of the Joos et al. 2013 response,
- * dR_i/dt = a_i E - R_i / (alpha tau_i), is solved in closed form,
- *   R_i(1) = R_i d_i + a_i E alpha tau_i (1 - d_i),   d_i = exp(-1 / (alpha tau_i)),
+ * Advances the CO2 boxes exactly over one calendar year whose emission total is E, emitted at a
+ * constant rate, with the time scales frozen at the start-of-year state (alpha from the uptake at
+ * 1 January and the given warming, as {@link annualTimescaleScaling}): each decaying box of the
+ * Joos et al. 2013 response, dR_i/dt = a_i E - R_i / (alpha tau_i), is solved in closed form,
+ *   R_i(1) = R_i d_i + a_i E g_i,   d_i = exp(-1 / (alpha tau_i)),  g_i = alpha tau_i (1 - d_i),
  * and the permanent box gains a_0 E. The year's uptake is the exact integral of sum R_i / (alpha tau_i),
- *   sum_i [R_i (1 - d_i) + a_i E (1 - alpha tau_i (1 - d_i))],
- * so emitted = atmospheric increase + uptake holds to rounding.
+ *   sum_i [R_i (1 - d_i) + a_i E (1 - g_i)],
+ * so emitted = atmospheric increase + uptake holds to rounding, and the emitted total grows by
+ * exactly E. The annual mean of each box is also exact: R_i g_i + a_i E (alpha tau_i - alpha tau_i g_i)
+ * (R_0 + a_0 E / 2 for the permanent box); their sum is left in `state.meanGtc`.
  *
  * Freezing alpha over the year is the scheme's one approximation: the feedback responds to the
  * year's warming and uptake a year late.
  *
- * @param state carbon state, advanced in place
- * @param surfaceK surface warming at the start of the year, K
- * @param irf100Scale multiplier on the pre-industrial iIRF100 (1 = Millar et al. 2017)
- * @param emissionGtcPerYr CO2 emission rate during the year, Gt C yr-1
- * @example annualCarbonStepInto(annualCarbonState(), 0, 1, 10) // boxes then hold 8.13 Gt C, 1.87 Gt C taken up
+ * @param state carbon state, advanced in place from 1 January of the year to 1 January of the next
+ * @param surfaceK surface warming the feedback sees during the year, K
+ * @param irf100Scale multiplier on the pre-industrial iIRF100 (1 = the state's r0)
+ * @param emissionGtc CO2 emitted during the year, Gt C
+ * @example annualCarbonStepInto(annualCarbonState(), 0, 1, 10) // boxes then hold 8.13 Gt C, 1.87 Gt C taken up (Millar r0)
  */
-export function annualCarbonStepInto(state: AnnualCarbonState, surfaceK: number, irf100Scale: number, emissionGtcPerYr: number): void {
+export function annualCarbonStepInto(state: AnnualCarbonState, surfaceK: number, irf100Scale: number, emissionGtc: number): void {
   stepFactors(state, annualTimescaleScaling(state, surfaceK, irf100Scale));
-  advance(state, emissionGtcPerYr);
+  advance(state, emissionGtc);
 }
 
 /**
- * The constant emission rate over the coming year that raises the atmospheric stock by exactly
- * `increaseGtc` under the same frozen-alpha step, then takes that step: the step is linear in E,
- * sum R(1) = sum_i R_i d_i + E sum_i a_i g_i, so E = (increase + sum_i R_i (1 - d_i)) / sum_i a_i g_i.
+ * The emission total of the coming year (emitted at a constant rate) that raises the atmospheric
+ * stock from 1 January to 1 January by exactly `increaseGtc` under the same frozen-alpha step, then
+ * takes that step: the step is linear in E, sum R(1) = sum_i R_i d_i + E sum_i a_i g_i, so
+ * E = (increase + sum_i R_i (1 - d_i)) / sum_i a_i g_i.
  *
  * @param state carbon state, advanced in place
- * @param surfaceK surface warming at the start of the year, K
+ * @param surfaceK surface warming the feedback sees during the year, K
  * @param irf100Scale multiplier on the pre-industrial iIRF100
  * @param increaseGtc atmospheric increase over the year, Gt C (2.124 x the ppm change)
- * @returns the diagnosed emission rate, Gt C yr-1
+ * @returns the diagnosed emission total of the year, Gt C
  * @example annualCarbonStepForIncreaseInto(annualCarbonState(), 0, 1, 0) // 0 (equilibrium stays)
  */
 export function annualCarbonStepForIncreaseInto(state: AnnualCarbonState, surfaceK: number, irf100Scale: number, increaseGtc: number): number {
@@ -120,15 +157,25 @@ export function annualCarbonStepForIncreaseInto(state: AnnualCarbonState, surfac
 
 /** One step with the factors in the state's scratch arrays. */
 function advance(state: AnnualCarbonState, e: number): void {
-  const { fractions } = JOOS_2013;
+  const { fractions, timescalesYr } = JOOS_2013;
   const { boxesGtc: r, decay, growth } = state;
   let uptake = 0;
+  let mean = 0;
   for (let i = 0; i < CO2_BOX_COUNT; i++) {
-    uptake += r[i] * (1 - decay[i]) + fractions[i] * e * (1 - growth[i]);
-    r[i] = r[i] * decay[i] + fractions[i] * e * growth[i];
+    const a = fractions[i] * e;
+    if (decay[i] === 1) {
+      mean += r[i] + 0.5 * a;
+    } else {
+      const tau = state.alpha * timescalesYr[i];
+      mean += r[i] * growth[i] + a * (tau - tau * growth[i]);
+    }
+    uptake += r[i] * (1 - decay[i]) + a * (1 - growth[i]);
+    r[i] = r[i] * decay[i] + a * growth[i];
   }
   state.uptakeGtc += uptake;
   state.emittedGtc += e;
+  state.meanGtc = mean;
+  state.lastEmissionGtc = e;
 }
 
 /**

@@ -3,7 +3,7 @@ import type { GhgForcing } from '../forcing/agents.js';
 import { CO2_BOX_COUNT, JOOS_2013 } from './co2-impulse-response.js';
 import { gasTendencyPpbPerYr, type GasCycle } from './gas-cycle.js';
 import { GTC_PER_PPM } from './units.js';
-import { irf100Target, uptakeTimescaleScaling } from './uptake-feedback.js';
+import { CARBON_CYCLE, irf100Target, uptakeTimescaleScaling, type CarbonCycleParams } from './uptake-feedback.js';
 
 /**
  * Layout of the coupled carbon-gas-climate state vector. Every entry is an anomaly from the
@@ -50,6 +50,8 @@ export interface CoupledModelSpec {
   ghgForcing: (co2Ppm: number, ch4Ppb: number, n2oPpb: number) => GhgForcing;
   /** Carbon-climate feedback on uptake (Millar et al. 2017) on, or the fixed Joos et al. 2013 response. */
   feedback: boolean;
+  /** iIRF100 coefficients with the feedback on (default {@link CARBON_CYCLE}). */
+  carbonCycle?: CarbonCycleParams;
   /** Atmospheric CO2 of the starting equilibrium, ppm. */
   co2StartPpm: number;
   ch4: GasCycle;
@@ -80,7 +82,11 @@ export interface CoupledModel {
 }
 
 /**
- * Builds the right-hand side of the coupled system (one state vector, one integrator):
+ * Builds the right-hand side of the coupled system (one state vector, one integrator): the
+ * continuous-time statement of the model whose production scheme steps calendar years in closed
+ * form (co2YearInto, gasYear, the one two-box step). Integrated by odex it is the test oracle of
+ * that scheme (test/carbon/coupled-ode-oracle.ts).
+ *
  *
  *   CO2 boxes (Joos et al. 2013): dR_i/dt = a_i E - R_i / (alpha tau_i),  C = C_start + sum R_i / 2.124
  *   uptake U = sum_i R_i / (alpha tau_i); with the feedback, alpha solves Millar et al. 2017 eq. 8
@@ -102,7 +108,7 @@ export function coupledModel(spec: CoupledModelSpec): CoupledModel {
 
   const timescaleScaling = (y: readonly number[]): number => {
     if (!spec.feedback) return 1;
-    lastAlpha = uptakeTimescaleScaling(irf100Target(y[I.uptakeGtc], y[I.surfaceK]), lastAlpha);
+    lastAlpha = uptakeTimescaleScaling(irf100Target(y[I.uptakeGtc], y[I.surfaceK], spec.carbonCycle ?? CARBON_CYCLE), lastAlpha);
     return lastAlpha;
   };
   const uptakeAt = (y: readonly number[], alpha: number): number => {

@@ -19,10 +19,10 @@ export interface DiagnosedEmissions {
  * concentrations, as {@link runEmissionDriven} computes them in its concentration years. Gases
  * given as emissions pass through unchanged; a gas not given stays absent.
  *
- * The emission values at the year nodes are the mean of the diagnosed rate just before and just
- * after each node (the rate jumps with the concentration's slope), so running the returned pathway
- * forward reproduces the concentrations closely but not exactly; the cumulative emissions of the
- * run are the exact integrals.
+ * Each emission value is the calendar year's total that moves the stock from one 1 January
+ * concentration to the next (yearStartConcentrations), so running the returned pathway forward
+ * lands on the same 1 January values (to the small difference the warming makes to the feedback)
+ * and on annual means within a quarter of the record's second difference of the given ones.
  *
  * @param pathway annual pathway with concentration columns
  * @param params climate parameters
@@ -30,7 +30,7 @@ export interface DiagnosedEmissions {
  * @throws ConfigError as runEmissionDriven does
  * @example
  * const { emissions } = diagnoseEmissions(loadHistory(), calibrate(), { forcing: { co2Formula: 'ar6' } });
- * emissions.series.co2_gtco2 // Gt CO2 per year, 1750-2024
+ * emissions.series.co2_gtco2 // Gt CO2 emitted in each calendar year, 1750-2024
  */
 export function diagnoseEmissions(pathway: Pathway, params: ClimateParams, options: EmissionRunOptions): DiagnosedEmissions {
   const run = runEmissionDriven(pathway, params, options);

@@ -1,7 +1,8 @@
 /**
  * The carbon layer: emissions -> concentrations. CO2 boxes with a carbon-climate feedback on uptake,
- * single-lifetime CH4 and N2O mass balances, and the emission-driven run that couples them with the
- * two-box energy balance in one ODE state vector.
+ * single-lifetime CH4 and N2O mass balances, and the emission-driven run that steps them with the
+ * two-box energy balance one calendar year at a time (the production scheme; the continuous coupled
+ * model integrated by odex is its test oracle).
  */
 export { co2ImpulseResponse, CO2_BOX_COUNT, integratedImpulseResponse, integratedImpulseResponseSlope, JOOS_2013 } from './co2-impulse-response.js';
 export { COUPLED_STATE, coupledModel } from './coupled-model.js';
@@ -38,6 +39,14 @@ export {
   ppbToMtN2o,
   ppmToGtc,
 } from './units.js';
-export { irf100Target, MILLAR_2017, uptakeTimescaleScaling } from './uptake-feedback.js';
-export { annualCarbonState, annualCarbonStepForIncreaseInto, annualCarbonStepInto, annualTimescaleScaling, atmosphericGtc } from './annual-carbon-step.js';
+export { CARBON_CYCLE, irf100Target, MILLAR_2017, uptakeTimescaleScaling } from './uptake-feedback.js';
+export type { CarbonCycleParams } from './uptake-feedback.js';
+export { annualCarbonState, annualCarbonStepForIncreaseInto, annualCarbonStepInto, annualTimescaleScaling, atmosphericGtc, resetAnnualCarbonState } from './annual-carbon-step.js';
+export { gasYear } from './annual-gas-step.js';
+export type { GasYear } from './annual-gas-step.js';
+export { co2YearDrivers, co2YearInto } from './co2-year.js';
+export type { Co2YearDrivers } from './co2-year.js';
+export { CARBON_TARGETS, carbonRecordFigures, fitCarbonCycle } from './fit-carbon-cycle.js';
+export type { CarbonCycleFit, CarbonRecordFigures } from './fit-carbon-cycle.js';
+export { JOIN_TREND_YEARS, yearStartConcentrations } from './year-start-concentrations.js';
 export type { AnnualCarbonState } from './annual-carbon-step.js';

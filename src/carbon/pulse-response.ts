@@ -29,9 +29,9 @@ export interface PulseResponse {
  * response is their difference in atmospheric carbon over the pulse, so the small difference
  * between the background concentrations and the emission-driven reference cancels out.
  *
- * The pulse is added as a rate of `pulseGtc` Gt C yr-1 at the pulse year's node: with emissions
- * linear between nodes that is a triangle from the year before to the year after, holding exactly
- * `pulseGtc` and centred on the pulse year.
+ * The pulse is added to the pulse year's emission total, so it is emitted evenly over that calendar
+ * year (centred on its middle), and the response is read in annual means: year t after the pulse is
+ * the mean over the calendar year whose middle is t years after the pulse's.
  *
  * @param background pathway with `co2_ppm` in every year (and any CH4, N2O and forcing columns,
  *   which both runs share)

@@ -1,14 +1,17 @@
 import type { ClimateParams } from '../climate/params.js';
+import { stepTwoBoxInto, twoBoxSteps } from '../climate/two-box-step.js';
 import { topOfAtmosphereImbalance } from '../climate/two-box.js';
 import { ConfigError, NumericalError } from '../errors.js';
 import { forcingByAgent, ghgForcingFunction, type ForcingOptions, type ForcingSeries } from '../forcing/agents.js';
 import { PREINDUSTRIAL } from '../forcing/constants.js';
-import { DEFAULT_TOLERANCES, integrateSteps, type OdeTolerances } from '../numerics/integrate-steps.js';
 import { FORCING_COLUMNS, GASES, type Gas, type Pathway } from '../pathway.js';
-import { CO2_BOX_COUNT } from './co2-impulse-response.js';
-import { COUPLED_STATE, coupledModel, type CoupledModel, type GasStepInput } from './coupled-model.js';
-import { CH4_CYCLE, gasEmissionsForTendency, gasSinkMt, N2O_CYCLE, withConstantLifetime, type GasCycle } from './gas-cycle.js';
-import { GTC_PER_PPM, gtcToGtco2, gtco2ToGtc } from './units.js';
+import { annualCarbonState, atmosphericGtc } from './annual-carbon-step.js';
+import { gasYear } from './annual-gas-step.js';
+import { co2YearDrivers, co2YearInto } from './co2-year.js';
+import { CH4_CYCLE, gasSinkMt, N2O_CYCLE, withConstantLifetime, type GasCycle } from './gas-cycle.js';
+import { GTC_PER_PPM, gtcToGtco2 } from './units.js';
+import { CARBON_CYCLE, type CarbonCycleParams } from './uptake-feedback.js';
+import { JOIN_TREND_YEARS, yearStartConcentrations } from './year-start-concentrations.js';
 
 /** Options of {@link runEmissionDriven}. */
 export interface EmissionRunOptions {
@@ -16,30 +19,32 @@ export interface EmissionRunOptions {
   forcing: ForcingOptions;
   /** Carbon-climate feedback on uptake (Millar et al. 2017). Default true. */
   feedback?: boolean;
+  /** iIRF100 coefficients of the carbon cycle. Default {@link CARBON_CYCLE} (fitted by scripts/fit-carbon-cycle.ts). */
+  carbonCycle?: CarbonCycleParams;
   /**
    * CH4 lifetime lengthening with the burden (perturbation lifetime 11.8 yr, Prather et al. 2012 /
    * AR6). Default false: a constant 9.1 yr total lifetime, which with natural emissions implied by
    * the 1750 steady state reproduces present-day anthropogenic inventories (see src/carbon/README.md).
    */
   ch4LifetimeFeedback?: boolean;
-  /** odex tolerances. */
-  tolerances?: OdeTolerances;
 }
 
-/** Cumulative CO2 bookkeeping since the start of the run, Gt C at each year node. */
+/** Cumulative CO2 bookkeeping since the start of the run, Gt C at the end of each calendar year. */
 export interface CarbonBudget {
-  /** CO2 emitted (given or diagnosed), Gt C. */
+  /** CO2 emitted (given or diagnosed) from the start through the end of each year, Gt C. */
   emittedGtc: Float64Array;
-  /** Increase of the atmospheric stock, Gt C. */
+  /** Increase of the atmospheric stock from the start to the end of each year (1 January of the next), Gt C. */
   atmosphericGtc: Float64Array;
-  /** Taken up by land and ocean together, Gt C. */
+  /** Taken up by land and ocean together from the start through the end of each year, Gt C. */
   uptakeGtc: Float64Array;
 }
 
-/** Result of an emission-driven (or mixed) run, one value per year node. */
+/** Result of an emission-driven (or mixed) run, one value per calendar year. */
 export interface EmissionRunResult {
-  /** Atmospheric CO2, ppm; CH4 and N2O, ppb. */
+  /** Annual-mean atmospheric CO2, ppm; CH4 and N2O, ppb. */
   co2Ppm: Float64Array;
+  /** Atmospheric CO2 at the end of each year (1 January of the next), ppm: the stock the carbon budget holds. */
+  co2YearEndPpm: Float64Array;
   ch4Ppb: Float64Array;
   n2oPpb: Float64Array;
   /** Surface and deep-ocean temperature anomalies relative to the starting equilibrium, K. */
@@ -49,13 +54,16 @@ export interface EmissionRunResult {
   imbalanceWm2: Float64Array;
   /** ERF by agent and in total, W m-2, with the prescribed columns of the pathway. */
   forcing: ForcingSeries;
-  /** Emission rates at the year nodes, given or diagnosed: Gt CO2 yr-1, Mt CH4 yr-1, Mt N2O yr-1. */
+  /** Emission totals of each calendar year, given or diagnosed: Gt CO2, Mt CH4, Mt N2O. */
   co2EmissionsGtco2: Float64Array;
   ch4EmissionsMt: Float64Array;
   n2oEmissionsMt: Float64Array;
-  /** CO2 emitted from the 1850 node (or the first year, if later) to each node, Gt CO2; 0 before 1850. */
+  /**
+   * CO2 emitted from 1850 (or the first year, if later) through each year, Gt CO2: the running sum
+   * of `co2EmissionsGtco2`, so year Y holds exactly the sum of the rows 1850..Y; 0 before 1850.
+   */
   cumulativeCo2Gtco2: Float64Array;
-  /** Atmospheric increase over emissions, both cumulative since the start; NaN while |emitted| < 1 Gt C. */
+  /** Atmospheric increase over emissions, both cumulative since the start to the end of the year; NaN while |emitted| < 1 Gt C. */
   airborneFraction: Float64Array;
   /** Last year whose CO2 emissions were diagnosed from concentrations, if any. */
   diagnosedUntil?: number;
@@ -72,7 +80,7 @@ export interface EmissionRunResult {
 /** Cumulative emissions below this many Gt C leave the airborne fraction undefined (about 0.5 ppm). */
 const AIRBORNE_FRACTION_MIN_GTC = 1;
 
-/** Largest tolerated relative CO2 mass-balance error of a run (the issue's criterion). */
+/** Largest tolerated relative CO2 mass-balance error of a run. */
 const MAX_MASS_BALANCE_ERROR = 1e-6;
 
 /** Year from which `cumulativeCo2Gtco2` counts (IPCC AR6 WG1 SPM convention). */
@@ -81,192 +89,150 @@ const CUMULATIVE_FROM_YEAR = 1850;
 const CONCENTRATION = 1;
 const EMISSION = 2;
 
-/** How one gas is driven at each year node. */
+/** How one gas is driven in each year. */
 interface GasPlan {
   gas: Gas;
-  /** CONCENTRATION or EMISSION per node; concentration nodes, if any, come first. */
+  /** CONCENTRATION or EMISSION per year; concentration years, if any, come first. */
   mode: Uint8Array;
-  /** Concentrations at concentration nodes (ppm or ppb); pre-industrial for a gas not given. */
+  /** Annual-mean concentrations in concentration years (ppm or ppb); pre-industrial for a gas not given. */
   concentration: Float64Array;
-  /** Emission rate at every node in model units (Gt C or Mt yr-1): given ones now, diagnosed ones during the run. */
+  /** Emission total of each year in the column's unit (Gt CO2, Mt): given ones now, diagnosed ones during the run. */
   emission: Float64Array;
-  /** Index of the last concentration node, -1 if none. */
+  /** Index of the last concentration year, -1 if none. */
   lastConcentration: number;
   /** Whether the pathway gives this gas at all. */
   given: boolean;
 }
 
 /**
- * Runs the coupled carbon-gas-climate model on a pathway whose gases are given as emissions, as
- * concentrations, or as concentrations up to a year and emissions after it (a future emission file
- * spliced onto the concentration history), each gas on its own.
+ * Runs the carbon cycle, CH4 and N2O and the two-box energy balance together, one calendar year at
+ * a time, on a pathway whose gases are given as emissions, as concentrations, or as concentrations
+ * up to a year and emissions after it (a future emission file spliced onto the concentration
+ * history), each gas on its own. This is warmcast's one production scheme for emission-driven runs;
+ * ensemble members take the same CO2 step (co2YearInto). The odex integration of the continuous
+ * model (coupledModel) is its test oracle.
  *
- * One state vector holds the CO2 boxes, the CH4 and N2O concentrations, the two temperatures and the
- * cumulative emitted and taken-up CO2; `integrateSteps` advances it with odex, one solve per year.
- * - Years whose concentration is given (at both ends): the concentration is linear in time and the
- *   emissions are diagnosed within the ODE as E = dC/dt + uptake(state) (CO2) or
- *   m dc/dt + sink(c) - natural (CH4, N2O), with the temperature, and so the feedback, evolving
- *   alongside. This is exact up to the integrator's tolerance: the boxes then hold the carbon-cycle
- *   state consistent with the record, from which the emission years continue.
- * - Years whose emissions are given: emissions linear between the year nodes, concentrations free.
- * - The year that joins the two: emissions linear from the rate diagnosed at the last concentration
- *   node (its left-hand limit, dC/dt of the year before plus the uptake there) to the first given
- *   rate.
- * - Reported node values of diagnosed emissions are approximations: the diagnosed rate jumps at each
- *   node with the slope of the concentration, so the node value is the mean of the rates either
- *   side (a central difference of the concentration plus the uptake at the node). Cumulative
- *   emissions and the carbon budget are the exact integrals.
- * - Forcing inside each year is that of the current concentrations (not linear between nodes as in a
- *   concentration-driven run; the difference is second order in the year-to-year change).
+ * Conventions (a row is a calendar year):
+ * - An emission value is the total emitted during its year, emitted at a constant rate within the
+ *   year, so the run's cumulative emissions are exactly the sum of the rows.
+ * - A concentration value is an annual mean. In the years of a concentration record the year's
+ *   emission total is diagnosed so that the stock moves from one 1 January concentration to the
+ *   next (yearStartConcentrations: midway between annual means; the last record year grows at the
+ *   least-squares trend of its last JOIN_TREND_YEARS years, so one El Niño year does not set the
+ *   rate at the join). The boxes then hold the carbon-cycle state the record implies, and the
+ *   emission years continue from it.
+ * - Each year: the CO2 boxes step exactly with the feedback frozen at 1 January and the previous
+ *   year's warming (co2YearInto); CH4 and N2O step exactly with the lifetime of the year's middle
+ *   concentration (gasYear); the year's annual-mean concentrations give its ERF; the two-box model
+ *   steps from the previous year with forcing linear between the years' values (the one two-box
+ *   step, stepTwoBoxInto, as a concentration-driven run takes).
  * - The start is an equilibrium at the first year's concentrations (pre-industrial for a gas given
  *   as emissions there); natural CH4 and N2O emissions balance the sinks at it.
  *
  * @param pathway annual pathway (consecutive years), gases in either form, prescribed forcing columns
  * @param params climate parameters
- * @param options forcing options, feedback switches, odex tolerances
- * @returns concentrations, temperatures, forcing, emissions and carbon bookkeeping at each year node
+ * @param options forcing options, feedback switches, carbon-cycle coefficients
+ * @returns concentrations, temperatures, forcing, emissions and carbon bookkeeping per year
  * @throws ConfigError when a gas is given both ways in a year, in neither form in a year, or as a
  *   concentration after its emissions started; when a prescribed forcing value is not finite
- * @throws NumericalError when the integrator fails (e.g. emissions so negative that CH4 would vanish)
- *   or the CO2 mass balance is off by more than 1e-6 of the total
+ * @throws NumericalError when a value turns non-finite (e.g. emissions so negative that CH4 would
+ *   vanish) or the CO2 mass balance is off by more than 1e-6 of the total
  * @example
  * const r = runEmissionDriven(spliced, calibrate(), { forcing: { co2Formula: 'ar6' } });
  * r.diagnosedUntil // 2024: history concentrations to 2024, the file's emissions after
  */
 export function runEmissionDriven(pathway: Pathway, params: ClimateParams, options: EmissionRunOptions): EmissionRunResult {
-  const n = pathway.years.length;
+  const years = pathway.years;
+  const n = years.length;
   const feedback = options.feedback ?? true;
   const ch4Cycle = options.ch4LifetimeFeedback ? CH4_CYCLE : withConstantLifetime(CH4_CYCLE);
   const plans = {
-    co2: planGas(pathway, 'co2', PREINDUSTRIAL.co2Ppm, gtco2ToGtc),
-    ch4: planGas(pathway, 'ch4', PREINDUSTRIAL.ch4Ppb, (x) => x),
-    n2o: planGas(pathway, 'n2o', PREINDUSTRIAL.n2oPpb, (x) => x),
+    co2: planGas(pathway, 'co2', PREINDUSTRIAL.co2Ppm),
+    ch4: planGas(pathway, 'ch4', PREINDUSTRIAL.ch4Ppb),
+    n2o: planGas(pathway, 'n2o', PREINDUSTRIAL.n2oPpb),
   };
   const other = prescribedForcing(pathway, options.forcing);
+  const ghg = ghgForcingFunction(options.forcing);
 
-  const start = {
-    co2: startValue(plans.co2, PREINDUSTRIAL.co2Ppm),
-    ch4: startValue(plans.ch4, PREINDUSTRIAL.ch4Ppb),
-    n2o: startValue(plans.n2o, PREINDUSTRIAL.n2oPpb),
-  };
-  const natural = { ch4: gasSinkMt(ch4Cycle, start.ch4), n2o: gasSinkMt(N2O_CYCLE, start.n2o) };
-  const model = coupledModel({
-    climate: params,
-    ghgForcing: ghgForcingFunction(options.forcing),
-    feedback,
-    co2StartPpm: start.co2,
-    ch4: ch4Cycle,
-    n2o: N2O_CYCLE,
-    ch4NaturalMt: natural.ch4,
-    n2oNaturalMt: natural.n2o,
-  });
-
-  const I = COUPLED_STATE;
-  const y0 = new Array<number>(I.size).fill(0);
-  y0[I.ch4Ppb] = start.ch4;
-  y0[I.n2oPpb] = start.n2o;
-  const states: number[][] = new Array(n);
-  states[0] = y0;
-
-  const diagnoseAt = (j: number, y: readonly number[]): void => {
-    if (plans.co2.mode[j] === CONCENTRATION) {
-      plans.co2.emission[j] = GTC_PER_PPM * nodeSlope(plans.co2, j) + model.uptakeGtcPerYr(y);
-    }
-    if (plans.ch4.mode[j] === CONCENTRATION) {
-      plans.ch4.emission[j] = gasEmissionsForTendency(ch4Cycle, y[I.ch4Ppb], nodeSlope(plans.ch4, j), natural.ch4);
-    }
-    if (plans.n2o.mode[j] === CONCENTRATION) {
-      plans.n2o.emission[j] = gasEmissionsForTendency(N2O_CYCLE, y[I.n2oPpb], nodeSlope(plans.n2o, j), natural.n2o);
-    }
-  };
-  diagnoseAt(0, y0);
-
-  const inputs = { co2: emptyInput(), ch4: emptyInput(), n2o: emptyInput() };
-  let inputStep = -1;
-  const setInputs = (k: number): void => {
-    setStepInput(inputs.co2, plans.co2, k, GTC_PER_PPM);
-    setStepInput(inputs.ch4, plans.ch4, k, 1);
-    setStepInput(inputs.n2o, plans.n2o, k, 1);
-    inputStep = k;
-  };
-  const dy = new Array<number>(I.size).fill(0);
-  integrateSteps(
-    (k, s, y) => {
-      if (k !== inputStep) setInputs(k);
-      model.derivativesInto(y, s, inputs.co2, inputs.ch4, inputs.n2o, other[k] + s * (other[k + 1] - other[k]), dy);
-      return dy.slice();
-    },
-    y0,
-    n - 1,
-    options.tolerances ?? DEFAULT_TOLERANCES,
-    (k, y) => {
-      states[k + 1] = y;
-      diagnoseAt(k + 1, y);
-    },
+  const co2Drivers = co2YearDrivers(
+    plans.co2.lastConcentration >= 0 ? plans.co2.concentration : undefined,
+    plans.co2.emission,
+    PREINDUSTRIAL.co2Ppm,
   );
+  const gases = {
+    ch4: gasDrivers(plans.ch4, ch4Cycle, PREINDUSTRIAL.ch4Ppb),
+    n2o: gasDrivers(plans.n2o, N2O_CYCLE, PREINDUSTRIAL.n2oPpb),
+  };
+  const natural = { ch4: gases.ch4.naturalMt, n2o: gases.n2o.naturalMt };
 
-  return assemble(pathway, params, options.forcing, model, plans, states, natural, feedback, options.ch4LifetimeFeedback ?? false);
-}
-
-/** Collects the node states into the result series and the notes. */
-function assemble(
-  pathway: Pathway,
-  params: ClimateParams,
-  forcingOptions: ForcingOptions,
-  model: CoupledModel,
-  plans: Record<Gas, GasPlan>,
-  states: number[][],
-  natural: { ch4: number; n2o: number },
-  feedback: boolean,
-  ch4LifetimeFeedback: boolean,
-): EmissionRunResult {
-  const I = COUPLED_STATE;
-  const years = pathway.years;
-  const n = years.length;
   const co2Ppm = new Float64Array(n);
+  const co2YearEndPpm = new Float64Array(n);
   const ch4Ppb = new Float64Array(n);
   const n2oPpb = new Float64Array(n);
   const surfaceK = new Float64Array(n);
   const deepK = new Float64Array(n);
+  const totalWm2 = new Float64Array(n);
   const emittedGtc = new Float64Array(n);
-  const atmosphericGtc = new Float64Array(n);
+  const atmosphericStockGtc = new Float64Array(n);
   const uptakeGtc = new Float64Array(n);
+
+  const carbon = annualCarbonState(options.carbonCycle ?? CARBON_CYCLE, feedback);
+  const steps = twoBoxSteps(params);
+  const t1 = new Float64Array(1);
+  const d1 = new Float64Array(1);
   for (let k = 0; k < n; k++) {
-    const y = states[k];
-    co2Ppm[k] = model.co2Ppm(y);
-    ch4Ppb[k] = y[I.ch4Ppb];
-    n2oPpb[k] = y[I.n2oPpb];
-    surfaceK[k] = y[I.surfaceK];
-    deepK[k] = y[I.deepK];
-    emittedGtc[k] = y[I.emittedGtc];
-    let stock = 0;
-    for (let i = 0; i < CO2_BOX_COUNT; i++) stock += y[I.co2Boxes + i];
-    atmosphericGtc[k] = stock;
-    uptakeGtc[k] = y[I.uptakeGtc];
+    co2Ppm[k] = co2YearInto(carbon, co2Drivers, k, t1[0], 1);
+    if (plans.co2.mode[k] === CONCENTRATION) plans.co2.emission[k] = gtcToGtco2(carbon.lastEmissionGtc);
+    emittedGtc[k] = carbon.emittedGtc;
+    atmosphericStockGtc[k] = atmosphericGtc(carbon);
+    co2YearEndPpm[k] = co2Drivers.startPpm + atmosphericStockGtc[k] / GTC_PER_PPM;
+    uptakeGtc[k] = carbon.uptakeGtc;
+    ch4Ppb[k] = gases.ch4.yearInto(k);
+    n2oPpb[k] = gases.n2o.yearInto(k);
+    const f = ghg(co2Ppm[k], ch4Ppb[k], n2oPpb[k]);
+    totalWm2[k] = f.co2 + f.ch4 + f.n2o + other[k];
+    // The one two-box step (climate/two-box-step.ts), forcing linear between the years' values.
+    if (k > 0) stepTwoBoxInto(steps, totalWm2.subarray(k - 1, k), totalWm2.subarray(k, k + 1), t1, d1);
+    const t = t1[0];
+    surfaceK[k] = t;
+    deepK[k] = d1[0];
+    if (!(co2Ppm[k] > 0 && ch4Ppb[k] > 0 && n2oPpb[k] > 0 && Number.isFinite(co2Ppm[k] + ch4Ppb[k] + n2oPpb[k] + t))) {
+      throw new NumericalError(
+        `${pathway.name}: the run left the physical range in ${years[k]} (CO2 ${co2Ppm[k]} ppm, CH4 ${ch4Ppb[k]} ppb, N2O ${n2oPpb[k]} ppb, warming ${t} K); `
+          + 'check the emissions for values far below zero',
+        'numerical.non-finite',
+      );
+    }
+  }
+  for (const gas of ['ch4', 'n2o'] as const) {
+    const plan = plans[gas];
+    for (let k = 0; k <= plan.lastConcentration; k++) plan.emission[k] = gases[gas].emissionMt[k];
   }
 
-  const forcing = forcingByAgent(n, { co2Ppm, ch4Ppb, n2oPpb, prescribed: pathway.series }, forcingOptions);
+  const forcing = forcingByAgent(n, { co2Ppm, ch4Ppb, n2oPpb, prescribed: pathway.series }, options.forcing);
   const imbalanceWm2 = new Float64Array(n);
   for (let k = 0; k < n; k++) imbalanceWm2[k] = topOfAtmosphereImbalance(params, forcing.total[k], surfaceK[k], deepK[k]);
 
-  const from = Math.max(0, Math.min(n - 1, CUMULATIVE_FROM_YEAR - years[0]));
+  const co2EmissionsGtco2 = plans.co2.emission;
   const cumulativeCo2Gtco2 = new Float64Array(n);
-  if (years[n - 1] >= CUMULATIVE_FROM_YEAR) {
-    for (let k = from; k < n; k++) cumulativeCo2Gtco2[k] = gtcToGtco2(emittedGtc[k] - emittedGtc[from]);
+  let sum = 0;
+  for (let k = Math.max(0, CUMULATIVE_FROM_YEAR - years[0]); k < n; k++) {
+    sum += co2EmissionsGtco2[k];
+    cumulativeCo2Gtco2[k] = sum;
   }
+
   const airborneFraction = new Float64Array(n);
   let scale = 0;
   let worst = 0;
   for (let k = 0; k < n; k++) {
-    airborneFraction[k] = Math.abs(emittedGtc[k]) < AIRBORNE_FRACTION_MIN_GTC ? NaN : atmosphericGtc[k] / emittedGtc[k];
-    scale = Math.max(scale, Math.abs(emittedGtc[k]), Math.abs(atmosphericGtc[k]), Math.abs(uptakeGtc[k]));
-    worst = Math.max(worst, Math.abs(emittedGtc[k] - atmosphericGtc[k] - uptakeGtc[k]));
+    airborneFraction[k] = Math.abs(emittedGtc[k]) < AIRBORNE_FRACTION_MIN_GTC ? NaN : atmosphericStockGtc[k] / emittedGtc[k];
+    scale = Math.max(scale, Math.abs(emittedGtc[k]), Math.abs(atmosphericStockGtc[k]), Math.abs(uptakeGtc[k]));
+    worst = Math.max(worst, Math.abs(emittedGtc[k] - atmosphericStockGtc[k] - uptakeGtc[k]));
   }
-
   const massBalanceError = scale === 0 ? 0 : worst / scale;
   if (!(massBalanceError <= MAX_MASS_BALANCE_ERROR)) {
     throw new NumericalError(
-      `CO2 mass balance violated: emitted minus (atmospheric increase + uptake) reached ${massBalanceError.toExponential(2)} of the total; tighten the tolerances`,
+      `CO2 mass balance violated: emitted minus (atmospheric increase + uptake) reached ${massBalanceError.toExponential(2)} of the total`,
       'numerical.mass-balance',
     );
   }
@@ -275,42 +241,69 @@ function assemble(
     feedback
       ? 'carbon-climate feedback on uptake: on (sinks weaken with warming and cumulative uptake, Millar et al. 2017)'
       : 'carbon-climate feedback on uptake: off (fixed Joos et al. 2013 response)',
-    ...gasNotes(plans.co2, years, (gtc) => `${gtcToGtco2(gtc).toFixed(2)} Gt CO2 yr-1`),
-    ...gasNotes(plans.ch4, years, (mt) => `${mt.toFixed(1)} Mt CH4 yr-1`),
-    ...gasNotes(plans.n2o, years, (mt) => `${mt.toFixed(2)} Mt N2O yr-1`),
+    ...gasNotes(plans.co2, years, (v) => `${v.toFixed(2)} Gt CO2`),
+    ...gasNotes(plans.ch4, years, (v) => `${v.toFixed(1)} Mt CH4`),
+    ...gasNotes(plans.n2o, years, (v) => `${v.toFixed(2)} Mt N2O`),
   ];
   if (plans.ch4.lastConcentration < n - 1) {
-    notes.push(`CH4 natural emissions ${natural.ch4.toFixed(1)} Mt CH4 yr-1 (implied by the steady state at the start); lifetime ${ch4LifetimeFeedback ? 'lengthening with the burden (11.8 yr perturbation lifetime)' : 'constant 9.1 yr'}`);
+    notes.push(`CH4 natural emissions ${natural.ch4.toFixed(1)} Mt CH4 yr-1 (implied by the steady state at the start); lifetime ${options.ch4LifetimeFeedback ? 'lengthening with the burden (11.8 yr perturbation lifetime)' : 'constant 9.1 yr'}`);
   }
   if (plans.n2o.lastConcentration < n - 1) notes.push(`N2O natural emissions ${natural.n2o.toFixed(2)} Mt N2O yr-1 (implied by the steady state at the start)`);
 
   const co2 = plans.co2;
   return {
     co2Ppm,
+    co2YearEndPpm,
     ch4Ppb,
     n2oPpb,
     surfaceK,
     deepK,
     imbalanceWm2,
     forcing,
-    co2EmissionsGtco2: co2.emission.map(gtcToGtco2),
-    ch4EmissionsMt: plans.ch4.emission.slice(),
-    n2oEmissionsMt: plans.n2o.emission.slice(),
+    co2EmissionsGtco2,
+    ch4EmissionsMt: plans.ch4.emission,
+    n2oEmissionsMt: plans.n2o.emission,
     cumulativeCo2Gtco2,
     airborneFraction,
     diagnosedUntil: co2.given && co2.lastConcentration >= 0 ? years[co2.lastConcentration] : undefined,
     massBalanceError,
-    carbonBudget: { emittedGtc, atmosphericGtc, uptakeGtc },
+    carbonBudget: { emittedGtc, atmosphericGtc: atmosphericStockGtc, uptakeGtc },
     naturalEmissionsMt: natural,
     notes,
   };
 }
 
 /**
- * Works out, node by node, whether a gas is driven by its concentration or its emissions, and
- * checks that the pathway is usable: one form per node, concentration nodes before emission nodes.
+ * The year-by-year stepping of CH4 or N2O for a plan: concentration years diagnose the emission total
+ * that moves the burden between 1 January concentrations (yearStartConcentrations), emission years
+ * take the given totals (gasYear).
  */
-function planGas(pathway: Pathway, gas: Gas, preindustrial: number, toModelUnits: (x: number) => number): GasPlan {
+function gasDrivers(plan: GasPlan, cycle: GasCycle, preindustrial: number) {
+  const last = plan.lastConcentration;
+  const bounds = last >= 0 ? yearStartConcentrations(plan.concentration, last) : new Float64Array(0);
+  const start = last >= 0 ? plan.concentration[0] : preindustrial;
+  const naturalMt = gasSinkMt(cycle, start);
+  const emissionMt = new Float64Array(plan.mode.length);
+  let ppb = start;
+  return {
+    naturalMt,
+    emissionMt,
+    /** Steps year k; returns its annual mean (the given one in a concentration year). */
+    yearInto(k: number): number {
+      const diagnosed = k <= last;
+      const year = gasYear(cycle, ppb, naturalMt, diagnosed ? NaN : plan.emission[k], diagnosed ? bounds[k + 1] : NaN);
+      emissionMt[k] = year.emissionMt;
+      ppb = year.endPpb;
+      return diagnosed ? plan.concentration[k] : year.meanPpb;
+    },
+  };
+}
+
+/**
+ * Works out, year by year, whether a gas is driven by its concentration or its emissions, and
+ * checks that the pathway is usable: one form per year, concentration years before emission years.
+ */
+function planGas(pathway: Pathway, gas: Gas, preindustrial: number): GasPlan {
   const n = pathway.years.length;
   const { concentration: cCol, emission: eCol } = GASES[gas];
   const c = pathway.series[cCol];
@@ -345,41 +338,14 @@ function planGas(pathway: Pathway, gas: Gas, preindustrial: number, toModelUnits
     } else {
       if (firstEmission < 0) firstEmission = k;
       mode[k] = EMISSION;
-      emission[k] = toModelUnits(e![k]);
+      emission[k] = e![k];
     }
   }
   const concentration = c ? Float64Array.from(c) : new Float64Array(n).fill(NaN);
   return { gas, mode, concentration, emission, lastConcentration, given: true };
 }
 
-/** Concentration of the starting equilibrium: the first year's if given, else pre-industrial. */
-function startValue(plan: GasPlan, preindustrial: number): number {
-  return plan.mode[0] === CONCENTRATION ? plan.concentration[0] : preindustrial;
-}
-
-/** Mean rate of change of the concentration either side of concentration node j (one side at an end). */
-function nodeSlope(plan: GasPlan, j: number): number {
-  const c = plan.concentration;
-  const n = c.length;
-  const left = j > 0 ? c[j] - c[j - 1] : NaN;
-  const right = j < n - 1 && plan.mode[j + 1] === CONCENTRATION ? c[j + 1] - c[j] : NaN;
-  if (Number.isNaN(left)) return Number.isNaN(right) ? 0 : right;
-  return Number.isNaN(right) ? left : 0.5 * (left + right);
-}
-
-function emptyInput(): GasStepInput {
-  return { prescribed: true, slope: 0, emissionStart: 0, emissionEnd: 0 };
-}
-
-/** The driver of step k (node k to k+1): prescribed concentration when node k+1 has one. */
-function setStepInput(input: GasStepInput, plan: GasPlan, k: number, slopeUnits: number): void {
-  input.prescribed = plan.mode[k + 1] === CONCENTRATION;
-  input.slope = input.prescribed ? slopeUnits * (plan.concentration[k + 1] - plan.concentration[k]) : 0;
-  input.emissionStart = plan.emission[k];
-  input.emissionEnd = plan.emission[k + 1];
-}
-
-/** Total prescribed (non-greenhouse-gas) ERF at each node, W m-2, after checking it is finite. */
+/** Total prescribed (non-greenhouse-gas) ERF in each year, W m-2, after checking it is finite. */
 function prescribedForcing(pathway: Pathway, options: ForcingOptions): Float64Array {
   for (const column of FORCING_COLUMNS) {
     const series = pathway.series[column];
@@ -393,8 +359,8 @@ function prescribedForcing(pathway: Pathway, options: ForcingOptions): Float64Ar
   return forcingByAgent(pathway.years.length, { prescribed: pathway.series }, options).total;
 }
 
-/** Notes on how a gas was driven: diagnosed span, given span, the rates either side of the join. */
-function gasNotes(plan: GasPlan, years: Float64Array, format: (rate: number) => string): string[] {
+/** Notes on how a gas was driven: diagnosed span, given span, the annual totals either side of the join. */
+function gasNotes(plan: GasPlan, years: Float64Array, format: (total: number) => string): string[] {
   if (!plan.given) return [];
   const name = plan.gas.toUpperCase();
   const n = years.length;
@@ -404,7 +370,11 @@ function gasNotes(plan: GasPlan, years: Float64Array, format: (rate: number) => 
   if (last < n - 1) {
     notes.push(`${name} emissions as given ${years[last + 1]}-${years[n - 1]}`);
     if (last >= 0) {
-      notes.push(`${name} emissions at the join: ${format(plan.emission[last])} diagnosed for ${years[last]}, ${format(plan.emission[last + 1])} given for ${years[last + 1]}`);
+      const from = years[Math.max(0, last - JOIN_TREND_YEARS + 1)];
+      notes.push(
+        `${name} emissions at the join: ${format(plan.emission[last])} diagnosed for ${years[last]} (its growth taken as the ${from}-${years[last]} `
+          + `least-squares trend of the concentration), ${format(plan.emission[last + 1])} given for ${years[last + 1]}`,
+      );
     }
   }
   return notes;

@@ -1,4 +1,5 @@
 import { JOOS_2013 } from './co2-impulse-response.js';
+import { FITTED_CARBON_CYCLE } from './fitted-carbon-cycle.js';
 
 /**
  * The carbon-climate feedback on uptake of Millar et al. 2017 (ACP 17, 7213, eqs. 7-8 and Table 1):
@@ -7,7 +8,8 @@ import { JOOS_2013 } from './co2-impulse-response.js';
  *   iIRF100 = r0 + rC C_acc + rT T   (capped at `maxIrf100Yr`),
  * where C_acc is the cumulative uptake by land and ocean (Gt C) and T the surface warming (K), and
  * every box time scale of the Joos et al. 2013 response is multiplied by the alpha that gives that
- * iIRF100. Values from memory (not checked against the paper's table).
+ * iIRF100. Values from memory (not checked against the paper's table). The defaults warmcast runs
+ * with are {@link CARBON_CYCLE}.
  */
 export const MILLAR_2017 = {
   /** iIRF100 of the pre-industrial carbon cycle, yr. */
@@ -22,6 +24,28 @@ export const MILLAR_2017 = {
   horizonYr: 100,
 } as const;
 
+/** The three coefficients of the iIRF100 target, the carbon-cycle parameters a run or a member uses. */
+export interface CarbonCycleParams {
+  /** iIRF100 of the pre-industrial carbon cycle, r0, yr. */
+  r0Yr: number;
+  /** Growth of iIRF100 with cumulative land and ocean uptake, rC, yr per Gt C (>= 0). */
+  rUptakeYrPerGtc: number;
+  /** Growth of iIRF100 with surface warming, rT, yr per K (>= 0). */
+  rTemperatureYrPerK: number;
+}
+
+/**
+ * warmcast's default carbon cycle: r0 and rT of Millar et al. 2017, rC fitted by
+ * scripts/fit-carbon-cycle.ts so that the emissions diagnosed from the bundled concentration history
+ * match published totals (AR6 WG1 SPM 1850-2019, Global Carbon Budget 2010-2019; see
+ * src/carbon/README.md for why rC is the coefficient refitted).
+ */
+export const CARBON_CYCLE: CarbonCycleParams = {
+  r0Yr: MILLAR_2017.r0Yr,
+  rUptakeYrPerGtc: FITTED_CARBON_CYCLE.rUptakeYrPerGtc,
+  rTemperatureYrPerK: MILLAR_2017.rTemperatureYrPerK,
+};
+
 /**
  * Lower limit of iIRF100 used here, yr: a numerical guard, not part of the published formulation.
  * Box 0 of the Joos et al. 2013 response never decays, so iIRF100 cannot fall below a0 x 100 =
@@ -33,16 +57,17 @@ export const MILLAR_2017 = {
 const MIN_IRF100_YR = 25;
 
 /**
- * The iIRF100 target of Millar et al. 2017 for a state, yr, clamped to [25, 97] yr.
+ * The iIRF100 target of Millar et al. 2017 for a state, yr: s r0 + rC U + rT T, clamped to [25, 97] yr.
  *
- * @param uptakeGtc cumulative uptake by land and ocean since pre-industrial, Gt C
- * @param surfaceK surface warming since pre-industrial, K
+ * @param uptakeGtc cumulative uptake U by land and ocean since pre-industrial, Gt C
+ * @param surfaceK surface warming T since pre-industrial, K
+ * @param cycle the coefficients (default {@link CARBON_CYCLE})
+ * @param r0Scale multiplier s on r0 (an ensemble member's draw; default 1)
  * @example irf100Target(0, 0) // 32.4
  */
-export function irf100Target(uptakeGtc: number, surfaceK: number): number {
-  const m = MILLAR_2017;
-  const target = m.r0Yr + m.rUptakeYrPerGtc * uptakeGtc + m.rTemperatureYrPerK * surfaceK;
-  return Math.min(m.maxIrf100Yr, Math.max(MIN_IRF100_YR, target));
+export function irf100Target(uptakeGtc: number, surfaceK: number, cycle: CarbonCycleParams = CARBON_CYCLE, r0Scale = 1): number {
+  const target = r0Scale * cycle.r0Yr + cycle.rUptakeYrPerGtc * uptakeGtc + cycle.rTemperatureYrPerK * surfaceK;
+  return Math.min(MILLAR_2017.maxIrf100Yr, Math.max(MIN_IRF100_YR, target));
 }
 
 /**

@@ -150,12 +150,13 @@ function ensembleConfig(input: EnsembleInput, options: EnsembleOptions, source: 
   }
   const c = input.carbon;
   if (c) {
-    for (const [name, series] of Object.entries(c)) {
+    const perYear = { ...c.co2, ch4Ppb: c.ch4Ppb, n2oPpb: c.n2oPpb };
+    for (const [name, series] of Object.entries(perYear)) {
       if (typeof series !== 'number' && series.length !== n) throw new ConfigError(`carbon input ${name} must have one value per year (${n}), got ${series.length}`, 'carbon');
     }
   }
   const a = input.forcing.byAgent;
-  const carbonSeries = c ? [c.co2Ppm, c.co2EmissionGtcPerYr, Float64Array.of(c.co2StartPpm), c.ch4Ppb, c.n2oPpb] : [];
+  const carbonSeries = c ? [c.co2.givenPpm, c.co2.increaseGtc, c.co2.emissionGtc, Float64Array.of(c.co2.startPpm), c.ch4Ppb, c.n2oPpb] : [];
   return {
     scheme: source.scheme,
     sourceNotes: [...source.notes],

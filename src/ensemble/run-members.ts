@@ -1,22 +1,18 @@
-import { annualCarbonState, annualCarbonStepForIncreaseInto, annualCarbonStepInto, atmosphericGtc } from '../carbon/annual-carbon-step.js';
-import { GTC_PER_PPM } from '../carbon/units.js';
+import { annualCarbonState } from '../carbon/annual-carbon-step.js';
+import { co2YearInto, type Co2YearDrivers } from '../carbon/co2-year.js';
 import { emptyTwoBoxSteps, stepTwoBoxInto, twoBoxStepsInto, type TwoBoxSteps } from '../climate/two-box-step.js';
 import { FORCING_AGENTS, ghgForcingFunction, type ForcingAgent } from '../forcing/agents.js';
 import type { Co2Formula } from '../forcing/co2.js';
 import { forcingScaleKey, sliceMemberParameters, type MemberParameters } from './member-parameters.js';
 
 /**
- * What each member of an emission-driven ensemble needs to run its own carbon cycle, as plain data.
- * Node values on the ensemble's annual grid.
+ * What each member of an emission-driven ensemble needs to run its own carbon cycle, as plain data,
+ * one value per calendar year of the ensemble's grid.
  */
 export interface MemberCarbonTask {
-  /** CO2 concentration at nodes where it is given (the spliced history), ppm; NaN where emissions are. */
-  co2Ppm: Float64Array;
-  /** CO2 emission rate at nodes where it is given, Gt C yr-1; NaN where the concentration is. */
-  co2EmissionGtcPerYr: Float64Array;
-  /** CO2 of the starting equilibrium, ppm (the first node's, or pre-industrial when it is an emission node). */
-  co2StartPpm: number;
-  /** CH4 and N2O concentrations at every node, ppb (from the central run: they have no climate feedback). */
+  /** The CO2 drivers of each year (co2YearDrivers): record increases, then emission totals. */
+  co2: Co2YearDrivers;
+  /** CH4 and N2O annual means, ppb (from the central run: they have no climate feedback). */
   ch4Ppb: Float64Array;
   n2oPpb: Float64Array;
 }
@@ -125,13 +121,10 @@ function runBlock(task: MemberTask, block: MemberParameters, store: (k: number, 
 }
 
 /**
- * The year loop of emission-driven members. Year k -> k+1: each member's carbon cycle steps with its
- * warming at node k (annualCarbonStepInto; in concentration years annualCarbonStepForIncreaseInto,
- * which diagnoses the emission that reproduces the given concentration), its CO2, CH4 and N2O ERF at
- * node k+1 follow from its own CO2 (scaled by its scale_co2, scale_ch4, scale_n2o), then the two-box
- * step. Emission years use the mean of the node rates (the integral of emissions linear between
- * nodes); the year after the last concentration node uses the mean of the last diagnosed rate and
- * the first given one, as runEmissionDriven joins them.
+ * The year loop of emission-driven members. Year k: each member's carbon cycle takes the production
+ * step co2YearInto (the step runEmissionDriven takes) with its warming of year k - 1, giving its
+ * annual-mean CO2; its CO2, CH4 and N2O ERF of year k follow from its own CO2 (scaled by its
+ * scale_co2, scale_ch4, scale_n2o), then the two-box step from year k - 1 to year k.
  */
 function runWithCarbon(
   task: MemberTask,
@@ -141,7 +134,7 @@ function runWithCarbon(
 ): void {
   const carbon = task.carbon!;
   const m = block.count;
-  const n = carbon.co2Ppm.length;
+  const n = carbon.ch4Ppb.length;
   const v = block.values;
   const steps = blockSteps(block);
   const otherForcingInto = blockForcing(task, block, OWN_GASES);
@@ -149,36 +142,26 @@ function runWithCarbon(
   const irf100 = v.irf100_scale ?? ones;
   const [co2Scale, ch4Scale, n2oScale] = OWN_GASES.map((a) => v[forcingScaleKey(a)] ?? ones);
   const ghg = ghgForcingFunction({ co2Formula: task.co2Formula });
-  const { co2Ppm: given, co2EmissionGtcPerYr: emission, co2StartPpm, ch4Ppb, n2oPpb } = carbon;
+  const { co2: drivers, ch4Ppb, n2oPpb } = carbon;
   const states = Array.from({ length: m }, () => annualCarbonState());
-  const lastRate = new Float64Array(m);
-  const ppm = new Float64Array(m).fill(Number.isNaN(given[0]) ? co2StartPpm : given[0]);
-  const forcingInto = (k: number, out: Float64Array) => {
+  const ppm = new Float64Array(m);
+  let start = new Float64Array(m);
+  let end = new Float64Array(m);
+  const t = new Float64Array(m);
+  const d = new Float64Array(m);
+  // Year k's carbon step (with each member's warming of year k - 1, now in t), then its forcing.
+  const yearInto = (k: number, out: Float64Array) => {
+    for (let r = 0; r < m; r++) ppm[r] = co2YearInto(states[r], drivers, k, t[r], irf100[r]);
+    storeCo2?.(k, ppm);
     otherForcingInto(k, out);
     for (let r = 0; r < m; r++) {
       const f = ghg(ppm[r], ch4Ppb[k], n2oPpb[k]);
       out[r] += co2Scale[r] * f.co2 + ch4Scale[r] * f.ch4 + n2oScale[r] * f.n2o;
     }
   };
-  let start = new Float64Array(m);
-  let end = new Float64Array(m);
-  const t = new Float64Array(m);
-  const d = new Float64Array(m);
-  forcingInto(0, start);
-  storeCo2?.(0, ppm);
+  yearInto(0, start);
   for (let k = 0; k + 1 < n; k++) {
-    for (let r = 0; r < m; r++) {
-      if (!Number.isNaN(given[k + 1])) {
-        lastRate[r] = annualCarbonStepForIncreaseInto(states[r], t[r], irf100[r], GTC_PER_PPM * (given[k + 1] - given[k]));
-        ppm[r] = given[k + 1];
-      } else {
-        const rate = Number.isNaN(emission[k]) ? lastRate[r] : emission[k];
-        annualCarbonStepInto(states[r], t[r], irf100[r], 0.5 * (rate + emission[k + 1]));
-        ppm[r] = co2StartPpm + atmosphericGtc(states[r]) / GTC_PER_PPM;
-      }
-    }
-    storeCo2?.(k + 1, ppm);
-    forcingInto(k + 1, end);
+    yearInto(k + 1, end);
     stepTwoBoxInto(steps, start, end, t, d);
     store(k + 1, t);
     [start, end] = [end, start];

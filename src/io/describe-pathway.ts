@@ -1,5 +1,6 @@
 import { forcingColumnsNotGiven } from '../forcing/lumped-forcing.js';
 import { COLUMN_UNITS, GASES, PATHWAY_COLUMNS, type Gas, type Pathway } from '../pathway.js';
+import { dayOfYearName } from './iso-date-year.js';
 import type { ParsedPathway } from './parse-pathway.js';
 import { describeTimeSteps, formatDecimalYear, isAnnualGrid } from './time-steps.js';
 
@@ -28,7 +29,9 @@ export function describePathway(parsed: ParsedPathway, pathway: Pathway): string
     : `rows read: ${n} (lines ${parsed.rowLines[0]}-${parsed.rowLines[n - 1]})`);
   lines.push(parsed.timeColumn === 'year'
     ? 'time column: year'
-    : 'time column: date (ISO 8601; 1 or 2 July labels its whole year)');
+    : parsed.datesOnDay !== undefined
+      ? `time column: date (ISO 8601; every date on ${dayOfYearName(parsed.datesOnDay)}, so each names its calendar year)`
+      : 'time column: date (ISO 8601; 1 or 2 July labels its whole year)');
   lines.push(n === 1
     ? `year in file: ${formatDecimalYear(t[0])}`
     : `years in file: ${formatDecimalYear(t[0])} to ${formatDecimalYear(t[n - 1])}`);

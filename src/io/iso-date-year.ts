@@ -25,6 +25,10 @@ const REDUCED_PRECISION = /^[+-]?\d{4}(-?\d{2})?$|^\d{4}-?W\d{2}$/i;
  * A year, month or week alone (`2030`, `2030-07`, `2030-W27`) is refused: it names a span, not the
  * centre of one (write a `year` column instead).
  *
+ * This is the label of one date on its own. A file whose dates all fall on the same day of the year
+ * (all 1 January, say) names calendar years instead: parsePathway labels each row with its date's
+ * calendar year (commonDayOfDates; 2030-01-01 is the year 2030).
+ *
  * @param text - an ISO 8601 calendar, ordinal or week date, optionally with a time and offset
  * @returns `{ ok: true, year }` with the decimal year label, or `{ ok: false, reason }`
  * @example
@@ -46,6 +50,54 @@ export function isoDateToYear(text: string): IsoDateYear {
   const start = DateTime.utc(y, 1, 1).toMillis();
   const end = DateTime.utc(y + 1, 1, 1).toMillis();
   return { ok: true, year: y + (instant.toMillis() - start) / (end - start) - 0.5 };
+}
+
+/**
+ * The calendar day an ISO 8601 date names, as written (in its own offset; a time of day is ignored):
+ * its year and its month and day as `MM-DD`. Used to tell a file whose dates all fall on one day of
+ * the year, which names calendar years (toAnnual), from one whose dates vary within years.
+ *
+ * @param text - a date isoDateToYear accepts
+ * @returns the year and `MM-DD`, or undefined when the text is not such a date
+ * @example calendarDay('2030-01-01') // { year: 2030, monthDay: '01-01' }
+ */
+export function calendarDay(text: string): { year: number; monthDay: string } | undefined {
+  const trimmed = text.trim();
+  if (REDUCED_PRECISION.test(trimmed)) return undefined;
+  const written = DateTime.fromISO(trimmed, { zone: 'utc', setZone: true });
+  if (!written.isValid) return undefined;
+  return { year: written.year, monthDay: `${String(written.month).padStart(2, '0')}-${String(written.day).padStart(2, '0')}` };
+}
+
+/**
+ * The day of the year most of a file's dates fall on, how many do, and the first date that does not:
+ * when every date falls on it (and there are at least two), the dates name calendar years
+ * (2030-01-01 is the year 2030); when most but not all do, a date is probably mistyped.
+ *
+ * @param texts - the dates of a file's rows, each accepted by isoDateToYear
+ * @returns the most common day as `MM-DD` (the earliest row's on a tie), its count, each date's
+ *   calendar year, and the index of the first date on another day (-1 when all share it);
+ *   undefined for fewer than two dates
+ * @example commonDayOfDates(['2030-01-01', '2040-01-01']) // { monthDay: '01-01', count: 2, years: [2030, 2040], firstOther: -1 }
+ */
+export function commonDayOfDates(texts: readonly string[]): { monthDay: string; count: number; years: number[]; firstOther: number } | undefined {
+  if (texts.length < 2) return undefined;
+  const days = texts.map(calendarDay);
+  if (days.some((d) => d === undefined)) return undefined;
+  const counts = new Map<string, number>();
+  for (const d of days) counts.set(d!.monthDay, (counts.get(d!.monthDay) ?? 0) + 1);
+  let monthDay = days[0]!.monthDay;
+  for (const [day, count] of counts) if (count > counts.get(monthDay)!) monthDay = day;
+  return { monthDay, count: counts.get(monthDay)!, years: days.map((d) => d!.year), firstOther: days.findIndex((d) => d!.monthDay !== monthDay) };
+}
+
+/**
+ * `01-01` -> `1 January`.
+ * @example dayOfYearName('12-31') // '31 December'
+ */
+export function dayOfYearName(monthDay: string): string {
+  const [month, day] = monthDay.split('-').map(Number);
+  return `${day} ${MONTHS[month - 1]}`;
 }
 
 const MONTHS = ['January', 'February', 'March', 'April', 'May', 'June', 'July', 'August', 'September', 'October', 'November', 'December'];

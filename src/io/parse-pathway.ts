@@ -2,7 +2,7 @@ import Papa from 'papaparse';
 import { InputError, type InputProblem } from '../errors.js';
 import { LUMPED_PARTS } from '../forcing/lumped-forcing.js';
 import { GASES, LUMPED_FORCING_COLUMNS, PATHWAY_COLUMNS, type Gas, type PathwayColumn } from '../pathway.js';
-import { isoDateToYear } from './iso-date-year.js';
+import { commonDayOfDates, isoDateToYear } from './iso-date-year.js';
 import { nearestName } from './nearest-name.js';
 import { outOfBounds } from './value-bounds.js';
 
@@ -16,8 +16,18 @@ export interface ParsedPathway {
   metadata: Record<string, string>;
   /** Which time column the file uses. */
   timeColumn: 'year' | 'date';
-  /** Decimal year label of each row, strictly ascending (dates converted by isoDateToYear). */
+  /**
+   * Decimal year label of each row, strictly ascending: dates converted by isoDateToYear, or, when
+   * every date falls on the same day of the year, each date's calendar year (sameDayCalendarYears).
+   */
   times: Float64Array;
+  /** With dates all on one day of the year: that day as `MM-DD` (the rows are then calendar years). */
+  datesOnDay?: string;
+  /**
+   * With at least half of the dates (two or more) on one day of the year but not all: that day, how
+   * many, and the line of the first date on another day (toAnnual notes a probable typo).
+   */
+  datesMostlyOnDay?: { monthDay: string; count: number; otherLine: number };
   /** Data columns present, canonical lower-case names, one value per row in the column's unit. */
   columns: Partial<Record<PathwayColumn, Float64Array>>;
   /** 1-based physical line of each row in the file (comment and blank lines counted). */
@@ -109,6 +119,7 @@ export function parsePathway(text: string, file: string): ParsedPathway {
   let timeRole: Extract<CellRole, { kind: 'time' }> | undefined;
 
   const times: number[] = [];
+  const dateTexts: string[] = [];
   const rowLines: number[] = [];
   const values = new Map<PathwayColumn, number[]>();
   const lineOfTime = new Map<number, number>();
@@ -167,6 +178,7 @@ export function parsePathway(text: string, file: string): ParsedPathway {
       }
     }
     times.push(time);
+    if (timeRole) dateTexts.push(cells[roles.indexOf(timeRole)].trim());
 
     if (timeRole && Number.isFinite(time)) {
       const timeText = cells[roles.indexOf(timeRole)].trim();
@@ -233,12 +245,20 @@ export function parsePathway(text: string, file: string): ParsedPathway {
     const v = values.get(column);
     if (v) columns[column] = Float64Array.from(v);
   }
+  // Dates all on one day of the year name calendar years (DESIGN.md conventions; README).
+  const common = timeRole!.name === 'date' ? commonDayOfDates(dateTexts) : undefined;
+  const sameDay = common && common.firstOther < 0 ? common : undefined;
+  const mostly = common && !sameDay && common.count >= 2 && 2 * common.count >= dateTexts.length
+    ? { monthDay: common.monthDay, count: common.count, otherLine: rowLines[common.firstOther] }
+    : undefined;
   return {
     file,
     name: metadata.name || baseName(file),
     metadata,
     timeColumn: timeRole!.name,
-    times: Float64Array.from(times),
+    times: Float64Array.from(sameDay ? sameDay.years : times),
+    ...(sameDay ? { datesOnDay: sameDay.monthDay } : {}),
+    ...(mostly ? { datesMostlyOnDay: mostly } : {}),
     columns,
     rowLines: Int32Array.from(rowLines),
     headerLine,

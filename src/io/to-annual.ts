@@ -1,5 +1,6 @@
 import { InputError } from '../errors.js';
 import { PATHWAY_COLUMNS, type Pathway, type PathwayColumn } from '../pathway.js';
+import { dayOfYearName } from './iso-date-year.js';
 import type { ParsedPathway } from './parse-pathway.js';
 import { describeTimeSteps, formatStepLength, isAnnualGrid } from './time-steps.js';
 
@@ -12,7 +13,9 @@ import { describeTimeSteps, formatStepLength, isAnnualGrid } from './time-steps.
 const END_TOLERANCE_YEARS = 1 / 365;
 
 /**
- * Puts a parsed pathway on the annual grid: the whole years from ceil(first time) to floor(last time)
+ * Puts a parsed pathway on the annual grid. A `date` file whose dates all fall on one day of the year
+ * names calendar years (parsePathway labels them so; a note here says so). Then: the whole years
+ * from ceil(first time) to floor(last time)
  * (each end widened by one day, see above), every column interpolated linearly between the two
  * neighbouring rows. A year on a row takes the row's value exactly; an end year at most a day
  * outside the rows takes the end row's value. A file already on consecutive whole years is copied
@@ -56,6 +59,8 @@ export function toAnnual(parsed: ParsedPathway): Pathway {
   }
 
   const notes: string[] = [];
+  const sameDay = sameDayNote(parsed);
+  if (sameDay) notes.push(sameDay);
   if (n === 1) {
     if (!isAnnualGrid(t)) notes.push(`the single row lies within a day of the middle of ${firstYear} and gives that year's values`);
   } else if (!isAnnualGrid(t)) {
@@ -70,6 +75,25 @@ export function toAnnual(parsed: ParsedPathway): Pathway {
     metadata: { ...parsed.metadata },
     provenance: { source: parsed.file, notes },
   };
+}
+
+/**
+ * The note for a `date` file whose dates all fall on one day of the year (parsePathway then labels
+ * the rows with their calendar years), unless the day is 1 or 2 July, whose dates name their whole
+ * years anyway (isoDateToYear); or for one whose dates mostly do, where one date on another day is
+ * probably a typo that moves every row half a year.
+ */
+function sameDayNote(parsed: ParsedPathway): string | undefined {
+  const mostly = parsed.datesMostlyOnDay;
+  if (mostly && mostly.monthDay !== '07-01' && mostly.monthDay !== '07-02') {
+    return `${mostly.count} of the ${parsed.times.length} dates fall on ${dayOfYearName(mostly.monthDay)} but the date on line ${mostly.otherLine} does not, `
+      + 'so every date is read as the centre of an annual mean (a date on 1 January stands half a year before its year\'s middle); '
+      + `if the dates name calendar years, put all of them on ${dayOfYearName(mostly.monthDay)}`;
+  }
+  const day = parsed.datesOnDay;
+  if (day === undefined || day === '07-01' || day === '07-02') return undefined;
+  return `every date falls on ${dayOfYearName(day)}: each row is read as its calendar year (${parsed.times[0]}-${day} is the year ${parsed.times[0]}), `
+    + 'its emissions that year\'s total and its other values that year\'s means';
 }
 
 /**

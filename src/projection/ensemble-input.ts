@@ -1,4 +1,4 @@
-import { gtco2ToGtc } from '../carbon/units.js';
+import { co2YearDrivers } from '../carbon/co2-year.js';
 import type { EnsembleInput } from '../ensemble/run-ensemble.js';
 import type { ClimateParams } from '../climate/params.js';
 import { forcingByAgent } from '../forcing/agents.js';
@@ -34,22 +34,13 @@ export function ensembleInput(pathway: Pathway, params: ClimateParams, options: 
     gases = { co2Ppm: central.columns.co2_ppm, ch4Ppb: central.columns.ch4_ppb, n2oPpb: central.columns.n2o_ppb };
     const emissions = s[GASES.co2.emission];
     if (emissions) {
-      const given = s[GASES.co2.concentration];
-      const co2Ppm = new Float64Array(n).fill(NaN);
-      const co2EmissionGtcPerYr = new Float64Array(n).fill(NaN);
-      for (let k = 0; k < n; k++) {
-        if (given && Number.isFinite(given[k])) co2Ppm[k] = given[k];
-        else co2EmissionGtcPerYr[k] = gtco2ToGtc(emissions[k]);
-      }
       carbon = {
-        co2Ppm,
-        co2EmissionGtcPerYr,
-        co2StartPpm: Number.isNaN(co2Ppm[0]) ? PREINDUSTRIAL.co2Ppm : co2Ppm[0],
+        co2: co2YearDrivers(s[GASES.co2.concentration], emissions, PREINDUSTRIAL.co2Ppm),
         ch4Ppb: Float64Array.from(central.columns.ch4_ppb),
         n2oPpb: Float64Array.from(central.columns.n2o_ppb),
       };
       notes.push(
-        'emission-driven pathway: each member runs its own carbon cycle (Joos et al. 2013 boxes with the Millar et al. 2017 uptake feedback, stepped a year at a time with the feedback frozen over each year) ' +
+        'emission-driven pathway: each member runs its own carbon cycle (Joos et al. 2013 boxes with the Millar et al. 2017 uptake feedback, the same annual step as a single run) ' +
           'driven by its own warming and a sampled multiplier on the pre-industrial iIRF100 (median 1, 5-95 % 0.77-1.23, from the multi-model spread of Joos et al. 2013); ' +
           `CH4 and N2O concentrations come from one run with the central parameters (ECS ${params.ecsK.toFixed(2)} K, TCR ${params.tcrK.toFixed(2)} K), as they have no climate feedback in the model`,
       );

@@ -99,8 +99,8 @@ export function projectPathway(pathway: Pathway, options: ProjectionOptions): Pr
   const tolerances = options.tolerances ?? DEFAULT_TOLERANCES;
 
   if (EMISSION_COLUMNS.some((c) => s[c] !== undefined)) {
-    // Emission-driven: carbon boxes, gas burdens and temperatures advance together in one ODE system.
-    const r = runEmissionDriven(pathway, params, { forcing: forcingOptions, feedback: options.carbonFeedback ?? true, tolerances });
+    // Emission-driven: carbon boxes, gas burdens and temperatures advance together, a calendar year at a time.
+    const r = runEmissionDriven(pathway, params, { forcing: forcingOptions, feedback: options.carbonFeedback ?? true });
     const columns: Record<string, Float64Array> = {
       warming_k: rebase(years, r.surfaceK, baseline, pathway.name),
       deep_ocean_k: rebase(years, r.deepK, baseline, pathway.name),

@@ -6,7 +6,6 @@ import { loadHistory } from '../io/bundled-pathways.js';
 import type { Pathway } from '../pathway.js';
 import { withinRange, type PublishedCheck } from './published-check.js';
 
-const GTCO2_PER_GTC = 44.009 / 12.011;
 
 /** The default model's options for the emission-driven runs below (ECS 3 K, TCR 1.8 K, feedback on). */
 function defaults(): { params: ReturnType<typeof calibrate>; options: EmissionRunOptions } {
@@ -59,9 +58,19 @@ export const historicalEmissions: PublishedCheck = {
     const history = loadHistory();
     const { params, options } = defaults();
     const run = runEmissionDriven(history, params, options);
+    const at = (year: number) => year - history.years[0];
     let sum = 0;
-    for (let y = 1850; y <= 2019; y++) sum += run.co2EmissionsGtco2[y - history.years[0]];
-    return [withinRange('cumulative CO2 emissions 1850-2019 diagnosed from the history (carbon sinks)', 'IPCC AR6 WG1 SPM (from memory)', '2390 ± 240', sum, 2150, 2630, 'Gt CO2', 0)];
+    for (let y = 1850; y <= 2019; y++) sum += run.co2EmissionsGtco2[at(y)];
+    let recent = 0;
+    for (let y = 2010; y <= 2019; y++) recent += run.co2EmissionsGtco2[at(y)] / 10;
+    const uptake = run.carbonBudget.uptakeGtc;
+    const sink = (uptake[at(2019)] - uptake[at(2009)]) / 10;
+    const gcb = (parts: string) => `Global Carbon Budget 2010-2019, ${parts} (from memory)`;
+    return [
+      withinRange('cumulative CO2 emissions 1850-2019 diagnosed from the history (carbon sinks)', 'IPCC AR6 WG1 SPM (from memory)', '2390 ± 240', sum, 2150, 2630, 'Gt CO2', 0),
+      withinRange('mean CO2 emissions 2010-2019 diagnosed from the history', gcb('fossil 9.6 + land use 1.6 Gt C yr-1'), '41.0', recent, 38, 44, 'Gt CO2 yr-1', 1),
+      withinRange('land + ocean CO2 sink 2010-2019 (the model has no land/ocean split)', gcb('land 3.4 + ocean 2.5'), '5.9 ± 1.0', sink, 4.9, 6.9, 'Gt C yr-1', 2),
+    ];
   },
 };
 
@@ -96,7 +105,8 @@ export const zeroEmissionsCommitment: PublishedCheck = {
     const ramp = Float64Array.from({ length: n }, (_, t) => 278.3 * 1.01 ** t);
     const onePercent = runEmissionDriven(pathwayFrom1850({ co2_ppm: ramp }, n, '1pctCO2'), params, options);
     const emitted = onePercent.carbonBudget.emittedGtc;
-    const atStop = (k: number) => emitted[k] + onePercent.co2EmissionsGtco2[k] / GTCO2_PER_GTC / 2;
+    // The budget holds each calendar year's end: stop after the year that brings it closest to 1000 Pg C.
+    const atStop = (k: number) => emitted[k];
     let stop = 1;
     while (Math.abs(atStop(stop + 1) - 1000) < Math.abs(atStop(stop) - 1000)) stop++;
     const zero = runEmissionDriven(

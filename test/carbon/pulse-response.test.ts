@@ -13,9 +13,10 @@ function constantBackground(ppm: number, length: number): Pathway {
 }
 
 describe('co2PulseResponse', () => {
-  it('without the feedback equals the Joos et al. 2013 response smoothed by the triangular pulse (analytic)', () => {
-    // A unit triangle on [-1, 1] convolved with exp(-t/tau) gives exp(-t/tau) 2 tau^2 (cosh(1/tau) - 1)
-    // for t >= 1; the permanent share stays a0.
+  it('without the feedback equals the Joos et al. 2013 response to a year-long pulse, in annual means (analytic)', () => {
+    // The pulse is emitted evenly over its calendar year and the response read as annual means: two
+    // unit boxes convolved, a unit triangle on [-1, 1], which with exp(-t/tau) gives
+    // exp(-t/tau) 2 tau^2 (cosh(1/tau) - 1) for t >= 1; the permanent share stays a0.
     const r = co2PulseResponse(constantBackground(278.3, 301), 1760, params, { forcing, feedback: false });
     const t = r.yearsSincePulse.slice(1);
     const expected = t.map((time) => {
@@ -26,7 +27,7 @@ describe('co2PulseResponse', () => {
       }
       return f;
     });
-    // Integrator tolerance 1e-10 on a 100 Gt C pulse: 1e-7 is ample.
+    // Closed-form annual steps: rounding only (1e-7 is ample).
     expectAllClose(r.airborneFraction.slice(1), expected, 1e-7, 'airborne fraction');
   });
 

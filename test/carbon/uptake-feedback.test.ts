@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { integratedImpulseResponse, irf100Target, MILLAR_2017, uptakeTimescaleScaling } from '../../src/carbon/index.js';
+import { CARBON_CYCLE, integratedImpulseResponse, irf100Target, MILLAR_2017, uptakeTimescaleScaling } from '../../src/carbon/index.js';
 import { expectClose } from '../asserts.js';
 
 describe('irf100Target (Millar et al. 2017, eq. 7; coefficients from memory)', () => {
@@ -8,9 +8,15 @@ describe('irf100Target (Millar et al. 2017, eq. 7; coefficients from memory)', (
     expectClose(irf100Target(0, 0), 32.4, 1e-12);
   });
 
-  it('grows by 0.019 yr per Gt C of uptake and 4.165 yr per K of warming', () => {
-    expectClose(irf100Target(100, 0) - irf100Target(0, 0), 1.9, 1e-12);
+  it('with the published coefficients grows by 0.019 yr per Gt C of uptake and 4.165 yr per K of warming', () => {
+    expectClose(irf100Target(100, 0, MILLAR_2017) - irf100Target(0, 0, MILLAR_2017), 1.9, 1e-12);
+    expectClose(irf100Target(0, 1, MILLAR_2017) - irf100Target(0, 0, MILLAR_2017), 4.165, 1e-12);
+  });
+
+  it('with the defaults (CARBON_CYCLE) grows by the fitted rC per Gt C and the published rT per K; r0Scale multiplies r0 alone', () => {
+    expectClose(irf100Target(100, 0) - irf100Target(0, 0), 100 * CARBON_CYCLE.rUptakeYrPerGtc, 1e-12);
     expectClose(irf100Target(0, 1) - irf100Target(0, 0), 4.165, 1e-12);
+    expectClose(irf100Target(50, 0.5, CARBON_CYCLE, 1.2) - irf100Target(50, 0.5), 0.2 * 32.4, 1e-12);
   });
 
   it('is capped at 97 yr (Millar et al. 2017) and floored at 25 yr (numerical guard)', () => {

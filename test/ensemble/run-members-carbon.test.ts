@@ -1,11 +1,9 @@
 import { describe, expect, it } from 'vitest';
-import { annualCarbonState, annualCarbonStepForIncreaseInto, annualCarbonStepInto, atmosphericGtc } from '../../src/carbon/annual-carbon-step.js';
 import { calibrate } from '../../src/climate/calibrate.js';
-import { twoBoxPropagator } from '../climate/expm-propagator.js';
 import { AR6_SAMPLING, pointRange, runEnsemble, shardToJson, type EnsembleSampling } from '../../src/ensemble/index.js';
-import { ghgForcingFunction } from '../../src/forcing/agents.js';
 import { loadPathway } from '../../src/io/index.js';
 import { ensembleInput } from '../../src/projection/ensemble-input.js';
+import { projectPathway } from '../../src/projection/project-pathway.js';
 
 const params = calibrate();
 const pathway = loadPathway('swift-emissions');
@@ -15,41 +13,9 @@ const n = years.length;
 const at = (y: number) => y - years[0];
 const options = { seed: 11, thresholds: [1.5, 2], baseline: [1850, 1900] as const, keepMembers: true };
 
-/** Deterministic run written out from the parts: annual carbon step, AR6 forcing, the matrix-exponential propagator (oracle). */
+/** The single run's warming (runEmissionDriven, the same production carbon step as the members). */
 function deterministicWarming(): Float64Array {
-  const c = input.carbon!;
-  const a = input.forcing.byAgent;
-  const ghg = ghgForcingFunction({ co2Formula: 'ar6' });
-  const { phi, g0, g1 } = twoBoxPropagator(params);
-  const state = annualCarbonState();
-  const forcing = (k: number, ppm: number) => {
-    const f = ghg(ppm, c.ch4Ppb[k], c.n2oPpb[k]);
-    return f.co2 + f.ch4 + f.n2o + input.forcing.total[k] - a.co2[k] - a.ch4[k] - a.n2o[k];
-  };
-  const t = new Float64Array(n);
-  let d = 0;
-  let rate = 0;
-  let f0 = forcing(0, c.co2Ppm[0]);
-  for (let k = 0; k + 1 < n; k++) {
-    let ppm: number;
-    if (Number.isFinite(c.co2Ppm[k + 1])) {
-      rate = annualCarbonStepForIncreaseInto(state, t[k], 1, 2.124 * (c.co2Ppm[k + 1] - c.co2Ppm[k]));
-      ppm = c.co2Ppm[k + 1];
-    } else {
-      const e0 = Number.isFinite(c.co2EmissionGtcPerYr[k]) ? c.co2EmissionGtcPerYr[k] : rate;
-      annualCarbonStepInto(state, t[k], 1, 0.5 * (e0 + c.co2EmissionGtcPerYr[k + 1]));
-      ppm = c.co2StartPpm + atmosphericGtc(state) / 2.124;
-    }
-    const f1 = forcing(k + 1, ppm);
-    t[k + 1] = phi[0] * t[k] + phi[1] * d + g0[0] * f0 + g1[0] * (f1 - f0);
-    d = phi[2] * t[k] + phi[3] * d + g0[1] * f0 + g1[1] * (f1 - f0);
-    f0 = f1;
-  }
-  const b0 = at(1850);
-  let sum = 0;
-  for (let k = b0; k <= at(1900); k++) sum += t[k];
-  const mean = sum / (at(1900) - b0 + 1);
-  return t.map((v) => v - mean);
+  return projectPathway(pathway, { params }).columns.warming_k;
 }
 
 const central = (irf100Scale: EnsembleSampling['irf100Scale']): EnsembleSampling => ({
@@ -62,7 +28,7 @@ const central = (irf100Scale: EnsembleSampling['irf100Scale']): EnsembleSampling
 });
 
 describe('runEnsemble on an emission pathway', () => {
-  it('a member with the central climate and carbon multiplier 1 equals the annual-step deterministic run (to 1e-9 K)', async () => {
+  it('a member with the central climate and carbon multiplier 1 equals the single run (runEmissionDriven; to 1e-9 K)', async () => {
     const r = await runEnsemble(input, { ...options, members: 2, sampling: central(pointRange(1)) });
     const ref = deterministicWarming();
     for (let k = 0; k < n; k++) expect(Math.abs(r.members!.warmingK[k * 2] - ref[k])).toBeLessThan(1e-9);

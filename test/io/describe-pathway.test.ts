@@ -48,9 +48,18 @@ describe('describePathway', () => {
   });
 
   it('describePathway gives decimal years with at most two decimals (2025.5 to 2030.5, not 2030.499)', () => {
-    writeFileSync(join(dir, 'dated.csv'), 'date,co2_ppm\n2025-12-31,420\n2030-12-31,430\n');
+    // Dates on different days keep their place in the year (two dates on one day would name calendar years).
+    writeFileSync(join(dir, 'dated.csv'), 'date,co2_ppm\n2025-12-31,420\n2030-12-30,430\n');
     const { parsed, pathway } = readPathway(join(dir, 'dated.csv'), { pathwaysDir: dir });
     expect(describePathway(parsed, pathway)).toContain('years in file: 2025.5 to 2030.5');
+  });
+
+  it('describePathway of a file dated 31 December every year names calendar years', () => {
+    writeFileSync(join(dir, 'year-ends.csv'), 'date,co2_ppm\n2025-12-31,420\n2030-12-31,430\n');
+    const { parsed, pathway } = readPathway(join(dir, 'year-ends.csv'), { pathwaysDir: dir });
+    const lines = describePathway(parsed, pathway);
+    expect(lines).toContain('years in file: 2025 to 2030');
+    expect(lines).toContain('time column: date (ISO 8601; every date on 31 December, so each names its calendar year)');
   });
 
   it('describePathway says "no interpolation" and "splice: none" for an annual file read without splicing', () => {

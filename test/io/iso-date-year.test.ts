@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { isoDateToYear } from '../../src/io/iso-date-year.js';
+import { calendarDay, commonDayOfDates, isoDateToYear } from '../../src/io/iso-date-year.js';
 
 /**
  * Independent oracle: the same convention computed with the JavaScript Date's UTC day arithmetic
@@ -95,5 +95,23 @@ describe('isoDateToYear', () => {
     expect(reason('2030-07-01T25:00')).toMatch(/^2030-07-01T25:00 has a time of day or an offset out of range/);
     expect(reason('2050/07/01')).toBe('2050/07/01 cannot be read as one (write year-month-day with hyphens, such as 2030-07-01; a time of day follows a T)');
     for (const text of ['2030-02-30', '2040-13-01', '2050/07/01', '2030-07-01T12:61']) expect(reason(text)).not.toMatch(/you specified|of type|can't be parsed/);
+  });
+});
+
+describe('calendarDay', () => {
+  it('gives the year and MM-DD as written, in the date\'s own offset, ignoring the time of day', () => {
+    expect(calendarDay('2030-01-01')).toEqual({ year: 2030, monthDay: '01-01' });
+    expect(calendarDay('2030-12-31T23:30-08:00')).toEqual({ year: 2030, monthDay: '12-31' });
+    expect(calendarDay('2030-W01-2')).toEqual({ year: 2030, monthDay: '01-01' });
+    expect(calendarDay('2030-07')).toBeUndefined();
+    expect(calendarDay('2030-02-30')).toBeUndefined();
+  });
+});
+
+describe('commonDayOfDates', () => {
+  it('finds the shared day and the calendar years, the first date off it, and nothing for one date', () => {
+    expect(commonDayOfDates(['2030-01-01', '2040-01-01'])).toEqual({ monthDay: '01-01', count: 2, years: [2030, 2040], firstOther: -1 });
+    expect(commonDayOfDates(['2030-01-01', '2040-01-02', '2050-01-01'])).toEqual({ monthDay: '01-01', count: 2, years: [2030, 2040, 2050], firstOther: 1 });
+    expect(commonDayOfDates(['2030-01-01'])).toBeUndefined();
   });
 });

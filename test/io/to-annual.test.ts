@@ -150,3 +150,38 @@ describe('toAnnual of rows less than a year apart', () => {
     expect(p.provenance.notes.filter((n) => n.includes('less than a year') || n.includes('under 0.9'))).toEqual([]);
   });
 });
+
+describe('toAnnual with dates all on one day of the year (calendar years)', () => {
+  it('1 January dates land in their own year, to the last row, with a note', () => {
+    const p = toAnnual(parsePathway('date,co2_gtco2\n2030-01-01,40\n2040-01-01,30\n2110-01-01,0\n', 'jan.csv'));
+    expect([p.years[0], p.years[p.years.length - 1]]).toEqual([2030, 2110]);
+    expect(p.series.co2_gtco2![10]).toBe(30);
+    expect(p.provenance.notes[0]).toBe(
+      'every date falls on 1 January: each row is read as its calendar year (2030-01-01 is the year 2030), its emissions that year\'s total and its other values that year\'s means',
+    );
+  });
+
+  it('31 December dates (with a time of day and an offset) name their calendar year as written', () => {
+    const p = toAnnual(parsePathway('date,co2_ppm\n2030-12-31T23:00+05:00,440\n2031-12-31T23:00+05:00,442\n', 'dec.csv'));
+    expect(Array.from(p.years)).toEqual([2030, 2031]);
+    expect(p.provenance.notes[0]).toMatch(/^every date falls on 31 December/);
+  });
+
+  it('mid-year dates need no note (they already name their years), and a single dated row keeps its own label', () => {
+    expect(toAnnual(awkward('dates.csv')).provenance.notes).toEqual([]);
+    expect(() => toAnnual(parsePathway('date,co2_ppm\n2030-01-01,440\n', 'one.csv'))).toThrow(InputError);
+  });
+});
+
+describe('toAnnual with dates mostly on one day of the year', () => {
+  it('notes the date that breaks the pattern (a probable typo) and keeps every date as the centre of an annual mean', () => {
+    const parsed = parsePathway('date,co2_gtco2\n2030-01-01,40\n2040-01-02,30\n2050-01-01,20\n', 'typo.csv');
+    const p = toAnnual(parsed);
+    expect(parsed.datesOnDay).toBeUndefined();
+    expect(p.years[0]).toBe(2030); // 2029.5014 rounds up to its first whole year
+    expect(p.provenance.notes[0]).toBe(
+      '2 of the 3 dates fall on 1 January but the date on line 3 does not, so every date is read as the centre of an annual mean '
+        + "(a date on 1 January stands half a year before its year's middle); if the dates name calendar years, put all of them on 1 January",
+    );
+  });
+});

@@ -58,8 +58,12 @@ describe('projectPathway', () => {
     expect(emissions.carbon!.surfaceK[0]).toBe(0);
     expect(emissions.carbon!.deepK[0]).toBe(0);
     expect(note).toContain(`whatever that year's forcing (${emissions.columns.forcing_wm2[0].toFixed(2)} W m-2)`);
-    // The values the note names are the run's own first-year concentrations (AR6 1750 values, forcing/constants.ts).
-    expect(note).toContain(`(CO2 ${emissions.columns.co2_ppm[0]} ppm, N2O ${emissions.columns.n2o_ppb[0]} ppb)`);
+    // The values the note names are the run's own start, 1 January 2030 (AR6 1750 values,
+    // forcing/constants.ts): the first year's annual mean adds half of that year's emissions to them.
+    expect(note).toContain('(CO2 278.3 ppm, N2O 270.1 ppb)');
+    const firstYearMean = emissions.columns.co2_ppm[0];
+    expect(firstYearMean).toBeGreaterThan(278.3);
+    expect(firstYearMean).toBeLessThan(278.3 + 35 / 3.664 / 2.124 / 2);
     expect(emissions.columns.ch4_ppb[0]).toBe(1900);
 
     const concentrations = projectPathway(pathway(later, { co2_ppm: new Float64Array(n).fill(440) }), { params, baseline: [2030, 2040] });
