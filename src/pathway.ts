@@ -1,3 +1,5 @@
+import { HALOGEN_COLUMNS } from './carbon/halogen-species.js';
+
 /**
  * The pathway data model shared by every layer: an annual grid of years with named series.
  * Readers in `io/` build it; physics in `carbon/`, `forcing/` and `climate/` consume it.
@@ -33,12 +35,28 @@ export const AGENT_FORCING_COLUMNS = [
 export const LUMPED_FORCING_COLUMNS = ['aerosol_wm2', 'other_wm2'] as const;
 /** Every prescribed forcing column a pathway may hold, W m-2. */
 export const FORCING_COLUMNS = [...AGENT_FORCING_COLUMNS, ...LUMPED_FORCING_COLUMNS] as const;
+/**
+ * Emissions of the short-lived aerosol and ozone precursors, Mt per year: SO2, black and organic
+ * carbon, NH3, NOx (as NO2), CO, non-methane VOC (anthropogenic, on top of the 1750 background).
+ */
+export const PRECURSOR_COLUMNS = ['so2_mt', 'bc_mt', 'oc_mt', 'nh3_mt', 'nox_mt', 'co_mt', 'nmvoc_mt'] as const;
+/** Halogenated-gas emissions, kt per year, one per gas of HALOGEN_SPECIES (`hfc134a_kt`). */
+export const HALOGEN_EMISSION_COLUMNS = HALOGEN_COLUMNS.map((c) => `${c}_kt` as const);
+/** Halogenated-gas concentrations, ppt, one per gas of HALOGEN_SPECIES (`hfc134a_ppt`). */
+export const HALOGEN_CONCENTRATION_COLUMNS = HALOGEN_COLUMNS.map((c) => `${c}_ppt` as const);
+/**
+ * Columns of the short-lived precursors and halogenated gases (resolveEmissionForcing turns them into
+ * forcing), including `fgas_mtco2e`: HFC, PFC, SF6 and NF3 emissions together, Mt CO2-eq per year
+ * weighted by the AR6 GWP100.
+ */
+export const SPECIES_COLUMNS = [...PRECURSOR_COLUMNS, 'fgas_mtco2e', ...HALOGEN_EMISSION_COLUMNS, ...HALOGEN_CONCENTRATION_COLUMNS] as const;
 /** Every data column a pathway file may hold, in canonical order. */
-export const PATHWAY_COLUMNS = [...CONCENTRATION_COLUMNS, ...EMISSION_COLUMNS, ...FORCING_COLUMNS] as const;
+export const PATHWAY_COLUMNS = [...CONCENTRATION_COLUMNS, ...EMISSION_COLUMNS, ...FORCING_COLUMNS, ...SPECIES_COLUMNS] as const;
 
 export type ConcentrationColumn = (typeof CONCENTRATION_COLUMNS)[number];
 export type EmissionColumn = (typeof EMISSION_COLUMNS)[number];
 export type ForcingColumn = (typeof FORCING_COLUMNS)[number];
+export type SpeciesColumn = (typeof SPECIES_COLUMNS)[number];
 export type AgentForcingColumn = (typeof AGENT_FORCING_COLUMNS)[number];
 export type LumpedForcingColumn = (typeof LUMPED_FORCING_COLUMNS)[number];
 export type PathwayColumn = (typeof PATHWAY_COLUMNS)[number];
@@ -69,6 +87,18 @@ export const COLUMN_UNITS: Record<PathwayColumn, string> = {
   land_use_wm2: 'W m-2',
   solar_wm2: 'W m-2',
   volcanic_wm2: 'W m-2',
+  so2_mt: 'Mt SO2 yr-1',
+  bc_mt: 'Mt BC yr-1',
+  oc_mt: 'Mt OC yr-1',
+  nh3_mt: 'Mt NH3 yr-1',
+  nox_mt: 'Mt NO2 yr-1',
+  co_mt: 'Mt CO yr-1',
+  nmvoc_mt: 'Mt NMVOC yr-1',
+  fgas_mtco2e: 'Mt CO2-eq yr-1 (AR6 GWP100)',
+  ...(Object.fromEntries([
+    ...HALOGEN_EMISSION_COLUMNS.map((c) => [c, 'kt yr-1']),
+    ...HALOGEN_CONCENTRATION_COLUMNS.map((c) => [c, 'ppt']),
+  ]) as Record<(typeof HALOGEN_EMISSION_COLUMNS)[number] | (typeof HALOGEN_CONCENTRATION_COLUMNS)[number], string>),
   aerosol_wm2: 'W m-2',
   other_wm2: 'W m-2',
 };
@@ -83,6 +113,11 @@ export interface PathwayProvenance {
   historyLastYear?: number;
   /** Human-readable notes: interpolation, splice, columns held at pre-industrial values. */
   notes: string[];
+  /**
+   * Assumptions that fill what the file does not give (species following a chosen rule, species
+   * held at present-day emissions): shown in the terminal's headline block and recorded in every file.
+   */
+  assumptions?: string[];
 }
 
 /**
@@ -99,4 +134,9 @@ export interface Pathway {
   /** `# key: value` metadata lines of the file. */
   metadata: Record<string, string>;
   provenance: PathwayProvenance;
+  /**
+   * Set when forcing was computed from emissions (resolveEmissionForcing): from `year` on, ozone and
+   * stratospheric water vapour also respond to the run's CH4 (and N2O) relative to the year before.
+   */
+  responsiveFrom?: { year: number; ozone: boolean; stratH2o: boolean };
 }

@@ -18,6 +18,8 @@ export interface BatchSettings {
   baseline: [number, number];
   co2Formula: string;
   splice: boolean;
+  /** The rule for emissions a scenario does not give (`--absent-emissions`), null when none was given. */
+  absentEmissions?: unknown;
 }
 
 /** One shard of a batch: the scenarios [from, to) of the table's slice `index` of `count`. */

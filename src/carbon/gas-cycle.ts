@@ -60,6 +60,26 @@ export function withConstantLifetime(cycle: GasCycle): GasCycle {
 }
 
 /**
+ * CH4 after the join of an emission pathway with the concentration history: the total lifetime
+ * 9.1 yr at the join's concentration, lengthening with the burden from there with the exponent of
+ * {@link CH4_CYCLE}, so that a change in emissions decays with the perturbation lifetime of 11.8 yr
+ * (IPCC AR6 WG1 Table 7.15; Prather et al. 2012 "feedback factor" 11.8 / 9.1 = 1.30, applied to
+ * perturbations about the present-day state). Before the join the history's concentrations are
+ * followed with the constant 9.1 yr lifetime, which chemistry-climate models find nearly unchanged
+ * since pre-industrial times because rising NOx and CO offset the OH loss from more CH4 (Naik et al.
+ * 2013, ACP 13, 5277; from memory): the natural emissions implied in 1750 (220 Mt CH4 yr-1) and the
+ * anthropogenic emissions diagnosed for 2019 (373 Mt CH4 yr-1, inventories about 360-380) stay those
+ * of the constant lifetime, and the sink is continuous at the join.
+ *
+ * @param joinPpb the concentration at the join (the last history year), ppb
+ * @param lifetimeScale multiplier on the total lifetime (an ensemble's CH4 lifetime scale; default 1)
+ * @example gasLifetimeYr(ch4CycleFromJoin(1930), 1930) // 9.1
+ */
+export function ch4CycleFromJoin(joinPpb: number, lifetimeScale = 1): GasCycle {
+  return { ...CH4_CYCLE, lifetimeYr: CH4_CYCLE.lifetimeYr * lifetimeScale, referencePpb: joinPpb };
+}
+
+/**
  * Atmospheric lifetime at a concentration, yr: tau_ref (c / c_ref)^s.
  * @example gasLifetimeYr(CH4_CYCLE, 1800) // 9.1
  */

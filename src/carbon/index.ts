@@ -11,6 +11,7 @@ export { diagnoseEmissions } from './diagnose-emissions.js';
 export type { DiagnosedEmissions } from './diagnose-emissions.js';
 export {
   CH4_CYCLE,
+  ch4CycleFromJoin,
   gasEmissionsForTendency,
   gasLifetimeYr,
   gasSinkMt,
@@ -50,3 +51,7 @@ export { CARBON_TARGETS, carbonRecordFigures, fitCarbonCycle } from './fit-carbo
 export type { CarbonCycleFit, CarbonRecordFigures } from './fit-carbon-cycle.js';
 export { JOIN_TREND_YEARS, yearStartConcentrations } from './year-start-concentrations.js';
 export type { AnnualCarbonState } from './annual-carbon-step.js';
+export { halogenAnomalyPpt, halogenEmissionsKt, halogenForcingWm2, ktPerPpt } from './halogen-cycle.js';
+export { HALOGEN_PRESENT_DAY, HALOGEN_PRESENT_DAY_YEAR } from './halogen-present-day.js';
+export { HALOGEN_COLUMNS, HALOGEN_SPECIES } from './halogen-species.js';
+export type { HalogenColumn, HalogenSpecies } from './halogen-species.js';

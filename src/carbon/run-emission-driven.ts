@@ -4,11 +4,12 @@ import { topOfAtmosphereImbalance } from '../climate/two-box.js';
 import { ConfigError, NumericalError } from '../errors.js';
 import { forcingByAgent, ghgForcingFunction, type ForcingOptions, type ForcingSeries } from '../forcing/agents.js';
 import { PREINDUSTRIAL } from '../forcing/constants.js';
+import { chemistryAnchor, methaneChemistryWm2 } from '../forcing/methane-chemistry.js';
 import { FORCING_COLUMNS, GASES, type Gas, type Pathway } from '../pathway.js';
 import { annualCarbonState, atmosphericGtc } from './annual-carbon-step.js';
 import { gasYear } from './annual-gas-step.js';
 import { co2YearDrivers, co2YearInto } from './co2-year.js';
-import { CH4_CYCLE, gasSinkMt, N2O_CYCLE, withConstantLifetime, type GasCycle } from './gas-cycle.js';
+import { CH4_CYCLE, ch4CycleFromJoin, gasSinkMt, N2O_CYCLE, withConstantLifetime, type GasCycle } from './gas-cycle.js';
 import { GTC_PER_PPM, gtcToGtco2 } from './units.js';
 import { CARBON_CYCLE, type CarbonCycleParams } from './uptake-feedback.js';
 import { JOIN_TREND_YEARS, yearStartConcentrations } from './year-start-concentrations.js';
@@ -22,11 +23,16 @@ export interface EmissionRunOptions {
   /** iIRF100 coefficients of the carbon cycle. Default {@link CARBON_CYCLE} (fitted by scripts/fit-carbon-cycle.ts). */
   carbonCycle?: CarbonCycleParams;
   /**
-   * CH4 lifetime lengthening with the burden (perturbation lifetime 11.8 yr, Prather et al. 2012 /
-   * AR6). Default false: a constant 9.1 yr total lifetime, which with natural emissions implied by
-   * the 1750 steady state reproduces present-day anthropogenic inventories (see src/carbon/README.md).
+   * CH4 lifetime. `join` (default): the constant 9.1 yr total lifetime while the record is followed,
+   * then lengthening with the burden from the join's concentration, so that a change in emissions
+   * decays with the 11.8 yr perturbation lifetime (ch4CycleFromJoin; Prather et al. 2012, AR6 Table
+   * 7.15); a run with no CH4 record (emissions from its first year) has no join and keeps 9.1 yr. `burden`: lengthening with the burden from 1750 on (the natural emissions implied in 1750
+   * are then 271 Mt CH4 yr-1 and the 2019 anthropogenic emissions diagnosed 15 % below inventories).
+   * `constant`: 9.1 yr throughout (a change in emissions then decays with 9.1 yr). See src/carbon/README.md.
    */
-  ch4LifetimeFeedback?: boolean;
+  ch4Lifetime?: 'join' | 'burden' | 'constant';
+  /** Multiplier on the CH4 total lifetime (an ensemble member's CH4 lifetime scale). Default 1. */
+  ch4LifetimeScale?: number;
 }
 
 /** Cumulative CO2 bookkeeping since the start of the run, Gt C at the end of each calendar year. */
@@ -145,13 +151,18 @@ export function runEmissionDriven(pathway: Pathway, params: ClimateParams, optio
   const years = pathway.years;
   const n = years.length;
   const feedback = options.feedback ?? true;
-  const ch4Cycle = options.ch4LifetimeFeedback ? CH4_CYCLE : withConstantLifetime(CH4_CYCLE);
+  const ch4Lifetime = options.ch4Lifetime ?? 'join';
+  const ch4Scale = options.ch4LifetimeScale ?? 1;
+  const ch4Base = { ...CH4_CYCLE, lifetimeYr: CH4_CYCLE.lifetimeYr * ch4Scale };
+  const ch4Cycle = ch4Lifetime === 'burden' ? ch4Base : withConstantLifetime(ch4Base);
+  const ch4AfterJoin = ch4Lifetime === 'join' ? (joinPpb: number) => ch4CycleFromJoin(joinPpb, ch4Scale) : undefined;
   const plans = {
     co2: planGas(pathway, 'co2', PREINDUSTRIAL.co2Ppm),
     ch4: planGas(pathway, 'ch4', PREINDUSTRIAL.ch4Ppb),
     n2o: planGas(pathway, 'n2o', PREINDUSTRIAL.n2oPpb),
   };
   const other = prescribedForcing(pathway, options.forcing);
+  const chemistry = chemistryAnchor(years, pathway.responsiveFrom);
   const ghg = ghgForcingFunction(options.forcing);
 
   const co2Drivers = co2YearDrivers(
@@ -160,7 +171,7 @@ export function runEmissionDriven(pathway: Pathway, params: ClimateParams, optio
     PREINDUSTRIAL.co2Ppm,
   );
   const gases = {
-    ch4: gasDrivers(plans.ch4, ch4Cycle, PREINDUSTRIAL.ch4Ppb),
+    ch4: gasDrivers(plans.ch4, ch4Cycle, PREINDUSTRIAL.ch4Ppb, ch4AfterJoin),
     n2o: gasDrivers(plans.n2o, N2O_CYCLE, PREINDUSTRIAL.n2oPpb),
   };
   const natural = { ch4: gases.ch4.naturalMt, n2o: gases.n2o.naturalMt };
@@ -191,6 +202,12 @@ export function runEmissionDriven(pathway: Pathway, params: ClimateParams, optio
     n2oPpb[k] = gases.n2o.yearInto(k);
     const f = ghg(co2Ppm[k], ch4Ppb[k], n2oPpb[k]);
     totalWm2[k] = f.co2 + f.ch4 + f.n2o + other[k];
+    if (chemistry && k >= chemistry.fromIndex) {
+      // Ozone and strat. H2O follow the run's CH4 and N2O from the join (forcingByAgent adds the same).
+      const r = chemistry.refIndex;
+      const c = methaneChemistryWm2(ch4Ppb[k], n2oPpb[k], ch4Ppb[r], n2oPpb[r]);
+      totalWm2[k] += (chemistry.ozone ? c.ozone : 0) + (chemistry.stratH2o ? c.stratH2o : 0);
+    }
     // The one two-box step (climate/two-box-step.ts), forcing linear between the years' values.
     if (k > 0) stepTwoBoxInto(steps, totalWm2.subarray(k - 1, k), totalWm2.subarray(k, k + 1), t1, d1);
     const t = t1[0];
@@ -209,7 +226,7 @@ export function runEmissionDriven(pathway: Pathway, params: ClimateParams, optio
     for (let k = 0; k <= plan.lastConcentration; k++) plan.emission[k] = gases[gas].emissionMt[k];
   }
 
-  const forcing = forcingByAgent(n, { co2Ppm, ch4Ppb, n2oPpb, prescribed: pathway.series }, options.forcing);
+  const forcing = forcingByAgent(n, { co2Ppm, ch4Ppb, n2oPpb, prescribed: pathway.series, chemistry }, options.forcing);
   const imbalanceWm2 = new Float64Array(n);
   for (let k = 0; k < n; k++) imbalanceWm2[k] = topOfAtmosphereImbalance(params, forcing.total[k], surfaceK[k], deepK[k]);
 
@@ -246,7 +263,7 @@ export function runEmissionDriven(pathway: Pathway, params: ClimateParams, optio
     ...gasNotes(plans.n2o, years, (v) => `${v.toFixed(2)} Mt N2O`),
   ];
   if (plans.ch4.lastConcentration < n - 1) {
-    notes.push(`CH4 natural emissions ${natural.ch4.toFixed(1)} Mt CH4 yr-1 (implied by the steady state at the start); lifetime ${options.ch4LifetimeFeedback ? 'lengthening with the burden (11.8 yr perturbation lifetime)' : 'constant 9.1 yr'}`);
+    notes.push(`CH4 natural emissions ${natural.ch4.toFixed(1)} Mt CH4 yr-1 (implied by the steady state at the start); lifetime ${{ join: 'constant 9.1 yr to the join, then lengthening with the burden from there (a change in emissions decays with the 11.8 yr perturbation lifetime)', burden: 'lengthening with the burden from the start (11.8 yr perturbation lifetime at 1800 ppb)', constant: 'constant 9.1 yr' }[ch4Lifetime]}${ch4Scale === 1 ? '' : ` x ${ch4Scale}`}`);
   }
   if (plans.n2o.lastConcentration < n - 1) notes.push(`N2O natural emissions ${natural.n2o.toFixed(2)} Mt N2O yr-1 (implied by the steady state at the start)`);
 
@@ -276,10 +293,13 @@ export function runEmissionDriven(pathway: Pathway, params: ClimateParams, optio
 /**
  * The year-by-year stepping of CH4 or N2O for a plan: concentration years diagnose the emission total
  * that moves the burden between 1 January concentrations (yearStartConcentrations), emission years
- * take the given totals (gasYear).
+ * take the given totals (gasYear), with the cycle `afterJoin` makes of the concentration at the join
+ * when given (CH4: ch4CycleFromJoin).
  */
-function gasDrivers(plan: GasPlan, cycle: GasCycle, preindustrial: number) {
+function gasDrivers(plan: GasPlan, cycle: GasCycle, preindustrial: number, afterJoin?: (joinPpb: number) => GasCycle) {
   const last = plan.lastConcentration;
+  // The cycle of the emission years: `afterJoin` of the 1 January concentration of the first one.
+  let emissionCycle: GasCycle | undefined;
   const bounds = last >= 0 ? yearStartConcentrations(plan.concentration, last) : new Float64Array(0);
   const start = last >= 0 ? plan.concentration[0] : preindustrial;
   const naturalMt = gasSinkMt(cycle, start);
@@ -291,7 +311,10 @@ function gasDrivers(plan: GasPlan, cycle: GasCycle, preindustrial: number) {
     /** Steps year k; returns its annual mean (the given one in a concentration year). */
     yearInto(k: number): number {
       const diagnosed = k <= last;
-      const year = gasYear(cycle, ppb, naturalMt, diagnosed ? NaN : plan.emission[k], diagnosed ? bounds[k + 1] : NaN);
+      // Without a record there is no join: the whole run keeps `cycle`, so that emissions diagnosed from a
+      // record and run forward from the start reproduce it.
+      if (!diagnosed && emissionCycle === undefined) emissionCycle = afterJoin && last >= 0 ? afterJoin(ppb) : cycle;
+      const year = gasYear(diagnosed ? cycle : emissionCycle!, ppb, naturalMt, diagnosed ? NaN : plan.emission[k], diagnosed ? bounds[k + 1] : NaN);
       emissionMt[k] = year.emissionMt;
       ppb = year.endPpb;
       return diagnosed ? plan.concentration[k] : year.meanPpb;

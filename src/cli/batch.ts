@@ -16,7 +16,8 @@ import { bundledPathwaysDir, formatCsv, formatJson, formatMarkdown, writeFilesAt
 import { plainTable, standardCautions } from '../report/index.js';
 import type { CliIo } from './cli-io.js';
 import { notesAndCautions } from './notes-and-cautions.js';
-import { baselineOption, pathwayArg, thresholdsOption, wholeNumberOption } from './options.js';
+import { absentEmissionsOption, baselineOption, pathwayArg, thresholdsOption, wholeNumberOption } from './options.js';
+import type { AbsentEmissionsRule } from '../forcing/absent-emissions.js';
 import { announceWritten, tableRenderers, writeOutput } from './output.js';
 import { progressBar } from './progress.js';
 import { buildProvenance, sha256File, type Provenance } from './provenance.js';
@@ -42,6 +43,7 @@ interface BatchOptions {
   shard?: { index: number; count: number };
   workers?: number;
   splice: boolean;
+  absentEmissions?: AbsentEmissionsRule;
 }
 
 function shardOption(text: string): { index: number; count: number } {
@@ -63,6 +65,7 @@ export function batchCommand(io: CliIo): Command {
     .option('--out-dir <dir>', 'also write each scenario\'s yearly warming percentiles and probabilities to DIR/<model>--<scenario>.csv (+ .meta.json)')
     .option('--shard <K/N>', 'assess only the K-th of N equal slices of the scenarios and write a shard file (--out NAME.json); combine with `warmcast merge`', shardOption)
     .option('--workers <count>', 'threads (default one per core; the output does not depend on it)', wholeNumberOption('--workers', 1))
+    .addOption(absentEmissionsOption())
     .option('--no-splice', 'do not splice scenarios onto the bundled history')
     .addOption(new Option('--co2-formula <name>', 'CO2 forcing: ar6 (Meinshausen et al. 2020 + AR6 adjustment) or log (Myhre et al. 1998)').choices(['ar6', 'log']).default('ar6', 'ar6'))
     .addHelpText(
@@ -98,6 +101,7 @@ export function batchCommand(io: CliIo): Command {
         baseline: opts.baseline,
         co2Formula: params.co2Formula,
         splice: opts.splice,
+        absentEmissions: opts.absentEmissions ?? null,
       };
       const inputs = [path, join(bundledPathwaysDir(), 'history.csv')];
       let ensembleNotes: string[] = [];
@@ -108,7 +112,7 @@ export function batchCommand(io: CliIo): Command {
         seed: opts.seed,
         thresholds,
         baseline: opts.baseline,
-        load: { splice: opts.splice },
+        load: { splice: opts.splice, absentEmissions: opts.absentEmissions },
         threads: opts.workers ?? availableParallelism(),
         onProgress: progressBar(io, 'scenarios', 1),
         onYearly: (index, t, notes, runNotes) => {

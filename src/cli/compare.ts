@@ -1,3 +1,4 @@
+import type { AbsentEmissionsRule } from '../forcing/absent-emissions.js';
 import { Command } from 'commander';
 import { ConfigError } from '../errors.js';
 import { formatCsv } from '../io/index.js';
@@ -7,7 +8,7 @@ import { ensembleInput, projectPathway } from '../projection/index.js';
 import { comparisonCharts, comparisonHtml, comparisonJson, comparisonLongTable, comparisonSummary, comparisonMarkdown, comparisonText, comparisonUncertainty, scopedNotes, standardCautions, thresholdBaselineNote, type ScopedNote } from '../report/index.js';
 import type { CliIo } from './cli-io.js';
 import { addScenarioOptions, readPathwayArgs, type ScenarioOptions } from './scenario-options.js';
-import { addModelOptions, baselineOption, type ModelOptions, numberListOption, resolveModelParams, thresholdsOption, wholeNumberOption, yearOption } from './options.js';
+import { addModelOptions, baselineOption, type ModelOptions, numberListOption, resolveModelParams, thresholdsOption, wholeNumberOption, yearOption, absentEmissionsOption } from './options.js';
 import { notesAndCautions } from './notes-and-cautions.js';
 import { announceWritten, pathwayInputs, writeOutput } from './output.js';
 import { ensembleParameters } from './provenance.js';
@@ -21,6 +22,7 @@ interface CompareOptions extends ModelOptions, ScenarioOptions {
   thresholds: number[];
   baseline: [number, number];
   splice: boolean;
+  absentEmissions?: AbsentEmissionsRule;
   chart: boolean;
   carbonFeedback: boolean;
   from?: number;
@@ -35,6 +37,7 @@ export function compareCommand(io: CliIo): Command {
     .option('--years <list>', 'milestone years, e.g. 2030,2040,2050,2100 (default every 10 years over the future)', numberListOption('--years'))
     .addOption(thresholdsOption('warming levels in K whose crossing years are reported', [1.5, 2]))
     .addOption(baselineOption())
+    .addOption(absentEmissionsOption())
     .option('--no-splice', 'do not splice pathways that start late onto the bundled history (each run then starts from zero warming in its first year)')
     .option('--no-carbon-feedback', 'emission-driven runs: switch off the carbon-climate feedback on uptake')
     .option('--members <count>', 'also run a parameter ensemble of this many members per pathway: ranges in tables and shaded in charts, median as the line', wholeNumberOption('--members', 2))
@@ -60,7 +63,7 @@ export function compareCommand(io: CliIo): Command {
       const baselineNote = thresholdBaselineNote(opts.baseline);
       const files: string[] = [];
       const scoped: ScopedNote[] = [];
-      const reads = await readPathwayArgs(args, opts, { splice: opts.splice }, io);
+      const reads = await readPathwayArgs(args, opts, { splice: opts.splice, absentEmissions: opts.absentEmissions }, io);
       const runs = reads.map((read) => {
         files.push(...pathwayInputs(read));
         const p = projectPathway(read.pathway, { params, baseline: opts.baseline, carbonFeedback: opts.carbonFeedback });

@@ -1,3 +1,4 @@
+import type { AbsentEmissionsRule } from '../forcing/absent-emissions.js';
 import { Command, InvalidArgumentError, Option } from 'commander';
 import { readFileSync } from 'node:fs';
 import { resolve } from 'node:path';
@@ -9,7 +10,7 @@ import { ensembleHeadlineLines, ensembleHeadlinesMarkdown, standardCautions, ter
 import type { CliIo } from './cli-io.js';
 import { isBatchShardFile, mergeBatchFiles } from './batch.js';
 import { addScenarioOptions, readPathwayArgs, type ScenarioOptions } from './scenario-options.js';
-import { baselineOption, refuseOptions, resolveModelParams, thresholdsOption, wholeNumberOption, type RefusedOption } from './options.js';
+import { baselineOption, refuseOptions, resolveModelParams, thresholdsOption, wholeNumberOption, type RefusedOption, absentEmissionsOption } from './options.js';
 import { announceWritten, pathwayInputs, tableRenderers, writeOutput } from './output.js';
 import { allocationError, checkEnsembleMemory, checkMergeMemory } from './memory-check.js';
 import { notesAndCautions } from './notes-and-cautions.js';
@@ -26,6 +27,7 @@ interface EnsembleCliOptions extends ScenarioOptions {
   shard?: { index: number; count: number };
   out?: string;
   splice: boolean;
+  absentEmissions?: AbsentEmissionsRule;
   chart: boolean;
 }
 
@@ -76,6 +78,7 @@ export function ensembleCommand(io: CliIo): Command {
     .addOption(baselineOption())
     .option('--shard <K/N>', 'run only the K-th of N equal slices of the members and write them as a shard file (.json) for `warmcast merge`', shardOption)
     .option('-o, --out <file>', 'write the headline figures and the yearly percentiles and probabilities: .csv (+ .meta.json), .json, .md; with --shard a .json shard file')
+    .addOption(absentEmissionsOption())
     .option('--no-splice', 'do not splice a pathway that starts late onto the bundled history')
     .option('--no-chart', 'omit the terminal chart')
     .addOption(new Option('--co2-formula <name>', 'CO2 forcing: ar6 (Meinshausen et al. 2020 + AR6 adjustment) or log (Myhre et al. 1998)').choices(['ar6', 'log']).default('ar6', 'ar6'));
@@ -93,7 +96,7 @@ export function ensembleCommand(io: CliIo): Command {
       if (opts.shard && !opts.out?.toLowerCase().endsWith('.json')) throw new ConfigError('--shard writes a shard file: give --out NAME.json', 'out');
       // Central parameters: the CO2 formula, and the CH4 and N2O of an emission pathway's central run.
       const { params } = resolveModelParams({ co2Formula: opts.co2Formula }, io);
-      const [read] = await readPathwayArgs([arg], opts, { splice: opts.splice }, io, false);
+      const [read] = await readPathwayArgs([arg], opts, { splice: opts.splice, absentEmissions: opts.absentEmissions }, io, false);
       const { input, notes } = ensembleInput(read.pathway, params, { baseline: opts.baseline });
       const inputs = pathwayInputs(read);
       const years = input.years.length;

@@ -4,6 +4,7 @@ import { InvalidArgumentError, Option, type Command } from 'commander';
 import { calibrate, type CalibrationTargets } from '../climate/calibrate.js';
 import { CALIBRATION_DEFAULTS, PARAM_KEYS, type ClimateParams } from '../climate/params.js';
 import { ConfigError, InputError } from '../errors.js';
+import { parseAbsentEmissionsRule } from '../forcing/absent-emissions.js';
 import { AR6_REFERENCE_PERIOD } from '../report/index.js';
 import { parseParams } from '../io/read-params.js';
 import type { CliIo } from './cli-io.js';
@@ -84,6 +85,25 @@ export function baselineOption(): Option {
   return new Option('--baseline <years>', 'baseline period for warming and for the thresholds read against it')
     .argParser(yearRangeOption)
     .default([...DEFAULT_BASELINE], DEFAULT_BASELINE.join('-'));
+}
+
+/**
+ * `--absent-emissions <rule>`: what fills aerosol precursors, ozone precursors or halogenated gases
+ * that an emission file does not give (`hold`, `follow-co2`, `zero-by-YEAR`); without it such a file
+ * is refused with the choices listed.
+ */
+export function absentEmissionsOption(): Option {
+  return new Option(
+    '--absent-emissions <rule>',
+    'emission files without aerosol or ozone precursors or halogenated gases: hold (present-day emissions), follow-co2 (scaled with the CO2 emissions), zero-by-YEAR (linearly to zero by then); without it such files are refused',
+  ).argParser((text: string) => {
+    try {
+      return parseAbsentEmissionsRule(text);
+    } catch (e) {
+      if (e instanceof ConfigError) throw new InvalidArgumentError(e.message.replace(/^--absent-emissions /, ''));
+      throw e;
+    }
+  });
 }
 
 /** `--thresholds <list>` (warming levels above 0 K) with `defaults`, shown in help as they are typed (`1.5,2`). */

@@ -1,10 +1,11 @@
+import type { AbsentEmissionsRule } from '../forcing/absent-emissions.js';
 import { Command, Option } from 'commander';
 import { ConfigError } from '../errors.js';
 import { projectPathway, type Projection } from '../projection/index.js';
 import { thresholdBaselineNote } from '../report/index.js';
 import type { CliIo } from './cli-io.js';
 import { addScenarioOptions, readPathwayArgs, type ScenarioOptions } from './scenario-options.js';
-import { addModelOptions, baselineOption, type ModelOptions, numberOption, resolveModelParams, yearOption } from './options.js';
+import { addModelOptions, baselineOption, type ModelOptions, numberOption, resolveModelParams, yearOption, absentEmissionsOption } from './options.js';
 import { announceWritten, clipProjection, pathwayInputs, projectionTable, tableRenderers, writeOutput } from './output.js';
 import { printProjectionSummary } from './summary.js';
 import { runHeadlines, runHeadlinesMarkdown } from './run-headlines.js';
@@ -18,6 +19,7 @@ interface RunOptions extends ModelOptions, ScenarioOptions {
   to?: number;
   baseline: [number, number];
   splice: boolean;
+  absentEmissions?: AbsentEmissionsRule;
   chart: boolean;
   carbonFeedback: boolean;
   method: 'odex' | 'exact';
@@ -34,6 +36,7 @@ export function runCommand(io: CliIo): Command {
     .option('--from <year>', 'first year to report (the model still starts from pre-industrial)', yearOption)
     .option('--to <year>', 'last year to report', yearOption)
     .addOption(baselineOption())
+    .addOption(absentEmissionsOption())
     .option('--no-splice', 'do not splice a pathway that starts late onto the bundled history (the run then starts from zero warming in its first year, not in equilibrium with that year\'s forcing)')
     .option('--no-carbon-feedback', 'emission-driven runs: switch off the carbon-climate feedback on uptake')
     .option('--no-chart', 'omit the terminal chart');
@@ -47,7 +50,7 @@ export function runCommand(io: CliIo): Command {
     )
     .action(async (pathways: string[], opts: RunOptions) => {
       const args = pathways.length > 0 ? pathways : [DEFAULT_PATHWAY];
-      const reads = await readPathwayArgs(args, opts, { splice: opts.splice }, io);
+      const reads = await readPathwayArgs(args, opts, { splice: opts.splice, absentEmissions: opts.absentEmissions }, io);
       if (opts.out !== undefined && reads.length > 1) {
         throw new ConfigError('--out takes one pathway; to put several side by side use `warmcast compare`', 'out');
       }

@@ -48,6 +48,7 @@ export function printProjectionSummary(
         : `  history spliced in: years to ${bridge} come from the bundled history, ${bridge + 1 === spliceYear - 1 ? bridge + 1 : `${bridge + 1}-${spliceYear - 1}`} bridged to the file's first year, ${spliceYear}`,
     );
   }
+  for (const assumption of p.provenance.assumptions ?? []) lines.push(`  assumption: ${assumption}`);
   lines.push('');
 
   const splice = p.provenance.spliceYear;

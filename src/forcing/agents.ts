@@ -3,6 +3,7 @@ import { ch4ErfAr6 } from './ch4.js';
 import { co2Forcing, forcingOfDoubling, type Co2Formula } from './co2.js';
 import { PREINDUSTRIAL } from './constants.js';
 import { LUMPED_PARTS, lumpedShare } from './lumped-forcing.js';
+import { methaneChemistryWm2, type ChemistryAnchor } from './methane-chemistry.js';
 import { n2oErfAr6 } from './n2o.js';
 
 /**
@@ -77,6 +78,12 @@ export interface ForcingInputs {
    * lumped `aerosol_wm2` or `other_wm2` stands for its agents in the shares of lumpedShare.
    */
   prescribed?: Partial<Record<ForcingColumn, Float64Array>>;
+  /**
+   * From `fromIndex` on, ozone and strat. H2O also follow the CH4 and N2O series relative to their
+   * values at `refIndex` (methaneChemistryWm2): set for pathways whose forcing was computed from
+   * emissions (chemistryAnchor of Pathway.responsiveFrom).
+   */
+  chemistry?: ChemistryAnchor;
 }
 
 /** Forcing by agent and in total, W m-2, one value per year. */
@@ -127,6 +134,16 @@ export function forcingByAgent(length: number, inputs: ForcingInputs, options: F
       if (!values || !LUMPED_PARTS[lumped].includes(column)) continue;
       const share = scale * lumpedShare(lumped, column);
       for (let i = 0; i < length; i++) out[i] = share * values[i];
+    }
+  }
+  const chem = inputs.chemistry;
+  if (chem && inputs.ch4Ppb && inputs.n2oPpb) {
+    const { ch4Ppb, n2oPpb } = inputs;
+    const r = chem.refIndex;
+    for (let i = chem.fromIndex; i < length; i++) {
+      const c = methaneChemistryWm2(ch4Ppb[i], n2oPpb[i], ch4Ppb[r], n2oPpb[r]);
+      if (chem.ozone) byAgent.ozone[i] += c.ozone;
+      if (chem.stratH2o) byAgent.strat_h2o[i] += c.stratH2o;
     }
   }
   const total = new Float64Array(length);

@@ -1,4 +1,5 @@
 import { FORCING_AGENTS } from '../forcing/agents.js';
+import { describeAgentSources } from './describe-agent-sources.js';
 import type { ReadPathwayResult } from './load-pathway.js';
 
 /**
@@ -13,7 +14,8 @@ const DRIVERS: Readonly<Record<string, readonly string[]>> = {
   n2o: ['n2o_mt', 'n2o_ppb'],
   other_ghg: ['fgas_mtco2e', '*_kt', '*_ppt', 'other_ghg_wm2'],
   other: ['other_wm2'],
-  ozone: ['nox_mt', 'co_mt', 'nmvoc_mt', 'ozone_wm2'],
+  ozone: ['nox_mt', 'co_mt', 'nmvoc_mt', 'ch4_mt', 'ozone_wm2'],
+  strat_h2o: ['ch4_mt', 'strat_h2o_wm2'],
   aerosol: ['so2_mt', 'bc_mt', 'oc_mt', 'nh3_mt', 'aerosol_wm2'],
   aerosol_ari: ['so2_mt', 'bc_mt', 'oc_mt', 'nh3_mt', 'aerosol_ari_wm2', 'aerosol_wm2'],
   aerosol_aci: ['so2_mt', 'bc_mt', 'oc_mt', 'aerosol_aci_wm2', 'aerosol_wm2'],
@@ -40,6 +42,23 @@ export interface PathwayCoverage {
  * @example pathwayCoverage(read).filled // [{ agent: 'aerosol', how: ['aerosol_wm2, other_wm2 not in file: taken from history to 2024, then held at the 2024 value'] }, ...]
  */
 export function pathwayCoverage(read: ReadPathwayResult, readerNotes: readonly string[] = []): PathwayCoverage {
+  // The reader's own account of each agent (file, history, or an assumption), when it gives one.
+  if (read.emissionForcing) {
+    const given: PathwayCoverage['given'] = [];
+    const filled: PathwayCoverage['filled'] = [];
+    const own = Object.keys(read.annual.series).filter((c) => read.annual.series[c as keyof typeof read.annual.series] !== undefined);
+    for (const line of describeAgentSources(read.annual, read.pathway, read.emissionForcing).slice(1)) {
+      const m = /^\s*([a-z0-9_]+): (.*)$/.exec(line);
+      if (!m) continue;
+      const [, agent, source] = m;
+      if (/\bthe file\b/.test(source) && !/\bassumed\b/.test(source)) {
+        const drivers = DRIVERS[agent] ?? [`${agent}_wm2`];
+        const columns = own.filter((c) => drivers.some((d) => (d.startsWith('*') ? c.endsWith(d.slice(1)) : c === d)));
+        given.push({ agent, columns: columns.length > 0 ? columns : [source] });
+      } else filled.push({ agent, how: [source] });
+    }
+    return { given, filled };
+  }
   const own = Object.keys(read.annual.series).filter((c) => read.annual.series[c as keyof typeof read.annual.series] !== undefined);
   const matches = (pattern: string, column: string) => (pattern.startsWith('*') ? column.endsWith(pattern.slice(1)) : column === pattern);
   const given: PathwayCoverage['given'] = [];

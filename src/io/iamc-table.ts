@@ -389,7 +389,7 @@ function assembleScenario(file: string, s: ScenarioRows, ambiguousName: boolean)
     for (const cell of years.values()) {
       const outside = outOfBounds(column as PathwayColumn, cell.value);
       if (outside) {
-        problems.push({ ...at, line: cell.line, column: cell.column, variable, code: 'input.out-of-range', value: String(cell.written), message: `${outside.message} once converted to ${column}`, expected: `${outside.expected} (${cell.value.toPrecision(4)} after conversion)` });
+        problems.push({ ...at, line: cell.line, column: cell.column, variable, code: outside.code, value: String(cell.written), message: `${outside.message} once converted to ${column}`, expected: `${outside.expected} (${cell.value.toPrecision(4)} after conversion)` });
       }
     }
   }

@@ -34,3 +34,4 @@ export { iamcVariable, IAMC_VARIABLES, type IamcVariable } from './iamc-variable
 export { emissionUnitFactor, knownUnits, SPECIES_RATIO, type EmissionUnitTarget, type UnitReading } from './iamc-units.js';
 export { describeScenarioTable } from './iamc-describe.js';
 export { pathwayCoverage, type PathwayCoverage } from './iamc-coverage.js';
+export { describeAgentSources } from './describe-agent-sources.js';

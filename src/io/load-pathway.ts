@@ -1,6 +1,8 @@
 import { existsSync, realpathSync } from 'node:fs';
 import { join } from 'node:path';
 import { InputError } from '../errors.js';
+import type { AbsentEmissionsRule } from '../forcing/absent-emissions.js';
+import { resolveEmissionForcing, type EmissionForcing } from '../forcing/emission-forcing.js';
 import { splitLumpedForcing } from '../forcing/lumped-forcing.js';
 import type { Pathway } from '../pathway.js';
 import { bundledPathwayNames, bundledPathwaysDir, loadHistory } from './bundled-pathways.js';
@@ -15,6 +17,12 @@ export interface LoadPathwayOptions {
   splice?: boolean;
   /** Folder of bundled pathways and history.csv (default: the one shipped with warmcast). */
   pathwaysDir?: string;
+  /**
+   * What fills a group of short-lived species (aerosol precursors, ozone precursors, halogenated
+   * gases) that an emission file gives neither as emissions nor as forcing; without it such a file
+   * is refused (resolveEmissionForcing).
+   */
+  absentEmissions?: AbsentEmissionsRule;
 }
 
 /** Every stage of reading one pathway, for `warmcast check`. */
@@ -23,8 +31,10 @@ export interface ReadPathwayResult {
   parsed: ParsedPathway;
   /** The file's own values on the annual grid. */
   annual: Pathway;
-  /** What a run uses: `annual`, spliced onto the history unless that was turned off or not needed. */
+  /** What a run uses: `annual` with forcing from its emissions, spliced onto the history unless that was turned off or not needed. */
   pathway: Pathway;
+  /** Forcing computed from the file's emissions: where each agent comes from, the assumptions made. */
+  emissionForcing: EmissionForcing;
 }
 
 /**
@@ -46,8 +56,9 @@ export function readPathway(arg: string, options: LoadPathwayOptions = {}): Read
 /**
  * The stages after reading, shared by pathway files and the scenarios of a scenario table: the
  * parsed rows put on the annual grid (toAnnual), `notes` from the reader put first in the
- * provenance, and the result spliced onto the bundled history (spliceOntoHistory) unless `splice`
- * is false or the rows are the history itself.
+ * provenance, the forcing of short-lived emissions resolved against the history (with the
+ * `absentEmissions` rule), lumped forcing split over its agents, and the result spliced onto the
+ * bundled history (spliceOntoHistory) unless `splice` is false or the rows are the history itself.
  *
  * @param parsed rows as read (parsePathway, or one scenario of readIamcTable)
  * @param options splice and pathwaysDir as for readPathway; `source` for provenance (default the
@@ -62,13 +73,14 @@ export function pathwayFromParsed(
   if (source !== parsed.file || options.notes?.length) {
     annual = { ...annual, provenance: { ...annual.provenance, source, notes: [...(options.notes ?? []), ...annual.provenance.notes] } };
   }
-  // Lumped aerosol_wm2 / other_wm2 become agent columns before the splice, so that the history's
+  const history = options.splice !== false && !options.isHistory ? loadHistory(options.pathwaysDir ?? bundledPathwaysDir()) : undefined;
+  // Forcing from the file's emissions first (it sees the lumped columns as the user wrote them), then
+  // lumped aerosol_wm2 / other_wm2 become agent columns before the splice, so that the history's
   // agent columns are replaced by the file's and not added to them.
-  let pathway = splitLumpedForcing(annual);
-  if (options.splice !== false && !options.isHistory) {
-    pathway = spliceOntoHistory(pathway, loadHistory(options.pathwaysDir ?? bundledPathwaysDir()));
-  }
-  return { parsed, annual, pathway };
+  const emissionForcing = resolveEmissionForcing(annual, history, { absent: options.absentEmissions, firstRowLine: parsed.rowLines[0] });
+  let pathway = splitLumpedForcing(emissionForcing.pathway);
+  if (history) pathway = spliceOntoHistory(pathway, history);
+  return { parsed, annual, pathway, emissionForcing };
 }
 
 /**

@@ -1,8 +1,10 @@
 import Papa from 'papaparse';
 import { InputError, type InputProblem } from '../errors.js';
 import { LUMPED_PARTS } from '../forcing/lumped-forcing.js';
-import { GASES, LUMPED_FORCING_COLUMNS, PATHWAY_COLUMNS, type Gas, type PathwayColumn } from '../pathway.js';
+import { HALOGEN_COLUMNS } from '../carbon/halogen-species.js';
+import { GASES, HALOGEN_CONCENTRATION_COLUMNS, HALOGEN_EMISSION_COLUMNS, LUMPED_FORCING_COLUMNS, PATHWAY_COLUMNS, type Gas, type PathwayColumn } from '../pathway.js';
 import { commonDayOfDates, isoDateToYear } from './iso-date-year.js';
+import { nearestHalogen } from './nearest-halogen.js';
 import { nearestName } from './nearest-name.js';
 import { outOfBounds } from './value-bounds.js';
 
@@ -55,6 +57,12 @@ const UNIT_HINTS: Readonly<Record<string, string>> = {
   n2o_tgn: 'n2o_mt (Mt N2O per year: multiply Tg N by 44/28 = 1.571)',
   n2o_mtn: 'n2o_mt (Mt N2O per year: multiply Mt N by 44/28 = 1.571)',
 };
+
+/** Column names as listed in messages: the halogenated gases as two patterns instead of 72 names. */
+const LISTED_COLUMNS: readonly string[] = [
+  ...PATHWAY_COLUMNS.filter((c) => !(HALOGEN_EMISSION_COLUMNS as readonly string[]).includes(c) && !(HALOGEN_CONCENTRATION_COLUMNS as readonly string[]).includes(c)),
+  '<gas>_kt', '<gas>_ppt (halogenated gases)',
+];
 
 type CellRole =
   | { kind: 'time'; name: 'year' | 'date'; header: string }
@@ -319,7 +327,7 @@ function readHeader(cells: string[], line: number, report: Report): CellRole[] {
         line,
         column: String(j + 1),
         message: `must name every column (header cell ${j + 1} is empty)`,
-        expected: `one of ${known.join(', ')}`,
+        expected: `one of year, date, ${LISTED_COLUMNS.join(', ')}`,
       });
       roles.push({ kind: 'skip' });
       return;
@@ -346,6 +354,21 @@ function readHeader(cells: string[], line: number, report: Report): CellRole[] {
       unknownCount++;
       const hintKey = key.replace(/[^a-z0-9]+/g, '_');
       const hint = Object.hasOwn(UNIT_HINTS, hintKey) ? UNIT_HINTS[hintKey] : undefined;
+      const halogen = hint === undefined ? /^(.+?)[\s_]*(kt|ppt)$/.exec(key) : null;
+      if (halogen) {
+        const g = nearestHalogen(halogen[1]);
+        report({
+          code: 'input.unknown-gas',
+          line,
+          column: header,
+          message: 'must name a halogenated gas warmcast models (from the IPCC AR6 WG1 Table 7.SM.7 species)'
+            + (g ? `; did you mean "${g.column}_${halogen[2]}" (${g.label}, ${g.name})?` : ''),
+          value: header,
+          expected: `<gas>_${halogen[2]} with <gas> one of ${HALOGEN_COLUMNS.join(', ')}`,
+        });
+        roles.push({ kind: 'skip' });
+        return;
+      }
       const guess = hint === undefined ? nearestName(key, known) : undefined;
       report({
         code: 'input.unknown-column',
@@ -357,7 +380,7 @@ function readHeader(cells: string[], line: number, report: Report): CellRole[] {
             ? `must be a known column name; did you mean "${guess}"?`
             : 'must be a known column name',
         value: header,
-        expected: `one of ${known.join(', ')}`,
+        expected: `one of year, date, ${LISTED_COLUMNS.join(', ')}`,
       });
       roles.push({ kind: 'skip' });
     }
@@ -399,6 +422,21 @@ function readHeader(cells: string[], line: number, report: Report): CellRole[] {
       });
     }
   }
+  for (const gas of HALOGEN_COLUMNS) {
+    const conc = dataRoles.find((r) => r.column === `${gas}_ppt`);
+    const emis = dataRoles.find((r) => r.column === `${gas}_kt`);
+    if (conc && emis) {
+      const later = roles.indexOf(conc) > roles.indexOf(emis) ? conc : emis;
+      report({
+        code: 'input.gas-twice',
+        line,
+        column: later.header,
+        message: `must give ${gas} either as a concentration (${gas}_ppt) or as emissions (${gas}_kt), not both`,
+        value: later.header,
+        expected: `one column per gas: ${gas}_ppt or ${gas}_kt`,
+      });
+    }
+  }
   for (const lumped of LUMPED_FORCING_COLUMNS) {
     const whole = dataRoles.find((r) => r.column === lumped);
     const part = dataRoles.find((r) => (LUMPED_PARTS[lumped] as readonly string[]).includes(r.column));
@@ -419,7 +457,7 @@ function readHeader(cells: string[], line: number, report: Report): CellRole[] {
       code: 'input.no-data-columns',
       line,
       message: 'must have at least one data column besides the time column',
-      expected: `one or more of ${PATHWAY_COLUMNS.join(', ')}`,
+      expected: `one or more of ${LISTED_COLUMNS.join(', ')}`,
     });
   }
   return roles;
@@ -462,7 +500,7 @@ function readValue(
     return NaN;
   }
   const outside = outOfBounds(role.column, read.value);
-  if (outside) report({ code: 'input.out-of-range', line, column: role.header, value: cell, ...outside });
+  if (outside) report({ line, column: role.header, value: cell, ...outside });
   return read.value;
 }
 

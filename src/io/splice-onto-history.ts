@@ -174,7 +174,8 @@ export function spliceOntoHistory(unsplitFuture: Pathway, unsplitHistory: Pathwa
     years,
     series,
     metadata: future.metadata,
-    provenance: { source: future.provenance.source, spliceYear: f0, historyLastYear: Math.min(hLast, f0 - 1), notes },
+    provenance: { source: future.provenance.source, spliceYear: f0, historyLastYear: Math.min(hLast, f0 - 1), notes, assumptions: future.provenance.assumptions },
+    responsiveFrom: future.responsiveFrom,
   };
 }
 

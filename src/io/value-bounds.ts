@@ -1,4 +1,5 @@
 import type { PathwayColumn } from '../pathway.js';
+import { SPECIES_BOUNDS } from './species-bounds.js';
 
 /** The plausible range of one pathway column, with the reason for each end. */
 export interface ValueBounds {
@@ -64,13 +65,15 @@ export const VALUE_BOUNDS: Readonly<Record<PathwayColumn, ValueBounds>> = {
       + 'a value in Mt CO2 (40000) fails the high end (common practice, no source)',
   },
   ch4_mt: {
-    min: 0,
+    min: -220,
     max: 5000,
     quantity: 'a CH4 emission rate',
     unit: 'Mt CH4 yr-1',
     source:
       'present anthropogenic emissions are about 350-400 Mt CH4 yr-1 (Global Methane Budget; from memory); '
-      + 'an emission rate cannot be negative; 5000 is about 10 times any scenario (common practice, no source)',
+      + 'anthropogenic emissions may be negative (removal) but not below minus the natural flux, 220 Mt CH4 yr-1 '
+      + '(the 1750 steady state: 729.2 ppb x 2.75 Mt ppb-1 / 9.1 yr; src/carbon/README.md), or total emissions '
+      + 'would be negative; 5000 is about 10 times any scenario (common practice, no source)',
   },
   n2o_mt: {
     min: 0,
@@ -134,19 +137,22 @@ export const VALUE_BOUNDS: Readonly<Record<PathwayColumn, ValueBounds>> = {
       + 'high end: volcanic forcing is measured from the long pre-industrial mean (IPCC AR6), which makes quiet '
       + 'years about +0.2 W m-2 (common practice, no source)',
   },
+  ...SPECIES_BOUNDS,
 };
 
 /**
- * Says why `value` is not plausible for `column` (outside VALUE_BOUNDS), in the words of an input
- * problem; undefined when it is. One check for pathway files and scenario tables.
+ * Says why `value` is not plausible for `column` (outside VALUE_BOUNDS), as an input problem's code,
+ * message and expected form; undefined when it is. A negative value where the bound is 0 is "must not
+ * be negative". One check for pathway files and scenario tables.
  *
  * @param value in the column's unit
- * @example outOfBounds('co2_gtco2', 40000) // { message: 'must be a plausible value for a CO2 emission rate', expected: 'a value from -100 to 500 Gt CO2 yr-1' }
+ * @example outOfBounds('co2_gtco2', 40000) // { code: 'input.out-of-range', message: 'must be a plausible value for a CO2 emission rate', expected: 'a value from -100 to 500 Gt CO2 yr-1' }
  */
-export function outOfBounds(column: PathwayColumn, value: number): { message: string; expected: string } | undefined {
+export function outOfBounds(column: PathwayColumn, value: number): { code: string; message: string; expected: string } | undefined {
   const b = VALUE_BOUNDS[column];
+  if (value < 0 && b.min === 0) return { code: 'input.negative', message: `must not be negative: ${b.quantity} cannot be below 0 ${b.unit}`, expected: `a value from 0 to ${b.max} ${b.unit}` };
   if (value >= b.min && value <= b.max) return undefined;
-  return { message: `must be a plausible value for ${b.quantity}`, expected: `a value from ${b.min} to ${b.max} ${b.unit}` };
+  return { code: 'input.out-of-range', message: `must be a plausible value for ${b.quantity}`, expected: `a value from ${b.min} to ${b.max} ${b.unit}` };
 }
 
 /** Bounds of a per-agent forcing column (common practice, no source; `why` names the history's extreme). */

@@ -3,6 +3,7 @@ import type { EnsembleInput } from '../ensemble/run-ensemble.js';
 import type { ClimateParams } from '../climate/params.js';
 import { forcingByAgent } from '../forcing/agents.js';
 import { PREINDUSTRIAL } from '../forcing/constants.js';
+import { chemistryAnchor } from '../forcing/methane-chemistry.js';
 import { EMISSION_COLUMNS, GASES, type Pathway } from '../pathway.js';
 import { projectPathway } from './project-pathway.js';
 import { startFromRestNote } from './start-from-rest-note.js';
@@ -54,6 +55,12 @@ export function ensembleInput(pathway: Pathway, params: ClimateParams, options: 
   // Members scale the forcing differently, so the note gives no one value for it.
   const fromRest = startFromRestNote(pathway, { subject: 'each member' });
   if (fromRest) notes.push(fromRest);
-  const forcing = forcingByAgent(n, { ...gases, prescribed: s }, { co2Formula: params.co2Formula });
+  const forcing = forcingByAgent(n, {
+    co2Ppm: gases.co2Ppm,
+    ch4Ppb: gases.ch4Ppb ?? new Float64Array(n).fill(PREINDUSTRIAL.ch4Ppb),
+    n2oPpb: gases.n2oPpb ?? new Float64Array(n).fill(PREINDUSTRIAL.n2oPpb),
+    prescribed: s,
+    chemistry: chemistryAnchor(pathway.years, pathway.responsiveFrom),
+  }, { co2Formula: params.co2Formula });
   return { input: { years: pathway.years, forcing, co2Formula: params.co2Formula, ...(carbon ? { carbon } : {}) }, notes };
 }

@@ -4,6 +4,7 @@ import type { ClimateParams } from '../climate/params.js';
 import { ConfigError } from '../errors.js';
 import { FORCING_AGENTS, forcingByAgent, type ForcingAgent, type ForcingOptions } from '../forcing/agents.js';
 import { PREINDUSTRIAL } from '../forcing/constants.js';
+import { chemistryAnchor } from '../forcing/methane-chemistry.js';
 import { DEFAULT_TOLERANCES, type OdeTolerances } from '../numerics/integrate-steps.js';
 import { forcingColumnsNotGiven } from '../forcing/lumped-forcing.js';
 import { EMISSION_COLUMNS, GASES, type Pathway, type PathwayProvenance } from '../pathway.js';
@@ -124,7 +125,15 @@ export function projectPathway(pathway: Pathway, options: ProjectionOptions): Pr
     return { name: pathway.name, provenance: pathway.provenance, params, baseline, years, columns, notes: [...notes, ...r.notes, ...budgetNotes], carbon: r };
   }
 
-  const forcing = forcingByAgent(n, { co2Ppm: s.co2_ppm, ch4Ppb: s.ch4_ppb, n2oPpb: s.n2o_ppb, prescribed: s }, forcingOptions);
+  // Ozone and strat. H2O follow a given CH4 or N2O from the join when their forcing came from emissions.
+  const chemistry = chemistryAnchor(years, pathway.responsiveFrom);
+  const forcing = forcingByAgent(n, {
+    co2Ppm: s.co2_ppm,
+    ch4Ppb: s.ch4_ppb ?? new Float64Array(n).fill(PREINDUSTRIAL.ch4Ppb),
+    n2oPpb: s.n2o_ppb ?? new Float64Array(n).fill(PREINDUSTRIAL.n2oPpb),
+    prescribed: s,
+    chemistry,
+  }, forcingOptions);
   const eb = energyBalance(params, forcing.total, options.method ?? 'exact', tolerances);
   const fromRest = startFromRestNote(pathway, { subject: 'the run', forcingWm2: forcing.total[0] });
   if (fromRest) notes.push(fromRest);

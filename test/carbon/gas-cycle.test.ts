@@ -2,6 +2,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import {
   CH4_CYCLE,
+  ch4CycleFromJoin,
   gasEmissionsForTendency,
   gasLifetimeYr,
   gasSinkMt,
@@ -62,5 +63,21 @@ describe('mass balance', () => {
         },
       ),
     );
+  });
+});
+
+describe('ch4CycleFromJoin', () => {
+  it('has the 9.1 yr total lifetime at the join and the 11.8 yr perturbation lifetime there (Prather et al. 2012 feedback factor; AR6 WG1 Table 7.15; from memory)', () => {
+    const cycle = ch4CycleFromJoin(1930);
+    expectClose(gasLifetimeYr(cycle, 1930), 9.1, 1e-12);
+    expectClose(perturbationLifetime(cycle, 1930), 11.8, 1e-6);
+  });
+
+  it('keeps the sink continuous at the join: the same removal as the constant 9.1 yr lifetime there', () => {
+    expectClose(gasSinkMt(ch4CycleFromJoin(1930), 1930), gasSinkMt(withConstantLifetime(CH4_CYCLE), 1930), 1e-9);
+  });
+
+  it('scales the total lifetime with an ensemble member\'s CH4 lifetime scale', () => {
+    expectClose(gasLifetimeYr(ch4CycleFromJoin(1930, 1.1), 1930), 10.01, 1e-12);
   });
 });

@@ -296,7 +296,7 @@ describe('warmcast ensemble and merge', () => {
     const file = join(dir, 'em.csv');
     writeFileSync(file, '# name: My emissions\nyear,co2_gtco2\n2025,40\n2050,0\n2100,-5\n');
     const io = captureIo();
-    expect(await main(['ensemble', file, '--no-splice', '--baseline', '2025-2030', '--members', '20', '--no-chart'], io), io.err).toBe(0);
+    expect(await main(['ensemble', file, '--no-splice', '--baseline', '2025-2030', '--members', '20', '--no-chart', '--absent-emissions', 'hold'], io), io.err).toBe(0);
     expect(io.out).toMatch(/warming relative to 2025-2030/);
   });
 

@@ -240,7 +240,7 @@ describe('an emission file that starts a few years after the history', () => {
     const file = join(dir, 'plan.csv');
     writeFileSync(file, '# name: My plan\ndate,co2_gtco2,ch4_mt\n2030-07-02,38,360\n2050-07-02,0,250\n2100-07-02,-5,200\n');
     const io = captureIo();
-    expect(await main(['run', file, '--out', join(dir, 'out.csv'), '--no-chart'], io)).toBe(0);
+    expect(await main(['run', file, '--out', join(dir, 'out.csv'), '--no-chart', '--absent-emissions', 'follow-co2'], io)).toBe(0);
     expect(io.out).toMatch(/co2_gtco2, ch4_mt held at the file's 2030 value over 2025-2029/);
     const rows = Papa.parse<Record<string, string>>(readFileSync(join(dir, 'out.csv'), 'utf8').trim(), { header: true }).data;
     const at = (y: number) => rows.find((r) => Number(r.year) === y)!;
@@ -256,7 +256,7 @@ describe('notes of an emission file spliced onto the concentration history', () 
     const file = join(dir, 'emis.csv');
     writeFileSync(file, '# name: My emissions\nyear,co2_gtco2,ch4_mt,n2o_mt\n2025,40,380,11\n2050,0,250,9\n2100,-5,200,8\n');
     const io = captureIo();
-    expect(await main(['run', file, '--out', join(dir, 'out.csv'), '--no-chart'], io)).toBe(0);
+    expect(await main(['run', file, '--out', join(dir, 'out.csv'), '--no-chart', '--absent-emissions', 'hold'], io)).toBe(0);
     const notes = io.out.split('\n').filter((l) => l.startsWith('  note: '));
     expect(notes.filter((n) => /NaN/.test(n))).toEqual([]);
     expect(notes).toContain(

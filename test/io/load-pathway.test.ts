@@ -14,7 +14,8 @@ writeFileSync(join(pathwaysDir, 'history.csv'),
   'year,co2_ppm,solar_wm2,volcanic_wm2\n2020,410,0.1,-0.2\n2021,412,0.2,-0.1\n2022,414,0.3,0\n');
 writeFileSync(join(pathwaysDir, 'calm.csv'), '# name: Calm\nyear,co2_ppm\n2023,416\n2033,436\n');
 const userFile = join(dir, 'mine.csv');
-writeFileSync(userFile, 'year,co2_gtco2\n2023,40\n2025,36\n');
+// Aerosol and other forcing given, so that the emission file is not refused for leaving them out.
+writeFileSync(userFile, 'year,co2_gtco2,aerosol_wm2,other_wm2\n2023,40,-1,0.9\n2025,36,-0.9,0.9\n');
 
 function problemOf(arg: string, options = { pathwaysDir }): InputProblem {
   try {

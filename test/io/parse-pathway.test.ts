@@ -3,6 +3,7 @@ import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
 import { InputError, type InputProblem } from '../../src/errors.js';
 import { parsePathway } from '../../src/io/parse-pathway.js';
+import { CONCENTRATION_COLUMNS, EMISSION_COLUMNS, FORCING_COLUMNS, PRECURSOR_COLUMNS } from '../../src/pathway.js';
 
 // Line numbers below were counted in the fixture files by hand (and with `grep -n ''`): comment and
 // blank lines count, the first line is 1. test/fixtures/README.md lists every fixture.
@@ -21,7 +22,8 @@ function problemsOf(text: string, file: string): InputProblem[] {
 }
 
 const NUMBER = 'a number such as 415.2, with a decimal point and without units or thousands separators';
-const KNOWN = 'one of year, date, co2_ppm, ch4_ppb, n2o_ppb, co2_gtco2, ch4_mt, n2o_mt, other_ghg_wm2, ozone_wm2, strat_h2o_wm2, contrails_wm2, aerosol_ari_wm2, aerosol_aci_wm2, bc_snow_wm2, land_use_wm2, solar_wm2, volcanic_wm2, aerosol_wm2, other_wm2';
+const LISTED = [...CONCENTRATION_COLUMNS, ...EMISSION_COLUMNS, ...FORCING_COLUMNS, ...PRECURSOR_COLUMNS, 'fgas_mtco2e', '<gas>_kt', '<gas>_ppt (halogenated gases)'].join(', ');
+const KNOWN = `one of year, date, ${LISTED}`;
 
 type Expected = Omit<InputProblem, 'file'>;
 const badCases: [fixture: string, problem: Expected][] = [
@@ -82,7 +84,7 @@ const badCases: [fixture: string, problem: Expected][] = [
   }],
   ['no-data-columns.csv', {
     code: 'input.no-data-columns', line: 1, message: 'must have at least one data column besides the time column',
-    expected: 'one or more of co2_ppm, ch4_ppb, n2o_ppb, co2_gtco2, ch4_mt, n2o_mt, other_ghg_wm2, ozone_wm2, strat_h2o_wm2, contrails_wm2, aerosol_ari_wm2, aerosol_aci_wm2, bc_snow_wm2, land_use_wm2, solar_wm2, volcanic_wm2, aerosol_wm2, other_wm2',
+    expected: `one or more of ${LISTED}`,
   }],
   ['text-in-number.csv', {
     code: 'input.bad-number', line: 3, column: 'co2_ppm', value: 'about 430', message: 'must be a number', expected: NUMBER,
