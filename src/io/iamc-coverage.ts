@@ -52,7 +52,9 @@ export function pathwayCoverage(read: ReadPathwayResult, readerNotes: readonly s
       if (!m) continue;
       const [, agent, source] = m;
       // Given: from the file's own columns, or computed from them (the run's CH4, scaled with BC emissions).
-      if (!/\(not in the file\)/.test(source) && /^the file\b|\bthe file's\b|\bthe run's\b|\bscaled with\b/.test(source)) {
+      // Filled: taken from the history and held, or computed from assumed emissions (an --absent-emissions rule).
+      const assumed = /\bassumed\b/.test(source) && !/\bthe file's halogenated\b/.test(source);
+      if (!assumed && !/\(not in the file\)/.test(source) && /^the file\b|\bthe file's\b|\bthe run's\b|\bscaled with\b/.test(source)) {
         const drivers = DRIVERS[agent] ?? [`${agent}_wm2`];
         const columns = own.filter((c) => drivers.some((d) => (d.startsWith('*') ? c.endsWith(d.slice(1)) : c === d)));
         given.push({ agent, columns: columns.length > 0 ? columns : [source] });

@@ -89,6 +89,21 @@ describe('warmcast batch', () => {
     expect(readFileSync(join(dir, 'years', 'Model_A--Slow.csv'), 'utf8').split('\n')[0]).toMatch(/^year,warming_p05_k,.*warming_p95_k,prob_above_1\.5,prob_above_2$/);
   });
 
+  it('a scenario without aerosol precursors fails unless --absent-emissions states an assumption, which filled_by then names', async () => {
+    const dir = tempDir();
+    const precursors = ['Emissions|Sulfur', 'Emissions|BC', 'Emissions|OC', 'Emissions|NH3'];
+    writeFileSync(join(dir, 't.csv'), wideCsv([...inventedScenario('A', 'Full', 0.5), ...inventedScenario('A', 'Bare', 0.5).filter((r) => !precursors.includes(r.variable))]));
+    const without = await runCli(['batch', 't.csv', ...SETTINGS, '--out', 'without.json'], dir);
+    expect(without.code).toBe(3);
+    expect(json(dir, 'without.json').errors[0].scenario).toBe('Bare');
+    const withRule = await runCli(['batch', 't.csv', ...SETTINGS, '--absent-emissions', 'follow-co2', '--out', 'with.json'], dir);
+    expect(withRule.code, withRule.err).toBe(0);
+    const bare = json(dir, 'with.json').rows[1];
+    expect(bare.scenario).toBe('Bare');
+    expect(bare.filled_by).toMatch(/aerosol_ari: [^;]*assumed precursor emissions \(follow the file's CO2 emissions/);
+    expect(json(dir, 'with.json').rows[0].filled_by).not.toMatch(/aerosol/);
+  });
+
   it('refuses a table without the IAMC columns (exit 2) and --shard without a .json --out, before any work', async () => {
     const dir = tempDir();
     writeFileSync(join(dir, 'plain.csv'), 'year,co2_gtco2\n2030,30\n');
