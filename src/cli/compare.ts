@@ -4,6 +4,7 @@ import { ConfigError } from '../errors.js';
 import { formatCsv } from '../io/index.js';
 import { comparePathways, milestoneYears, type PathwayWarming } from '../metrics/index.js';
 import { runEnsemble } from '../ensemble/index.js';
+import { memberSource } from './member-source.js';
 import { ensembleInput, projectPathway } from '../projection/index.js';
 import { comparisonCharts, comparisonHtml, comparisonJson, comparisonLongTable, comparisonSummary, comparisonMarkdown, comparisonText, comparisonUncertainty, scopedNotes, standardCautions, thresholdBaselineNote, type ScopedNote } from '../report/index.js';
 import type { CliIo } from './cli-io.js';
@@ -56,17 +57,17 @@ export function compareCommand(io: CliIo): Command {
           throw new ConfigError('with --members every member runs the carbon-climate feedback on uptake, so --no-carbon-feedback would be ignored: leave it out, or compare without --members', 'carbonFeedback');
         }
         if (given.length > 0) {
-          throw new ConfigError(`with --members each member draws its own ECS, TCR, 2xCO2 and aerosol forcing, so ${given.join(', ')} would be ignored: leave ${given.length > 1 ? 'them' : 'it'} out, or compare without --members`, given[0].slice(2));
+          throw new ConfigError(`with --members each member takes its parameters from the calibrated set, so ${given.join(', ')} would be ignored: leave ${given.length > 1 ? 'them' : 'it'} out, or compare without --members`, given[0].slice(2));
         }
       }
-      const { params, paramsFile, notes: paramNotes } = resolveModelParams(opts, io);
+      const { params, paramsFile, notes: paramNotes, forcingScale, forcingNote } = resolveModelParams(opts, io);
       const baselineNote = thresholdBaselineNote(opts.baseline);
       const files: string[] = [];
       const scoped: ScopedNote[] = [];
       const reads = await readPathwayArgs(args, opts, { splice: opts.splice, absentEmissions: opts.absentEmissions }, io);
       const runs = reads.map((read) => {
         files.push(...pathwayInputs(read));
-        const p = projectPathway(read.pathway, { params, baseline: opts.baseline, carbonFeedback: opts.carbonFeedback });
+        const p = projectPathway(read.pathway, { params, baseline: opts.baseline, carbonFeedback: opts.carbonFeedback, forcingScale });
         scoped.push(...[...p.provenance.notes, ...p.notes].map((text) => ({ pathway: p.name, text })));
         return { projection: p, pathway: read.pathway };
       });
@@ -84,7 +85,7 @@ export function compareCommand(io: CliIo): Command {
           }
           // With an ensemble, the line is its median and the ranges its percentiles (same seed per pathway).
           const { input, notes: inputNotes } = ensembleInput(pathway, params, { baseline: opts.baseline });
-          const e = await runEnsemble(input, { members: opts.members, seed: opts.seed, thresholds: opts.thresholds, baseline: opts.baseline });
+          const e = await runEnsemble(input, { members: opts.members, seed: opts.seed, thresholds: opts.thresholds, baseline: opts.baseline, source: memberSource(false) });
           scoped.push(...[...inputNotes, ...e.notes].map((text) => ({ pathway: p.name, ensemble: true, text })));
           shared ??= ensembleParameters(e.config);
           const pc = e.percentiles;
@@ -103,7 +104,7 @@ export function compareCommand(io: CliIo): Command {
         opts.members !== undefined
           ? ['warming_k and the milestone values are the ensemble median of each pathway; its crossing years are the first years by which half of the members have crossed']
           : [];
-      const notes = [...paramNotes, ...(baselineNote ? [baselineNote] : []), ...medianNote, ...scopedNotes(scoped, runs.map((r) => r.projection.name))];
+      const notes = [...paramNotes, ...(forcingNote && opts.members === undefined ? [forcingNote] : []), ...(baselineNote ? [baselineNote] : []), ...medianNote, ...scopedNotes(scoped, runs.map((r) => r.projection.name))];
       const c = comparePathways(pathways, {
         milestoneYears: opts.years ? chosenYears(opts.years, runs.map((r) => r.projection.years)) : milestoneYears(firstFuture, last, 10),
         thresholdsK: opts.thresholds,
@@ -127,8 +128,8 @@ export function compareCommand(io: CliIo): Command {
           ...(opts.members !== undefined
             ? {
                 Ensemble:
-                  `${opts.members} members per pathway, seed ${opts.seed}; lines are ensemble medians; ECS, TCR, 2xCO2 and aerosol forcing ` +
-                  'sampled to the IPCC AR6 assessed ranges, not constrained by observed warming; crossing years and chances from the members',
+                  `${opts.members} members per pathway, seed ${opts.seed}; lines are ensemble medians; members drawn from the calibrated parameter set ` +
+                  '(constrained by the observed record, pathways/calibrated-members.json); crossing years and chances from the members',
               }
             : {}),
           'History splice': runs.map(({ projection: p }) => `${p.name}: ${p.provenance.spliceYear ? `bundled history before ${p.provenance.spliceYear}` : 'none'}`).join('; '),

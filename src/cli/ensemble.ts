@@ -15,6 +15,7 @@ import { announceWritten, pathwayInputs, tableRenderers, writeOutput } from './o
 import { allocationError, checkEnsembleMemory, checkMergeMemory } from './memory-check.js';
 import { notesAndCautions } from './notes-and-cautions.js';
 import { progressBar } from './progress.js';
+import { memberSource } from './member-source.js';
 import { unreadableReason } from './unreadable-reason.js';
 import { ensembleParameters, sha256File } from './provenance.js';
 
@@ -29,25 +30,31 @@ interface EnsembleCliOptions extends ScenarioOptions {
   splice: boolean;
   absentEmissions?: AbsentEmissionsRule;
   chart: boolean;
+  prior: boolean;
 }
 
-/** The uncertainty sentence of an ensemble's outputs. */
+/** The uncertainty sentence of an ensemble's outputs, by where its members came from. */
 function uncertaintyText(r: EnsembleResult): string {
+  const scheme = r.config.scheme;
   const carbon = r.config.emissionDriven
-    ? ' Each member also runs its own CO2 cycle, responding to its own warming, with a sampled multiplier on the pre-industrial iIRF100 r0 of its uptake feedback ' +
-      '(the 100-year integrated CO2 impulse response; Joos et al. 2013 multi-model spread); CH4 and N2O follow one central run.'
+    ? ' Each member also runs its own CO2 cycle, responding to its own warming, with its own multipliers on the pre-industrial iIRF100 r0 of its uptake feedback ' +
+      'and on the feedback\'s warming sensitivity; CH4 and N2O follow one central run.'
     : '';
+  const drawn = scheme.startsWith('calibrated set')
+    ? 'drawn from the calibrated parameter set: two-box physics, a multiplier per forcing agent and carbon-cycle parameters from a broad prior, ' +
+      'weighted by how well they reproduce observed warming (HadCRUT5), ocean heat uptake, the carbon sinks and the AR6 aerosol forcing'
+    : scheme.startsWith('prior of calibrated set')
+      ? 'drawn from the prior of the calibrated parameter set, not weighted by the observed record (the unconstrained spread, for comparison)'
+      : 'whose ECS, TCR, 2xCO2 forcing and aerosol forcing were drawn to match the IPCC AR6 assessed ranges, not constrained by observed warming';
   return (
-    `Ranges are the 5-95 % and 17-83 % spread of ${r.memberCount} members whose ECS, TCR, 2xCO2 forcing and aerosol forcing ` +
-    `were drawn to match the IPCC AR6 assessed ranges.${carbon} They do not include uncertainty in the pathway or in the model structure, ` +
-    'and they are not constrained by observed warming.'
+    `Ranges are the 5-95 % and 17-83 % spread of ${r.memberCount} members ${drawn}.${carbon} They do not include uncertainty in the pathway, ` +
+    'year-to-year internal variability, or model structure beyond these parameters.'
   );
 }
 
 /** What the model options of `run` would set, and why an ensemble draws or fixes it instead. */
 const SAMPLED =
-  'each member draws its own ECS, TCR, 2xCO2 forcing and aerosol forcing from the IPCC AR6 assessed ranges, derives its feedback and ocean exchange from them, ' +
-  'and holds the heat capacities and efficacy at the model defaults';
+  'each member takes its own feedback, heat capacities, ocean exchange, efficacy and forcing multipliers from the calibrated parameter set (or its prior with --prior)';
 
 /** Options of `run` that `ensemble` refuses. */
 const ENSEMBLE_REFUSES: RefusedOption[] = [
@@ -57,7 +64,7 @@ const ENSEMBLE_REFUSES: RefusedOption[] = [
 ];
 
 /** Why `merge` takes no model options. */
-const FROM_SHARDS = 'every setting comes from the shards (the CO2 formula they were made with; ECS, TCR, 2xCO2 and aerosol forcing are sampled per member)';
+const FROM_SHARDS = 'every setting comes from the shards (the CO2 formula they were made with; each member\'s parameters come from where the shards drew them)';
 const MERGE_REFUSES: RefusedOption[] = ['--ecs <kelvin>', '--tcr <kelvin>', '--params <file>', '--co2-formula <name>'].map((flags) => ({ flags, why: FROM_SHARDS }));
 
 
@@ -70,7 +77,7 @@ function shardOption(text: string): { index: number; count: number } {
 /** `warmcast ensemble <pathway>`: seeded parameter ensemble, percentiles and exceedance probabilities. */
 export function ensembleCommand(io: CliIo): Command {
   const cmd = new Command('ensemble')
-    .description('run a seeded parameter ensemble (AR6-matched ECS, TCR, 2xCO2 and aerosol forcing): warming percentiles and threshold probabilities')
+    .description('run a seeded parameter ensemble (members drawn from the calibrated parameter set, constrained by the observed record): warming percentiles and threshold probabilities')
     .argument('<pathway>', 'pathway CSV file or bundled name')
     .option('-n, --members <count>', 'ensemble members', wholeNumberOption('--members', 1), 1000)
     .option('--seed <integer>', 'random seed (same seed, same output on any machine, and shards merged equal one run)', wholeNumberOption('--seed', 0), 1)
@@ -81,11 +88,12 @@ export function ensembleCommand(io: CliIo): Command {
     .addOption(absentEmissionsOption())
     .option('--no-splice', 'do not splice a pathway that starts late onto the bundled history')
     .option('--no-chart', 'omit the terminal chart')
+    .option('--prior', 'draw the members from the prior of the calibrated set, unweighted by the observed record: the unconstrained spread, for comparison', false)
     .addOption(new Option('--co2-formula <name>', 'CO2 forcing: ar6 (Meinshausen et al. 2020 + AR6 adjustment) or log (Myhre et al. 1998)').choices(['ar6', 'log']).default('ar6', 'ar6'));
   refuseOptions(addScenarioOptions(cmd, false), ENSEMBLE_REFUSES)
     .addHelpText(
       'after',
-      '\nECS, TCR, 2xCO2 and aerosol forcing are sampled per member, so --ecs, --tcr and --params are not taken.\n' +
+      '\nEach member takes its parameters from the calibrated set (pathways/calibrated-members.json), so --ecs, --tcr and --params are not taken;\n--prior draws from its prior instead, to show what the observed record adds.\n' +
         '\nExamples:\n  warmcast ensemble swift --members 2000 --seed 7 --out swift-ens.csv\n' +
         '  warmcast ensemble swift --members 1000000 --seed 7 --shard 3/100 --out shard-3.json   # one task of an array job\n' +
         '  warmcast merge shard-*.json --out swift-ens.csv\n',
@@ -110,6 +118,7 @@ export function ensembleCommand(io: CliIo): Command {
           thresholds: opts.thresholds,
           baseline: opts.baseline,
           shard: opts.shard,
+          source: memberSource(opts.prior),
           onProgress: progressBar(io, 'members', 20_000),
         }),
       );

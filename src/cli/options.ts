@@ -7,6 +7,8 @@ import { ConfigError, InputError } from '../errors.js';
 import { parseAbsentEmissionsRule } from '../forcing/absent-emissions.js';
 import { AR6_REFERENCE_PERIOD } from '../report/index.js';
 import { parseParams } from '../io/read-params.js';
+import { readCalibratedSet } from '../io/read-calibrated-set.js';
+import { representativeParams } from '../ensemble/calibrated-set.js';
 import type { CliIo } from './cli-io.js';
 import { unreadableReason } from './unreadable-reason.js';
 
@@ -144,8 +146,8 @@ export interface ModelOptions {
 export function addModelOptions(cmd: Command): Command {
   return cmd
     .option('--params <file>', 'model parameters JSON (any subset of the keys `warmcast calibrate` prints)')
-    .option('--ecs <kelvin>', 'equilibrium climate sensitivity target, K (default 3.0, IPCC AR6 best estimate)', numberOption('--ecs'))
-    .option('--tcr <kelvin>', 'transient climate response target, K (default 1.8, IPCC AR6 best estimate)', numberOption('--tcr'))
+    .option('--ecs <kelvin>', 'equilibrium climate sensitivity target, K (default: the calibrated set\'s posterior median model)', numberOption('--ecs'))
+    .option('--tcr <kelvin>', 'transient climate response target, K (default: the calibrated set\'s posterior median model)', numberOption('--tcr'))
     .addOption(
       new Option('--co2-formula <name>', 'CO2 forcing: ar6 (Meinshausen et al. 2020 + AR6 adjustment) or log (Myhre et al. 1998)')
         .choices(['ar6', 'log'])
@@ -200,7 +202,7 @@ export function resolveModelParams(
   opts: ModelOptions,
   io: CliIo,
   overrides: CalibrationTargets = {},
-): { params: ClimateParams; paramsFile?: string; notes: string[] } {
+): { params: ClimateParams; paramsFile?: string; notes: string[]; forcingScale: Record<string, number>; forcingNote?: string } {
   let fromFile: CalibrationTargets = {};
   let paramsFile: string | undefined;
   if (opts.params !== undefined) {
@@ -225,7 +227,18 @@ export function resolveModelParams(
   // A file that fixes gamma without stating tcr_k still implies a TCR: keep that one.
   if (rederived.includes('exchangeWm2K') && targets.tcrK === undefined) targets.tcrK = calibrate(fromFile).tcrK;
   for (const k of rederived) delete targets[k];
-  const params = calibrate(targets);
+  // Whatever the user leaves open comes from the calibrated set's representative member (posterior
+  // medians): its heat capacities, efficacy and CO2 forcing always, its lambda and gamma unless an
+  // ECS or TCR target (flag or file) asks for them to be solved.
+  const representative = representativeParams(readCalibratedSet());
+  const fromSet: CalibrationTargets = { ...representative.targets };
+  if (targets.ecsK !== undefined || targets.feedbackWm2K !== undefined) delete fromSet.feedbackWm2K;
+  if (targets.ecsK !== undefined || targets.tcrK !== undefined || targets.exchangeWm2K !== undefined) delete fromSet.exchangeWm2K;
+  if (targets.ecsK !== undefined && targets.feedbackWm2K === undefined && targets.tcrK === undefined) {
+    // A new ECS alone keeps the set's TCR (gamma re-solved for it), as --ecs did with the old defaults.
+    fromSet.tcrK = calibrate({ ...representative.targets, ...fromFile, co2Formula: targets.co2Formula }).tcrK;
+  }
+  const params = calibrate({ ...fromSet, ...targets });
 
   const notes: string[] = [];
   if (rederived.length > 0) {
@@ -237,7 +250,11 @@ export function resolveModelParams(
         `TCR ${+params.tcrK.toFixed(4)} K; the file's other parameters are kept`,
     );
   }
-  return { params, paramsFile, notes };
+  const scaled = Object.entries(representative.forcingScale).filter(([, v]) => v !== 1);
+  const forcingNote = scaled.length > 0
+    ? `forcing multipliers of the calibrated set's posterior medians: ${scaled.map(([a, v]) => `${a} x${+v.toFixed(3)}`).join(', ')} (CO2 through forcing_2x_wm2)`
+    : undefined;
+  return { params, paramsFile, notes, forcingScale: representative.forcingScale, forcingNote };
 }
 
 /** JSON key of each calibration input, for notes. */

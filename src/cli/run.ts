@@ -55,9 +55,9 @@ export function runCommand(io: CliIo): Command {
         throw new ConfigError('--out takes one pathway; to put several side by side use `warmcast compare`', 'out');
       }
       if (!(opts.rtol > 0 && opts.atol > 0)) throw new ConfigError('--rtol and --atol must be positive', 'rtol');
-      const { params, paramsFile, notes: paramNotes } = resolveModelParams(opts, io);
+      const { params, paramsFile, notes: paramNotes, forcingScale, forcingNote } = resolveModelParams(opts, io);
       const baselineNote = thresholdBaselineNote(opts.baseline);
-      const runNotes = [...paramNotes, ...(baselineNote ? [baselineNote] : [])];
+      const runNotes = [...paramNotes, ...(forcingNote ? [forcingNote] : []), ...(baselineNote ? [baselineNote] : [])];
       const projections: { projection: Projection; whole: Projection; files: string[] }[] = [];
       for (const read of reads) {
         const full = projectPathway(read.pathway, {
@@ -65,6 +65,7 @@ export function runCommand(io: CliIo): Command {
           baseline: opts.baseline,
           method: opts.method,
           carbonFeedback: opts.carbonFeedback,
+          forcingScale,
           tolerances: { relativeTolerance: opts.rtol, absoluteTolerance: opts.atol, maxStepsPerUnit: 2000 },
         });
         projections.push({ projection: clipProjection(full, opts.from, opts.to), whole: full, files: pathwayInputs(read) });

@@ -140,6 +140,8 @@ function runWithCarbon(
   const otherForcingInto = blockForcing(task, block, OWN_GASES);
   const ones = new Float64Array(m).fill(1);
   const irf100 = v.irf100_scale ?? ones;
+  // The carbon cycle sees the member's warming times its multiplier on the uptake's warming sensitivity rT (calibrated set).
+  const uptakeWarming = v.uptake_warming_scale ?? ones;
   const [co2Scale, ch4Scale, n2oScale] = OWN_GASES.map((a) => v[forcingScaleKey(a)] ?? ones);
   const ghg = ghgForcingFunction({ co2Formula: task.co2Formula });
   const { co2: drivers, ch4Ppb, n2oPpb } = carbon;
@@ -151,7 +153,7 @@ function runWithCarbon(
   const d = new Float64Array(m);
   // Year k's carbon step (with each member's warming of year k - 1, now in t), then its forcing.
   const yearInto = (k: number, out: Float64Array) => {
-    for (let r = 0; r < m; r++) ppm[r] = co2YearInto(states[r], drivers, k, t[r], irf100[r]);
+    for (let r = 0; r < m; r++) ppm[r] = co2YearInto(states[r], drivers, k, uptakeWarming[r] * t[r], irf100[r]);
     storeCo2?.(k, ppm);
     otherForcingInto(k, out);
     for (let r = 0; r < m; r++) {

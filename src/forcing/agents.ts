@@ -43,6 +43,11 @@ export interface ForcingOptions {
   forcing2xWm2?: number;
   /** Multiplier on prescribed aerosol forcing, both aerosol-radiation and aerosol-cloud parts (1 = as given). Ensembles sample it. */
   aerosolScale?: number;
+  /**
+   * Multiplier per agent other than CO2 (whose scale is `forcing2xWm2`), 1 where absent: the
+   * calibrated set's representative member carries one per agent. Applies on top of `aerosolScale`.
+   */
+  agentScale?: Partial<Record<ForcingAgent, number>>;
 }
 
 /** Greenhouse-gas ERF at one instant, W m-2. */
@@ -61,10 +66,12 @@ export interface GhgForcing {
 export function ghgForcingFunction(options: ForcingOptions): (co2Ppm: number, ch4Ppb: number, n2oPpb: number) => GhgForcing {
   const formula = options.co2Formula;
   const co2Scale = options.forcing2xWm2 === undefined ? 1 : options.forcing2xWm2 / forcingOfDoubling(formula);
+  const ch4Scale = options.agentScale?.ch4 ?? 1;
+  const n2oScale = options.agentScale?.n2o ?? 1;
   return (co2Ppm, ch4Ppb, n2oPpb) => ({
     co2: co2Scale * co2Forcing(formula, co2Ppm, n2oPpb),
-    ch4: ch4ErfAr6(ch4Ppb, n2oPpb),
-    n2o: n2oErfAr6(n2oPpb, co2Ppm, ch4Ppb),
+    ch4: ch4Scale * ch4ErfAr6(ch4Ppb, n2oPpb),
+    n2o: n2oScale * n2oErfAr6(n2oPpb, co2Ppm, ch4Ppb),
   });
 }
 
@@ -123,7 +130,7 @@ export function forcingByAgent(length: number, inputs: ForcingInputs, options: F
   for (const agent of PRESCRIBED_FORCING_AGENTS) {
     const out = byAgent[agent];
     const column = agentColumn(agent);
-    const scale = (AEROSOL_AGENTS as readonly string[]).includes(agent) ? aerosolScale : 1;
+    const scale = ((AEROSOL_AGENTS as readonly string[]).includes(agent) ? aerosolScale : 1) * (options.agentScale?.[agent] ?? 1);
     const given = p[column];
     if (given) {
       for (let i = 0; i < length; i++) out[i] = scale * given[i];

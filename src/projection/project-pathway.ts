@@ -27,6 +27,12 @@ export interface ProjectionOptions {
   aerosolScale?: number;
   /** Carbon-climate feedback on CO2 uptake in emission-driven runs (default true). */
   carbonFeedback?: boolean;
+  /**
+   * Multiplier per forcing agent (1 where absent), as the calibrated set's representative member
+   * carries them (ForcingOptions.agentScale, in concentration- and emission-driven runs alike); CO2
+   * is scaled through `params.forcing2xWm2`.
+   */
+  forcingScale?: Partial<Record<ForcingAgent, number>>;
 }
 
 /**
@@ -96,7 +102,7 @@ export function projectPathway(pathway: Pathway, options: ProjectionOptions): Pr
   // forcingByAgent adds nothing for an absent forcing column; say so, as for the gases above.
   const zeroForcing = forcingColumnsNotGiven(s);
   if (zeroForcing.length > 0) notes.push(`${zeroForcing.join(', ')} not given: taken as zero`);
-  const forcingOptions: ForcingOptions = { co2Formula: params.co2Formula, forcing2xWm2: params.forcing2xWm2, aerosolScale: options.aerosolScale };
+  const forcingOptions: ForcingOptions = { co2Formula: params.co2Formula, forcing2xWm2: params.forcing2xWm2, aerosolScale: options.aerosolScale, agentScale: options.forcingScale };
   const tolerances = options.tolerances ?? DEFAULT_TOLERANCES;
 
   if (EMISSION_COLUMNS.some((c) => s[c] !== undefined)) {
@@ -173,3 +179,4 @@ export function rebase(years: Float64Array, values: Float64Array, baseline: read
   const mean = sum / (to - from + 1);
   return values.map((v) => v - mean);
 }
+

@@ -20,11 +20,11 @@ export function comparisonUncertainty(c: Comparison, where: 'with-charts' | 'tex
     'the 17-83 % (likely) range in parentheses and the 5-95 % (very likely) range in brackets' +
     (where === 'text' ? ', ' : ', shaded in the charts (the likely range darker), ') +
     'across the sampled model parameters. They cover parameter uncertainty only; uncertainty in the pathway ' +
-    'itself and in the model structure comes on top. The parameters are drawn to the IPCC AR6 assessed ranges and are not ' +
-    'constrained by observed warming, so the ranges show what those assessed ranges imply rather than a projection narrowed by the historical record.' +
+    'itself and in the model structure comes on top. The members come from the calibrated parameter set: a broad prior over the ' +
+    'two-box physics, forcing multipliers and carbon cycle, weighted by how well each member reproduces the observed warming, ocean heat uptake, carbon sinks and AR6 aerosol forcing.' +
     (c.pathways.some((p) => p.range && p.co2Gtco2)
-      ? ' Each member of an emission-driven pathway also runs its own CO2 cycle, responding to its own warming, with a sampled multiplier on the ' +
-        'pre-industrial iIRF100 of the carbon-cycle feedback (the Joos et al. 2013 spread); CH4 and N2O follow one central run.'
+      ? ' Each member of an emission-driven pathway also runs its own CO2 cycle, responding to its own warming, with its own multipliers on the ' +
+        'pre-industrial iIRF100 of the carbon-cycle feedback and on its warming sensitivity; CH4 and N2O follow one central run.'
       : '') +
     (without.length > 0 ? ` ${without.join(', ')}: single central estimates, no range.` : '')
   );

@@ -4,8 +4,9 @@ import { ar6GasForcing2019, doublingForcing } from './forcing-checks.js';
 import { erfHistory } from './erf-history-checks.js';
 import { hadcrut5Fit } from './hadcrut-checks.js';
 import { historyObserved } from './history-checks.js';
+import { posteriorRanges } from './posterior-checks.js';
 import type { PublishedCheck, VerificationRow } from './published-check.js';
-import { twoBoxAnalytic } from './two-box-checks.js';
+import { twoBoxAnalytic, twoBoxOdex } from './two-box-checks.js';
 
 /**
  * Every published check `warmcast verify` runs, in the order of the table: forcing, the two-box
@@ -15,6 +16,7 @@ export const PUBLISHED_CHECKS: readonly PublishedCheck[] = [
   ar6GasForcing2019,
   doublingForcing,
   twoBoxAnalytic,
+  twoBoxOdex,
   calibrationRoundTrip,
   joosPulse,
   historicalEmissions,
@@ -23,6 +25,7 @@ export const PUBLISHED_CHECKS: readonly PublishedCheck[] = [
   erfHistory,
   historyObserved,
   hadcrut5Fit,
+  posteriorRanges,
 ];
 
 /**

@@ -1,5 +1,8 @@
+import { energyBalance } from '../climate/energy-balance.js';
 import { abruptResponse, type TwoBoxParams } from '../climate/two-box.js';
 import { propagateTwoBoxInto } from '../climate/two-box-step.js';
+import { forcingByAgent } from '../forcing/agents.js';
+import { loadHistory } from '../io/bundled-pathways.js';
 import type { PublishedCheck, VerificationRow } from './published-check.js';
 
 /**
@@ -48,5 +51,40 @@ export const twoBoxAnalytic: PublishedCheck = {
       },
     ];
     return rows;
+  },
+};
+
+/**
+ * The two-box step against odex, the ODE integration it replaced as the default (rtol = atol =
+ * 1e-10), on the bundled history's total forcing for three parameter sets spanning CMIP-like fits:
+ * the largest difference in surface temperature over 1750-2024.
+ */
+export const twoBoxOdex: PublishedCheck = {
+  id: 'two-box-odex',
+  run: () => {
+    const history = loadHistory();
+    const s = history.series;
+    const forcing = forcingByAgent(history.years.length, { co2Ppm: s.co2_ppm, ch4Ppb: s.ch4_ppb, n2oPpb: s.n2o_ppb, prescribed: s }, { co2Formula: 'ar6' }).total;
+    const sets: TwoBoxParams[] = [
+      CMIP5_LIKE,
+      { upperHeatCapacity: 8, deepHeatCapacity: 100, feedbackWm2K: 1.31, exchangeWm2K: 1.02, deepEfficacy: 1 },
+      { upperHeatCapacity: 4, deepHeatCapacity: 300, feedbackWm2K: 0.6, exchangeWm2K: 0.5, deepEfficacy: 1.5 },
+    ];
+    let worst = 0;
+    for (const p of sets) {
+      const exact = energyBalance(p, forcing, 'exact').surfaceK;
+      const ode = energyBalance(p, forcing, 'odex').surfaceK;
+      for (let k = 0; k < forcing.length; k++) worst = Math.max(worst, Math.abs(exact[k] - ode[k]));
+    }
+    return [
+      {
+        check: 'two-box step vs odex integration of the ODE, history forcing 1750-2024, three parameter sets',
+        source: 'Held et al. 2010; Geoffroy et al. 2013b, eq. 1 (the ODE)',
+        published: 'the ODE, integrated',
+        warmcast: `largest difference ${worst.toExponential(1)} K`,
+        tolerance: 'at most 1e-6 K',
+        pass: worst <= 1e-6,
+      },
+    ];
   },
 };

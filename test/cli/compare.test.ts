@@ -94,8 +94,8 @@ describe('warmcast compare', () => {
       expect(c.slice(1)).toEqual(e.slice(1));
     }
     expect(cmp.out).toMatch(/Probability of crossing each warming level/);
-    expect(cmp.out).toMatch(/^  note: all ensembles: .*unphysical/m);
-    expect(cmp.out).toMatch(/^  caution: .*not constrained by observed warming/m);
+    expect(cmp.out).toMatch(/^  note: all ensembles: members drawn with replacement from the \d+ equally weighted members of the calibrated set/m);
+    expect(cmp.out).toMatch(/^  caution: .*weighted by how well each member reproduces the observed warming/m);
   });
 
   it('with --members the peak is the members\' own, as `warmcast ensemble` gives it for the same seed: in the headline, the table and the JSON', async () => {
@@ -131,7 +131,7 @@ describe('warmcast compare', () => {
   it('with --members refuses --ecs, --tcr and --params (each member draws its own) instead of ignoring them', async () => {
     const io = captureIo();
     expect(await main(['compare', 'steady', 'swift', '--members', '50', '--ecs', '4', '--tcr', '2'], io)).toBe(2);
-    expect(io.err).toMatch(/with --members each member draws its own ECS.*--ecs, --tcr would be ignored/);
+    expect(io.err).toMatch(/with --members each member takes its parameters from the calibrated set, so --ecs, --tcr would be ignored/);
     expect(await main(['compare', 'steady', 'swift', '--members', '50', '--co2-formula', 'log', '--no-chart'], captureIo())).toBe(0);
     const feedback = captureIo();
     expect(await main(['compare', 'swift-emissions', '--members', '50', '--no-carbon-feedback'], feedback)).toBe(2);

@@ -110,7 +110,7 @@ describe('warmcast ensemble and merge', () => {
     for (const extra of [['--ecs', '4.5'], ['--tcr=2.3'], ['--params', join(dir, 'p.json')]]) {
       const io = captureIo();
       expect(await main(['ensemble', 'swift', '--members', '20', ...extra, '--out', join(dir, 'e.csv')], io)).toBe(2);
-      expect(io.err).toMatch(/ensemble does not take --(ecs|tcr|params): each member draws its own ECS, TCR, 2xCO2 forcing and aerosol forcing/);
+      expect(io.err).toMatch(/ensemble does not take --(ecs|tcr|params): each member takes its own feedback, heat capacities, ocean exchange, efficacy and forcing multipliers from the calibrated parameter set/);
       expect(io.out).toBe('');
     }
     expect(readdirSync(dir)).toEqual(['p.json']);
@@ -160,10 +160,11 @@ describe('warmcast ensemble and merge', () => {
     const early = captureIo();
     expect(await main(['ensemble', file, '--members', '400', '--thresholds', '0.001,1.5', '--no-chart'], early)).toBe(0);
     expect(early.out).toMatch(/0\.001 K \(20-year mean\): [^\n]*; median crossing: already above at the start \(the first 20-year mean, 1750-1769\)\n/);
-    // With the bundled history (AR6 forcing), 1750-1769 is cooler than 1850-1900 in most members.
+    // With the bundled history (AR6 forcing), 1750-1769 is cooler than 1850-1900 in most (with the
+    // calibrated set: all) members, so a median crossing year is given.
     const io = captureIo();
     expect(await main(['ensemble', 'swift', '--members', '400', '--thresholds', '0.001,1.5', '--no-chart'], io)).toBe(0);
-    expect(io.out).toMatch(/0\.001 K \(20-year mean\): [^\n]*; median crossing year \d{4}; \d+ % of members already above it at the start \(1750-1769\)\n/);
+    expect(io.out).toMatch(/0\.001 K \(20-year mean\): [^\n]*; median crossing year \d{4}(; \d+ % of members already above it at the start \(1750-1769\))?\n/);
     expect(io.out).toMatch(/1\.5 K \(20-year mean\): [^\n]*; median crossing year 20\d\d\n/);
   });
 
@@ -195,7 +196,7 @@ describe('warmcast ensemble and merge', () => {
     expect(p50).toBeLessThan(p95);
     expect(p05).toBeGreaterThan(0.6);
     expect(p95).toBeLessThan(1.4);
-    expect(io.out).toMatch(/caution: .*sampled multiplier on the pre-industrial iIRF100 r0 of its uptake feedback/);
+    expect(io.out).toMatch(/caution: .*own multipliers on the pre-industrial iIRF100 r0 of its uptake feedback/);
     expect(io.out).not.toMatch(/response time/);
     const plain = captureIo();
     expect(await main(['ensemble', 'swift', '--members', '200', '--seed', '3', '--no-chart'], plain)).toBe(0);
@@ -304,7 +305,7 @@ describe('warmcast ensemble and merge', () => {
     const io = captureIo();
     expect(await main(['ensemble', 'swift', '--members', '20', '--no-chart'], io)).toBe(0);
     expect(io.out).toMatch(/^  note: spliced onto bundled history at 2025/m);
-    expect(io.out).toMatch(/^  note: sampled ECS: /m);
+    expect(io.out).toMatch(/^  note: members drawn with replacement from the \d+ equally weighted members of the calibrated set/m);
     expect(io.out.match(/only 20 members/g)).toHaveLength(1);
     expect(io.out.trimEnd().split('\n').at(-1)).toMatch(/^  caution: For decisions, defer to the official assessments/);
   });
@@ -320,3 +321,22 @@ describe('warmcast ensemble and merge', () => {
   });
 });
 
+
+describe('warmcast ensemble: calibrated members and --prior', () => {
+  it('gives the same output for the same seed, and the prior (--prior) spreads wider than the calibrated set in 2100 (the record narrows it)', async () => {
+    const dir = mkdtempSync(join(tmpdir(), 'warmcast-cal-'));
+    const runTo = async (name: string, extra: string[]) => {
+      expect(await main(['ensemble', 'delayed', '--members', '500', '--seed', '3', '--no-chart', '--out', join(dir, name), ...extra], captureIo())).toBe(0);
+      return JSON.parse(readFileSync(join(dir, name), 'utf8')) as { rows: Record<string, number>[] };
+    };
+    const a = await runTo('a.json', []);
+    const b = await runTo('b.json', []);
+    expect(b.rows).toEqual(a.rows);
+    const prior = await runTo('prior.json', ['--prior']);
+    const width = (r: { rows: Record<string, number>[] }) => {
+      const row = r.rows.find((x) => x.year === 2100)!;
+      return row.warming_p95_k - row.warming_p05_k;
+    };
+    expect(width(prior)).toBeGreaterThan(width(a));
+  });
+});

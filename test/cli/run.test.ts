@@ -7,6 +7,14 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { captureIo } from '../../src/cli/cli-io.js';
 import { main } from '../../src/cli/main.js';
 import { calibrate, paramsToJson } from '../../src/climate/index.js';
+import { representativeParams } from '../../src/ensemble/calibrated-set.js';
+import { readCalibratedSet } from '../../src/io/read-calibrated-set.js';
+
+/** The calibrated set's heat capacities, efficacy and CO2 forcing: what ECS and TCR targets are solved with by default. */
+function setPhysics() {
+  const { feedbackWm2K: _lambda, exchangeWm2K: _gamma, ...physics } = representativeParams(readCalibratedSet()).targets;
+  return physics;
+}
 
 const tmp = () => mkdtempSync(join(tmpdir(), 'warmcast-run-'));
 
@@ -38,7 +46,8 @@ describe('warmcast run (in-process)', () => {
     const meta = JSON.parse(readFileSync(join(dir, 'out.meta.json'), 'utf8'));
     expect(meta.tool).toBe('warmcast');
     expect(meta.inputs[0].sha256).toMatch(/^[0-9a-f]{64}$/);
-    expect(meta.parameters.ecs_k).toBe(3);
+    // The default model is the calibrated set's representative member (posterior medians).
+    expect(meta.parameters).toEqual(paramsToJson(calibrate(representativeParams(readCalibratedSet()).targets)));
     expect(meta.baseline).toBe('1850-1900');
   });
 
@@ -120,7 +129,7 @@ describe('warmcast run --params with --ecs', () => {
     expect(r.out).toContain('ECS 4.00 K, TCR 1.80 K');
     expect(r.out).toMatch(/note: --ecs 4 overrides the ECS target of params\.json, so the feedback_wm2k and exchange_wm2k it gives/);
     const meta = JSON.parse(readFileSync(join(dir, 'out.json'), 'utf8')).provenance;
-    expect(meta.parameters).toEqual(paramsToJson(calibrate({ ecsK: 4, tcrK: 1.8 })));
+    expect(meta.parameters).toEqual(paramsToJson(calibrate({ ...setPhysics(), ecsK: 4, tcrK: 1.8 })));
     expect(meta.notes.some((n: string) => n.includes('re-derived for ECS 4 K and TCR 1.8 K'))).toBe(true);
   });
 });
@@ -144,7 +153,7 @@ describe('warmcast calibrate', () => {
     const io = captureIo();
     expect(await main(['calibrate', '--ecs', '3', '--tcr', '1.8'], io)).toBe(0);
     const json = JSON.parse(io.out);
-    expect(json).toEqual(paramsToJson(calibrate({ ecsK: 3, tcrK: 1.8 })));
+    expect(json).toEqual(paramsToJson(calibrate({ ...setPhysics(), ecsK: 3, tcrK: 1.8 })));
     expect(io.err).toMatch(/gives TCR 1\.8000 K/);
   });
 

@@ -13,7 +13,7 @@ describe('runPublishedChecks', () => {
 
   it('covers forcing, the two-box analytic solution, the calibration round trip, Joos et al. 2013, the carbon cycle and the history', () => {
     const ids = PUBLISHED_CHECKS.map((c) => c.id);
-    for (const id of ['forcing-2019', 'two-box-analytic', 'calibration-round-trip', 'joos-2013-pulse', 'historical-emissions', 'tcre', 'zec50', 'ar6-erf-history', 'history-observed', 'hadcrut5-fit']) expect(ids).toContain(id);
+    for (const id of ['forcing-2019', 'two-box-analytic', 'two-box-odex', 'calibration-round-trip', 'joos-2013-pulse', 'historical-emissions', 'tcre', 'zec50', 'ar6-erf-history', 'history-observed', 'hadcrut5-fit']) expect(ids).toContain(id);
     expect(new Set(ids).size).toBe(ids.length);
   });
 
