@@ -12,6 +12,7 @@ import { runBatch } from '../src/batch/run-batch.js';
 import { calibrate } from '../src/climate/calibrate.js';
 import { batchScenario } from '../src/cli/batch-scenario.js';
 import { runBatchThreads } from '../src/cli/batch-threads.js';
+import { memberSource } from '../src/cli/member-source.js';
 import { scenarioPathway } from '../src/io/iamc-read.js';
 import { csvSheet } from '../src/io/iamc-sheets.js';
 import { readIamcTable } from '../src/io/iamc-table.js';
@@ -30,7 +31,7 @@ const wall0 = performance.now();
 const cpu0 = process.cpuUsage();
 const table = readIamcTable('bench.csv', [csvSheet(inventedTableCsv(inventedScenarioSet(scenarioCount)), 'bench.csv')]);
 const options = { params: calibrate({}), members, seed: 1, thresholds: [1.5, 2], baseline: [1850, 1900] as [number, number] };
-const outcome = await runBatchThreads(table.scenarios, 0, table.scenarios.length, { ...options, load: {}, threads: workers });
+const outcome = await runBatchThreads(table.scenarios, 0, table.scenarios.length, { ...options, prior: false, load: {}, threads: workers });
 if (outcome.errors.length > 0) throw new Error(`${outcome.errors.length} invented scenarios failed: ${outcome.errors[0].problems[0].message}`);
 const wallS = (performance.now() - wall0) / 1000;
 const cpu = process.cpuUsage(cpu0);
@@ -42,7 +43,7 @@ const target = 1000 * 600;
 const years = scenarioPathway(table.scenarios[0]).pathway.years.length;
 
 // The threads change nothing: the first three rows again, in this thread alone.
-const alone = await runBatch(table.scenarios.slice(0, 3).map((s, i) => batchScenario(s, i, {})), options);
+const alone = await runBatch(table.scenarios.slice(0, 3).map((s, i) => batchScenario(s, i, {})), { ...options, source: memberSource(false) });
 if (JSON.stringify(alone.rows) !== JSON.stringify(outcome.rows.slice(0, 3))) throw new Error('rows from threads differ from rows run in one thread');
 console.log(`${scenarioCount} scenarios x ${members} members, ${years} years each (emission-driven), ${workers} thread${workers === 1 ? '' : 's'}; load average ${loadavg()[0].toFixed(1)} on ${availableParallelism()} cores`);
 console.log(`wall ${wallS.toFixed(1)} s: ${perWall.toFixed(0)} scenario-members/s; projected 1,000 x 600: ${(target / perWall).toFixed(0)} s`);

@@ -1,5 +1,5 @@
 import type { ClimateParams } from '../climate/params.js';
-import { runEnsemble, type EnsembleResult } from '../ensemble/index.js';
+import { runEnsemble, type EnsembleResult, type MemberSource } from '../ensemble/index.js';
 import { cumulativeToNetZero } from '../metrics/cumulative-to-net-zero.js';
 import { quantilesInPlace } from '../numerics/quantiles.js';
 import type { Pathway } from '../pathway.js';
@@ -26,6 +26,8 @@ export interface AssessOptions {
   /** Warming levels, K, for prob_peak_above_<t> and the median crossing years. */
   thresholds: number[];
   baseline: [number, number];
+  /** Where members come from (the calibrated set, as `warmcast ensemble` uses by default); runEnsemble's default when absent. */
+  source?: MemberSource;
 }
 
 /** One scenario's row of a batch summary: the figures planners classify scenarios by. */
@@ -78,6 +80,7 @@ export async function assessScenario(
     thresholds: options.thresholds,
     baseline: options.baseline,
     keepMembers: true,
+    ...(options.source ? { source: options.source } : {}),
   });
   const { peakK, peakYear, warming2100K } = memberFigures(result);
   const percentiles = (values: Float64Array) => {

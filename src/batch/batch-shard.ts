@@ -20,6 +20,8 @@ export interface BatchSettings {
   splice: boolean;
   /** The rule for emissions a scenario does not give (`--absent-emissions`), null when none was given. */
   absentEmissions?: unknown;
+  /** Where the members come from (`calibrated set`, or its prior). */
+  members_from?: string;
 }
 
 /** One shard of a batch: the scenarios [from, to) of the table's slice `index` of `count`. */

@@ -5,6 +5,7 @@ import { ensembleTable, type EnsembleTable } from '../ensemble/index.js';
 import type { IamcScenario } from '../io/iamc-table.js';
 import type { LoadPathwayOptions } from '../io/load-pathway.js';
 import { batchScenario } from './batch-scenario.js';
+import { memberSource } from './member-source.js';
 
 /** One scenario handed to a batch worker. */
 export interface BatchWorkerRequest {
@@ -12,7 +13,9 @@ export interface BatchWorkerRequest {
   scenario: IamcScenario;
   /** How the scenario is read (splice), as the calling thread would read it. */
   load: LoadPathwayOptions;
-  options: AssessOptions;
+  /** Ensemble settings without the member source, which cannot cross threads: `prior` says which the worker builds. */
+  options: Omit<AssessOptions, 'source'>;
+  prior: boolean;
   /** Whether to send back the yearly table (for `--out-dir`). */
   yearly: boolean;
 }
@@ -28,7 +31,8 @@ export interface BatchWorkerReply {
 export type OnYearly = (index: number, table: EnsembleTable, notes: string[], ensembleNotes: string[]) => void;
 
 /**
- * Assesses the table's scenarios [from, to) on `threads` threads, one whole scenario per thread at a
+ * Assesses the table's scenarios [from, to) with members from the calibrated set (or its prior with
+ * `prior`, as `warmcast ensemble --prior`) on `threads` threads, one whole scenario per thread at a
  * time (reading, the central run and a one-thread ensemble): with 600 members a scenario is about a
  * quarter of a second of work, so scenarios, not members, are the unit that keeps both cores busy,
  * and the calling thread stays free to hand out work and write files. The rows are those of runBatch
@@ -41,15 +45,16 @@ export async function runBatchThreads(
   scenarios: IamcScenario[],
   from: number,
   to: number,
-  options: AssessOptions & { load: LoadPathwayOptions; threads: number; onProgress?: (done: number, total: number) => void; onYearly?: OnYearly },
+  options: Omit<AssessOptions, 'source'> & { prior: boolean; load: LoadPathwayOptions; threads: number; onProgress?: (done: number, total: number) => void; onYearly?: OnYearly },
 ): Promise<BatchOutcome> {
-  const { load, threads, onProgress, onYearly, ...assess } = options;
+  const { load, threads, onProgress, onYearly, prior, ...assess } = options;
   const count = to - from;
   const size = Math.min(threads, count);
   if (!compiled() || size <= 1) {
     const items = scenarios.slice(from, to).map((s, i) => batchScenario(s, from + i, load));
     return runBatch(items, {
       ...assess,
+      source: memberSource(prior),
       onProgress,
       ...(onYearly ? { onAssessed: (s, result, notes) => onYearly(s.index, ensembleTable(result), notes, result.notes) } : {}),
     });
@@ -65,7 +70,7 @@ export async function runBatchThreads(
             const give = () => {
               if (next >= to) return resolve();
               const index = next++;
-              const request: BatchWorkerRequest = { index, scenario: scenarios[index], load, options: assess, yearly: onYearly !== undefined };
+              const request: BatchWorkerRequest = { index, scenario: scenarios[index], load, options: assess, prior, yearly: onYearly !== undefined };
               worker.postMessage(request);
             };
             worker.on('message', (reply: BatchWorkerReply) => {

@@ -44,6 +44,7 @@ interface BatchOptions {
   workers?: number;
   splice: boolean;
   absentEmissions?: AbsentEmissionsRule;
+  prior: boolean;
 }
 
 function shardOption(text: string): { index: number; count: number } {
@@ -64,6 +65,7 @@ export function batchCommand(io: CliIo): Command {
     .option('-o, --out <file>', 'write the summary: .csv (+ .meta.json, + .errors.csv), .xlsx, .md, .json; - for CSV on stdout; with --shard a .json shard file for `warmcast merge`')
     .option('--out-dir <dir>', 'also write each scenario\'s yearly warming percentiles and probabilities to DIR/<model>--<scenario>.csv (+ .meta.json)')
     .option('--shard <K/N>', 'assess only the K-th of N equal slices of the scenarios and write a shard file (--out NAME.json); combine with `warmcast merge`', shardOption)
+    .option('--prior', 'draw the members from the prior of the calibrated set, unweighted by the observed record (the unconstrained spread, for comparison)', false)
     .option('--workers <count>', 'threads (default one per core; the output does not depend on it)', wholeNumberOption('--workers', 1))
     .addOption(absentEmissionsOption())
     .option('--no-splice', 'do not splice scenarios onto the bundled history')
@@ -102,6 +104,7 @@ export function batchCommand(io: CliIo): Command {
         co2Formula: params.co2Formula,
         splice: opts.splice,
         absentEmissions: opts.absentEmissions ?? null,
+        members_from: opts.prior ? 'prior of the calibrated set' : 'calibrated set',
       };
       const inputs = [path, join(bundledPathwaysDir(), 'history.csv')];
       let ensembleNotes: string[] = [];
@@ -113,6 +116,7 @@ export function batchCommand(io: CliIo): Command {
         thresholds,
         baseline: opts.baseline,
         load: { splice: opts.splice, absentEmissions: opts.absentEmissions },
+        prior: opts.prior,
         threads: opts.workers ?? availableParallelism(),
         onProgress: progressBar(io, 'scenarios', 1),
         onYearly: (index, t, notes, runNotes) => {
@@ -260,7 +264,7 @@ function batchNotes(thresholds: number[]): string[] {
 }
 
 function batchUncertainty(members: number): string {
-  return `Ranges are the spread of ${members} ensemble members per scenario (climate response, forcing scales and carbon cycle sampled); they do not include uncertainty in the scenarios or in the model structure. Categories are this model's reading of the AR6 WG3 criteria, not the IPCC's classification of these scenarios.`;
+  return `Ranges are the spread of ${members} ensemble members per scenario, drawn from the calibrated parameter set (climate response, forcing scales and carbon cycle, constrained by the observed record); they do not include uncertainty in the scenarios or in the model structure. Categories are this model's reading of the AR6 WG3 criteria, not the IPCC's classification of these scenarios.`;
 }
 
 function batchCaution(members: number): string {
