@@ -13,7 +13,7 @@
  *
  * Stages timed (median of several repetitions, after a warm-up run that is not reported): read (readTextFile: size check,
  * strict UTF-8 decode), validate (parsePathway), interpolate (toAnnual), project (projectPathway with
- * the default calibration and odex, then the exact propagator for comparison), write (formatCsv of the
+ * the default calibration and odex, then the exact propagator for comparison), write (csvText of the
  * projection plus writeFileAtomic). Printed: times, rows per second of the input stages, and the ratio
  * of the per-row input time at 100,000 rows to that at 1,000 (1 means linear).
  *
@@ -27,7 +27,8 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { calibrate } from '../src/climate/index.js';
 import { InputError } from '../src/errors.js';
-import { formatCsv, MAX_PATHWAY_BYTES, parsePathway, readTextFile, toAnnual, writeFileAtomic } from '../src/io/index.js';
+import { csvText } from '../src/report/index.js';
+import { MAX_PATHWAY_BYTES, parsePathway, readTextFile, toAnnual, writeFileAtomic } from '../src/io/index.js';
 import type { Pathway } from '../src/pathway.js';
 import { projectPathway, type Projection } from '../src/projection/index.js';
 
@@ -89,7 +90,7 @@ function timed<T>(repeats: number, fn: () => T): { ms: number; result: T } {
 
 function projectionCsv(p: Projection): string {
   const names = Object.keys(p.columns);
-  return formatCsv({ columns: ['year', ...names], data: [p.years, ...names.map((n) => p.columns[n])] });
+  return csvText({ name: 'data', columns: [{ key: 'year', values: p.years }, ...names.map((key) => ({ key, values: p.columns[key] }))] });
 }
 
 const mb = (bytes: number) => (bytes / 1e6).toFixed(1);

@@ -16,8 +16,5 @@ export { ensembleHeadlines, ensembleTable, mergeShards, runEnsemble, shardFromJs
 export type { EnsembleHeadlines, EnsembleInput, EnsembleOptions, EnsembleResult, EnsembleSampling, MemberParameters, MemberSource } from './ensemble/index.js';
 export { PUBLISHED_CHECKS, runPublishedChecks } from './verify/index.js';
 export type { PublishedCheck, VerificationRow } from './verify/index.js';
-export { comparisonHtml, comparisonMarkdown, svgChart, terminalChart, htmlReport, standardCautions } from './report/index.js';
-export { readScenarioTable, selectScenario, scenarioPathway, isScenarioTable, describeScenarioTable } from './io/index.js';
-export type { IamcScenario, IamcTable, ScenarioChoice } from './io/index.js';
-export { assessScenario, runBatch, batchSummaryTable, mergeBatchShards, warmingCategory, AR6_WARMING_CATEGORIES } from './batch/index.js';
-export type { BatchOutcome, ScenarioAssessment, WarmingCategory } from './batch/index.js';
+export { comparisonDocument, ensembleDocument, OUTPUT_FORMATS, renderDocument, runDocument, svgChart, terminalChart, terminalText, htmlReport, standardCautions } from './report/index.js';
+export type { OutputDocument, OutputTable } from './report/index.js';

@@ -1,4 +1,4 @@
-import type { Table } from '../io/table.js';
+import type { OutputColumn, OutputTable } from '../report/output-table.js';
 import { BATCH_PERCENTILE_NAMES } from './assess-scenario.js';
 import type { BatchOutcome } from './run-batch.js';
 
@@ -22,19 +22,17 @@ export function medianCrossingColumn(thresholdK: number): string {
  * @param outcome rows of runBatch (or merged shards)
  * @param thresholds the batch's levels, K
  */
-export function batchSummaryTable(outcome: BatchOutcome, thresholds: readonly number[]): Table {
+export function batchSummaryTable(outcome: BatchOutcome, thresholds: readonly number[]): OutputTable {
   const rows = outcome.rows;
-  const text: Record<string, string[]> = {};
-  const columns: string[] = [];
-  const data: Float64Array[] = [];
-  const addText = (name: string, values: string[]) => {
-    columns.push(name);
-    text[name] = values;
-  };
-  const addNumber = (name: string, values: (number | null)[]) => {
-    columns.push(name);
-    data.push(Float64Array.from(values, (v) => (v === null ? NaN : v)));
-  };
+  const columns: OutputColumn[] = [];
+  const addText = (key: string, values: string[]) => columns.push({ key, values });
+  // Human formats: years and cumulative CO2 as whole numbers, shares to two decimals, warming by its unit (K, two).
+  const addNumber = (key: string, values: (number | null)[]) =>
+    columns.push({
+      key,
+      values: Float64Array.from(values, (v) => (v === null ? NaN : v)),
+      ...(key.includes('year') || key.startsWith('cumulative_') ? { digits: 0 } : key.startsWith('prob_') ? { digits: 2 } : {}),
+    });
   addText('model', rows.map((r) => r.model));
   addText('scenario', rows.map((r) => r.scenario));
   addText('category', rows.map((r) => r.category));
@@ -48,11 +46,11 @@ export function batchSummaryTable(outcome: BatchOutcome, thresholds: readonly nu
   addNumber('cumulative_co2_to_net_zero_gtco2', rows.map((r) => r.cumulativeCo2ToNetZeroGtco2));
   addNumber('cumulative_co2_from_year', rows.map((r) => r.cumulativeFromYear));
   addText('filled_by', rows.map((r) => r.filledBy));
-  return { columns, data, textColumns: text };
+  return { name: 'summary', caption: 'one row per scenario assessed', columns };
 }
 
 /** The errors of a batch as a table: one row per problem, with model, scenario, file, sheet, row, column, variable, code and message. */
-export function batchErrorTable(outcome: BatchOutcome): Table {
+export function batchErrorTable(outcome: BatchOutcome): OutputTable {
   const cells: Record<string, string[]> = { model: [], scenario: [], file: [], sheet: [], row: [], column: [], variable: [], code: [], problem: [] };
   for (const e of outcome.errors) {
     for (const p of e.problems) {
@@ -67,5 +65,5 @@ export function batchErrorTable(outcome: BatchOutcome): Table {
       cells.problem.push(p.message + (p.value !== undefined ? ` (got "${p.value}")` : '') + (p.expected !== undefined ? ` (expected ${p.expected})` : ''));
     }
   }
-  return { columns: Object.keys(cells), data: [], textColumns: cells };
+  return { name: 'errors', caption: 'scenarios that failed', columns: Object.entries(cells).map(([key, values]) => ({ key, values })) };
 }

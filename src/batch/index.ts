@@ -10,6 +10,5 @@ export type { BatchError, BatchOutcome, BatchScenario } from './run-batch.js';
 export { batchSummaryTable, batchErrorTable, probPeakAboveColumn, medianCrossingColumn } from './batch-summary.js';
 export { batchShardToJson, batchShardFromJson, isBatchShardText, mergeBatchShards, BATCH_SHARD_FORMAT, BATCH_SHARD_VERSION } from './batch-shard.js';
 export type { BatchSettings, BatchShard } from './batch-shard.js';
-export { batchWorkbook } from './batch-workbook.js';
 export { AR6_WARMING_CATEGORIES, categoryEvidence, warmingCategory } from './warming-category.js';
 export type { CategoryEvidence, WarmingCategory } from './warming-category.js';

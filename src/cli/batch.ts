@@ -1,26 +1,24 @@
 import { Command, InvalidArgumentError, Option } from 'commander';
 import { availableParallelism } from 'node:os';
 import { extname, join, resolve } from 'node:path';
-import { closeSync, mkdirSync, openSync, readFileSync, readSync } from 'node:fs';
+import { closeSync, existsSync, mkdirSync, openSync, readFileSync, readSync } from 'node:fs';
 import { BATCH_PERCENTILE_NAMES, CUMULATIVE_FROM, PEAK_YEARS } from '../batch/assess-scenario.js';
 import { batchErrorTable, batchSummaryTable, medianCrossingColumn, probPeakAboveColumn } from '../batch/batch-summary.js';
 import { batchShardFromJson, batchShardToJson, isBatchShardText, mergeBatchShards, type BatchSettings } from '../batch/batch-shard.js';
-import { batchWorkbook } from '../batch/batch-workbook.js';
 import { batchErrorLines, type BatchOutcome } from '../batch/run-batch.js';
 import { runBatchThreads } from './batch-threads.js';
 import { AR6_WARMING_CATEGORIES } from '../batch/warming-category.js';
 import { ConfigError, InputError, PartialFailureError } from '../errors.js';
 import { shardRange } from '../ensemble/index.js';
 import { readScenarioTable } from '../io/iamc-read.js';
-import { bundledPathwaysDir, formatCsv, formatJson, formatMarkdown, writeFilesAtomic, type Table } from '../io/index.js';
-import { plainTable, standardCautions } from '../report/index.js';
+import { bundledPathwaysDir, writeFilesAtomic } from '../io/index.js';
+import { csvText, shortCaution, standardCautions, type OutputDocument, type OutputTable } from '../report/index.js';
 import type { CliIo } from './cli-io.js';
-import { notesAndCautions } from './notes-and-cautions.js';
 import { absentEmissionsOption, baselineOption, pathwayArg, thresholdsOption, wholeNumberOption } from './options.js';
 import type { AbsentEmissionsRule } from '../forcing/absent-emissions.js';
-import { announceWritten, tableRenderers, writeOutput } from './output.js';
+import { announceWritten, checkOutExtension, printDocument, writeDocument, type WrittenFile } from './output.js';
 import { progressBar } from './progress.js';
-import { buildProvenance, sha256File, type Provenance } from './provenance.js';
+import { sha256File } from './provenance.js';
 import { resolveModelParams } from './options.js';
 
 /** Members per scenario when `--members` is not given: enough for the 5-95 % range of a 1,000-scenario set in minutes. */
@@ -29,8 +27,8 @@ export const BATCH_DEFAULT_MEMBERS = 600;
 /** Levels a batch always reports (the AR6 WG3 categories and planners' questions turn on them); --thresholds adds more. */
 const ALWAYS_THRESHOLDS = [1.5, 2];
 
-/** Summary formats `--out` writes, by extension. */
-const SUMMARY_FORMATS = ['.csv', '.xlsx', '.md', '.json'];
+/** A batch summary has tables and no charts: every format of the output registry but .svg. */
+const NO_CHARTS = { charts: [] };
 
 interface BatchOptions {
   members: number;
@@ -39,6 +37,7 @@ interface BatchOptions {
   baseline: [number, number];
   co2Formula: 'ar6' | 'log';
   out?: string;
+  notes?: boolean;
   outDir?: string;
   shard?: { index: number; count: number };
   workers?: number;
@@ -62,7 +61,8 @@ export function batchCommand(io: CliIo): Command {
     .option('--seed <integer>', 'random seed (a scenario\'s row equals `warmcast ensemble TABLE --scenario NAME` with the same seed and members)', wholeNumberOption('--seed', 0), 1)
     .addOption(thresholdsOption('warming levels in K for prob_peak_above_<t> and median_crossing_year_<t> (1.5 and 2 are always reported)', ALWAYS_THRESHOLDS))
     .addOption(baselineOption())
-    .option('-o, --out <file>', 'write the summary: .csv (+ .meta.json, + .errors.csv), .xlsx, .md, .json; - for CSV on stdout; with --shard a .json shard file for `warmcast merge`')
+    .option('-o, --out <file>', 'write the summary: .csv (+ .meta.json, + .errors.csv), .json, .md, .html, .xlsx (the output registry; no charts, so no .svg); - for CSV on stdout; with --shard a .json shard file for `warmcast merge`')
+    .option('--notes', 'print every note on how the table was read and run (files always keep them)')
     .option('--out-dir <dir>', 'also write each scenario\'s yearly warming percentiles and probabilities to DIR/<model>--<scenario>.csv (+ .meta.json)')
     .option('--shard <K/N>', 'assess only the K-th of N equal slices of the scenarios and write a shard file (--out NAME.json); combine with `warmcast merge`', shardOption)
     .option('--prior', 'draw the members from the prior of the calibrated set, unweighted by the observed record (the unconstrained spread, for comparison)', false)
@@ -82,7 +82,7 @@ export function batchCommand(io: CliIo): Command {
       if (opts.seed >= 2 ** 32) throw new ConfigError('--seed must be below 2^32', 'seed');
       const ext = opts.out === undefined ? undefined : extname(opts.out).toLowerCase();
       if (opts.shard && ext !== '.json') throw new ConfigError('--shard writes a shard file: give --out NAME.json', 'out');
-      if (!opts.shard && ext !== undefined && opts.out !== '-' && !SUMMARY_FORMATS.includes(ext)) throw new ConfigError(`--out ${opts.out}: the extension must be one of ${SUMMARY_FORMATS.join(', ')} (it picks the format)`, 'out');
+      if (!opts.shard && opts.out !== undefined && opts.out !== '-') checkOutExtension(opts.out, NO_CHARTS);
       const thresholds = [...new Set([...ALWAYS_THRESHOLDS, ...opts.thresholds])].sort((a, b) => a - b);
       const { params } = resolveModelParams({ co2Formula: opts.co2Formula }, io);
       const path = resolve(io.cwd, pathwayArg(arg, io));
@@ -108,7 +108,7 @@ export function batchCommand(io: CliIo): Command {
       };
       const inputs = [path, join(bundledPathwaysDir(), 'history.csv')];
       let ensembleNotes: string[] = [];
-      let trajectories = 0;
+      const trajectories: Promise<WrittenFile[]>[] = [];
       const outcome = await runBatchThreads(scenarios, from, to, {
         params,
         members: opts.members,
@@ -123,83 +123,115 @@ export function batchCommand(io: CliIo): Command {
           if (ensembleNotes.length === 0) ensembleNotes = runNotes;
           if (!outDir) return;
           const s = scenarios[index];
-          const yearly: Table = { columns: t.columns, data: t.columns.map((c) => t.values[c]) };
-          writeOutput(join(outDir, `${fileStem(s.model)}--${fileStem(s.scenario)}.csv`), tableRenderers(yearly), {
-            inputs,
-            parameters: { co2_formula: params.co2Formula },
+          const yearly: OutputTable = { name: 'yearly', columns: t.columns.map((key) => ({ key, values: t.values[key] })) };
+          const doc = batchDocument({
+            title: `warmcast batch: ${s.scenario} (model ${s.model}), yearly warming`,
+            subtitle: `${opts.members} members, seed ${opts.seed}; warming relative to the ${opts.baseline.join('-')} mean`,
             baseline: opts.baseline,
+            data: yearly,
+            tables: [],
             notes,
-            seed: opts.seed,
-            pathway: `${s.scenario} (model ${s.model})`,
-            caution: batchCaution(opts.members),
-            io,
+            members: opts.members,
           });
-          trajectories++;
+          trajectories.push(
+            writeDocument(join(outDir, `${fileStem(s.model)}--${fileStem(s.scenario)}.csv`), doc, {
+              inputs,
+              parameters: { co2_formula: params.co2Formula },
+              baseline: opts.baseline,
+              seed: opts.seed,
+              pathway: `${s.scenario} (model ${s.model})`,
+              io,
+            }),
+          );
         },
       });
       const notes = [...table.notes.map((n) => `table: ${n}`), ...batchNotes(thresholds), ...ensembleNotes];
-      if (outDir && trajectories > 0) io.stderr(`wrote ${trajectories} yearly trajectories to ${outDir}\n`);
+      await Promise.all(trajectories);
+      if (outDir && trajectories.length > 0) io.stderr(`wrote ${trajectories.length} yearly trajectories to ${outDir}\n`);
 
       if (opts.shard) {
-        const written = writeOutput(opts.out!, { '.json': () => batchShardToJson({ settings, shard: opts.shard!, outcome, notes }) }, { inputs, baseline: opts.baseline, notes, seed: opts.seed, io });
-        announceWritten(written, io);
+        const shardPath = resolve(io.cwd, opts.out!);
+        const replaced = existsSync(shardPath);
+        writeFilesAtomic([{ path: shardPath, content: batchShardToJson({ settings, shard: opts.shard!, outcome, notes }) }], { inputs });
+        announceWritten([{ path: shardPath, replaced }], io);
         io.stderr(`shard ${opts.shard.index}/${opts.shard.count}: scenarios ${from + 1}-${to} of ${scenarios.length}; combine all shards with \`warmcast merge\`\n`);
         finish(outcome, io, to - from);
         return;
       }
-      await emitBatch(outcome, { settings, notes, inputs, out: opts.out, io });
+      await emitBatch(outcome, { settings, notes, inputs, out: opts.out, showNotes: opts.notes, io });
     });
 }
 
 /**
  * Writes and prints a batch's summary (from one run or merged shards) and its errors, then ends
- * with exit code 3 when some scenarios failed, or 2 when none could be assessed.
+ * with exit code 3 when some scenarios failed, or 2 when none could be assessed. The summary is an
+ * OutputDocument of the output registry: `data` is the summary table (CSV, JSON, the xlsx `data`
+ * sheet), `tables` the short human table and, when some scenarios failed, the errors table
+ * (Markdown, HTML, xlsx sheets); the errors also go to JSON (`errors`) and, beside a CSV, to
+ * NAME.errors.csv.
  */
-export async function emitBatch(outcome: BatchOutcome, ctx: { settings: BatchSettings; notes: string[]; inputs: string[]; out?: string; io: CliIo }): Promise<void> {
+export async function emitBatch(outcome: BatchOutcome, ctx: { settings: BatchSettings; notes: string[]; inputs: string[]; out?: string; showNotes?: boolean; io: CliIo }): Promise<void> {
   const { settings, io } = ctx;
-  const summary = batchSummaryTable(outcome, settings.thresholds);
-  const errors = batchErrorTable(outcome);
   if (outcome.rows.length === 0 && outcome.errors.length > 0) throw new InputError(outcome.errors.flatMap((e) => e.problems.map((p) => (p.file === '' ? { ...p, file: settings.table.path } : p))));
+  const hasErrors = outcome.errors.length > 0;
+  const errors = batchErrorTable(outcome);
+  const errorList = outcome.errors.map((e) => ({ model: e.model, scenario: e.scenario, code: e.code, problems: batchErrorLines(e) }));
+  const rows = outcome.rows;
+  const counts = AR6_WARMING_CATEGORIES.map((c) => [c.code, rows.filter((r) => r.category === c.code).length] as const).filter(([, n]) => n > 0);
+  const doc = batchDocument({
+    title: `warmcast batch: ${settings.table.path}`,
+    subtitle:
+      `${rows.length} scenario${rows.length === 1 ? '' : 's'} assessed, ${settings.members} members each (seed ${settings.seed}); warming relative to ${settings.baseline.join('-')}; peak over ${PEAK_YEARS.join('-')}. ` +
+      `AR6 WG3 categories: ${counts.map(([c, n]) => `${c} ${n}`).join(', ')}`,
+    baseline: settings.baseline,
+    data: batchSummaryTable(outcome, settings.thresholds),
+    tables: [batchHumanTable(outcome, settings), ...(hasErrors ? [errors] : [])],
+    notes: ctx.notes,
+    members: settings.members,
+    ...(hasErrors ? { json: { errors: errorList } } : {}),
+  });
   if (ctx.out !== undefined) {
-    const provenanceInput = {
+    const written = await writeDocument(ctx.out, doc, {
       inputs: ctx.inputs,
       parameters: { co2_formula: settings.co2Formula, members: settings.members },
       baseline: settings.baseline,
-      notes: ctx.notes,
       seed: settings.seed,
-      caution: batchCaution(settings.members),
       io,
-    };
-    const path = ctx.out === '-' ? '-' : resolve(io.cwd, ctx.out);
-    if (extname(path).toLowerCase() === '.xlsx') {
-      const bytes = await batchWorkbook(summary, errors, buildProvenance(provenanceInput));
-      writeFilesAtomic([{ path, content: bytes }], { inputs: ctx.inputs });
-      announceWritten([{ path, replaced: false }], io);
-    } else {
-      const hasErrors = outcome.errors.length > 0;
-      const errorList = outcome.errors.map((e) => ({ model: e.model, scenario: e.scenario, code: e.code, problems: batchErrorLines(e) }));
-      const renderers = {
-        '.csv': () => formatCsv(summary),
-        '.json': (p: Provenance) => formatJson(summary, p, { errors: errorList }),
-        '.md': (p: Provenance) =>
-          formatMarkdown(summary, 3, markdownDigits(summary)) +
-          (hasErrors ? `\n## Scenarios that failed\n\n${formatMarkdown(errors)}` : '') +
-          `\nwarmcast ${p.version}, ${p.created_utc}; ${settings.members} members per scenario, seed ${p.seed}; warming relative to ${p.baseline}.\n\nNotes:\n\n${p.notes.map((n) => `- ${n.replace(/</g, '\\<')}`).join('\n')}\n\n${p.caution}\n`,
-      };
-      const written = writeOutput(ctx.out, renderers, { ...provenanceInput, sidecar: hasErrors ? { errors: errorList } : undefined });
-      if (extname(path).toLowerCase() === '.csv' && hasErrors) {
-        const errorsPath = path.slice(0, -4) + '.errors.csv';
-        writeFilesAtomic([{ path: errorsPath, content: formatCsv(errors) }], { inputs: ctx.inputs });
-        written.push({ path: errorsPath, replaced: false });
-      }
-      announceWritten(written, io);
+    });
+    if (ctx.out !== '-' && extname(ctx.out).toLowerCase() === '.csv' && hasErrors) {
+      const path = resolve(io.cwd, ctx.out);
+      const errorsPath = path.slice(0, -4) + '.errors.csv';
+      const replaced = existsSync(errorsPath);
+      writeFilesAtomic([{ path: errorsPath, content: csvText(errors) }], { inputs: ctx.inputs });
+      written.push({ path: errorsPath, replaced });
     }
+    announceWritten(written, io);
   }
-  // With `--out -` the summary CSV is standard output, so the terminal table goes to standard error.
-  const write = ctx.out === '-' ? io.stderr : io.stdout;
-  write(batchSummaryText(outcome, settings, ctx.out !== undefined));
-  write(notesAndCautions([], [standardCautions()[0], batchUncertainty(settings.members), standardCautions()[2]], ctx.out === '-' ? undefined : io.stdoutColumns));
+  // The terminal shows at most 20 rows when a file holds them all (more than 40), and no errors table (stderr lists them).
+  const human = doc.tables[0];
+  const cut = ctx.out !== undefined && rows.length > 40;
+  const shown = cut ? { ...human, columns: human.columns.map((c) => ({ ...c, values: (c.values as readonly string[]).slice(0, 20) })) } : human;
+  const more = cut ? [`... ${rows.length - 20} more scenarios in the file written`] : [];
+  printDocument({ ...doc, tables: [shown], terminalNotes: more }, { out: ctx.out, notes: ctx.showNotes, chart: false }, io);
   finish(outcome, io, outcome.rows.length + outcome.errors.length);
+}
+
+/** A batch's document (the summary, or one scenario's yearly trajectory): no headline, no charts, the batch's cautions. */
+function batchDocument(d: { title: string; subtitle: string; baseline: readonly [number, number]; data: OutputTable; tables: OutputTable[]; notes: string[]; members: number; json?: Record<string, unknown> }): OutputDocument {
+  return {
+    command: 'batch',
+    title: d.title,
+    subtitle: d.subtitle,
+    baseline: d.baseline,
+    headline: [],
+    data: d.data,
+    tables: d.tables,
+    ...NO_CHARTS,
+    notes: d.notes,
+    cautions: [standardCautions()[0], batchUncertainty(d.members), standardCautions()[2]],
+    shortCaution: shortCaution('batch', true),
+    ...(d.json ? { json: d.json } : {}),
+  };
 }
 
 /** Prints the errors table and throws PartialFailureError (exit 3) when some scenarios failed. */
@@ -210,44 +242,26 @@ function finish(outcome: BatchOutcome, io: CliIo, total: number): void {
   throw new PartialFailureError(`${outcome.errors.length} of ${total} scenarios failed (listed above${total > outcome.errors.length ? '; the summary holds the others' : ''}); exit code 3`);
 }
 
-/** The terminal summary: one line per scenario (at most 40 when a file holds them all), then the count per category. */
-function batchSummaryText(outcome: BatchOutcome, settings: BatchSettings, toFile: boolean): string {
+/** The short human table (terminal, Markdown, HTML, an xlsx sheet): one line per scenario, the figures planners read first, as text. */
+function batchHumanTable(outcome: BatchOutcome, settings: BatchSettings): OutputTable {
   const rows = outcome.rows;
-  const shown = toFile && rows.length > 40 ? rows.slice(0, 20) : rows;
   const pct = (p: number) => `${Math.round(100 * p)} %`;
-  const text = plainTable({
-    columns: ['model', 'scenario', 'cat.', 'peak K (5-95 %)', 'peak yr', '2100 K', 'P(peak>1.5)', 'P(peak>2)', 'net-zero CO2'],
-    numeric: [false, false, false, true, true, true, true, true, true],
-    rows: shown.map((r) => [
-      r.model,
-      r.scenario,
-      r.category,
-      `${r.peakWarmingK.p50.toFixed(2)} (${r.peakWarmingK.p05.toFixed(2)}-${r.peakWarmingK.p95.toFixed(2)})`,
-      String(r.peakYearP50),
-      r.warming2100K ? r.warming2100K.p50.toFixed(2) : '-',
-      pct(r.probPeakAbove[settings.thresholds.indexOf(1.5)].probability),
-      pct(r.probPeakAbove[settings.thresholds.indexOf(2)].probability),
-      r.netZeroCo2Year === null ? 'not reached' : String(r.netZeroCo2Year),
-    ]),
-  });
-  const counts = AR6_WARMING_CATEGORIES.map((c) => [c.code, rows.filter((r) => r.category === c.code).length] as const).filter(([, n]) => n > 0);
-  const lines = [
-    `${rows.length} scenario${rows.length === 1 ? '' : 's'} assessed, ${settings.members} members each (seed ${settings.seed}); warming relative to ${settings.baseline.join('-')}; peak over ${PEAK_YEARS.join('-')}`,
-    text.trimEnd(),
-  ];
-  if (shown.length < rows.length) lines.push(`  ... ${rows.length - shown.length} more in the file written`);
-  lines.push(`AR6 WG3 categories: ${counts.map(([c, n]) => `${c} ${n}`).join(', ')}`);
-  return lines.join('\n') + '\n';
-}
-
-/** Whole numbers for the year columns and the cumulative CO2 of the Markdown summary, two decimals for shares. */
-function markdownDigits(summary: Table): Record<string, number> {
-  const digits: Record<string, number> = {};
-  for (const c of summary.columns) {
-    if (c.includes('year') || c.startsWith('cumulative_')) digits[c] = 0;
-    else if (c.startsWith('prob_')) digits[c] = 2;
-  }
-  return digits;
+  const col = (key: string, label: string, values: string[]) => ({ key, label, values });
+  return {
+    name: 'scenarios',
+    caption: 'one line per scenario (every column in the data table)',
+    columns: [
+      col('model', 'model', rows.map((r) => r.model)),
+      col('scenario', 'scenario', rows.map((r) => r.scenario)),
+      col('category', 'cat.', rows.map((r) => r.category)),
+      col('peak_warming_k', 'peak K (5-95 %)', rows.map((r) => `${r.peakWarmingK.p50.toFixed(2)} (${r.peakWarmingK.p05.toFixed(2)}-${r.peakWarmingK.p95.toFixed(2)})`)),
+      col('peak_year_p50', 'peak yr', rows.map((r) => String(r.peakYearP50))),
+      col('warming_2100_p50_k', '2100 K', rows.map((r) => (r.warming2100K ? r.warming2100K.p50.toFixed(2) : '-'))),
+      col('prob_peak_above_1.5', 'P(peak>1.5)', rows.map((r) => pct(r.probPeakAbove[settings.thresholds.indexOf(1.5)].probability))),
+      col('prob_peak_above_2', 'P(peak>2)', rows.map((r) => pct(r.probPeakAbove[settings.thresholds.indexOf(2)].probability))),
+      col('net_zero_co2_year', 'net-zero CO2', rows.map((r) => (r.netZeroCo2Year === null ? 'not reached' : String(r.netZeroCo2Year)))),
+    ],
+  };
 }
 
 /** The batch's own conventions, for provenance. */
@@ -267,9 +281,6 @@ function batchUncertainty(members: number): string {
   return `Ranges are the spread of ${members} ensemble members per scenario, drawn from the calibrated parameter set (climate response, forcing scales and carbon cycle, constrained by the observed record); they do not include uncertainty in the scenarios or in the model structure. Categories are this model's reading of the AR6 WG3 criteria, not the IPCC's classification of these scenarios.`;
 }
 
-function batchCaution(members: number): string {
-  return [standardCautions()[0], batchUncertainty(members), standardCautions()[2]].join(' ');
-}
 
 /** A name as part of a file name: letters, digits, dot, hyphen and underscore kept, the rest `_`. */
 function fileStem(name: string): string {
@@ -280,7 +291,7 @@ function fileStem(name: string): string {
  * Merges batch shard files (from `warmcast batch --shard K/N`) into the summary one whole batch gives;
  * called by `warmcast merge` when its files are batch shards.
  */
-export async function mergeBatchFiles(files: string[], out: string | undefined, io: CliIo): Promise<void> {
+export async function mergeBatchFiles(files: string[], opts: { out?: string; notes?: boolean }, io: CliIo): Promise<void> {
   const shards = files.map((file) => {
     let text: string;
     try {
@@ -291,7 +302,7 @@ export async function mergeBatchFiles(files: string[], out: string | undefined, 
     return { file, shard: batchShardFromJson(text, file) };
   });
   const merged = mergeBatchShards(shards);
-  await emitBatch(merged.outcome, { settings: merged.settings, notes: merged.notes, inputs: files.map((f) => resolve(io.cwd, f)), out, io });
+  await emitBatch(merged.outcome, { settings: merged.settings, notes: merged.notes, inputs: files.map((f) => resolve(io.cwd, f)), out: opts.out, showNotes: opts.notes, io });
 }
 
 /** Whether a file (as `warmcast merge` is given it) is a batch shard: its first bytes name the batch shard format. */

@@ -10,6 +10,8 @@ export interface CliIo {
   stderrIsTTY: boolean;
   /** Width of the terminal standard output writes to, in columns; undefined when it is not a terminal (no wrapping). */
   stdoutColumns?: number;
+  /** Width of the terminal standard error writes to, in columns, when it is one. */
+  stderrColumns?: number;
   /** Working directory that relative paths resolve against. */
   cwd: string;
 }
@@ -43,9 +45,17 @@ export function processIo(): CliIo {
     stderr: quietOnClosedPipe(process.stderr),
     stdoutIsTTY: Boolean(process.stdout.isTTY),
     stderrIsTTY: Boolean(process.stderr.isTTY),
-    ...(process.stdout.isTTY && process.stdout.columns ? { stdoutColumns: process.stdout.columns } : {}),
+    // Lines fit the terminal: its width, else COLUMNS, else 100 (output piped to a file or a pager).
+    stdoutColumns: process.stdout.isTTY && process.stdout.columns ? process.stdout.columns : envColumns() ?? 100,
+    stderrColumns: process.stderr.isTTY && process.stderr.columns ? process.stderr.columns : envColumns() ?? 100,
     cwd: process.cwd(),
   };
+}
+
+/** The COLUMNS environment variable as a width, when it is a sensible whole number. */
+function envColumns(): number | undefined {
+  const v = Number(process.env.COLUMNS);
+  return Number.isInteger(v) && v >= 40 && v <= 1000 ? v : undefined;
 }
 
 /** A writer to `stream` that stops writing, without an error, once the stream's reader has gone. */

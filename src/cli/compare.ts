@@ -1,54 +1,54 @@
 import type { AbsentEmissionsRule } from '../forcing/absent-emissions.js';
+import { basename, extname } from 'node:path';
 import { Command } from 'commander';
 import { ConfigError } from '../errors.js';
-import { formatCsv } from '../io/index.js';
-import { comparePathways, milestoneYears, type PathwayWarming } from '../metrics/index.js';
+import { isScenarioTable } from '../io/iamc-read.js';
+import type { ReadPathwayResult } from '../io/load-pathway.js';
+import { comparePathways, pairedDifferenceRange, type PathwayWarming } from '../metrics/index.js';
 import { runEnsemble } from '../ensemble/index.js';
 import { memberSource } from './member-source.js';
 import { ensembleInput, projectPathway } from '../projection/index.js';
-import { comparisonCharts, comparisonHtml, comparisonJson, comparisonLongTable, comparisonSummary, comparisonMarkdown, comparisonText, comparisonUncertainty, scopedNotes, standardCautions, thresholdBaselineNote, type ScopedNote } from '../report/index.js';
+import { comparisonDocument, ensembleWarming, scopedNotes, standardCautions, thresholdBaselineNote, type ScopedNote } from '../report/index.js';
 import type { CliIo } from './cli-io.js';
 import { addScenarioOptions, readPathwayArgs, type ScenarioOptions } from './scenario-options.js';
-import { addModelOptions, baselineOption, type ModelOptions, numberListOption, resolveModelParams, thresholdsOption, wholeNumberOption, yearOption, absentEmissionsOption } from './options.js';
-import { notesAndCautions } from './notes-and-cautions.js';
-import { announceWritten, pathwayInputs, writeOutput } from './output.js';
+import { addModelOptions, baselineOption, cautionsHelp, type ModelOptions, pathwayArg, resolveModelParams, thresholdsOption, wholeNumberOption, absentEmissionsOption } from './options.js';
+import { addReportOptions, announceWritten, observedRecord, pathwayInputs, printDocument, rowChoice, writeDocument, type ReportOptions } from './output.js';
 import { ensembleParameters } from './provenance.js';
-import { paramsToJson } from '../climate/params.js';
 
-interface CompareOptions extends ModelOptions, ScenarioOptions {
+interface CompareOptions extends ModelOptions, ReportOptions, ScenarioOptions {
   members?: number;
   seed: number;
-  out?: string;
-  years?: number[];
+  labels?: string[];
   thresholds: number[];
   baseline: [number, number];
   splice: boolean;
   absentEmissions?: AbsentEmissionsRule;
-  chart: boolean;
   carbonFeedback: boolean;
-  from?: number;
 }
 
-/** `warmcast compare <pathway...>`: pathways side by side against the first, as tables, charts and reports. */
+/** Labels longer than this are replaced by letters (A, B, ...) unless the user gives labels. */
+const MAX_DEFAULT_LABEL = 14;
+
+/** `warmcast compare <pathway...>`: options side by side against the first, as tables, charts and reports. */
 export function compareCommand(io: CliIo): Command {
   const cmd = new Command('compare')
-    .description('compare pathways year by year against the first (the reference): milestones, peaks, threshold crossings')
-    .argument('<pathway...>', 'pathway CSV files or bundled names; the first is the reference')
-    .option('-o, --out <file>', 'write the comparison; the extension picks the format: .md, .csv (+ .meta.json), .json, .svg, .html')
-    .option('--years <list>', 'milestone years, e.g. 2030,2040,2050,2100 (default every 10 years over the future)', numberListOption('--years'))
+    .description('compare options (pathways) year by year against the first (the reference): headline, milestones, peaks, threshold crossings')
+    .argument('<pathway...>', 'pathway CSV files or bundled names, each optionally as LABEL=PATH; the first is the reference')
+    .option('--labels <list>', 'short labels for the options, in order, used in every header, e.g. A,B,C (default: the arguments as typed, or letters when long)', labelsOption);
+  addReportOptions(cmd)
     .addOption(thresholdsOption('warming levels in K whose crossing years are reported', [1.5, 2]))
     .addOption(baselineOption())
     .addOption(absentEmissionsOption())
     .option('--no-splice', 'do not splice pathways that start late onto the bundled history (each run then starts from zero warming in its first year)')
     .option('--no-carbon-feedback', 'emission-driven runs: switch off the carbon-climate feedback on uptake')
-    .option('--members <count>', 'also run a parameter ensemble of this many members per pathway: ranges in tables and shaded in charts, median as the line', wholeNumberOption('--members', 2))
-    .option('--seed <integer>', 'random seed of the ensembles (with --members)', wholeNumberOption('--seed', 0), 1)
-    .option('--from <year>', 'first year of the charts (default 1850, or the first year of the pathways); the tables and files keep every year', yearOption)
-    .option('--no-chart', 'omit the terminal chart');
+    .option('--members <count>', 'also run a parameter ensemble of this many members per option: medians with ranges, and each difference\'s range from paired members', wholeNumberOption('--members', 2))
+    .option('--seed <integer>', 'random seed of the ensembles (with --members)', wholeNumberOption('--seed', 0), 1);
   addScenarioOptions(addModelOptions(cmd), true)
     .addHelpText(
       'after',
-      '\nExamples:\n  warmcast compare steady delayed swift\n  warmcast compare scenarios.xlsx --scenario Quick --scenario Slow\n  warmcast compare steady swift --years 2030,2050,2100 --out table.md\n  warmcast compare steady delayed swift --out report.html\n',
+      '\nExamples:\n  warmcast compare steady delayed swift\n  warmcast compare scenarios.xlsx --scenario Quick --scenario Slow\n  warmcast compare now=steady plan=swift --years 2030,2050,2100 --out table.md\n' +
+        '  warmcast compare steady delayed swift --labels S,D,W --members 500 --out report.html\n' +
+        cautionsHelp(standardCautions()),
     )
     .action(async (args: string[], opts: CompareOptions) => {
       if (opts.members !== undefined) {
@@ -60,122 +60,126 @@ export function compareCommand(io: CliIo): Command {
           throw new ConfigError(`with --members each member takes its parameters from the calibrated set, so ${given.join(', ')} would be ignored: leave ${given.length > 1 ? 'them' : 'it'} out, or compare without --members`, given[0].slice(2));
         }
       }
+      const reads = await readPathwayArgs(args.map((arg) => splitLabel(arg).path), opts, { splice: opts.splice, absentEmissions: opts.absentEmissions }, io);
+      const options = labelledOptions(args, reads, opts, io);
       const { params, paramsFile, notes: paramNotes, forcingScale, forcingNote } = resolveModelParams(opts, io);
       const baselineNote = thresholdBaselineNote(opts.baseline);
       const files: string[] = [];
       const scoped: ScopedNote[] = [];
-      const reads = await readPathwayArgs(args, opts, { splice: opts.splice, absentEmissions: opts.absentEmissions }, io);
-      const runs = reads.map((read) => {
+      const runs = options.map(({ label, read, name }) => {
         files.push(...pathwayInputs(read));
         const p = projectPathway(read.pathway, { params, baseline: opts.baseline, carbonFeedback: opts.carbonFeedback, forcingScale });
-        scoped.push(...[...p.provenance.notes, ...p.notes].map((text) => ({ pathway: p.name, text })));
-        return { projection: p, pathway: read.pathway };
+        scoped.push(...[...p.provenance.notes, ...p.notes].map((text) => ({ pathway: label, text })));
+        return { label, name: name ?? p.name, projection: p, pathway: read.pathway };
       });
       const ref = runs[0].projection;
-      const last = ref.years[ref.years.length - 1];
-      const firstFuture = ref.provenance.spliceYear ?? ref.years[0];
       const pathways: PathwayWarming[] = [];
-      // With ensembles no single parameter set was used: provenance records what the members share.
       let shared: Record<string, number | string> | undefined;
-        for (const { projection: p, pathway } of runs) {
-          const base: PathwayWarming = { label: p.name, years: p.years, warmingK: p.columns.warming_k, ...(p.columns.co2_gtco2 ? { co2Gtco2: p.columns.co2_gtco2 } : {}) };
-          if (opts.members === undefined) {
-            pathways.push(base);
-            continue;
-          }
-          // With an ensemble, the line is its median and the ranges its percentiles (same seed per pathway).
-          const { input, notes: inputNotes } = ensembleInput(pathway, params, { baseline: opts.baseline });
-          const e = await runEnsemble(input, { members: opts.members, seed: opts.seed, thresholds: opts.thresholds, baseline: opts.baseline, source: memberSource(false) });
-          scoped.push(...[...inputNotes, ...e.notes].map((text) => ({ pathway: p.name, ensemble: true, text })));
-          shared ??= ensembleParameters(e.config);
-          const pc = e.percentiles;
-          const crossingOdds = e.crossings.map((x, j) => ({
-            thresholdK: x.thresholdK,
-            byYear: x.byMilestone,
-            medianYear: x.medianYear,
-            withinRun: x.probabilityWithinRun,
-            lastWindowYear: x.byLastWindow.year,
-            shareAbove: e.probAbove[j],
-          }));
-          const membersPeak = { warmingK: e.peak.warmingK, year: e.peak.year, stillRising: e.peak.stillRising };
-          pathways.push({ ...base, warmingK: pc.p50, range: { p05: pc.p05, p17: pc.p17, p83: pc.p83, p95: pc.p95 }, crossingOdds, membersPeak });
+      const members: { firstYear: number; members: number; warmingK: Float64Array }[] = [];
+      for (const { label, name, projection: p, pathway } of runs) {
+        if (opts.members === undefined) {
+          pathways.push({ label, name, years: p.years, warmingK: p.columns.warming_k, ...(p.columns.co2_gtco2 ? { co2Gtco2: p.columns.co2_gtco2 } : {}) });
+          continue;
         }
-      const medianNote =
-        opts.members !== undefined
-          ? ['warming_k and the milestone values are the ensemble median of each pathway; its crossing years are the first years by which half of the members have crossed']
-          : [];
-      const notes = [...paramNotes, ...(forcingNote && opts.members === undefined ? [forcingNote] : []), ...(baselineNote ? [baselineNote] : []), ...medianNote, ...scopedNotes(scoped, runs.map((r) => r.projection.name))];
-      const c = comparePathways(pathways, {
-        milestoneYears: opts.years ? chosenYears(opts.years, runs.map((r) => r.projection.years)) : milestoneYears(firstFuture, last, 10),
-        thresholdsK: opts.thresholds,
-        cumulativeFromYear: firstFuture,
-      });
-      const baseline = `${opts.baseline[0]}-${opts.baseline[1]}`;
-      const firstAny = Math.min(...runs.map((r) => r.projection.years[0]));
-      if (opts.from !== undefined && !(opts.from >= firstAny && opts.from < last)) {
-        throw new ConfigError(`--from ${opts.from} must lie within the years of the pathways and before their end, ${firstAny}-${last - 1}`, 'from');
+        // Same seed for every option: member i draws the same parameters in each, so differences pair up.
+        const { input, notes: inputNotes } = ensembleInput(pathway, params, { baseline: opts.baseline });
+        const e = await runEnsemble(input, { members: opts.members, seed: opts.seed, thresholds: opts.thresholds, baseline: opts.baseline, keepMembers: true, source: memberSource(false) });
+        scoped.push(...[...inputNotes, ...e.notes].map((text) => ({ pathway: label, ensemble: true, text })));
+        shared ??= ensembleParameters(e.config);
+        members.push({ firstYear: e.years[0], members: e.memberCount, warmingK: e.members!.warmingK });
+        pathways.push({ ...ensembleWarming(e, label), name, ...(p.columns.co2_gtco2 ? { co2Gtco2: p.columns.co2_gtco2 } : {}) });
       }
-      const fromYear = opts.from ?? Math.max(ref.years[0], Math.min(1850, last));
+      if (members.length > 1) {
+        for (let j = 1; j < pathways.length; j++) pathways[j].differenceRange = pairedDifferenceRange(members[0], members[j], pathways[j].years);
+      }
+      const medianNote = opts.members !== undefined ? ['with --members, warming is the ensemble median of each option; its crossing years are the first years by which half of the members have crossed'] : [];
+      const notes = [...paramNotes, ...(forcingNote && opts.members === undefined ? [forcingNote] : []), ...(baselineNote ? [baselineNote] : []), ...medianNote, ...scopedNotes(scoped, runs.map((r) => r.label))];
+      const observed = observedRecord(opts.baseline, notes);
+      const first = Math.min(...runs.map((r) => r.projection.years[0]));
+      const last = Math.max(...runs.map((r) => r.projection.years[r.projection.years.length - 1]));
+      const rows = rowChoice(opts, first, last, ref.provenance.spliceYear ?? ref.years[0]);
+      const c = comparePathways(pathways, { milestoneYears: [...rows.years], thresholdsK: opts.thresholds, cumulativeFromYear: ref.provenance.spliceYear ?? ref.years[0] });
+      const subtitle =
+        opts.members === undefined
+          ? `one central run each: ECS ${params.ecsK.toFixed(2)} K, TCR ${params.tcrK.toFixed(2)} K, CO2 forcing ${params.co2Formula}; warming relative to the ${opts.baseline.join('-')} mean`
+          : `${opts.members} members per option, seed ${opts.seed}, members drawn from the calibrated parameter set (constrained by the observed record) and paired across options; warming relative to the ${opts.baseline.join('-')} mean`;
+      const doc = comparisonDocument(c, { rows, baseline: opts.baseline, subtitle, notes, ...(observed ? { observed } : {}) });
       if (opts.out !== undefined) {
         const inputs = [...files, ...(paramsFile ? [paramsFile] : [])];
-        const assumptions: Record<string, string> = {
-          'Climate sensitivity':
-            opts.members === undefined
-              ? `ECS ${params.ecsK.toFixed(2)} K, TCR ${params.tcrK.toFixed(2)} K (two-box model calibrated to them)`
-              : 'sampled per ensemble member (see Ensemble); each member\'s two-box model is calibrated to its own ECS and TCR',
-          'CO2 forcing': params.co2Formula === 'log' ? 'Myhre et al. 1998, 5.35 ln(C/C0)' : 'Meinshausen et al. 2020 with IPCC AR6 adjustments',
-          Baseline: `warming relative to the ${baseline} mean${baselineNote ? `; ${baselineNote}` : ''}`,
-          ...(opts.members !== undefined
-            ? {
-                Ensemble:
-                  `${opts.members} members per pathway, seed ${opts.seed}; lines are ensemble medians; members drawn from the calibrated parameter set ` +
-                  '(constrained by the observed record, pathways/calibrated-members.json); crossing years and chances from the members',
-              }
-            : {}),
-          'History splice': runs.map(({ projection: p }) => `${p.name}: ${p.provenance.spliceYear ? `bundled history before ${p.provenance.spliceYear}` : 'none'}`).join('; '),
-          Parameters: Object.entries(shared ?? paramsToJson(params)).map(([k, v]) => `${k} ${typeof v === 'number' ? +v.toPrecision(5) : v}`).join(', '),
-        };
-        const written = writeOutput(
-          opts.out,
-          {
-            '.csv': () => formatCsv(comparisonLongTable(c)),
-            '.json': (p) => comparisonJson(c, p),
-            '.md': (p) => comparisonMarkdown(c, { provenance: p, baseline }),
-            '.svg': () => comparisonCharts(c, { fromYear, baseline })[0],
-            '.html': (p) => comparisonHtml(c, { provenance: p, assumptions, baseline, fromYear }),
-          },
-          {
-            inputs,
-            params,
-            ...(shared ? { parameters: shared } : {}),
-            baseline: opts.baseline,
-            notes,
-            io,
-            ...(opts.members !== undefined ? { seed: opts.seed } : {}),
-            // Beside the long CSV, which holds only annual series: peaks, crossings and their odds.
-            sidecar: { comparison: comparisonSummary(c) },
-            caution: standardCautions(comparisonUncertainty(c, 'text')).join(' '),
-          },
-        );
+        const written = await writeDocument(opts.out, doc, {
+          inputs,
+          params,
+          ...(shared ? { parameters: shared } : {}),
+          baseline: opts.baseline,
+          io,
+          ...(opts.members !== undefined ? { seed: opts.seed } : {}),
+        });
         announceWritten(written, io);
       }
-      const write = opts.out === '-' ? io.stderr : io.stdout;
-      write(comparisonText(c, { color: opts.out === '-' ? io.stderrIsTTY : io.stdoutIsTTY, fromYear, baseline, noChart: !opts.chart }));
-      write(notesAndCautions(notes, standardCautions(comparisonUncertainty(c, 'text')), opts.out === '-' ? undefined : io.stdoutColumns));
+      printDocument(doc, opts, io);
     });
   return cmd;
 }
 
+/** Coerces `A,B,C` into labels: non-empty, without commas or `=`. */
+function labelsOption(text: string): string[] {
+  const labels = text.split(',').map((s) => s.trim());
+  if (labels.some((l) => l === '')) throw new ConfigError(`--labels must be labels separated by commas, such as A,B,C; got "${text}"`, 'labels');
+  return labels;
+}
+
+/** `LABEL=PATH` split into its label and path; a plain argument has no label. */
+function splitLabel(arg: string): { given?: string; path: string } {
+  const m = /^([^=/\\]+)=(.+)$/.exec(arg);
+  return m ? { given: m[1].trim(), path: m[2] } : { path: arg };
+}
+
 /**
- * The milestone years given with --years, ascending and each once.
- * @throws ConfigError for a year that is not whole or that no pathway covers
+ * The options a command line names, each with its read and label: one per pathway argument, and one
+ * per `--scenario` of a scenario table argument (typed as the scenario name, or labelled by `LABEL=`
+ * when the table gives one scenario), in the order readPathwayArgs reads them.
+ *
+ * @throws ConfigError as labelledArgs does, counting each scenario taken from a table as an option
  */
-function chosenYears(years: readonly number[], spans: readonly Float64Array[]): number[] {
-  const first = Math.min(...spans.map((y) => y[0]));
-  const last = Math.max(...spans.map((y) => y[y.length - 1]));
-  const fractional = years.filter((y) => !Number.isInteger(y));
-  if (fractional.length > 0) throw new ConfigError(`--years must be whole years, such as 2030,2050,2100; got ${fractional.join(', ')}`, 'years');
-  const outside = years.filter((y) => y < first || y > last);
-  if (outside.length > 0) throw new ConfigError(`--years ${outside.join(', ')} must lie within the years the pathways cover, ${first}-${last}`, 'years');
-  return [...new Set(years)].sort((a, b) => a - b);
+function labelledOptions(args: readonly string[], reads: readonly ReadPathwayResult[], opts: CompareOptions, io: CliIo): { label: string; read: ReadPathwayResult; name?: string }[] {
+  const typed: { given?: string; path: string; typed: string }[] = [];
+  for (const arg of args) {
+    const { given, path } = splitLabel(arg);
+    const scenarios = isScenarioTable(pathwayArg(path, io)) ? (opts.scenario ?? [undefined]) : [undefined];
+    for (const scenario of scenarios) {
+      const own = scenario ?? basename(path, extname(path));
+      typed.push({ path, typed: own, ...(given !== undefined && scenarios.length === 1 ? { given } : {}) });
+    }
+  }
+  return labelledArgs(typed, opts.labels).map((o, j) => ({ label: o.label, read: reads[j], ...(o.name !== undefined ? { name: o.name } : {}) }));
+}
+
+/**
+ * The label of each option: `--labels` gives the labels (a `LABEL=` typed before a path
+ * then names the option in the key line), else `LABEL=PATH`, else the argument as typed (its file name without the extension), replaced by a letter
+ * when longer than 14 characters so that no header repeats long names.
+ *
+ * @throws ConfigError when --labels does not give one label per option, or two labels are the same
+ */
+function labelledArgs(args: readonly { given?: string; path: string; typed: string }[], labels?: readonly string[]): { label: string; path: string; name?: string }[] {
+  if (labels && labels.length !== args.length) {
+    throw new ConfigError(`--labels must give one label per option: ${args.length} options, ${labels.length} labels`, 'labels');
+  }
+  const out = args.map(({ given, path, typed }, j) => {
+    // --labels wins over LABEL=PATH; the LABEL typed then names the option in the key line.
+    const label = labels ? labels[j] : given !== undefined ? given : typed.length <= MAX_DEFAULT_LABEL ? typed : String.fromCharCode(65 + (j % 26));
+    return { label, path, ...(given !== undefined && labels ? { name: given } : {}) };
+  });
+  const seen = new Set<string>();
+  for (const { label } of out) {
+    if (seen.has(label)) {
+      throw new ConfigError(
+        `option labels must be distinct; "${label}" appears twice (a label is the argument's file name without the extension): ` +
+          'give --labels A,B,C or LABEL=PATH arguments, such as planB=b/p.csv',
+        'labels',
+      );
+    }
+    seen.add(label);
+  }
+  return out;
 }

@@ -3,33 +3,30 @@ import { Command, InvalidArgumentError, Option } from 'commander';
 import { readFileSync } from 'node:fs';
 import { resolve } from 'node:path';
 import { ConfigError, InputError } from '../errors.js';
-import { ensembleHeadlines, ensembleTable, fewMembersWarning, runEnsemble, shardFromJson, shardMerger, shardRange, shardToJson, summarizeEnsemble, type EnsembleConfig, type EnsembleHeadlines, type EnsembleOrigin, type EnsembleResult } from '../ensemble/index.js';
-import type { Table } from '../io/index.js';
-import { ensembleInput } from '../projection/index.js';
-import { ensembleHeadlineLines, ensembleHeadlinesMarkdown, standardCautions, terminalChart, thresholdBaselineNote } from '../report/index.js';
-import type { CliIo } from './cli-io.js';
+import { ensembleHeadlines, runEnsemble, shardFromJson, shardMerger, shardRange, shardToJson, summarizeEnsemble, type EnsembleOrigin, type EnsembleResult } from '../ensemble/index.js';
+import { writeFilesAtomic } from '../io/index.js';
 import { isBatchShardFile, mergeBatchFiles } from './batch.js';
 import { addScenarioOptions, readPathwayArgs, type ScenarioOptions } from './scenario-options.js';
-import { baselineOption, refuseOptions, resolveModelParams, thresholdsOption, wholeNumberOption, type RefusedOption, absentEmissionsOption } from './options.js';
-import { announceWritten, pathwayInputs, tableRenderers, writeOutput } from './output.js';
+import { ensembleInput } from '../projection/index.js';
+import { ensembleDocument, standardCautions, thresholdBaselineNote } from '../report/index.js';
+import type { CliIo } from './cli-io.js';
+import { baselineOption, cautionsHelp, refuseOptions, resolveModelParams, thresholdsOption, wholeNumberOption, type RefusedOption, absentEmissionsOption } from './options.js';
+import { addReportOptions, announceWritten, observedRecord, pathwayInputs, printDocument, rowChoice, writeDocument, type ReportOptions } from './output.js';
 import { allocationError, checkEnsembleMemory, checkMergeMemory } from './memory-check.js';
-import { notesAndCautions } from './notes-and-cautions.js';
 import { progressBar } from './progress.js';
 import { memberSource } from './member-source.js';
 import { unreadableReason } from './unreadable-reason.js';
-import { ensembleParameters, sha256File } from './provenance.js';
+import { buildProvenance, ensembleParameters, sha256File } from './provenance.js';
 
-interface EnsembleCliOptions extends ScenarioOptions {
+interface EnsembleCliOptions extends ReportOptions, ScenarioOptions {
   co2Formula?: 'ar6' | 'log';
   members: number;
   seed: number;
   thresholds: number[];
   baseline: [number, number];
   shard?: { index: number; count: number };
-  out?: string;
   splice: boolean;
   absentEmissions?: AbsentEmissionsRule;
-  chart: boolean;
   prior: boolean;
 }
 
@@ -78,16 +75,15 @@ function shardOption(text: string): { index: number; count: number } {
 export function ensembleCommand(io: CliIo): Command {
   const cmd = new Command('ensemble')
     .description('run a seeded parameter ensemble (members drawn from the calibrated parameter set, constrained by the observed record): warming percentiles and threshold probabilities')
-    .argument('<pathway>', 'pathway CSV file or bundled name')
+    .argument('<pathway>', 'pathway CSV file or bundled name');
+  addReportOptions(cmd)
     .option('-n, --members <count>', 'ensemble members', wholeNumberOption('--members', 1), 1000)
     .option('--seed <integer>', 'random seed (same seed, same output on any machine, and shards merged equal one run)', wholeNumberOption('--seed', 0), 1)
     .addOption(thresholdsOption('warming levels in K above the baseline (above 0) for exceedance probabilities', [1.5, 2, 3]))
     .addOption(baselineOption())
-    .option('--shard <K/N>', 'run only the K-th of N equal slices of the members and write them as a shard file (.json) for `warmcast merge`', shardOption)
-    .option('-o, --out <file>', 'write the headline figures and the yearly percentiles and probabilities: .csv (+ .meta.json), .json, .md; with --shard a .json shard file')
     .addOption(absentEmissionsOption())
+    .option('--shard <K/N>', 'run only the K-th of N equal slices of the members and write them as a shard file (.json) for `warmcast merge`', shardOption)
     .option('--no-splice', 'do not splice a pathway that starts late onto the bundled history')
-    .option('--no-chart', 'omit the terminal chart')
     .option('--prior', 'draw the members from the prior of the calibrated set, unweighted by the observed record: the unconstrained spread, for comparison', false)
     .addOption(new Option('--co2-formula <name>', 'CO2 forcing: ar6 (Meinshausen et al. 2020 + AR6 adjustment) or log (Myhre et al. 1998)').choices(['ar6', 'log']).default('ar6', 'ar6'));
   refuseOptions(addScenarioOptions(cmd, false), ENSEMBLE_REFUSES)
@@ -96,7 +92,9 @@ export function ensembleCommand(io: CliIo): Command {
       '\nEach member takes its parameters from the calibrated set (pathways/calibrated-members.json), so --ecs, --tcr and --params are not taken;\n--prior draws from its prior instead, to show what the observed record adds.\n' +
         '\nExamples:\n  warmcast ensemble swift --members 2000 --seed 7 --out swift-ens.csv\n' +
         '  warmcast ensemble swift --members 1000000 --seed 7 --shard 3/100 --out shard-3.json   # one task of an array job\n' +
-        '  warmcast merge shard-*.json --out swift-ens.csv\n',
+        '  warmcast merge shard-*.json --out swift-ens.csv\n' +
+        '\nWith --shard, --out names the shard file (.json).\n' +
+        cautionsHelp(standardCautions(UNCERTAINTY_HELP)),
     )
     .action(async (arg: string, opts: EnsembleCliOptions) => {
       if (opts.seed >= 2 ** 32) throw new ConfigError('--seed must be below 2^32', 'seed');
@@ -131,16 +129,12 @@ export function ensembleCommand(io: CliIo): Command {
       const allNotes = [...origin.notes, ...result.notes];
       if (opts.shard) {
         await outOfMemoryAsInput(`writing a shard file of ${count} members over ${years} years`, () =>
-          writeOutput(
-            opts.out!,
-            { '.json': () => shardToJson({ ...result.members!, origin }) },
-            { inputs, parameters: ensembleParameters(result.config), baseline: opts.baseline, notes: allNotes, seed: opts.seed, pathway: origin.pathway, io },
-          ),
+          writeFilesAtomic([{ path: resolve(io.cwd, opts.out!), content: shardToJson({ ...result.members!, origin }) }], { inputs }),
         );
         io.stderr(`wrote shard ${opts.shard.index}/${opts.shard.count} (${result.memberCount} members) to ${opts.out}; combine all shards with \`warmcast merge\`\n`);
         return;
       }
-      emitEnsemble(result, origin.pathway, { out: opts.out, chart: opts.chart, inputs, notes: allNotes, pathway: origin.pathway, io });
+      await emitEnsemble(result, origin.pathway, opts, { inputs, notes: allNotes, pathway: origin.pathway, firstFuture: read.pathway.provenance.spliceYear, io });
     });
   return cmd;
 }
@@ -149,14 +143,17 @@ export function ensembleCommand(io: CliIo): Command {
 export function mergeCommand(io: CliIo): Command {
   const cmd = new Command('merge')
     .description('combine the shard files of one ensemble (from `warmcast ensemble --shard K/N`) into its full statistics')
-    .argument('<shard...>', 'shard files (.json), all K from 1 to N of one ensemble')
-    .option('-o, --out <file>', 'write the headline figures and the yearly percentiles and probabilities: .csv (+ .meta.json), .json, .md')
-    .option('--no-chart', 'omit the terminal chart');
+    .argument('<shard...>', 'shard files (.json), all K from 1 to N of one ensemble');
+  addReportOptions(cmd);
   refuseOptions(cmd, MERGE_REFUSES)
-    .addHelpText('after', '\nEvery setting (pathway, seed, members, thresholds, baseline, CO2 formula) comes from the shards.\n\nExample:\n  warmcast merge shard-*.json --out swift-ens.csv\n')
-    .action(async (files: string[], opts: { out?: string; chart: boolean }) => {
+    .addHelpText(
+      'after',
+      '\nEvery setting (pathway, seed, members, thresholds, baseline, CO2 formula) comes from the shards.\n\nExample:\n  warmcast merge shard-*.json --out swift-ens.csv\n' +
+        cautionsHelp(standardCautions(UNCERTAINTY_HELP)),
+    )
+    .action(async (files: string[], opts: ReportOptions) => {
       // Shards of `warmcast batch` (scenarios of a table) merge into a batch summary.
-      if (isBatchShardFile(resolve(io.cwd, files[0]))) return mergeBatchFiles(files, opts.out, io);
+      if (isBatchShardFile(resolve(io.cwd, files[0]))) return mergeBatchFiles(files, opts, io);
       // One shard at a time, so that only the merged members and one shard's data are held.
       const merger = shardMerger();
       let checked = false;
@@ -181,9 +178,7 @@ export function mergeCommand(io: CliIo): Command {
       const result = summarizeEnsemble(merged);
       // Shards record the pathway since the shard file gained `pathway`; older ones merge without it.
       const origin = merged.origin;
-      emitEnsemble(result, origin?.pathway ?? 'merged ensemble (pathway not recorded in the shards)', {
-        out: opts.out,
-        chart: opts.chart,
+      await emitEnsemble(result, origin?.pathway ?? 'merged ensemble (pathway not recorded in the shards)', opts, {
         inputs: files.map((f) => resolve(io.cwd, f)),
         notes: origin ? [...origin.notes, ...result.notes] : [NOT_RECORDED, ...result.notes],
         ...(origin ? { pathway: origin.pathway, pathwayInputs: origin.inputs } : {}),
@@ -214,77 +209,51 @@ async function outOfMemoryAsInput<T>(what: string, work: () => T | Promise<T>): 
 /** The note of a merge whose shards do not record their pathway. */
 const NOT_RECORDED = "the pathway's name, input files and notes were not recorded in the shards (written by an earlier warmcast); the shards agree on its forcing (checksum)";
 
-/** Writes an ensemble's table (if asked) and prints its summary and chart. */
-function emitEnsemble(
+/** What the cautions say about an ensemble's ranges, in --help (the files carry the run's own text). */
+const UNCERTAINTY_HELP =
+  'Ranges are the 5-95 % and 17-83 % spread of members whose ECS, TCR, 2xCO2 forcing and aerosol forcing were drawn to match the IPCC AR6 ' +
+  'assessed ranges; they do not include uncertainty in the pathway or in the model structure, and they are not constrained by observed warming.';
+
+/** Writes an ensemble's files (if asked) and prints its headline, table and chart. */
+async function emitEnsemble(
   result: EnsembleResult,
   name: string,
-  ctx: { out?: string; chart: boolean; inputs: string[]; notes: string[]; pathway?: string; pathwayInputs?: EnsembleOrigin['inputs']; io: CliIo },
-): void {
+  opts: ReportOptions,
+  ctx: { inputs: string[]; notes: string[]; pathway?: string; pathwayInputs?: EnsembleOrigin['inputs']; firstFuture?: number; io: CliIo },
+): Promise<void> {
   const { io } = ctx;
-  const baselineNote = thresholdBaselineNote(result.config.baseline);
-  const notes = baselineNote ? [...ctx.notes, baselineNote] : ctx.notes;
-  const t = ensembleTable(result);
-  const table: Table = { columns: t.columns, data: t.columns.map((c) => t.values[c]) };
-  const headlines = ensembleHeadlines(result);
-  const caution = [standardCautions()[0], uncertaintyText(result), standardCautions()[2]].join(' ');
-  if (ctx.out !== undefined) {
-    const renderers = tableRenderers(table, { json: { headlines }, markdownBefore: ensembleHeadlinesMarkdown(headlines) });
-    const written = writeOutput(ctx.out, renderers, {
-      sidecar: { headlines },
+  const baseline = result.config.baseline;
+  const baselineNote = thresholdBaselineNote(baseline);
+  const notes = baselineNote ? [...ctx.notes, baselineNote] : [...ctx.notes];
+  const observed = observedRecord(baseline, notes);
+  const { years } = result;
+  const first = years[0];
+  const last = years[years.length - 1];
+  // Where the future starts: the splice year; for merged shards, as their notes record it, else 2020
+  // (the milestone rows then start at 2020 rather than at a history's 1750).
+  const firstFuture = ctx.firstFuture ?? firstFutureYear(notes) ?? Math.max(first, Math.min(2020, last));
+  const rows = rowChoice(opts, first, last, firstFuture);
+  const doc = ensembleDocument(result, { name, rows, notes, summary: ensembleHeadlines(result), uncertainty: uncertaintyText(result), ...(observed ? { observed } : {}) });
+  if (opts.out !== undefined) {
+    const written = await writeDocument(opts.out, doc, {
       inputs: ctx.inputs,
       parameters: ensembleParameters(result.config),
-      baseline: result.config.baseline,
-      notes,
+      baseline,
       seed: result.config.seed,
       pathway: ctx.pathway,
       pathwayInputs: ctx.pathwayInputs,
-      caution,
       io,
     });
     announceWritten(written, io);
   }
-  const write = ctx.out === '-' ? io.stderr : io.stdout;
-  write(ensembleSummary(result, headlines, name));
-  if (ctx.chart) {
-    const { years, percentiles: p } = result;
-    const i0 = Math.max(0, Math.min(1850, years[years.length - 1]) - years[0]);
-    const part = (a: Float64Array) => a.subarray(i0);
-    write(
-      '\n' +
-        terminalChart(
-          [
-            { label: '95th percentile', years: part(years), values: part(p.p95) },
-            { label: '83rd', years: part(years), values: part(p.p83) },
-            { label: 'median', years: part(years), values: part(p.p50) },
-            { label: '17th', years: part(years), values: part(p.p17) },
-            { label: '5th percentile', years: part(years), values: part(p.p05) },
-          ],
-          { title: `Warming, ${name}: median with 5-95 % and 17-83 % ranges (K relative to ${result.config.baseline.join('-')})`, yLabel: 'K', height: 14, color: ctx.out === '-' ? io.stderrIsTTY : io.stdoutIsTTY, thresholds: [1.5, 2] },
-        ) +
-        '\n',
-    );
-  }
-  // The few-members warning already stands under the headline figures.
-  const terminalNotes = notes.filter((n) => !n.startsWith('warning: '));
-  write(notesAndCautions(terminalNotes, [standardCautions()[0], uncertaintyText(result), standardCautions()[2]], ctx.out === '-' ? undefined : io.stdoutColumns));
+  printDocument(doc, opts, io);
 }
 
-/** The headline lines of an ensemble: members, seed, redraws, sampled ranges, warming at milestones, crossing probabilities. */
-function ensembleSummary(r: EnsembleResult, h: EnsembleHeadlines, name: string): string {
-  const lines: string[] = [];
-  const c = r.config;
-  lines.push(`${name}: ${r.memberCount} member${r.memberCount === 1 ? '' : 's'}, seed ${c.seed}; ${r.redraws} unphysical draws redrawn; warming relative to ${c.baseline.join('-')}`);
-  const few = fewMembersWarning(r.memberCount);
-  if (few) lines.push(`  warning: ${few}`);
-  const { sampled, thresholds, peak } = ensembleHeadlineLines(h);
-  lines.push(...sampled);
-  const { years, percentiles: p } = r;
-  for (const y of [2030, 2050, 2100]) {
-    const i = y - years[0];
-    if (i >= 0 && i < years.length) {
-      lines.push(`  ${y}: median ${p.p50[i].toFixed(2)} K, likely (17-83 %) ${p.p17[i].toFixed(2)} to ${p.p83[i].toFixed(2)} K, very likely (5-95 %) ${p.p05[i].toFixed(2)} to ${p.p95[i].toFixed(2)} K`);
-    }
+/** The splice year a pathway's notes record ("spliced onto bundled history at 2025"), where the future starts. */
+function firstFutureYear(notes: readonly string[]): number | undefined {
+  for (const n of notes) {
+    const m = /spliced onto bundled history at (\d{4})/.exec(n);
+    if (m) return Number(m[1]);
   }
-  lines.push(...thresholds, peak);
-  return lines.join('\n') + '\n';
+  return undefined;
 }

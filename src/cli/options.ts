@@ -270,3 +270,11 @@ export function pathwayArg(arg: string, io: CliIo): string {
   const candidate = resolve(io.cwd, arg);
   return existsSync(candidate) ? candidate : arg;
 }
+
+/**
+ * The full cautions as a `--help` section (the terminal output prints only a line pointing here).
+ * @example cautionsHelp(['Global mean only.']) // '\nCautions:\n  - Global mean only.\n'
+ */
+export function cautionsHelp(cautions: readonly string[]): string {
+  return `\nCautions:\n${cautions.map((c) => `  - ${c}`).join('\n')}\n`;
+}

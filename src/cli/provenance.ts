@@ -53,7 +53,8 @@ export interface ProvenanceInput {
    */
   parameters?: Record<string, number | string>;
   baseline: readonly [number, number];
-  notes: string[];
+  /** Notes (default: the document's). */
+  notes?: string[];
   seed?: number;
   /** See Provenance.pathway. */
   pathway?: string;
@@ -75,7 +76,7 @@ export function buildProvenance(args: ProvenanceInput): Provenance {
     ...(args.pathway !== undefined ? { pathway: args.pathway } : {}),
     ...(args.pathwayInputs !== undefined ? { pathway_inputs: args.pathwayInputs } : {}),
     ...(args.seed !== undefined ? { seed: args.seed } : {}),
-    notes: args.notes,
+    notes: args.notes ?? [],
     caution: args.caution ?? CAUTION,
   };
 }

@@ -9,9 +9,17 @@ export function probAboveColumn(thresholdK: number): string {
   return `prob_above_${thresholdK}`;
 }
 
+/**
+ * The CSV/JSON column of the share of members that have crossed a threshold by each year.
+ * @example crossedByColumn(1.5) // 'crossed_by_1.5'
+ */
+export function crossedByColumn(thresholdK: number): string {
+  return `crossed_by_${thresholdK}`;
+}
+
 /** An ensemble's per-year output: column names in output order and one series per column. */
 export interface EnsembleTable {
-  /** `year`, `warming_p05_k` .. `warming_p95_k`, then `prob_above_<t>` per threshold (DESIGN.md order). */
+  /** `year`, `warming_p05_k` .. `warming_p95_k`, then per threshold `crossed_by_<t>` and `prob_above_<t>` (DESIGN.md). */
   columns: string[];
   /** Values of each column, one per year; NaN where a value does not exist (write it empty). */
   values: Record<string, Float64Array>;
@@ -34,6 +42,9 @@ export function ensembleTable(result: EnsembleResult): EnsembleTable {
   };
   add('year', result.years);
   for (const name of PERCENTILE_NAMES) add(`warming_${name}_k`, result.percentiles[name]);
-  result.config.thresholds.forEach((t, j) => add(probAboveColumn(t), result.probAbove[j]));
+  result.config.thresholds.forEach((t, j) => {
+    add(crossedByColumn(t), result.crossedBy[j]);
+    add(probAboveColumn(t), result.probAbove[j]);
+  });
   return { columns, values };
 }

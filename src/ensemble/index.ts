@@ -5,7 +5,7 @@ export { ensembleHeadlines } from './ensemble-headlines.js';
 export { ensembleMemory, mergeMemory } from './ensemble-memory.js';
 export type { MemoryEstimate } from './ensemble-memory.js';
 export type { EnsembleHeadlines, MedianCrossing, PeakHeadline, ThresholdHeadline } from './ensemble-headlines.js';
-export { ensembleTable, probAboveColumn } from './ensemble-table.js';
+export { crossedByColumn, ensembleTable, probAboveColumn } from './ensemble-table.js';
 export type { EnsembleTable } from './ensemble-table.js';
 export { EXCHANGE_RANGE, exchangeForTcr, solverTransientResponse, tcrSolver } from './exchange-for-tcr.js';
 export type { TcrSolver } from './exchange-for-tcr.js';

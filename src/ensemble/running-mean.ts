@@ -1,8 +1,11 @@
+import { WARMING_LEVEL_WINDOW } from '../metrics/warming-levels.js';
+
 /**
  * Years before and after the labelled year in a 20-year mean: year y stands for the mean of
- * y-9 .. y+10 (so 2030 stands for 2021-2040, the period AR6 calls near term).
+ * y-9 .. y+10 (so 2030 stands for 2021-2040, the period AR6 calls near term); the window is
+ * metrics' WARMING_LEVEL_WINDOW, the one definition every command uses.
  */
-export const RUNNING_MEAN_WINDOW = { before: 9, after: 10 } as const;
+export const RUNNING_MEAN_WINDOW = { before: WARMING_LEVEL_WINDOW.before, after: WARMING_LEVEL_WINDOW.after } as const;
 
 /**
  * The 20-year running mean of an annual series, the average IPCC AR6 WG1 uses to say when a warming

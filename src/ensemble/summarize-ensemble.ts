@@ -73,6 +73,12 @@ export interface EnsembleResult {
    * exceeds the threshold; NaN where the 20-year window leaves the run.
    */
   probAbove: Float64Array[];
+  /**
+   * Per threshold (in config order): share of members that have crossed it by each year, each member
+   * counting from the labelled year of its first 20-year mean above the level (so the share never
+   * falls); NaN where the 20-year window leaves the run. The figure the headlines quote.
+   */
+  crossedBy: Float64Array[];
   /** Per threshold: crossing probabilities by milestone years and the median crossing year. */
   crossings: ThresholdCrossing[];
   /** Unphysical draws discarded (redrawn) while sampling these members. */
@@ -145,11 +151,17 @@ export function summarizeEnsemble(members: EnsembleMembers | EnsembleMemberParam
     for (let k = first; k <= last; k++) p[k] = stats.counts[j * n + k] / m;
     return p;
   });
+  const crossedBy: Float64Array[] = [];
   const crossings = thresholds.map((thresholdK, j): ThresholdCrossing => {
     const crossedAt = stats.counts.subarray((thresholds.length + j) * n, (thresholds.length + j + 1) * n);
     const cumulative = new Float64Array(n);
+    const share = new Float64Array(n).fill(NaN);
     let total = 0;
-    for (let k = first; k <= last; k++) cumulative[k] = total += crossedAt[k];
+    for (let k = first; k <= last; k++) {
+      cumulative[k] = total += crossedAt[k];
+      share[k] = cumulative[k] / m;
+    }
+    crossedBy.push(share);
     let medianYear: number | null = null;
     for (let k = first; k <= last; k++) {
       if (2 * cumulative[k] >= m) {
@@ -182,6 +194,7 @@ export function summarizeEnsemble(members: EnsembleMembers | EnsembleMemberParam
     shard: members.shard,
     percentiles,
     probAbove,
+    crossedBy,
     crossings,
     redraws: members.redraws,
     parameters,
@@ -303,7 +316,8 @@ function ensembleNotes(members: EnsembleMemberParameters): string[] {
     ...(few ? [`warning: ${few}`] : []),
     ...(members.redraws > 0 ? [`${members.redraws} unphysical parameter draws were redrawn`] : []),
     'warming_pXX_k: percentiles across members of each year\'s warming, by linear interpolation between order statistics (Hyndman & Fan 1996, definition 7)',
-    `prob_above_<t>: share of members whose 20-year mean warming (years y-${before} to y+${after}) exceeds t K, the IPCC AR6 convention for reaching a warming level; empty where the 20-year window leaves the run`,
+    `prob_above_<t>: share of members whose 20-year mean warming (years y-${before} to y+${after}) is above t K in year y (a member that falls back below counts no more); empty where the 20-year window leaves the run`,
+    `crossed_by_<t>: share of members that have crossed t K by year y, a member counting from the first year its 20-year mean is above t (the IPCC AR6 rule for reaching a warming level) even if it later falls back; it never decreases, and it is the figure the headlines quote ("crossed by 2100")`,
     'crossing year: the labelled year of the first 20-year mean above the level; median crossing year: the first year by which at least half of the members have crossed',
     'peak warming (members\' own): each member\'s highest annual warming over the whole run and its year (the first such year on ties), then their percentiles across members; a member whose peak is the last year is still rising',
     ...c.sourceNotes,

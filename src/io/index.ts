@@ -1,6 +1,6 @@
 /**
  * The io layer: reading and validating pathway files, putting them on the annual grid, splicing them
- * onto the bundled history, and writing results (CSV, Markdown, JSON) atomically. Only this folder
+ * onto the bundled history, and writing files atomically (the formats themselves are report/'s writers). Only this folder
  * and `cli/` touch the file system.
  */
 export { parsePathway, type ParsedPathway } from './parse-pathway.js';
@@ -20,10 +20,7 @@ export {
 } from './bundled-pathways.js';
 export { loadPathway, readPathway, type LoadPathwayOptions, type ReadPathwayResult } from './load-pathway.js';
 export { describePathway } from './describe-pathway.js';
-export { tableColumns, type Table, type TableColumn } from './table.js';
-export { formatCsv } from './format-csv.js';
-export { formatMarkdown } from './format-markdown.js';
-export { formatJson } from './format-json.js';
+export { loadObservedRecord, HADCRUT5_CITATION, type ObservedRecord } from './observed-record.js';
 export { writeFileAtomic, writeFilesAtomic, type FileToWrite, type WriteFileAtomicOptions } from './write-file-atomic.js';
 export { parseParams, PARAMS_FILE_KEYS } from './read-params.js';
 export { pathwayFromParsed } from './load-pathway.js';

@@ -5,6 +5,7 @@ import { differences } from './differences.js';
 import { peak, type Peak } from './peak.js';
 import type { Series } from './series.js';
 import { valueAtYear } from './value-at-year.js';
+import { WARMING_LEVEL_WINDOW } from './warming-levels.js';
 
 /** Ensemble percentiles of warming, K relative to 1850-1900, one value per year. */
 export interface WarmingRange {
@@ -32,6 +33,11 @@ export interface CrossingOdds {
   lastWindowYear: number;
   /** Per year, the share of members whose 20-year mean warming around that year exceeds the level (NaN where the window leaves the run). */
   shareAbove: Float64Array;
+  /**
+   * Per year, the share of members that have crossed the level by that year (never decreasing; NaN
+   * where the window leaves the run): what "crossed by 2100" quotes.
+   */
+  crossedBy: Float64Array;
 }
 
 /** Five percentiles (5, 17, 50, 83, 95 %) of one quantity across an ensemble's members. */
@@ -74,8 +80,17 @@ export interface PathwayWarming {
   crossingOdds?: CrossingOdds[];
   /** The members' own peaks, when an ensemble was run; reports then give them as the pathway's peak. */
   membersPeak?: MembersPeak;
+  /** Members of the ensemble, when one was run. */
+  memberCount?: number;
   /** Net CO2 emissions, Gt CO2 per year, when the run is emission-driven. */
   co2Gtco2?: Float64Array;
+  /**
+   * Percentiles across paired members of this pathway's warming minus the reference's (member i of
+   * each pathway shares its sampled parameters), K, when both ran ensembles with the same seed.
+   */
+  differenceRange?: WarmingRange & { p50: Float64Array };
+  /** The full name of the pathway when `label` is a short label chosen for tables and headers. */
+  name?: string;
 }
 
 /** What a comparison reports and how. */
@@ -175,7 +190,7 @@ export function comparePathways(pathways: readonly PathwayWarming[], options: Co
     const missing = p.crossingOdds && thresholdsK.find((t) => !p.crossingOdds!.some((o) => o.thresholdK === t));
     if (missing !== undefined) throw new ConfigError(`the ensemble of "${p.label}" has no crossing odds for ${missing} K`, 'crossingOdds');
   }
-  const windowYears = options.windowYears ?? 20;
+  const windowYears = options.windowYears ?? WARMING_LEVEL_WINDOW.years;
   const keyYears = [...(options.keyYears ?? [2050, 2100])];
   const milestoneYears = [...options.milestoneYears];
   const ref = pathways[0];

@@ -1,3 +1,4 @@
+import { WARMING_LEVEL_WINDOW } from './warming-levels.js';
 import { runningMean } from './running-mean.js';
 
 /** The first averaging period whose mean exceeds a warming level. */
@@ -43,7 +44,7 @@ export interface CrossingPeriod {
  * const warming = years.map((y) => 1.0 + 0.02 * (y - 2010));
  * crossingPeriod(years, warming, 1.5) // { year: 2035, firstYear: 2026, lastYear: 2045, mean: ≈1.51, atStart: false }
  */
-export function crossingPeriod(years: Float64Array, values: ArrayLike<number>, threshold: number, window = 20): CrossingPeriod | undefined {
+export function crossingPeriod(years: Float64Array, values: ArrayLike<number>, threshold: number, window: number = WARMING_LEVEL_WINDOW.years): CrossingPeriod | undefined {
   const means = runningMean(values, window, 'centred');
   const before = Math.floor((window - 1) / 2);
   for (let i = before; i < means.length; i++) {
@@ -70,7 +71,7 @@ export function crossingPeriod(years: Float64Array, values: ArrayLike<number>, t
  * crossingYear(years, years.map((y) => 1.0 + 0.02 * (y - 2010)), 1.5) // 2035
  * crossingYear(years, years.map((y) => 1.0 + 0.02 * (y - 2010)), 3.0) // undefined
  */
-export function crossingYear(years: Float64Array, values: ArrayLike<number>, threshold: number, window = 20): number | undefined {
+export function crossingYear(years: Float64Array, values: ArrayLike<number>, threshold: number, window: number = WARMING_LEVEL_WINDOW.years): number | undefined {
   return crossingPeriod(years, values, threshold, window)?.year;
 }
 
@@ -83,6 +84,6 @@ export function crossingYear(years: Float64Array, values: ArrayLike<number>, thr
  * @param window period length in years, default 20
  * @example lastCrossingYear(2100) // 2090
  */
-export function lastCrossingYear(lastYear: number, window = 20): number {
+export function lastCrossingYear(lastYear: number, window: number = WARMING_LEVEL_WINDOW.years): number {
   return lastYear - (window - 1 - Math.floor((window - 1) / 2));
 }

@@ -10,6 +10,7 @@ import { forcingColumnsNotGiven } from '../forcing/lumped-forcing.js';
 import { EMISSION_COLUMNS, GASES, type Pathway, type PathwayProvenance } from '../pathway.js';
 import { energyBudget, energyBudgetNote } from './energy-budget.js';
 import { startFromRestNote } from './start-from-rest-note.js';
+import { rebase } from '../metrics/warming-levels.js';
 
 type BudgetColumns = Parameters<typeof energyBudget>[1];
 
@@ -160,23 +161,5 @@ export function projectPathway(pathway: Pathway, options: ProjectionOptions): Pr
   return { name: pathway.name, provenance: pathway.provenance, params, baseline, years, columns, notes };
 }
 
-/**
- * Subtracts the mean over the baseline years (inclusive) from a series.
- * @throws ConfigError when the series does not cover the whole baseline
- */
-export function rebase(years: Float64Array, values: Float64Array, baseline: readonly [number, number], name = 'pathway'): Float64Array {
-  const [from, to] = baseline;
-  const first = years[0];
-  const last = years[years.length - 1];
-  if (!(from <= to) || from < first || to > last) {
-    throw new ConfigError(
-      `baseline ${from}-${to} must lie within the years of ${name}, ${first}-${last}; give --baseline with years the run covers`,
-      'baseline',
-    );
-  }
-  let sum = 0;
-  for (let y = from; y <= to; y++) sum += values[y - first];
-  const mean = sum / (to - from + 1);
-  return values.map((v) => v - mean);
-}
-
+/** Warming relative to a baseline period: one definition, in metrics/warming-levels.ts. */
+export { rebase } from '../metrics/warming-levels.js';

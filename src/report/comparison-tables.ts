@@ -1,7 +1,26 @@
 import type { Comparison, CrossingOdds, MembersPeak, PathwayComparison } from '../metrics/compare-pathways.js';
 import { lastCrossingYear } from '../metrics/crossing-year.js';
 import { kelvin, MISSING, percent, signedKelvin } from './format-numbers.js';
-import type { TextTable } from './text-table.js';
+import type { OutputTable } from './output-table.js';
+
+/** Formatted cells, as the tables below are first laid out (then turned into OutputTables). */
+interface TextTable {
+  caption?: string;
+  columns: string[];
+  rows: string[][];
+  numeric?: boolean[];
+  notes?: string[];
+}
+
+/** A table of formatted cells as an OutputTable of text columns. */
+function outputTable(name: string, t: TextTable): OutputTable {
+  return {
+    name,
+    ...(t.caption ? { caption: t.caption } : {}),
+    columns: t.columns.map((label, j) => ({ key: label, label, values: t.rows.map((r) => r[j] ?? '') })),
+    ...(t.notes ? { notes: t.notes } : {}),
+  };
+}
 
 /** Options of {@link comparisonTables}. */
 export interface ComparisonTableOptions {
@@ -33,7 +52,7 @@ export interface ComparisonTableOptions {
  * @example
  * comparisonTables(c).milestones.columns // ['Year', 'steady (K)', 'swift (K)', 'swift vs steady (K)']
  */
-export function comparisonTables(c: Comparison, options: ComparisonTableOptions = {}): { milestones: TextTable; summary: TextTable; odds?: TextTable } {
+export function comparisonTables(c: Comparison, options: ComparisonTableOptions = {}): { milestones: OutputTable; summary: OutputTable; odds?: OutputTable } {
   const baseline = options.baseline ?? '1850-1900';
   const [ref, ...others] = c.pathways;
   const anyRange = c.pathways.some((p) => p.range);
@@ -90,21 +109,21 @@ export function comparisonTables(c: Comparison, options: ComparisonTableOptions 
     summaryNotes.push(`CO2 to net zero: net CO2 emissions summed from ${from} up to the year before they first reach zero or below.`);
   }
   return {
-    ...(withOdds.length > 0 ? { odds: oddsTable(c, withOdds) } : {}),
-    milestones: {
+    ...(withOdds.length > 0 ? { odds: outputTable('crossing odds', oddsTable(c, withOdds)) } : {}),
+    milestones: outputTable('milestones', {
       caption: `Warming at milestone years (K relative to ${baseline})`,
       columns,
       rows,
       numeric: columns.map(() => true),
       notes: milestoneNotes,
-    },
-    summary: {
+    }),
+    summary: outputTable('per option', {
       caption: 'Per pathway',
       columns: sColumns,
       rows: sRows,
       numeric: sColumns.map((_, j) => j > 0),
       notes: summaryNotes,
-    },
+    }),
   };
 }
 

@@ -1,30 +1,32 @@
 import { escapeMarkup } from './escape-markup.js';
 import { standardCautions } from './standard-cautions.js';
-import type { TextTable } from './text-table.js';
+import { humanCell, humanLabel, isNumeric, rowCount, type OutputTable } from './output-table.js';
 
 /** What {@link htmlReport} puts on the page. */
 export interface HtmlReportOptions {
   title: string;
   /** Headline sentences shown under the title. */
   summaryLines?: readonly string[];
-  /** Result tables, in order. */
-  tables: readonly TextTable[];
+  /** Result tables, in order (the headline table first). */
+  tables: readonly OutputTable[];
   /** Charts as SVG documents (e.g. from svgChart), inlined in order. */
   charts: readonly string[];
   /** Model and method choices: parameters, formula, baseline, history splice, ... (name -> text). */
   assumptions: Readonly<Record<string, string>>;
   /** Where the numbers came from (version, time, input hashes, parameters, seed), as the CLI built it. */
   provenance: object;
-  /** What uncertainty the report shows; see standardCautions. */
-  uncertainty?: string;
-  /** Cautions beyond the standard ones. */
+  /** The cautions, in full (default: standardCautions(uncertainty)). */
   cautions?: readonly string[];
+  /** What uncertainty the report shows, when `cautions` is not given; see standardCautions. */
+  uncertainty?: string;
+  /** Notes on how the inputs were read and run. */
+  notes?: readonly string[];
 }
 
 const CSS = `
 :root { color-scheme: light; }
 body { font-family: system-ui, -apple-system, 'Segoe UI', Roboto, Helvetica, Arial, sans-serif; color: #1a1a1a;
-  background: #ffffff; max-width: 980px; margin: 2rem auto; padding: 0 1rem; line-height: 1.45; }
+  background: #ffffff; max-width: 980px; overflow-wrap: anywhere; margin: 2rem auto; padding: 0 1rem; line-height: 1.45; }
 h1 { font-size: 1.6rem; margin-bottom: 0.4rem; }
 h2 { font-size: 1.2rem; margin-top: 2rem; border-bottom: 1px solid #d0d0d0; padding-bottom: 0.2rem; }
 .summary { font-size: 1.02rem; }
@@ -37,6 +39,7 @@ th { background: #f2f2f2; text-align: left; }
 td.num, th.num { text-align: right; }
 td.num { white-space: nowrap; }
 .note { font-size: 0.9rem; color: #444444; margin: 0.2rem 0; }
+.table-wrap { overflow-x: auto; max-width: 100%; }
 figure { margin: 1rem 0; }
 figure svg { max-width: 100%; height: auto; }
 dl.kv { display: grid; grid-template-columns: max-content 1fr; gap: 0.2rem 1rem; }
@@ -62,7 +65,7 @@ footer { margin-top: 2rem; font-size: 0.85rem; color: #555555; }
  */
 export function htmlReport(options: HtmlReportOptions): string {
   const e = escapeMarkup;
-  const cautions = [...standardCautions(options.uncertainty), ...(options.cautions ?? [])];
+  const cautions = options.cautions ?? standardCautions(options.uncertainty);
   const parts: string[] = [];
   parts.push('<!DOCTYPE html>', '<html lang="en">', '<head>', '<meta charset="utf-8">');
   parts.push(`<meta http-equiv="Content-Security-Policy" content="default-src 'none'; style-src 'unsafe-inline'; img-src data:">`);
@@ -83,6 +86,9 @@ export function htmlReport(options: HtmlReportOptions): string {
     for (const svg of options.charts) parts.push(`<figure>${svg.replace(/^\s*<\?xml[^>]*\?>\s*/, '').trim()}</figure>`);
     parts.push('</section>');
   }
+  if (options.notes && options.notes.length > 0) {
+    parts.push(`<section><h2>Notes</h2><ul>${options.notes.map((n) => `<li>${e(n)}</li>`).join('\n')}</ul></section>`);
+  }
   parts.push('<section><h2>Assumptions</h2>', keyValues(options.assumptions), '</section>');
   parts.push('<section><h2>Provenance</h2>', keyValues(options.provenance), '</section>');
   parts.push('<footer>Made with warmcast. This file is self-contained: it loads nothing from the network.</footer>');
@@ -90,14 +96,16 @@ export function htmlReport(options: HtmlReportOptions): string {
   return parts.join('\n') + '\n';
 }
 
-function tableHtml(t: TextTable): string {
+function tableHtml(t: OutputTable): string {
   const e = escapeMarkup;
-  const cls = (j: number) => (t.numeric?.[j] ? ' class="num"' : '');
-  const head = `<tr>${t.columns.map((c, j) => `<th scope="col"${cls(j)}>${e(c)}</th>`).join('')}</tr>`;
-  const body = t.rows.map((r) => `<tr>${t.columns.map((_, j) => `<td${cls(j)}>${e(r[j] ?? '')}</td>`).join('')}</tr>`).join('\n');
+  // Numbers and ranges right-aligned: every column after the first (the year or the option).
+  const cls = (j: number) => (j > 0 || isNumeric(t.columns[j]) ? ' class="num"' : '');
+  const head = `<tr>${t.columns.map((c, j) => `<th scope="col"${cls(j)}>${e(humanLabel(c))}</th>`).join('')}</tr>`;
+  const body = Array.from({ length: rowCount(t) }, (_, r) => `<tr>${t.columns.map((c, j) => `<td${cls(j)}>${e(humanCell(c, r))}</td>`).join('')}</tr>`).join('\n');
   const caption = t.caption ? `<caption>${e(t.caption)}</caption>` : '';
   const notes = (t.notes ?? []).map((n) => `<p class="note">${e(n)}</p>`).join('\n');
-  return `<table>${caption}<thead>${head}</thead><tbody>\n${body}\n</tbody></table>${notes ? '\n' + notes : ''}`;
+  // A table wider than the page scrolls inside its own box instead of widening the page.
+  return `<div class="table-wrap"><table>${caption}<thead>${head}</thead><tbody>\n${body}\n</tbody></table></div>${notes ? '\n' + notes : ''}`;
 }
 
 /** An object as a definition list; nested objects nest, arrays become lists. */

@@ -26,21 +26,3 @@ function valueText(v: unknown): string {
   }
   return String(v);
 }
-
-/**
- * A provenance record as Markdown list lines: one `- key: text` per top-level key, except that a
- * list of two or more items (the notes, the input files) becomes `- key:` with one nested item per
- * entry, so long lists read line by line. Line breaks inside values become spaces.
- *
- * @example
- * provenanceMarkdown({ version: '0.1.0', notes: ['a', 'b'] })
- * // ['- version: 0.1.0', '- notes:', '  - a', '  - b']
- */
-export function provenanceMarkdown(provenance: object): string[] {
-  const inline = (s: string) => s.replace(/\r\n|\r|\n/g, ' ');
-  return Object.entries(provenance)
-    .filter(([, v]) => v !== undefined)
-    .flatMap(([k, v]) =>
-      Array.isArray(v) && v.length > 1 ? [`- ${inline(k)}:`, ...v.map((item) => `  - ${inline(valueText(item))}`)] : [`- ${inline(k)}: ${inline(valueText(v))}`],
-    );
-}

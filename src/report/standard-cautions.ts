@@ -18,3 +18,20 @@ export function standardCautions(uncertainty?: string): string[] {
     'For decisions, defer to the official assessments (the IPCC reports) and to the guidance that applies in your own jurisdiction.',
   ];
 }
+
+/**
+ * The one caution line a terminal prints under the results, pointing to the full cautions, which
+ * every file and `--help` carry.
+ *
+ * @param command the command, for its `--help`
+ * @param ranged whether ranges across members are shown
+ * @example shortCaution('run', false) // 'a reduced-complexity global-mean estimate from one set of parameters, no range; ...'
+ */
+export function shortCaution(command: string, ranged: boolean): string {
+  return (
+    (ranged
+      ? 'reduced-complexity global-mean estimates; ranges cover sampled model parameters only, not the pathway or the model structure'
+      : 'a reduced-complexity global-mean estimate from one set of parameters, with no range') +
+    `; read the full cautions (warmcast ${command} --help, or any output file) before using these numbers`
+  );
+}

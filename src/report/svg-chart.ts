@@ -31,6 +31,10 @@ export interface SvgChartOptions {
   bands?: readonly ChartBand[];
   /** Levels drawn as dashed horizontal lines, labelled at the right end (e.g. 1.5 and 2 K). */
   thresholds?: readonly number[];
+  /** An observed record drawn as a thin dark line over its years (e.g. HadCRUT5, rebased), with its legend text. */
+  observed?: ChartLine;
+  /** Legend text explaining the shading, shown when there are bands (default: 5-95 % light, 17-83 % darker). */
+  bandNote?: string;
   /** Unit written after threshold labels (default `K`). */
   unit?: string;
   /** Width in px (default 720). */
@@ -44,7 +48,10 @@ const COLORS = ['#1f5fa8', '#c2410c', '#15803d', '#7e22ce', '#a16207', '#0e7490'
 /** Dash patterns, so lines differ in more than colour. */
 const DASHES = ['', '8 4', '2 3', '10 3 2 3', '5 2', '1 4', '12 4 2 4 2 4', '3 6'];
 const FONT = "system-ui, -apple-system, 'Segoe UI', Roboto, Helvetica, Arial, sans-serif";
-const BAND_OPACITY = 0.15;
+/** Opacity of one band layer: low, so the bands of several options stay apart where they overlap. */
+const BAND_OPACITY = 0.12;
+/** Colour of an observed record's line. */
+const OBSERVED_COLOR = '#111111';
 const FONT_PX = 12;
 /** Width of a character of the 12 px sans-serif font, px, erring wide (common practice, no source). */
 const CHAR_PX = 7;
@@ -91,6 +98,7 @@ export function svgChart(options: SvgChartOptions): string {
     }
   };
   for (const s of series) extend(s.years, s.values);
+  if (options.observed) extend(options.observed.years, options.observed.values);
   for (const b of bands) {
     extend(b.years, b.lower);
     extend(b.years, b.upper);
@@ -115,10 +123,12 @@ export function svgChart(options: SvgChartOptions): string {
   }
 
   // Legend items first: their rows take room from the plot.
-  type Item = { kind: 'line'; index: number; text: string } | { kind: 'band'; depth: number; text: string } | { kind: 'level'; text: string };
-  const items: Item[] = series.map((s, index) => ({ kind: 'line', index, text: s.label }));
-  const bandLabels = [...new Set(bands.map((b) => b.label))];
-  bandLabels.forEach((text, depth) => items.push({ kind: 'band', depth, text }));
+  // One legend entry per line; a line with bands shows them in its swatch, in its own colour, so
+  // each band is tied to its line.
+  type Item = { kind: 'line'; index: number; text: string; banded: number } | { kind: 'observed'; text: string } | { kind: 'shade'; text: string } | { kind: 'level'; text: string };
+  const items: Item[] = series.map((s, index) => ({ kind: 'line', index, text: s.label, banded: bands.filter((b) => b.of === s.label).length }));
+  if (options.observed) items.push({ kind: 'observed', text: options.observed.label });
+  if (bands.length > 0) items.push({ kind: 'shade', text: options.bandNote ?? 'shading: 5-95 % range, darker 17-83 %' });
   if (thresholds.length > 0) items.push({ kind: 'level', text: `${thresholds.map((t) => levelText(t, unit)).join(', ')} levels` });
   const margin = { top: 40, right: 58, bottom: 48, left: 62 };
   const placed: { item: Item; x: number; row: number }[] = [];
@@ -171,7 +181,7 @@ export function svgChart(options: SvgChartOptions): string {
       .y0((i) => ys(b.lower[i]))
       .y1((i) => ys(b.upper[i]))
       .digits(1)(idx);
-    if (d) out.push(`<path data-band="${escapeMarkup(b.label)}" d="${d}" fill="${colorOf(b.of)}" fill-opacity="${BAND_OPACITY}" stroke="none"/>`);
+    if (d) out.push(`<path data-band="${escapeMarkup(b.label)}" d="${d}" data-of="${escapeMarkup(b.of)}" fill="${colorOf(b.of)}" fill-opacity="${BAND_OPACITY}" stroke="none"/>`);
   }
   for (const t of thresholds) {
     const y = px(ys(t));
@@ -193,6 +203,15 @@ export function svgChart(options: SvgChartOptions): string {
     );
   });
 
+  if (options.observed) {
+    const o = options.observed;
+    const d = line<number>()
+      .defined((k) => Number.isFinite(o.values[k]))
+      .x((k) => xs(o.years[k]))
+      .y((k) => ys(o.values[k]))
+      .digits(1)(Array.from({ length: o.years.length }, (_, k) => k));
+    if (d) out.push(`<path data-observed="${escapeMarkup(o.label)}" d="${d}" fill="none" stroke="${OBSERVED_COLOR}" stroke-width="1" stroke-linejoin="round"/>`);
+  }
   out.push(`<path d="M${margin.left},${margin.top}V${px(plotBottom)}H${plotRight}" fill="none" stroke="#333333" stroke-width="1"/>`);
   out.push(
     `<g fill="#333333" text-anchor="end">${yTicks
@@ -216,12 +235,17 @@ export function svgChart(options: SvgChartOptions): string {
     const y = legendTop + r * LEGEND_ROW_PX;
     if (item.kind === 'line') {
       const dash = DASHES[styleOf(item.index) % DASHES.length];
+      const color = COLORS[styleOf(item.index) % COLORS.length];
+      const label = escapeMarkup(series[item.index].label);
+      // The swatch: the line's bands as stacked rectangles in its colour, its line across them.
+      for (let k = 0; k < item.banded; k++) out.push(`<rect class="legend-band" data-of="${label}" x="${lx}" y="${y - 6}" width="28" height="12" fill="${color}" fill-opacity="${BAND_OPACITY}"/>`);
       out.push(
-        `<line x1="${lx}" x2="${lx + 28}" y1="${y}" y2="${y}" stroke="${COLORS[styleOf(item.index) % COLORS.length]}" stroke-width="2"${dash ? ` stroke-dasharray="${dash}"` : ''}/>`,
+        `<line class="legend-line" data-series="${label}" x1="${lx}" x2="${lx + 28}" y1="${y}" y2="${y}" stroke="${color}" stroke-width="2"${dash ? ` stroke-dasharray="${dash}"` : ''}/>`,
       );
-    } else if (item.kind === 'band') {
-      // The swatch stacks as many layers as the band has under it when bands nest widest first.
-      for (let k = 0; k <= item.depth; k++) out.push(`<rect x="${lx}" y="${y - 6}" width="28" height="12" fill="#777777" fill-opacity="${BAND_OPACITY}"/>`);
+    } else if (item.kind === 'observed') {
+      out.push(`<line class="legend-observed" x1="${lx}" x2="${lx + 28}" y1="${y}" y2="${y}" stroke="${OBSERVED_COLOR}" stroke-width="1"/>`);
+    } else if (item.kind === 'shade') {
+      for (let k = 0; k < 2; k++) out.push(`<rect x="${lx}" y="${y - 6 + 3 * k}" width="28" height="${12 - 6 * k}" fill="#777777" fill-opacity="${BAND_OPACITY}"/>`);
     } else {
       out.push(`<line x1="${lx}" x2="${lx + 28}" y1="${y}" y2="${y}" stroke="#555555" stroke-width="1" stroke-dasharray="5 4"/>`);
     }

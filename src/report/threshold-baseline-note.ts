@@ -1,10 +1,7 @@
-/** Reference period of the IPCC AR6 global warming levels (1.5 K, 2 K), inclusive years (IPCC AR6 WG1 SPM, from memory). */
-export const AR6_REFERENCE_PERIOD: readonly [number, number] = [1850, 1900];
+import { AR6_BASELINE as AR6_REFERENCE_PERIOD, isAr6Baseline } from '../metrics/warming-levels.js';
 
-/** Whether warming relative to `baseline` is on the footing of the AR6 warming levels. */
-export function isAr6Baseline(baseline: readonly [number, number]): boolean {
-  return baseline[0] === AR6_REFERENCE_PERIOD[0] && baseline[1] === AR6_REFERENCE_PERIOD[1];
-}
+/** Reference period of the IPCC AR6 global warming levels, from metrics/warming-levels.ts (one home). */
+export { AR6_REFERENCE_PERIOD, isAr6Baseline };
 
 /**
  * The note an output carries when its warming, and so its thresholds, are relative to a baseline

@@ -7,7 +7,7 @@ import type { Pathway } from '../pathway.js';
 import { withinRange, type PublishedCheck } from './published-check.js';
 
 
-/** The default model's options for the emission-driven runs below (ECS 3 K, TCR 1.8 K, feedback on). */
+/** Options for the emission-driven runs below: the AR6 best estimates ECS 3 K, TCR 1.8 K (calibrate's defaults), feedback on. */
 function defaults(): { params: ReturnType<typeof calibrate>; options: EmissionRunOptions } {
   const params = calibrate();
   return { params, options: { forcing: { co2Formula: params.co2Formula, forcing2xWm2: params.forcing2xWm2 } } };
@@ -22,7 +22,7 @@ const mean = (a: Float64Array, from: number, to: number) => a.slice(from, to + 1
 
 /**
  * The airborne fraction of a 100 Gt C pulse on a 389 ppm background (the PD100 protocol of Joos et
- * al. 2013, ACP 13, 2793: history to 2010, then 389 ppm; pulse in 2015), default model with the
+ * al. 2013, ACP 13, 2793: history to 2010, then 389 ppm; pulse in 2015), model with ECS 3 K, TCR 1.8 K and the
  * carbon-climate feedback, against the multi-model means ± spreads 0.60 ± 0.14 (20 yr), 0.41 ± 0.13
  * (100 yr), 0.25 ± 0.09 (1000 yr) (quoted by secondary sources).
  */
@@ -48,7 +48,7 @@ export const joosPulse: PublishedCheck = {
 };
 
 /**
- * Cumulative CO2 emissions 1850-2019 diagnosed by the default model from the bundled history's
+ * Cumulative CO2 emissions 1850-2019 diagnosed by the ECS 3 K, TCR 1.8 K model from the bundled history's
  * concentrations (the carbon sinks the history implies), against 2390 ± 240 Gt CO2 (IPCC AR6 WG1
  * SPM; from memory).
  */
@@ -75,7 +75,7 @@ export const historicalEmissions: PublishedCheck = {
 };
 
 /**
- * TCRE of the default model: warming over years 61-80 of the 1 %/yr CO2 run per cumulative
+ * TCRE of the model with ECS 3 K, TCR 1.8 K: warming over years 61-80 of the 1 %/yr CO2 run per cumulative
  * emission to year 70 (IPCC AR6 WG1 Box 5.2), against the AR6 likely range 1.0-2.3 K per 1000 Pg C.
  */
 export const tcre: PublishedCheck = {
@@ -88,13 +88,13 @@ export const tcre: PublishedCheck = {
     for (let k = 60; k < 80; k++) warming += 0.5 * (run.surfaceK[k] + run.surfaceK[k + 1]);
     warming /= 20;
     const perTtc = (1000 * warming) / run.carbonBudget.emittedGtc[70];
-    return [withinRange('TCRE, default model (1 %/yr CO2, compatible emissions)', 'IPCC AR6 WG1 SPM D.1.1 (likely range)', '1.65 [1.0-2.3]', perTtc, 1.0, 2.3, 'K per 1000 Pg C', 2)];
+    return [withinRange('TCRE, model with the AR6 best-estimate ECS 3 K and TCR 1.8 K (1 %/yr CO2, compatible emissions)', 'IPCC AR6 WG1 SPM D.1.1 (likely range)', '1.65 [1.0-2.3]', perTtc, 1.0, 2.3, 'K per 1000 Pg C', 2)];
   },
 };
 
 /**
  * The zero-emissions commitment 50 years after 1000 Pg C have been emitted along 1 %/yr CO2
- * (ZECMIP protocol, MacDougall et al. 2020, BG 17, 2987), default model, against the AR6 likely
+ * (ZECMIP protocol, MacDougall et al. 2020, BG 17, 2987), model with ECS 3 K and TCR 1.8 K, against the AR6 likely
  * range -0.3 to +0.3 K (SPM D.1.1; from memory).
  */
 export const zeroEmissionsCommitment: PublishedCheck = {
@@ -115,6 +115,6 @@ export const zeroEmissionsCommitment: PublishedCheck = {
       options,
     );
     const zec50 = mean(zero.surfaceK, stop + 40, stop + 59) - mean(onePercent.surfaceK, stop - 10, stop + 9);
-    return [withinRange('zero-emissions commitment ZEC50 after 1000 Pg C, default model', 'IPCC AR6 WG1 SPM D.1.1 (likely range; from memory); MacDougall et al. 2020', 'about 0 [-0.3 to 0.3]', zec50, -0.3, 0.3, 'K', 3)];
+    return [withinRange('zero-emissions commitment ZEC50 after 1000 Pg C, model with ECS 3 K and TCR 1.8 K', 'IPCC AR6 WG1 SPM D.1.1 (likely range; from memory); MacDougall et al. 2020', 'about 0 [-0.3 to 0.3]', zec50, -0.3, 0.3, 'K', 3)];
   },
 };

@@ -5,18 +5,34 @@ import Papa from 'papaparse';
 import { describe, expect, it } from 'vitest';
 import { captureIo } from '../../src/cli/cli-io.js';
 import { main } from '../../src/cli/main.js';
-import { percentText } from '../../src/report/ensemble-headlines-text.js';
 
 const tmp = () => mkdtempSync(join(tmpdir(), 'warmcast-compare-'));
 
 describe('warmcast compare', () => {
-  it('prints milestones, differences from the reference, crossings and a legend that names each marker', async () => {
+  it('prints the headline table, the milestone table with short labels in every header, the differences and a legend', async () => {
     const io = captureIo();
     expect(await main(['compare', 'steady', 'delayed', 'swift-emissions', '--years', '2030,2050,2100'], io)).toBe(0);
-    expect(io.out).toMatch(/Delayed action vs Steady growth/);
-    expect(io.out).toMatch(/Reaches 1\.5 K/);
-    expect(io.out).toMatch(/CO2 to net zero/);
-    expect(io.out).toMatch(/o─ Steady growth/);
+    // Labels are the arguments as typed (letters when long): no header repeats the full names.
+    expect(io.out).toMatch(/^ {2}option +2030 K +2050 K +2100 K +peak K +peak year +1\.5 K reached +2 K reached$/m);
+    expect(io.out).toMatch(/^ {2}year +steady K +delayed K +delayed - steady +C K +C - steady$/m);
+    expect(io.out).toContain('steady = Steady growth; delayed = Delayed action; C = Swift transition (emissions)');
+    expect(io.out).not.toMatch(/Delayed action vs|Steady growth K/);
+    expect(io.out).toMatch(/o─ steady {3}\+─ delayed {3}x─ C/);
+  });
+
+  it('--labels A,B and LABEL=PATH arguments name the options in every header; a wrong count or a repeated label is refused with exit 2', async () => {
+    const io = captureIo();
+    expect(await main(['compare', 'steady', 'swift', '--labels', 'now,plan', '--no-chart'], io)).toBe(0);
+    expect(io.out).toMatch(/^ {2}year +now K +plan K +plan - now$/m);
+    const typed = captureIo();
+    expect(await main(['compare', 'base=steady', 'fast=swift', '--no-chart'], typed)).toBe(0);
+    expect(typed.out).toMatch(/^ {2}year +base K +fast K +fast - base$/m);
+    const count = captureIo();
+    expect(await main(['compare', 'steady', 'swift', '--labels', 'A'], count)).toBe(2);
+    expect(count.err).toMatch(/--labels must give one label per option: 2 options, 1 labels/);
+    const twice = captureIo();
+    expect(await main(['compare', 'x=steady', 'x=swift'], twice)).toBe(2);
+    expect(twice.err).toMatch(/labels must be distinct; "x" appears twice/);
   });
 
   it('writes a long CSV whose reference differences are zero and whose other differences equal warming minus the reference', async () => {
@@ -24,50 +40,40 @@ describe('warmcast compare', () => {
     const io = captureIo();
     expect(await main(['compare', 'steady', 'swift', '--out', join(dir, 'c.csv')], io)).toBe(0);
     expect(readdirSync(dir).sort()).toEqual(['c.csv', 'c.meta.json']);
-    // The sidecar carries the per-pathway figures the long table has no room for.
+    // The sidecar carries the per-option figures the long table has no room for.
     const meta = JSON.parse(readFileSync(join(dir, 'c.meta.json'), 'utf8'));
-    expect(meta.comparison.pathways.map((p: { pathway: string }) => p.pathway)).toEqual(['Steady growth', 'Swift transition']);
+    expect(meta.comparison.pathways.map((p: { pathway: string }) => p.pathway)).toEqual(['steady', 'swift']);
     expect(meta.comparison.pathways[0].crossings[0]).toMatchObject({ threshold_k: 1.5 });
-    expect(meta.comparison.pathways[0].annual).toBeUndefined();
+    expect(meta.headline.map((h: { label: string }) => h.label)).toEqual(['steady', 'swift']);
     const rows = Papa.parse<Record<string, string>>(readFileSync(join(dir, 'c.csv'), 'utf8').trim(), { header: true }).data;
     const ref = new Map<number, number>();
-    for (const r of rows.filter((r) => r.pathway === 'Steady growth')) {
+    for (const r of rows.filter((r) => r.pathway === 'steady')) {
       expect(Number(r.difference_k)).toBe(0);
       ref.set(Number(r.year), Number(r.warming_k));
     }
-    for (const r of rows.filter((r) => r.pathway === 'Swift transition')) {
+    for (const r of rows.filter((r) => r.pathway === 'swift')) {
       expect(Number(r.difference_k)).toBe(Number(r.warming_k) - ref.get(Number(r.year))!);
     }
   });
 
-  it('writes Markdown, JSON, SVG and HTML, each with provenance or a title, and refuses an unknown extension', async () => {
-    const dir = tmp();
-    for (const ext of ['md', 'json', 'svg', 'html']) {
-      expect(await main(['compare', 'steady', 'swift', '--out', join(dir, `c.${ext}`)], captureIo()), ext).toBe(0);
-    }
-    expect(readFileSync(join(dir, 'c.md'), 'utf8')).toMatch(/sha256|SHA-256/i);
-    expect(JSON.parse(readFileSync(join(dir, 'c.json'), 'utf8')).provenance.tool).toBe('warmcast');
-    expect(readFileSync(join(dir, 'c.svg'), 'utf8')).toMatch(/^<svg[\s\S]*<\/svg>\s*$/);
-    const html = readFileSync(join(dir, 'c.html'), 'utf8');
-    expect(html).toMatch(/<svg/);
-    expect(html).not.toMatch(/(src|href)="https?:/);
-    const io = captureIo();
-    expect(await main(['compare', 'steady', 'swift', '--out', join(dir, 'c.xlsx')], io)).toBe(2);
-    expect(io.err).toMatch(/extension must be one of/);
-  });
-
-  it('with --members shows ensemble ranges in brackets and records the seed in the provenance', async () => {
+  it('with --members shows ensemble ranges in brackets, the differences\' ranges from paired members, and records the seed in the provenance', async () => {
     const dir = tmp();
     const io = captureIo();
     expect(await main(['compare', 'steady', 'swift', '--members', '100', '--seed', '5', '--years', '2050,2100', '--out', join(dir, 'c.json')], io)).toBe(0);
-    expect(io.out).toMatch(/\d\.\d\d \(\d\.\d\d to \d\.\d\d\) \[\d\.\d\d to \d\.\d\d\]/);
+    expect(io.out).toMatch(/^ {2}2100 +\d\.\d\d \[\d\.\d\d-\d\.\d\d\] +\d\.\d\d \[\d\.\d\d-\d\.\d\d\] +-\d\.\d\d \[-\d\.\d\d to -\d\.\d\d\]$/m);
     const doc = JSON.parse(readFileSync(join(dir, 'c.json'), 'utf8'));
     expect(doc.provenance.seed).toBe(5);
     // No single parameter set was used: provenance records what the members share, not ECS 3 / TCR 1.8.
-    expect(doc.provenance.caution).toMatch(/Ranges are shown for Steady growth, Swift transition/);
+    expect(doc.provenance.caution).toMatch(/Ranges are shown for steady, swift/);
     expect(doc.provenance.caution).not.toMatch(/No uncertainty range is shown/);
     expect(doc.provenance.parameters).toEqual({ co2_formula: 'ar6' });
-    expect(doc.provenance.notes).toContain('warming_k and the milestone values are the ensemble median of each pathway; its crossing years are the first years by which half of the members have crossed');
+    expect(doc.columns).toEqual(expect.arrayContaining(['difference_p05_k', 'difference_p95_k', 'crossed_by_1.5', 'prob_above_1.5']));
+    // Paired members: the spread of the difference is narrower than the two options' ranges side by side.
+    const at2100 = (label: string) => doc.rows.find((r: Record<string, number | string>) => r.pathway === label && r.year === 2100);
+    const s = at2100('steady');
+    const w = at2100('swift');
+    expect(w.difference_p95_k - w.difference_p05_k).toBeLessThan(w.warming_p95_k - w.warming_p05_k + (s.warming_p95_k - s.warming_p05_k));
+    expect(w.difference_p05_k).toBeLessThanOrEqual(w.difference_p50_k);
   });
 
   it('--out - writes the long CSV alone on stdout, and provenance hashes the history a pathway was spliced onto', async () => {
@@ -81,48 +87,26 @@ describe('warmcast compare', () => {
     expect(inputs.some((p: string) => p.endsWith('history.csv'))).toBe(true);
   });
 
-  it('with --members takes crossing years and chances from the members, as `warmcast ensemble` does for the same seed, and ends with notes and cautions', async () => {
-    const cmp = captureIo();
-    expect(await main(['compare', 'steady', 'swift', '--members', '300', '--seed', '5', '--no-chart'], cmp)).toBe(0);
-    const ens = captureIo();
-    expect(await main(['ensemble', 'swift', '--members', '300', '--seed', '5', '--no-chart'], ens)).toBe(0);
-    for (const level of ['1.5', '2']) {
-      const e = new RegExp(`^  ${level.replace('.', '\\.')} K \\(20-year mean\\): probability of crossing by 2050 ([<>]?\\d+) %, by 2100 ([<>]?\\d+) %; (?:median crossing year (\\d+)|fewer than half)`, 'm').exec(ens.out)!;
-      const c = new RegExp(`Swift transition: .*${level.replace('.', '\\.')} K: probability of crossing ([<>]?\\d+) % by 2050, ([<>]?\\d+) % by 2100, (?:median crossing year (\\d+)|fewer than half)`).exec(cmp.out)!;
-      expect(e, ens.out).not.toBeNull();
-      expect(c, cmp.out).not.toBeNull();
-      expect(c.slice(1)).toEqual(e.slice(1));
-    }
-    expect(cmp.out).toMatch(/Probability of crossing each warming level/);
-    expect(cmp.out).toMatch(/^  note: all ensembles: members drawn with replacement from the \d+ equally weighted members of the calibrated set/m);
-    expect(cmp.out).toMatch(/^  caution: .*weighted by how well each member reproduces the observed warming/m);
-  });
-
-  it('with --members the peak is the members\' own, as `warmcast ensemble` gives it for the same seed: in the headline, the table and the JSON', async () => {
+  it('with --members takes its headline (crossing years, shares crossed, members\' peaks) from the members, as `warmcast ensemble` does for the same seed', async () => {
     const dir = tmp();
     const cmp = captureIo();
-    expect(await main(['compare', 'steady', 'swift', '--members', '150', '--seed', '5', '--no-chart'], cmp)).toBe(0);
-    const ens = captureIo();
-    expect(await main(['ensemble', 'swift', '--members', '150', '--seed', '5', '--no-chart', '--out', join(dir, 'e.json')], ens)).toBe(0);
-    const peak = JSON.parse(readFileSync(join(dir, 'e.json'), 'utf8')).headlines.peak;
-    const k = (v: number) => v.toFixed(2);
-    const rising = peak.still_rising > 0 ? ` \\(${percentText(peak.still_rising)} still rising in 2150\\)` : '';
-    expect(cmp.out).toMatch(new RegExp(`Swift transition: members' median peak ${k(peak.warming_k.p50)} K \\[${k(peak.warming_k.p05)} to ${k(peak.warming_k.p95)}\\] in ${Math.round(peak.year.p50)}${rising}; `));
-    expect(cmp.out).not.toMatch(/median peaks at/);
-    expect(cmp.out).toMatch(new RegExp(`^  Swift transition +${k(peak.warming_k.p50)} \\[${k(peak.warming_k.p05)} to ${k(peak.warming_k.p95)}\\] +${Math.round(peak.year.p50)}`, 'm'));
-    expect(cmp.out).toMatch(/the peak is the members' own, not the median line's/);
-    expect(await main(['compare', 'steady', 'swift', '--members', '150', '--seed', '5', '--no-chart', '--out', join(dir, 'c.json')], captureIo())).toBe(0);
-    const doc = JSON.parse(readFileSync(join(dir, 'c.json'), 'utf8'));
-    expect(doc.pathways[1].members_peak).toEqual(peak);
+    expect(await main(['compare', 'steady', 'swift', '--members', '150', '--seed', '5', '--no-chart', '--out', join(dir, 'c.json')], cmp)).toBe(0);
+    expect(await main(['ensemble', 'swift', '--members', '150', '--seed', '5', '--thresholds', '1.5,2', '--no-chart', '--out', join(dir, 'e.json')], captureIo())).toBe(0);
+    const c = JSON.parse(readFileSync(join(dir, 'c.json'), 'utf8')).headline[1];
+    const e = JSON.parse(readFileSync(join(dir, 'e.json'), 'utf8')).headline[0];
+    expect(c.peak).toEqual(e.peak);
+    expect(c.crossings).toEqual(e.crossings);
+    expect(c.atYears).toEqual(e.atYears);
+    expect(cmp.out).toMatch(/^ {2}caution: .*ranges cover sampled model parameters only/m);
   });
 
-  it('--years are put in order once each, and a year no pathway covers is refused with exit 2', async () => {
+  it('--years are put in order once each, and a year outside the pathways is refused with exit 2', async () => {
     const io = captureIo();
     expect(await main(['compare', 'steady', 'swift', '--years', '2100,2050,2100', '--no-chart'], io)).toBe(0);
     expect(io.out.match(/^  (2050|2100)  /gm)).toEqual(['  2050  ', '  2100  ']);
     const bad = captureIo();
     expect(await main(['compare', 'steady', 'swift', '--years', '2200,2050'], bad)).toBe(2);
-    expect(bad.err).toMatch(/--years 2200 must lie within the years the pathways cover, 1750-2150/);
+    expect(bad.err).toMatch(/--years 2200 must lie within the years shown, 1750-2150/);
     const half = captureIo();
     expect(await main(['compare', 'steady', 'swift', '--years', '2030,2035.5'], half)).toBe(2);
     expect(half.err).toMatch(/--years must be whole years, such as 2030,2050,2100; got 2035\.5/);
@@ -138,7 +122,7 @@ describe('warmcast compare', () => {
     expect(feedback.err).toMatch(/--no-carbon-feedback would be ignored/);
   });
 
-  it('--from starts the charts (terminal and SVG) at that year, and a year outside the pathways is refused', async () => {
+  it('--from starts the charts (terminal and SVG) and the files at that year, and a year outside the pathways is refused', async () => {
     const dir = tmp();
     const io = captureIo();
     expect(await main(['compare', 'steady', 'swift', '--from', '2000', '--out', join(dir, 'c.svg')], io)).toBe(0);
@@ -149,8 +133,7 @@ describe('warmcast compare', () => {
     expect(svg).not.toMatch(/>1900</);
     expect(svg).toMatch(/>2000</);
     const bad = captureIo();
-    expect(await main(['compare', 'steady', 'swift', '--from', '2150'], bad)).toBe(2);
-    expect(bad.err).toMatch(/--from 2150 must lie within the years of the pathways and before their end, 1750-2149/);
+    expect(await main(['compare', 'steady', 'swift', '--from', '1700'], bad)).toBe(2);
+    expect(bad.err).toMatch(/--from\/--to \(1700-2150\) must lie within the years of the run, 1750-2150/);
   });
 });
-

@@ -5,7 +5,7 @@ import Papa from 'papaparse';
 import { describe, expect, it } from 'vitest';
 import { captureIo } from '../../src/cli/cli-io.js';
 import { main } from '../../src/cli/main.js';
-import { percentText } from '../../src/report/ensemble-headlines-text.js';
+import { percent as percentText } from '../../src/report/format-numbers.js';
 
 const tmp = () => mkdtempSync(join(tmpdir(), 'warmcast-ens-'));
 
@@ -15,11 +15,16 @@ describe('warmcast ensemble and merge', () => {
     const io = captureIo();
     expect(await main(['ensemble', 'swift', '--members', '200', '--seed', '7', '--out', join(dir, 'e.csv')], io)).toBe(0);
     const header = readFileSync(join(dir, 'e.csv'), 'utf8').split('\n')[0];
-    expect(header).toBe('year,warming_p05_k,warming_p17_k,warming_p50_k,warming_p83_k,warming_p95_k,prob_above_1.5,prob_above_2,prob_above_3');
-    expect(io.out).toMatch(/1\.5 K \(20-year mean\): probability of crossing by 2050 \d+ %, by 2100 \d+ %; median crossing year \d{4}/);
-    expect(io.out).toMatch(/unphysical draws redrawn/);
+    expect(header).toBe(
+      'year,warming_p05_k,warming_p17_k,warming_p50_k,warming_p83_k,warming_p95_k,crossed_by_1.5,prob_above_1.5,crossed_by_2,prob_above_2,crossed_by_3,prob_above_3',
+    );
+    expect(io.out.replace(/\n {12}/g, ' ')).toMatch(/^ {2}reached {3}1\.5 K: median \d{4}; members crossed: \d+ % by 2030, \d+ % by 2050, \d+ % by 2100 \(20-year means, the IPCC AR6 rule\)/m);
     const meta = JSON.parse(readFileSync(join(dir, 'e.meta.json'), 'utf8'));
     expect(meta.seed).toBe(7);
+    expect(meta.notes.join("\n")).toMatch(/members drawn with replacement from the \d+ equally weighted members of the calibrated set/);
+    // Both shares are explained in the file's notes.
+    expect(meta.notes.some((n: string) => n.startsWith('crossed_by_<t>: share of members that have crossed t K by year y'))).toBe(true);
+    expect(meta.notes.some((n: string) => n.startsWith('prob_above_<t>: share of members whose 20-year mean warming'))).toBe(true);
     // Percentiles ordered in every year (a property of order statistics).
     const rows = Papa.parse<string[]>(readFileSync(join(dir, 'e.csv'), 'utf8').trim()).data.slice(1);
     for (const r of rows) {
@@ -41,29 +46,31 @@ describe('warmcast ensemble and merge', () => {
     expect(readFileSync(join(dir, 'm.csv')).equals(a)).toBe(true);
   });
 
-  it('ensemble prints the members\' own peak (median, likely and very likely, median year, share still rising), and the JSON, .meta.json and merged shards carry the same figures', async () => {
+  it('ensemble prints the members\' own peak (median, 5-95 %, median year, share still rising), and the JSON, .meta.json and merged shards carry the same figures', async () => {
     const dir = tmp();
     const run = (args: string[], io = captureIo()) => main(['ensemble', 'delayed', '--members', '120', '--seed', '5', '--no-chart', ...args], io);
     const io = captureIo();
     expect(await run(['--out', join(dir, 'e.csv')], io)).toBe(0);
-    const line = /^  peak warming \(members' own\): median (\d+\.\d\d) K \(likely (\d+\.\d\d) to (\d+\.\d\d), very likely (\d+\.\d\d) to (\d+\.\d\d)\), in (\d{4}) \(likely (\d{4}) to (\d{4})\); ([<>]?\d+) % of members still rising in 2150$/m.exec(io.out);
+    const line = /^ {2}peak {6}(\d+\.\d\d) K \[(\d+\.\d\d)-(\d+\.\d\d)\] in (\d{4})(?:; ([<>]?\d+) % of members still rising at the end)?$/m.exec(io.out);
     expect(line, io.out).not.toBeNull();
-    const peak = JSON.parse(readFileSync(join(dir, 'e.meta.json'), 'utf8')).headlines.peak;
-    expect(line!.slice(1, 6).map(Number)).toEqual([peak.warming_k.p50, peak.warming_k.p17, peak.warming_k.p83, peak.warming_k.p05, peak.warming_k.p95].map((v: number) => +v.toFixed(2)));
-    expect(line!.slice(6, 9).map(Number)).toEqual([peak.year.p50, peak.year.p17, peak.year.p83].map(Math.round));
-    expect(line![9]).toBe(percentText(peak.still_rising).replace(' %', ''));
+    const meta = JSON.parse(readFileSync(join(dir, 'e.meta.json'), 'utf8'));
+    const peak = meta.ensemble.peak;
+    expect(line!.slice(1, 4).map(Number)).toEqual([peak.warming_k.p50, peak.warming_k.p05, peak.warming_k.p95].map((v: number) => +v.toFixed(2)));
+    expect(Number(line![4])).toBe(Math.round(peak.year.p50));
+    if (peak.still_rising > 0) expect(line![5]).toBe(percentText(peak.still_rising).replace(' %', ''));
     // Ordered percentiles; peak years within the run.
     const w = peak.warming_k;
     expect(w.p05 <= w.p17 && w.p17 <= w.p50 && w.p50 <= w.p83 && w.p83 <= w.p95).toBe(true);
     expect(peak.year.p05).toBeGreaterThanOrEqual(1750);
     expect(peak.year.p95).toBeLessThanOrEqual(2150);
-    // The JSON output carries the same headlines; merged shards (which find the peaks in the kept warming) give them bit for bit.
+    expect(meta.headline[0].peak).toMatchObject({ warmingK: w.p50, year: Math.round(peak.year.p50), range: { p05: w.p05, p95: w.p95 } });
+    // The JSON output carries the same figures; merged shards (which find the peaks in the kept warming) give them bit for bit.
     expect(await run(['--out', join(dir, 'e.json')])).toBe(0);
-    expect(JSON.parse(readFileSync(join(dir, 'e.json'), 'utf8')).headlines.peak).toEqual(peak);
+    expect(JSON.parse(readFileSync(join(dir, 'e.json'), 'utf8')).ensemble.peak).toEqual(peak);
     for (const k of [1, 2]) expect(await run(['--shard', `${k}/2`, '--out', join(dir, `s${k}.json`)])).toBe(0);
     const merged = captureIo();
     expect(await main(['merge', join(dir, 's2.json'), join(dir, 's1.json'), '--out', join(dir, 'm.csv'), '--no-chart'], merged)).toBe(0);
-    expect(JSON.parse(readFileSync(join(dir, 'm.meta.json'), 'utf8')).headlines.peak).toEqual(peak);
+    expect(JSON.parse(readFileSync(join(dir, 'm.meta.json'), 'utf8')).ensemble.peak).toEqual(peak);
     expect(merged.out).toContain(line![0]);
   });
 
@@ -73,17 +80,19 @@ describe('warmcast ensemble and merge', () => {
     const md = readFileSync(join(dir, 'e.md'), 'utf8');
     expect(md).toContain("**Peak warming (members' own): each member's highest annual warming and its year, across members**");
     expect(md).toMatch(/\n\| peak warming \(K\) +(\| +\d\.\d\d ){5}\|\n\| peak year +(\| +\d{4} ){5}\|\n/);
-    expect(md).toMatch(/\n\d+ % of members still rising in 2150 /);
+    expect(md).toMatch(/\n[<>]?\d+ % of members still rising in 2150 /);
   });
 
   it('ensemble --baseline 1995-2014 names thresholds "above the 1995-2014 mean" and carries the baseline note on the terminal and in the files', async () => {
     const dir = tmp();
     const io = captureIo();
     expect(await main(['ensemble', 'delayed', '--members', '50', '--baseline', '1995-2014', '--no-chart', '--out', join(dir, 'e.csv')], io)).toBe(0);
-    expect(io.out).toMatch(/^  1\.5 K above the 1995-2014 mean \(20-year mean\): probability of crossing/m);
-    expect(io.out).not.toMatch(/^  1\.5 K \(20-year mean\)/m);
+    expect(io.out.replace(/\n {12}/g, ' ')).toMatch(/^ {2}reached {3}1\.5 K above the 1995-2014 mean: median/m);
+    expect(io.out).not.toMatch(/1\.5 K: median/);
     const note = 'IPCC AR6 global warming levels (1.5 K, 2 K) are relative to 1850-1900; with the 1995-2014 baseline';
-    expect(io.out).toContain(`note: ${note}`);
+    const noted = captureIo();
+    expect(await main(['ensemble', 'delayed', '--members', '50', '--baseline', '1995-2014', '--no-chart', '--notes'], noted)).toBe(0);
+    expect(noted.out.replace(/\n {8}/g, ' ')).toContain(`note: ${note}`);
     expect(JSON.parse(readFileSync(join(dir, 'e.meta.json'), 'utf8')).notes.join('\n')).toContain(note);
     const plain = captureIo();
     expect(await main(['ensemble', 'delayed', '--members', '50', '--no-chart'], plain)).toBe(0);
@@ -152,20 +161,19 @@ describe('warmcast ensemble and merge', () => {
     }
   });
 
-  it('ensemble says "already above at the start" instead of a median crossing year when half the members are above a small level in the first 20-year window', async () => {
+  it('ensemble says "or earlier" instead of a median crossing year when half the members are above a small level in the first 20-year window', async () => {
     // A file whose CO2 is high in 1750-1800 and back at 1750's value by 1820, so that 1750-1769 is
     // warmer than the 1850-1900 baseline in nearly every member.
     const file = join(tmp(), 'early.csv');
     writeFileSync(file, 'year,co2_ppm\n1750,450\n1800,450\n1820,278.3\n1900,278.3\n2000,380\n2100,450\n');
     const early = captureIo();
     expect(await main(['ensemble', file, '--members', '400', '--thresholds', '0.001,1.5', '--no-chart'], early)).toBe(0);
-    expect(early.out).toMatch(/0\.001 K \(20-year mean\): [^\n]*; median crossing: already above at the start \(the first 20-year mean, 1750-1769\)\n/);
-    // With the bundled history (AR6 forcing), 1750-1769 is cooler than 1850-1900 in most (with the
-    // calibrated set: all) members, so a median crossing year is given.
+    expect(early.out).toMatch(/^ {2}reached {3}0\.001 K: median 1759 or earlier;/m);
+    // With the bundled history (AR6 forcing), 1750-1769 is cooler than 1850-1900 in most members.
     const io = captureIo();
     expect(await main(['ensemble', 'swift', '--members', '400', '--thresholds', '0.001,1.5', '--no-chart'], io)).toBe(0);
-    expect(io.out).toMatch(/0\.001 K \(20-year mean\): [^\n]*; median crossing year \d{4}(; \d+ % of members already above it at the start \(1750-1769\))?\n/);
-    expect(io.out).toMatch(/1\.5 K \(20-year mean\): [^\n]*; median crossing year 20\d\d\n/);
+    expect(io.out).toMatch(/^ {2}reached {3}0\.001 K: median 1\d{3};/m);
+    expect(io.out).toMatch(/^ {12}1\.5 K: median 20\d\d;/m);
   });
 
   it('ensemble of 1 or 2 members prints the ECS-TCR correlation as n/a and warns, on the terminal and in the notes, that its ranges are rough', async () => {
@@ -173,65 +181,89 @@ describe('warmcast ensemble and merge', () => {
     for (const n of [1, 2]) {
       const io = captureIo();
       expect(await main(['ensemble', 'swift', '--members', String(n), '--no-chart', '--out', join(dir, `e${n}.json`)], io)).toBe(0);
-      expect(io.out).toMatch(/ECS-TCR correlation n\/a \(fewer than 3 members\)/);
-      expect(io.out).not.toMatch(/NaN|correlation -?1\.00/);
-      expect(io.out).toMatch(new RegExp(`\\n  warning: only ${n} members?: percentile ranges and probabilities from so few members are rough`));
-      const notes: string[] = JSON.parse(readFileSync(join(dir, `e${n}.json`), 'utf8')).provenance.notes;
-      expect(notes.some((note) => note.startsWith(`warning: only ${n} member`))).toBe(true);
+      const json = JSON.parse(readFileSync(join(dir, `e${n}.json`), 'utf8'));
+      expect(json.ensemble.ecs_tcr_correlation).toBeNull();
+      expect(io.out).not.toMatch(/NaN/);
+      expect(io.out).toMatch(new RegExp(`\\n  note: warning: only ${n} members?: percentile ranges and probabilities from so few members are rough`));
+      expect(json.provenance.notes.some((note: string) => note.startsWith(`warning: only ${n} member`))).toBe(true);
     }
+    const dir2 = tmp();
     const io = captureIo();
-    expect(await main(['ensemble', 'swift', '--members', '100', '--no-chart'], io)).toBe(0);
+    expect(await main(['ensemble', 'swift', '--members', '100', '--no-chart', '--out', join(dir2, 'e.md')], io)).toBe(0);
     expect(io.out).not.toMatch(/warning/);
-    expect(io.out).toMatch(/ECS-TCR correlation 0\.\d\d/);
+    expect(readFileSync(join(dir2, 'e.md'), 'utf8')).toMatch(/ECS-TCR correlation across members: 0\.\d\d/);
   });
 
   it('an emission ensemble prints the 5-95 % range of its carbon-cycle multiplier, and its caution names the multiplier as the README does (on the pre-industrial iIRF100 r0)', async () => {
+    const dir = tmp();
     const io = captureIo();
-    expect(await main(['ensemble', 'swift-emissions', '--members', '200', '--seed', '3', '--no-chart'], io)).toBe(0);
-    const line = /\n  sampled carbon-cycle multiplier on the pre-industrial iIRF100 r0 (\d\.\d\d) \[(\d\.\d\d) to (\d\.\d\d)\] \(median \[5-95 %\]\)\n/.exec(io.out);
-    expect(line, io.out).not.toBeNull();
-    const [p50, p05, p95] = line!.slice(1).map(Number);
+    expect(await main(['ensemble', 'swift-emissions', '--members', '200', '--seed', '3', '--no-chart', '--out', join(dir, 'e.json')], io)).toBe(0);
+    const json = JSON.parse(readFileSync(join(dir, 'e.json'), 'utf8'));
+    const { p50, p05, p95 } = json.ensemble.sampled.irf100_scale;
     // Drawn with median 1 and 5-95 % 0.765-1.235 (src/ensemble/sampling.ts); 200 members land near it.
     expect(p05).toBeLessThan(p50);
     expect(p50).toBeLessThan(p95);
     expect(p05).toBeGreaterThan(0.6);
     expect(p95).toBeLessThan(1.4);
-    expect(io.out).toMatch(/caution: .*own multipliers on the pre-industrial iIRF100 r0 of its uptake feedback/);
-    expect(io.out).not.toMatch(/response time/);
-    const plain = captureIo();
-    expect(await main(['ensemble', 'swift', '--members', '200', '--seed', '3', '--no-chart'], plain)).toBe(0);
-    expect(plain.out).not.toMatch(/iIRF100/);
+    expect(json.cautions.join(' ')).toMatch(/own multipliers on the pre-industrial iIRF100 r0 of its uptake feedback/);
+    expect(json.cautions.join(' ')).not.toMatch(/response time/);
+    expect(await main(['ensemble', 'swift', '--members', '200', '--seed', '3', '--no-chart', '--out', join(dir, 'plain.json')], captureIo())).toBe(0);
+    expect(JSON.parse(readFileSync(join(dir, 'plain.json'), 'utf8')).cautions.join(' ')).not.toMatch(/iIRF100/);
   });
 
-  it('ensemble --out writes the headlines: a headlines object in .json and in the .csv\'s .meta.json (the CSV stays a yearly table), a table above the yearly table in .md; merge --out the same', async () => {
+  it('ensemble --out writes the headline: in .json and the .csv\'s .meta.json (the CSV stays a yearly table) and first in .md; crossed_by_<t> in the files equals the shares the headline quotes; merge --out the same', async () => {
     const dir = tmp();
     const args = ['delayed', '--members', '120', '--seed', '4', '--no-chart'];
     const io = captureIo();
     expect(await main(['ensemble', ...args, '--out', join(dir, 'e.json')], io)).toBe(0);
     for (const ext of ['csv', 'md']) expect(await main(['ensemble', ...args, '--out', join(dir, `e.${ext}`)], captureIo())).toBe(0);
     const json = JSON.parse(readFileSync(join(dir, 'e.json'), 'utf8'));
-    const h = json.headlines;
-    expect(Object.keys(json)).toEqual(['provenance', 'headlines', 'columns', 'rows']);
+    const [h] = json.headline;
+    expect(Object.keys(json)).toEqual(['provenance', 'command', 'title', 'baseline', 'headline', 'ensemble', 'notes', 'cautions', 'columns', 'rows']);
     expect(h.members).toBe(120);
-    expect(h.thresholds.map((t: { threshold_k: number }) => t.threshold_k)).toEqual([1.5, 2, 3]);
-    // The same figures as the terminal: 1.5 K crossed by 2050 and 2100, and its median crossing year.
-    const t15 = h.thresholds[0];
-    const pct = percentText;
-    expect(io.out).toContain(`1.5 K (20-year mean): probability of crossing by 2050 ${pct(t15.probability_crossed_by['2050'])}, by 2100 ${pct(t15.probability_crossed_by['2100'])}; median crossing year ${t15.median_crossing_year}`);
-    expect(io.out).toContain(`sampled ECS ${h.sampled.ecs_k.p50.toFixed(2)} K [${h.sampled.ecs_k.p05.toFixed(2)} to ${h.sampled.ecs_k.p95.toFixed(2)}]`);
-    expect(Object.keys(h.sampled)).toEqual(['ecs_k', 'tcr_k']);
-    expect(JSON.parse(readFileSync(join(dir, 'e.meta.json'), 'utf8')).headlines).toEqual(h);
+    expect(h.crossings.map((t: { thresholdK: number }) => t.thresholdK)).toEqual([1.5, 2, 3]);
+    // The headline's shares crossed by 2030/2050/2100 are the crossed_by_<t> columns of the data, year for year.
+    const csv = Papa.parse<Record<string, string>>(readFileSync(join(dir, 'e.csv'), 'utf8').trim(), { header: true }).data;
+    for (const x of h.crossings) {
+      for (const b of x.crossedBy) {
+        const row = csv.find((r) => Number(r.year) === b.year)!;
+        expect(Number(row[`crossed_by_${x.thresholdK}`])).toBe(b.share);
+        expect(json.rows.find((r: { year: number }) => r.year === b.year)[`crossed_by_${x.thresholdK}`]).toBe(b.share);
+      }
+    }
+    // ... and the terminal prints them.
+    const t15 = h.crossings[0];
+    expect(io.out).toContain(`1.5 K: median ${t15.year}; members crossed: ${t15.crossedBy.map((b: { year: number; share: number }) => `${percentText(b.share)} by ${b.year}`).join(', ')}`);
+    expect(Object.keys(json.ensemble.sampled)).toEqual(['ecs_k', 'tcr_k']);
+    expect(JSON.parse(readFileSync(join(dir, 'e.meta.json'), 'utf8')).headline).toEqual(json.headline);
     expect(readFileSync(join(dir, 'e.csv'), 'utf8').split('\n')[0]).toMatch(/^year,warming_p05_k,/);
     const md = readFileSync(join(dir, 'e.md'), 'utf8');
-    expect(md.startsWith('**Headlines: 120 members, seed 4;')).toBe(true);
-    expect(md.indexOf('| warming level |')).toBeLessThan(md.indexOf('| year |'));
-    expect(md).toContain(`| ${t15.median_crossing_year} `);
+    expect(md.indexOf('**Headline: warming relative to 1850-1900**')).toBeLessThan(md.indexOf('| year |'));
+    expect(md).toContain(`${t15.year} (${percentText(t15.crossedBy[2].share)} by 2100)`);
 
     for (const k of [1, 2]) expect(await main(['ensemble', ...args, '--shard', `${k}/2`, '--out', join(dir, `s${k}.json`)], captureIo())).toBe(0);
     expect(await main(['merge', join(dir, 's1.json'), join(dir, 's2.json'), '--no-chart', '--out', join(dir, 'm.json')], captureIo())).toBe(0);
     expect(await main(['merge', join(dir, 's1.json'), join(dir, 's2.json'), '--no-chart', '--out', join(dir, 'm.csv')], captureIo())).toBe(0);
-    expect(JSON.parse(readFileSync(join(dir, 'm.json'), 'utf8')).headlines).toEqual(h);
-    expect(JSON.parse(readFileSync(join(dir, 'm.meta.json'), 'utf8')).headlines).toEqual(h);
+    expect(JSON.parse(readFileSync(join(dir, 'm.json'), 'utf8')).headline).toEqual(json.headline);
+    expect(JSON.parse(readFileSync(join(dir, 'm.meta.json'), 'utf8')).headline).toEqual(json.headline);
+  });
+
+  it('crossed_by_<t> never decreases and is never below prob_above_<t> (a member above in a year has crossed by it)', async () => {
+    const dir = tmp();
+    expect(await main(['ensemble', 'swift', '--members', '300', '--seed', '8', '--no-chart', '--out', join(dir, 'e.csv')], captureIo())).toBe(0);
+    const rows = Papa.parse<Record<string, string>>(readFileSync(join(dir, 'e.csv'), 'utf8').trim(), { header: true }).data;
+    for (const t of ['1.5', '2', '3']) {
+      let last = -Infinity;
+      for (const r of rows) {
+        if (r[`crossed_by_${t}`] === '') continue;
+        const by = Number(r[`crossed_by_${t}`]);
+        expect(by).toBeGreaterThanOrEqual(last);
+        expect(by).toBeGreaterThanOrEqual(Number(r[`prob_above_${t}`]));
+        last = by;
+      }
+    }
+    // swift peaks and falls back: somewhere the share above 1.5 K is below the share that has crossed it.
+    expect(rows.some((r) => Number(r['prob_above_1.5']) < Number(r['crossed_by_1.5']))).toBe(true);
   });
 
   it('merge reports the pathway the shards record: its name as the title, its files with SHA-256 and the same notes as one whole run', async () => {
@@ -243,7 +275,7 @@ describe('warmcast ensemble and merge', () => {
     const io = captureIo();
     expect(await main(['merge', join(dir, 's1.json'), join(dir, 's2.json'), '--no-chart', '--out', join(dir, 'm.csv')], io)).toBe(0);
     expect(readFileSync(join(dir, 'm.csv')).equals(readFileSync(join(dir, 'whole.csv')))).toBe(true);
-    expect(io.out.split('\n')[0]).toMatch(/^Swift transition: 60 members, seed 2;/);
+    expect(io.out.split('\n').slice(0, 2)).toEqual([expect.stringMatching(/^Swift transition$/), expect.stringMatching(/^ {2}60 members, seed 2:/)]);
     const a = JSON.parse(readFileSync(join(dir, 'whole.meta.json'), 'utf8'));
     const m = JSON.parse(readFileSync(join(dir, 'm.meta.json'), 'utf8'));
     expect(m.pathway).toBe('Swift transition');
@@ -268,7 +300,7 @@ describe('warmcast ensemble and merge', () => {
     const io = captureIo();
     expect(await main(['merge', join(dir, 's1.json'), join(dir, 's2.json'), '--no-chart', '--out', join(dir, 'm.csv')], io)).toBe(0);
     expect(readFileSync(join(dir, 'm.csv')).equals(readFileSync(join(dir, 'whole.csv')))).toBe(true);
-    expect(io.out.split('\n')[0]).toMatch(/^merged ensemble \(pathway not recorded in the shards\): 40 members/);
+    expect(io.out.split('\n')[0]).toBe('merged ensemble (pathway not recorded in the shards)');
     const m = JSON.parse(readFileSync(join(dir, 'm.meta.json'), 'utf8'));
     expect(m.pathway).toBeUndefined();
     expect(m.notes[0]).toMatch(/^the pathway's name, input files and notes were not recorded in the shards/);
@@ -298,16 +330,19 @@ describe('warmcast ensemble and merge', () => {
     writeFileSync(file, '# name: My emissions\nyear,co2_gtco2\n2025,40\n2050,0\n2100,-5\n');
     const io = captureIo();
     expect(await main(['ensemble', file, '--no-splice', '--baseline', '2025-2030', '--members', '20', '--no-chart', '--absent-emissions', 'hold'], io), io.err).toBe(0);
-    expect(io.out).toMatch(/warming relative to 2025-2030/);
+    expect(io.out.replace(/\n {2}/g, ' ')).toMatch(/warming relative to the 2025-2030 mean/);
   });
 
-  it('the terminal ends with the notes on how the pathway was read and sampled, then the cautions, the few-members warning said once', async () => {
+  it('the terminal ends with the few-members warning (said once), the count of notes and one caution line; --notes prints the notes', async () => {
     const io = captureIo();
     expect(await main(['ensemble', 'swift', '--members', '20', '--no-chart'], io)).toBe(0);
-    expect(io.out).toMatch(/^  note: spliced onto bundled history at 2025/m);
-    expect(io.out).toMatch(/^  note: members drawn with replacement from the \d+ equally weighted members of the calibrated set/m);
     expect(io.out.match(/only 20 members/g)).toHaveLength(1);
-    expect(io.out.trimEnd().split('\n').at(-1)).toMatch(/^  caution: For decisions, defer to the official assessments/);
+    expect(io.out).toMatch(/^ {2}\d+ notes on how the inputs were read and run: add --notes to see them/m);
+    expect(io.out.trimEnd().split('\n').slice(-3).join(' ')).toMatch(/caution: reduced-complexity global-mean estimates; .*warmcast ensemble --help/);
+    const all = captureIo();
+    expect(await main(['ensemble', 'swift', '--members', '20', '--no-chart', '--notes'], all)).toBe(0);
+    expect(all.out).toMatch(/^ {2}note: spliced onto bundled history at 2025/m);
+    expect(all.out).toMatch(/^ {2}note: members drawn with replacement from the \d+ equally weighted members of the calibrated set/m);
   });
 
   it('for a pathway ending in 2100, "by 2100" is n/a and the share crossed by 2090 (the last 20-year mean) is given instead', async () => {
@@ -316,8 +351,8 @@ describe('warmcast ensemble and merge', () => {
     writeFileSync(file, '# name: Ends in 2100\nyear,co2_ppm\n2030,440\n2060,500\n2100,560\n');
     const io = captureIo();
     expect(await main(['ensemble', file, '--members', '200', '--no-chart', '--out', join(dir, 'e.md')], io)).toBe(0);
-    expect(io.out).toMatch(/^  2 K \(20-year mean\): probability of crossing by 2050 [<>]?\d+ %, by 2100 n\/a \(the run ends in 2100; by 2090, its last 20-year mean: [<>]?\d+ %\)/m);
-    expect(readFileSync(join(dir, 'e.md'), 'utf8')).toMatch(/n\/a \(by 2090: [<>]?\d+ %\)/);
+    expect(io.out.replace(/\n {12}/g, ' ')).toMatch(/2 K: median [^;]+; members crossed: [<>]?\d+ % by 2030, [<>]?\d+ % by 2050, n\/a by 2100 \(by 2090, the run's last 20-year mean: [<>]?\d+ %\)/);
+    expect(readFileSync(join(dir, 'e.md'), 'utf8')).toMatch(/\([<>]?\d+ % by 2090\)/);
   });
 });
 

@@ -24,10 +24,11 @@ describe('warmcast run (in-process)', () => {
     const code = await main(['run'], io);
     expect(io.err).toBe('');
     expect(code).toBe(0);
-    expect(io.out).toMatch(/warming in 2030: \d\.\d\d K, 2050: \d\.\d\d K, 2100: \d\.\d\d K/);
-    expect(io.out).toMatch(/peak warming \d\.\d\d K in \d{4}/);
-    expect(io.out).toMatch(/history spliced in/);
-    expect(io.out).toMatch(/reduced-complexity, global-mean estimate/i);
+    expect(io.out).toMatch(/^ {2}warming {3}2030: \d\.\d\d K {3}2050: \d\.\d\d K {3}2100: \d\.\d\d K$/m);
+    expect(io.out).toMatch(/^ {2}peak {6}\d\.\d\d K in \d{4}/m);
+    expect(io.out).toMatch(/years before 2025 from the bundled history/);
+    expect(io.out).toMatch(/caution: a reduced-complexity global-mean estimate/);
+    expect(io.out).toMatch(/warmcast run --help/);
   });
 
   it('writes the full yearly trajectory to CSV with a provenance sidecar, full precision and DESIGN.md columns', async () => {
@@ -84,11 +85,12 @@ describe('warmcast run thresholds and the baseline', () => {
   it('run --baseline 1995-2014 names each threshold "above the 1995-2014 mean", not the AR6 rule, and prints the baseline note', async () => {
     const io = captureIo();
     expect(await main(['run', 'delayed', '--baseline', '1995-2014', '--no-chart'], io)).toBe(0);
-    expect(io.out).toMatch(/^  1\.5 K above the 1995-2014 mean: first reached in \d{4} \(mean of \d{4}-\d{4} is 1\.5\d K; 20-year-mean rule\)$/m);
-    expect(io.out).toMatch(/^  2 K above the 1995-2014 mean: /m);
-    expect(io.out).not.toMatch(/^  (1\.5|2) K:/m);
-    expect(io.out).not.toContain('IPCC AR6 20-year-mean rule');
-    expect(io.out).toContain(`note: ${NOTE}`);
+    expect(io.out.replace(/\n {12}/g, ' ')).toMatch(/^ {2}reached {3}1\.5 K above the 1995-2014 mean in \d{4}, 2 K above the 1995-2014 mean (?:in \d{4}|not reached by \d{4}) \(20-year means\)$/m);
+    expect(io.out).not.toMatch(/(?<![\d.])(1\.5|2) K in/);
+    expect(io.out).not.toContain('IPCC AR6 rule');
+    const notes = captureIo();
+    expect(await main(['run', 'delayed', '--baseline', '1995-2014', '--no-chart', '--notes'], notes)).toBe(0);
+    expect(notes.out.replace(/\n {8}/g, ' ')).toContain(`note: ${NOTE}`);
   });
 
   it('run --baseline 1995-2014 --out writes the baseline note into .md, .json and the .csv sidecar', async () => {
@@ -104,17 +106,18 @@ describe('warmcast run thresholds and the baseline', () => {
   it('run on the default 1850-1900 baseline names thresholds as AR6 levels ("1.5 K: ...; the IPCC AR6 20-year-mean rule") with no baseline note', async () => {
     const io = captureIo();
     expect(await main(['run', 'delayed', '--no-chart'], io)).toBe(0);
-    expect(io.out).toMatch(/^  1\.5 K: first reached in \d{4} .*; the IPCC AR6 20-year-mean rule\)$/m);
+    expect(io.out).toMatch(/^ {2}reached {3}1\.5 K in \d{4}, 2 K in \d{4} \(20-year means, the IPCC AR6 rule\)$/m);
     expect(io.out).not.toContain('global warming levels');
   });
 
   it('run says "not crossed by" the last year a 20-year mean of the run stands for, for a threshold the run never crosses', async () => {
     const io = captureIo();
     expect(await main(['run', 'swift', '--no-chart'], io)).toBe(0);
-    expect(io.out).toMatch(/^  2 K: not crossed by 2140 \(the run ends in 2150, so its last 20-year mean, 2131-2150, stands for 2140\)$/m);
+    // The run ends in 2150, so its last 20-year mean, 2131-2150, stands for 2140.
+    expect(io.out).toMatch(/^ {2}reached {3}1\.5 K in \d{4}, 2 K not reached by 2140 /m);
     const other = captureIo();
     expect(await main(['run', 'swift', '--baseline', '1995-2014', '--no-chart'], other)).toBe(0);
-    expect(other.out).toMatch(/^  2 K above the 1995-2014 mean: not crossed by 2140 \(/m);
+    expect(other.out.replace(/\n {12}/g, ' ')).toMatch(/2 K above the 1995-2014 mean not reached by 2140/);
   });
 });
 
@@ -125,9 +128,9 @@ describe('warmcast run --params with --ecs', () => {
     expect(await main(['calibrate', '--ecs', '3', '--tcr', '1.8'], io)).toBe(0);
     writeFileSync(join(dir, 'params.json'), io.out);
     const r = captureIo(dir);
-    expect(await main(['run', 'delayed', '--params', 'params.json', '--ecs', '4', '--no-chart', '--out', 'out.json'], r)).toBe(0);
+    expect(await main(['run', 'delayed', '--params', 'params.json', '--ecs', '4', '--no-chart', '--notes', '--out', 'out.json'], r)).toBe(0);
     expect(r.out).toContain('ECS 4.00 K, TCR 1.80 K');
-    expect(r.out).toMatch(/note: --ecs 4 overrides the ECS target of params\.json, so the feedback_wm2k and exchange_wm2k it gives/);
+    expect(r.out.replace(/\n {8}/g, ' ')).toMatch(/note: --ecs 4 overrides the ECS target of params\.json, so the feedback_wm2k and exchange_wm2k it gives/);
     const meta = JSON.parse(readFileSync(join(dir, 'out.json'), 'utf8')).provenance;
     expect(meta.parameters).toEqual(paramsToJson(calibrate({ ...setPhysics(), ecsK: 4, tcrK: 1.8 })));
     expect(meta.notes.some((n: string) => n.includes('re-derived for ECS 4 K and TCR 1.8 K'))).toBe(true);
@@ -142,9 +145,9 @@ describe('warmcast run --out FILE.md', () => {
     const md = readFileSync(join(dir, 'swift.md'), 'utf8');
     const notes: string[] = JSON.parse(readFileSync(join(dir, 'swift.json'), 'utf8')).provenance.notes;
     expect(notes.length).toBeGreaterThan(1);
-    const block = /\n\nNotes:\n\n((?:- .*\n)+)\n/.exec(md);
+    const block = /\n## Notes\n\n((?:- .*\n)+)\n/.exec(md);
     expect(block, md).not.toBeNull();
-    expect(block![1].trimEnd().split('\n')).toEqual(notes.map((n) => `- ${n.replace(/</g, '\\<')}`));
+    expect(block![1].trimEnd().split('\n')).toEqual(notes.map((n) => `- ${n.replace(/[\\|<*]/g, (c) => `\\${c}`)}`));
   });
 });
 
@@ -249,8 +252,8 @@ describe('an emission file that starts a few years after the history', () => {
     const file = join(dir, 'plan.csv');
     writeFileSync(file, '# name: My plan\ndate,co2_gtco2,ch4_mt\n2030-07-02,38,360\n2050-07-02,0,250\n2100-07-02,-5,200\n');
     const io = captureIo();
-    expect(await main(['run', file, '--out', join(dir, 'out.csv'), '--no-chart', '--absent-emissions', 'follow-co2'], io)).toBe(0);
-    expect(io.out).toMatch(/co2_gtco2, ch4_mt held at the file's 2030 value over 2025-2029/);
+    expect(await main(['run', file, '--out', join(dir, 'out.csv'), '--no-chart', '--notes', '--absent-emissions', 'follow-co2'], io)).toBe(0);
+    expect(io.out.replace(/\n {8}/g, ' ')).toMatch(/co2_gtco2, ch4_mt held at the file's 2030 value over 2025-2029/);
     const rows = Papa.parse<Record<string, string>>(readFileSync(join(dir, 'out.csv'), 'utf8').trim(), { header: true }).data;
     const at = (y: number) => rows.find((r) => Number(r.year) === y)!;
     expect(Number(at(2027).co2_gtco2)).toBe(38);
@@ -265,8 +268,8 @@ describe('notes of an emission file spliced onto the concentration history', () 
     const file = join(dir, 'emis.csv');
     writeFileSync(file, '# name: My emissions\nyear,co2_gtco2,ch4_mt,n2o_mt\n2025,40,380,11\n2050,0,250,9\n2100,-5,200,8\n');
     const io = captureIo();
-    expect(await main(['run', file, '--out', join(dir, 'out.csv'), '--no-chart', '--absent-emissions', 'hold'], io)).toBe(0);
-    const notes = io.out.split('\n').filter((l) => l.startsWith('  note: '));
+    expect(await main(['run', file, '--out', join(dir, 'out.csv'), '--no-chart', '--notes', '--absent-emissions', 'hold'], io)).toBe(0);
+    const notes = io.out.replace(/\n {8}/g, ' ').split('\n').filter((l) => l.startsWith('  note: '));
     expect(notes.filter((n) => /NaN/.test(n))).toEqual([]);
     expect(notes).toContain(
       "  note: co2_gtco2 given instead of the history's co2_ppm: a run follows the history's co2_ppm to 2024, diagnosing co2_gtco2 from it, and from 2025 computes co2_ppm from the given co2_gtco2",
@@ -293,7 +296,7 @@ describe('warmcast run --from/--to', () => {
   it('run delayed --to 1700 (before the run) still names the run\'s years', async () => {
     const io = captureIo();
     expect(await main(['run', 'delayed', '--to', '1700'], io)).toBe(2);
-    expect(io.err).toMatch(/must lie within the years of Delayed action, 1750-2150/);
+    expect(io.err).toMatch(/must lie within the years of the run, 1750-2150/);
   });
 
   it('run delayed --from 2000 starts the short table at 2000, before the 2025 splice year', async () => {
@@ -304,24 +307,36 @@ describe('warmcast run --from/--to', () => {
     expect(years[years.length - 1]).toBe(2150);
   });
 
-  it('run steady reports the same threshold years whatever --from/--to window it shows, and names the window of the highest warming', async () => {
-    const crossings = async (argv: string[]) => {
-      const io = captureIo();
-      expect(await main(['run', 'steady', ...argv, '--no-chart'], io)).toBe(0);
-      return { lines: io.out.match(/^  (1\.5|2) K: .*$/gm), out: io.out };
-    };
-    const whole = await crossings([]);
-    expect(whole.lines).toHaveLength(2);
-    for (const window of [['--from', '2040', '--to', '2050'], ['--from', '2040'], ['--to', '2035']]) {
-      expect((await crossings(window)).lines, window.join(' ')).toEqual(whole.lines);
-    }
-    expect((await crossings(['--from', '2040', '--to', '2050'])).out).toMatch(/^  highest warming in 2040-2050: \d\.\d\d K in 2050 \(the last year shown: still rising\)$/m);
+  it('--every 5 and --years choose the short table\'s rows the same way; --every takes only 5 or 10', async () => {
+    const io = captureIo();
+    expect(await main(['run', 'delayed', '--every', '5', '--to', '2050', '--no-chart'], io)).toBe(0);
+    expect(tableYears(io.out)).toEqual([2025, 2030, 2035, 2040, 2045, 2050]);
+    const years = captureIo();
+    expect(await main(['run', 'delayed', '--years', '2100,2030,2050', '--no-chart'], years)).toBe(0);
+    expect(tableYears(years.out)).toEqual([2030, 2050, 2100]);
+    const bad = captureIo();
+    expect(await main(['run', 'delayed', '--every', '7'], bad)).toBe(2);
+    expect(bad.err).toMatch(/--every must be 5 or 10/);
   });
 
-  it('run delayed without --from still starts the short table at the 2025 splice year', async () => {
+  it('run steady reports the same headline (crossings, peak) whatever --from/--to window it shows: the headline describes the whole run', async () => {
+    const headline = async (argv: string[]) => {
+      const io = captureIo();
+      expect(await main(['run', 'steady', ...argv, '--no-chart'], io)).toBe(0);
+      return io.out.match(/^ {2}(peak|reached) .*$/gm);
+    };
+    const whole = await headline([]);
+    expect(whole).toHaveLength(2);
+    for (const window of [['--from', '2040', '--to', '2050'], ['--from', '2040'], ['--to', '2035']]) {
+      expect(await headline(window), window.join(' ')).toEqual(whole);
+    }
+  });
+
+  it('run delayed without --from starts the short table at the first milestone after the 2025 splice year', async () => {
     const io = captureIo();
     expect(await main(['run', 'delayed', '--no-chart'], io)).toBe(0);
-    expect(tableYears(io.out).slice(0, 2)).toEqual([2025, 2030]);
+    // The default rows: every 10 years from the splice (2025) to 2100, every 25 after.
+    expect(tableYears(io.out)).toEqual([2030, 2040, 2050, 2060, 2070, 2080, 2090, 2100, 2125, 2150]);
   });
 });
 
@@ -330,19 +345,19 @@ describe('run\'s headline figures in its files', () => {
     const dir = tmp();
     const io = captureIo();
     expect(await main(['run', 'steady', '--out', join(dir, 'r.json'), '--no-chart'], io)).toBe(0);
-    const h = JSON.parse(readFileSync(join(dir, 'r.json'), 'utf8')).headlines;
-    expect(Object.keys(h.warming_k)).toEqual(['2030', '2050', '2100']);
-    expect(io.out).toContain(`  warming in 2030: ${h.warming_k['2030'].toFixed(2)} K`);
-    expect(io.out).toContain(`  1.5 K: first reached in ${h.thresholds[0].first_reached} `);
-    expect(io.out).toContain(`  peak warming ${h.peak.warming_k.toFixed(2)} K in ${h.peak.year}`);
+    const [h] = JSON.parse(readFileSync(join(dir, 'r.json'), 'utf8')).headline;
+    expect(h.atYears.map((a: { year: number }) => a.year)).toEqual([2030, 2050, 2100]);
+    expect(io.out).toContain(`  warming   2030: ${h.atYears[0].warmingK.toFixed(2)} K`);
+    expect(io.out).toContain(`  reached   1.5 K in ${h.crossings[0].year}, `);
+    expect(io.out).toContain(`  peak      ${h.peak.warmingK.toFixed(2)} K in ${h.peak.year}`);
     expect(await main(['run', 'steady', '--out', join(dir, 'r.csv'), '--no-chart'], captureIo())).toBe(0);
-    expect(JSON.parse(readFileSync(join(dir, 'r.meta.json'), 'utf8')).headlines).toEqual(h);
+    expect(JSON.parse(readFileSync(join(dir, 'r.meta.json'), 'utf8')).headline).toEqual([h]);
     expect(readFileSync(join(dir, 'r.csv'), 'utf8').split('\n')[0]).toMatch(/^year,warming_k,/);
     expect(await main(['run', 'steady', '--out', join(dir, 'r.md'), '--no-chart'], captureIo())).toBe(0);
     const md = readFileSync(join(dir, 'r.md'), 'utf8');
-    expect(md).toContain('**Headlines: warming relative to the 1850-1900 mean**');
-    expect(md).toContain(`| 1.5 K first reached`);
-    expect(md).toContain(`${h.thresholds[0].first_reached} |`);
+    expect(md).toContain('**Headline: warming relative to 1850-1900**');
+    expect(md).toMatch(new RegExp(`\\| +${h.atYears[0].warmingK.toFixed(2)} \\|`));
+    expect(md).toMatch(new RegExp(`\\| +${h.crossings[0].year} \\|`));
   });
 });
 
@@ -353,10 +368,10 @@ describe('the splice line of run\'s heading', () => {
     writeFileSync(file, 'year,co2_ppm\n2030,440\n2050,470\n');
     const io = captureIo();
     expect(await main(['run', file, '--no-chart'], io)).toBe(0);
-    expect(io.out).toMatch(/^  history spliced in: years to 2024 come from the bundled history, 2025-2029 bridged to the file's first year, 2030$/m);
+    expect(io.out.replace(/\n {2}/g, ' ')).toContain("years to 2024 from the bundled history, 2025-2029 bridged to the file's first year, 2030");
     const next = captureIo();
     expect(await main(['run', 'delayed', '--no-chart'], next)).toBe(0);
-    expect(next.out).toMatch(/^  history spliced in: years before 2025 come from the bundled history$/m);
+    expect(next.out.replace(/\n {2}/g, ' ')).toContain('years before 2025 from the bundled history');
   });
 });
 
@@ -366,8 +381,8 @@ describe('warmcast run --no-splice', () => {
     const file = join(dir, 'sparse.csv');
     writeFileSync(file, '# name: My sparse pathway\nyear,co2_ppm,aerosol_wm2\n2030,440,-0.8\n2050,470,-0.6\n2100,450,-0.3\n');
     const io = captureIo();
-    expect(await main(['run', file, '--no-splice', '--baseline', '2030-2040', '--no-chart'], io)).toBe(0);
-    expect(io.out).toContain('  note: other_ghg_wm2, ozone_wm2, strat_h2o_wm2, contrails_wm2, bc_snow_wm2, land_use_wm2, solar_wm2, volcanic_wm2 not given: taken as zero\n');
+    expect(await main(['run', file, '--no-splice', '--baseline', '2030-2040', '--no-chart', '--notes'], io)).toBe(0);
+    expect(io.out.replace(/\n {8}/g, ' ')).toContain('  note: other_ghg_wm2, ozone_wm2, strat_h2o_wm2, contrails_wm2, bc_snow_wm2, land_use_wm2, solar_wm2, volcanic_wm2 not given: taken as zero\n');
     expect(io.out).toContain('  note: CH4 not given: held at its 1750 value\n');
   });
 

@@ -55,6 +55,8 @@ describe('summarizeEnsemble', () => {
         const k = mean.findIndex((v) => v > t);
         return k < 0 ? Infinity : 1900 + k;
       });
+      // crossed_by_<t>: the share of members whose first 20-year mean above t is labelled in or before the year.
+      for (let k = 9; k + 10 < n; k++) expect(result.crossedBy[j][k]).toBe(crossing.filter((y) => y <= 1900 + k).length / e.memberCount);
       const c = result.crossings[j];
       for (const { year, probability } of c.byMilestone) {
         if (year + 10 > 2000) expect(probability).toBeNull();

@@ -57,7 +57,7 @@ describe('comparePathways', () => {
   it('comparePathways attaches an ensemble\'s odds to the crossing of the same level, and refuses odds that lack a threshold', () => {
     const years = Float64Array.from({ length: 41 }, (_, i) => 2020 + i);
     const warmingK = years.map(() => 1);
-    const odds = (thresholdK: number) => ({ thresholdK, byYear: [], medianYear: null, withinRun: 0, lastWindowYear: 2050, shareAbove: new Float64Array(41) });
+    const odds = (thresholdK: number) => ({ thresholdK, byYear: [], medianYear: null, withinRun: 0, lastWindowYear: 2050, shareAbove: new Float64Array(41), crossedBy: new Float64Array(41) });
     const c = comparePathways([{ label: 'e', years, warmingK, crossingOdds: [odds(2), odds(1.5)] }], { milestoneYears: [] });
     expect(c.pathways[0].crossings.map((x) => [x.thresholdK, x.odds?.thresholdK])).toEqual([[1.5, 1.5], [2, 2]]);
     expect(() => comparePathways([{ label: 'e', years, warmingK, crossingOdds: [odds(1.5)] }], { milestoneYears: [] })).toThrow(/no crossing odds for 2 K/);

@@ -17,3 +17,14 @@ describe('milestoneYears', () => {
     expect(() => milestoneYears(2020, 2100, 0)).toThrow(ConfigError);
   });
 });
+
+describe('reportYears', () => {
+  it('reportYears gives every 10 years to 2100, every 25 after, and the last year (common practice, no source: the years planners quote)', async () => {
+    const { reportYears } = await import('../../src/metrics/milestone-years.js');
+    expect(reportYears(1750, 2150, 2025)).toEqual([2030, 2040, 2050, 2060, 2070, 2080, 2090, 2100, 2125, 2150]);
+    expect(reportYears(1750, 2100, 2025)).toEqual([2030, 2040, 2050, 2060, 2070, 2080, 2090, 2100]);
+    expect(reportYears(1750, 2113, 2025).slice(-2)).toEqual([2100, 2113]);
+    expect(reportYears(1750, 2150, 2025, { every: 5 }).slice(0, 3)).toEqual([2025, 2030, 2035]);
+    expect(reportYears(1750, 2150, 2025, { years: [2100, 2030, 2100, 1700] })).toEqual([2030, 2100]);
+  });
+});

@@ -1,8 +1,8 @@
 /**
- * Properties of putting a pathway on the annual grid (toAnnual) and writing it out (formatCsv):
+ * Properties of putting a pathway on the annual grid (toAnnual) and writing it out (csvText):
  *
  * - the annual pathway written as CSV and read again gives the same annual values, bit for bit
- *   (formatCsv writes each number as its shortest round-trip text, ECMAScript Number::toString, and
+ *   (csvText writes each number as its shortest round-trip text, ECMAScript Number::toString, and
  *   an annual file needs no interpolation);
  * - sub-sampling the annual values at the original rows (whole years) gives back the original rows,
  *   bit for bit, because linear interpolation passes through its nodes;
@@ -11,15 +11,16 @@
  */
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { formatCsv, parsePathway, toAnnual } from '../../src/io/index.js';
+import { parsePathway, toAnnual } from '../../src/io/index.js';
+import { csvText } from '../../src/report/write-csv.js';
 import type { Pathway, PathwayColumn } from '../../src/pathway.js';
 import { expectAllClose } from '../asserts.js';
 import { pathwayCsv, pathwayRows, readAnnual, type PathwayRows } from './pathway-arbitraries.js';
 
-/** The annual pathway as a table for formatCsv: `year` then its series. */
+/** The annual pathway as a table for csvText: `year` then its series. */
 function annualCsv(p: Pathway): string {
   const columns = Object.keys(p.series) as PathwayColumn[];
-  return formatCsv({ columns: ['year', ...columns], data: [p.years, ...columns.map((c) => p.series[c]!)] });
+  return csvText({ name: 'data', columns: [{ key: 'year', values: p.years }, ...columns.map((c) => ({ key: c, values: p.series[c]! }))] });
 }
 
 function expectSameSeries(actual: Pathway, expected: Pathway): void {
@@ -28,8 +29,8 @@ function expectSameSeries(actual: Pathway, expected: Pathway): void {
   for (const c of Object.keys(expected.series) as PathwayColumn[]) expectAllClose(actual.series[c]!, expected.series[c]!, 0, c);
 }
 
-describe('toAnnual and formatCsv round trips (fast-check, seed 42)', () => {
-  it('toAnnual(parsePathway(formatCsv(toAnnual(random file)))) has the same years and values, exactly, and no interpolation note', () => {
+describe('toAnnual and csvText round trips (fast-check, seed 42)', () => {
+  it('toAnnual(parsePathway(csvText(toAnnual(random file)))) has the same years and values, exactly, and no interpolation note', () => {
     fc.assert(
       fc.property(pathwayRows(), (rows) => {
         const annual = readAnnual(pathwayCsv(rows));

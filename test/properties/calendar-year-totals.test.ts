@@ -115,7 +115,7 @@ function parsePathwayLikeCsv(path: string): Map<number, number> {
 }
 
 /** The net-zero entry of compare's JSON (report/comparison-json.ts) for its only pathway. */
-function findNetZero(compare: { pathways: { net_zero: { cumulative_co2_gtco2: number; to_year: number } }[] }): { total: number; toYear: number } {
-  const nz = compare.pathways[0].net_zero;
+function findNetZero(compare: { comparison: { pathways: { net_zero: { cumulative_co2_gtco2: number; to_year: number } }[] } }): { total: number; toYear: number } {
+  const nz = compare.comparison.pathways[0].net_zero;
   return { total: nz.cumulative_co2_gtco2, toYear: nz.to_year };
 }

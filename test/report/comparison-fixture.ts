@@ -52,12 +52,18 @@ export function oddsComparison() {
         warmingK: line,
         range: { p05: line.map((v) => v - 0.4), p17: line.map((v) => v - 0.2), p83: line.map((v) => v + 0.2), p95: line.map((v) => v + 0.4) },
         crossingOdds: [
-          { thresholdK: 2, byYear: [{ year: 2050, probability: 0.3 }, { year: 2100, probability: null }], medianYear: null, withinRun: 0.45, lastWindowYear: 2090, shareAbove: shareAbove(2) },
-          { thresholdK: 1.5, byYear: [{ year: 2050, probability: 0.62 }, { year: 2100, probability: null }], medianYear: 2046, withinRun: 0.97, lastWindowYear: 2090, shareAbove: shareAbove(1.5) },
+          { thresholdK: 2, byYear: [{ year: 2050, probability: 0.3 }, { year: 2100, probability: null }], medianYear: null, withinRun: 0.45, lastWindowYear: 2090, shareAbove: shareAbove(2), crossedBy: runningMax(shareAbove(2)) },
+          { thresholdK: 1.5, byYear: [{ year: 2050, probability: 0.62 }, { year: 2100, probability: null }], medianYear: 2046, withinRun: 0.97, lastWindowYear: 2090, shareAbove: shareAbove(1.5), crossedBy: runningMax(shareAbove(1.5)) },
         ],
         membersPeak: { warmingK: { p05: 1.52, p17: 1.7, p50: 1.95, p83: 2.3, p95: 2.61 }, year: { p05: 2061, p17: 2072.3, p50: 2087.6, p83: 2100, p95: 2100 }, stillRising: 0.4 },
       },
     ],
     { milestoneYears: [2050], keyYears: [2050] },
   );
+}
+
+/** The share crossed by each year from the share above in it: its running maximum (NaN kept). */
+function runningMax(a: Float64Array): Float64Array {
+  let m = -Infinity;
+  return a.map((v) => (Number.isFinite(v) ? (m = Math.max(m, v)) : NaN));
 }

@@ -1,8 +1,11 @@
 import { describe, expect, it } from 'vitest';
-import { comparisonJson, comparisonSummary } from '../../src/report/comparison-json.js';
-import { fixtureComparison, oddsComparison, provenance, years } from './comparison-fixture.js';
+import { comparisonSummary } from '../../src/report/comparison-json.js';
 
-describe('comparisonJson', () => {
+/** The summary as its JSON files hold it, after a provenance. */
+const comparisonJson = (c: Parameters<typeof comparisonSummary>[0], provenance: object) => JSON.stringify({ provenance, ...comparisonSummary(c) }, null, 2) + '\n';
+import { fixtureComparison, oddsComparison, provenance } from './comparison-fixture.js';
+
+describe('comparisonSummary', () => {
   const c = fixtureComparison();
   const text = comparisonJson(c, provenance);
   const doc = JSON.parse(text);
@@ -12,7 +15,7 @@ describe('comparisonJson', () => {
     expect(Object.keys(doc)[0]).toBe('provenance');
   });
 
-  it('comparisonJson numbers are the comparison\'s at full precision: milestones, peaks, crossings, annual series', () => {
+  it('comparisonJson numbers are the comparison\'s at full precision: milestones, peaks, crossings, milestones and crossings', () => {
     c.pathways.forEach((p, k) => {
       const j = doc.pathways[k];
       expect(j.pathway).toBe(p.label);
@@ -20,20 +23,16 @@ describe('comparisonJson', () => {
       expect(j.milestones.map((m: { warming_k: number }) => m.warming_k)).toEqual(p.milestones.map((m) => m.warmingK));
       expect(j.milestones.map((m: { difference_k: number }) => m.difference_k)).toEqual(p.milestones.map((m) => m.differenceK));
       expect(j.crossings.map((x: { year: number }) => x.year)).toEqual(p.crossings.map((x) => x.period!.year));
-      expect(j.annual.years).toEqual(Array.from(years));
-      expect(j.annual.warming_k).toEqual(Array.from(p.warmingK));
     });
     expect(doc.pathways[2].net_zero).toEqual({ year: 2047, cumulative_co2_gtco2: 553.5, from_year: 2020, to_year: 2046 });
     expect(doc.pathways[0].net_zero).toBeUndefined();
-    expect(doc.pathways[1].annual.warming_p95_k).toEqual(Array.from(c.pathways[1].range!.p95));
   });
 
-  it('comparisonJson writes NaN and "not crossed" as null, and each list of plain values on one line', () => {
+  it('comparisonJson writes NaN and "not crossed" as null, ', () => {
     const cc = { ...c, pathways: c.pathways.map((p) => ({ ...p, crossings: [{ thresholdK: 5, period: undefined }], milestones: [{ year: 2200, warmingK: NaN, differenceK: NaN }] })) };
     const j = JSON.parse(comparisonJson(cc, {}));
     expect(j.pathways[0].crossings[0].year).toBeNull();
     expect(j.pathways[0].milestones[0].warming_k).toBeNull();
-    expect(text).toMatch(/"years": \[1850, 1851, /);
     expect(text.endsWith('}\n')).toBe(true);
   });
 
@@ -48,9 +47,6 @@ describe('comparisonJson', () => {
     expect(c2.year).toBeNull();
     expect(doc.pathways[0].crossings[0].year).toBe(2061);
     expect(doc.pathways[0].crossings[0].odds).toBeUndefined();
-    const share = oddsComparison().pathways[1].crossings[0].odds!.shareAbove;
-    expect(doc.pathways[1].annual['prob_above_1.5']).toEqual(Array.from(share, (v) => (Number.isFinite(v) ? v : null)));
-    expect(doc.pathways[0].annual['prob_above_1.5']).toBeUndefined();
     // The members' own peaks beside the median line's.
     expect(doc.pathways[1].members_peak).toEqual({
       warming_k: { p05: 1.52, p17: 1.7, p50: 1.95, p83: 2.3, p95: 2.61 },
@@ -58,13 +54,5 @@ describe('comparisonJson', () => {
       still_rising: 0.4,
     });
     expect(doc.pathways[0].members_peak).toBeUndefined();
-  });
-
-  it('comparisonSummary is comparisonJson without the provenance and the annual series', () => {
-    const c = fixtureComparison();
-    const full = JSON.parse(comparisonJson(c, provenance));
-    delete full.provenance;
-    for (const p of full.pathways) delete p.annual;
-    expect(JSON.parse(JSON.stringify(comparisonSummary(c)))).toEqual(full);
   });
 });

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { comparisonTables } from '../../src/report/comparison-tables.js';
-import { markdownTable } from '../../src/report/markdown-table.js';
+import { markdownTable } from '../../src/report/write-markdown.js';
+import { headersOf, rowsOf } from './output-rows.js';
 import { comparePathways } from '../../src/metrics/index.js';
 import { expectClose } from '../asserts.js';
 import { fixtureComparison, oddsComparison } from './comparison-fixture.js';
@@ -62,7 +63,7 @@ describe('comparisonTables', () => {
       ],
       { milestoneYears: [2030] },
     );
-    const rows = comparisonTables(cc).summary.rows;
+    const rows = rowsOf(comparisonTables(cc).summary);
     // Data to 2060: the last 20-year period, 2041-2060, stands for 2050, the last crossing year that can be seen.
     expect(rows[0].slice(2, 5)).toEqual(['2020', '2029 or earlier', 'not crossed by 2050']);
     expect(rows[1].slice(2, 5)).toEqual(['2060 (still rising)', 'not crossed by 2050', 'not crossed by 2050']);
@@ -72,12 +73,12 @@ describe('comparisonTables', () => {
   it('with crossing odds, "Reaches" is the year by which half of the members crossed, and a table of probabilities parses back to the odds', () => {
     const co = oddsComparison();
     const t = comparisonTables(co);
-    expect(t.summary.rows.map((r) => r.slice(3, 5))).toEqual([
+    expect(rowsOf(t.summary).map((r) => r.slice(3, 5))).toEqual([
       ['2061', 'not crossed by 2090'],
       ['2046', 'fewer than half by 2090'],
     ]);
     // The ensemble's peak cells are the members' own (median [5-95 %], median year, share still rising); the single run's its line's.
-    expect(t.summary.rows.map((r) => r.slice(1, 3))).toEqual([
+    expect(rowsOf(t.summary).map((r) => r.slice(1, 3))).toEqual([
       ['1.82', '2100 (still rising)'],
       ['1.95 [1.52 to 2.61]', '2088 (40 % still rising)'],
     ]);
@@ -93,7 +94,7 @@ describe('comparisonTables', () => {
     const years = Float64Array.from({ length: 11 }, (_, i) => 2020 + i);
     const cc = comparePathways([{ label: 'e', years, warmingK: years.map(() => 1), co2Gtco2: years.map(() => 10) }], { milestoneYears: [], cumulativeFromYear: 2020 });
     // 10 Gt CO2 a year over the 11 years 2020-2030 (analytic).
-    expect(comparisonTables(cc).summary.rows[0].slice(-2)).toEqual(['110 (through 2030)', 'not reached by 2030']);
+    expect(rowsOf(comparisonTables(cc).summary)[0].slice(-2)).toEqual(['110 (through 2030)', 'not reached by 2030']);
   });
 });
 

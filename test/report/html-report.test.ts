@@ -6,11 +6,11 @@ const svg = '<svg xmlns="http://www.w3.org/2000/svg" width="10" height="10"><rec
 const page = htmlReport({
   title: 'Report <&>',
   summaryLines: ['line "one"'],
-  tables: [{ caption: 'Cap', columns: ['Pathway', 'Peak (K)'], rows: [['<b>x</b>', '1.52']], numeric: [false, true], notes: ['a note'] }],
+  tables: [{ name: 't', caption: 'Cap', columns: [{ key: 'Pathway', values: ['<b>x</b>'] }, { key: 'peak_k', label: 'Peak (K)', values: Float64Array.of(1.52) }], notes: ['a note'] }],
   charts: [svg],
   assumptions: { 'CO2 formula': 'ar6', 'history splice': 'before 2024' },
   provenance: { version: '0.1.0', inputs: [{ path: '/p/a.csv', sha256: 'ab'.repeat(32) }], seed: 7, empty: [] },
-  cautions: ['extra caution'],
+  cautions: [...standardCautions(), 'extra caution'],
 });
 
 describe('htmlReport', () => {

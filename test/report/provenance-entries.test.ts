@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { provenanceEntries, provenanceMarkdown } from '../../src/report/provenance-entries.js';
+import { provenanceEntries } from '../../src/report/provenance-entries.js';
 
 describe('provenanceEntries', () => {
   it('provenanceEntries flattens nested records into one text per top-level key, in order', () => {
@@ -12,15 +12,4 @@ describe('provenanceEntries', () => {
       ['notes', 'none'],
     ]);
   });
-
-  it('provenanceMarkdown lists the items of a list of two or more one per line, nested, and keeps single values on their key\'s line', () => {
-    expect(provenanceMarkdown({ version: '0.1.0', inputs: [{ path: 'a.csv', sha256: 'ab12' }], notes: ['first\nline', 'second'], seed: undefined })).toEqual([
-      '- version: 0.1.0',
-      '- inputs: path a.csv, sha256 ab12',
-      '- notes:',
-      '  - first line',
-      '  - second',
-    ]);
-  });
 });
-

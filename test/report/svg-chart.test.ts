@@ -93,9 +93,24 @@ describe('svgChart', () => {
     expect(styles.length).toBe(2);
     expect(styles[0][0]).not.toBe(styles[1][0]);
     expect(styles[0][1]).not.toBe(styles[1][1]);
-    for (const text of ['steady', 'swift', '5-95 %', '1.5 K, 2 K levels', 'Year', 'Warming relative to 1850-1900 (K)', 'Warming by pathway']) {
+    for (const text of ['steady', 'swift', 'shading: 5-95 % range, darker 17-83 %', '1.5 K, 2 K levels', 'Year', 'Warming relative to 1850-1900 (K)', 'Warming by pathway']) {
       expect(svg).toContain(`>${text}</text>`);
     }
+  });
+
+  it('svgChart fills each band in the colour of its own line, and the legend swatch of that line shows the band in the same colour', () => {
+    const svg = chart();
+    const lineColour = /<path data-series="swift" d="[^"]*" fill="none" stroke="([^"]+)"/.exec(svg)![1];
+    expect(/<path data-band="5-95 %" d="[^"]*" data-of="swift" fill="([^"]+)"/.exec(svg)![1]).toBe(lineColour);
+    expect(/<rect class="legend-band" data-of="swift"[^>]* fill="([^"]+)"/.exec(svg)![1]).toBe(lineColour);
+    expect(svg).not.toMatch(/<rect class="legend-band" data-of="steady"/);
+  });
+
+  it('svgChart draws an observed record as a thin dark line with its own legend entry', () => {
+    const obsYears = Float64Array.from({ length: 174 }, (_, i) => 1850 + i);
+    const svg = chart({ observed: { label: 'observed (HadCRUT5)', years: obsYears, values: obsYears.map((y) => 0.005 * (y - 1850)) } });
+    expect(svg).toMatch(/<path data-observed="observed \(HadCRUT5\)" d="M[^"]+" fill="none" stroke="#111111" stroke-width="1"/);
+    expect(svg).toContain('>observed (HadCRUT5)</text>');
   });
 
   it('svgChart breaks a line at NaN values and escapes labels', () => {

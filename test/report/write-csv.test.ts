@@ -1,7 +1,14 @@
 import fc from 'fast-check';
 import Papa from 'papaparse';
 import { describe, expect, it } from 'vitest';
-import { formatCsv } from '../../src/io/format-csv.js';
+import { csvText } from '../../src/report/write-csv.js';
+
+/** The tables below as columns of names, number arrays (in order, text columns skipped) and text cells. */
+function formatCsv(t: { columns: string[]; data: Float64Array[]; textColumns?: Record<string, string[]> }): string {
+  let next = 0;
+  const numbers = t.data.length === t.columns.length ? (i: number) => t.data[i] : () => t.data[next++];
+  return csvText({ name: 'data', columns: t.columns.map((key, i) => ({ key, values: t.textColumns?.[key] ?? numbers(i) })) });
+}
 
 /** Reads CSV back with papaparse, the reference parser here (the final newline removed first). */
 const readBack = (csv: string) => {
@@ -11,7 +18,7 @@ const readBack = (csv: string) => {
   return r.data;
 };
 
-describe('formatCsv', () => {
+describe('csvText', () => {
   it('formatCsv writes shortest round-trip numbers: 0.1 + 0.2 is 0.30000000000000004 (IEEE 754 double)', () => {
     const csv = formatCsv({ columns: ['year', 'warming_k'], data: [Float64Array.of(2030), Float64Array.of(0.1 + 0.2)] });
     expect(csv).toBe('year,warming_k\n2030,0.30000000000000004\n');

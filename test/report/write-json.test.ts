@@ -1,8 +1,15 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { formatJson } from '../../src/io/format-json.js';
+import { jsonWithRows } from '../../src/report/write-json.js';
 
-describe('formatJson', () => {
+/** The tables below as columns of names, number arrays (in order, text columns skipped) and text cells, written with a provenance first. */
+function formatJson(t: { columns: string[]; data: Float64Array[]; textColumns?: Record<string, string[]> }, provenance: object, extra: Record<string, unknown> = {}): string {
+  let next = 0;
+  const numbers = t.data.length === t.columns.length ? (i: number) => t.data[i] : () => t.data[next++];
+  return jsonWithRows({ provenance, ...extra }, { name: 'data', columns: t.columns.map((key, i) => ({ key, values: t.textColumns?.[key] ?? numbers(i) })) });
+}
+
+describe('jsonWithRows', () => {
   it('formatJson writes provenance, columns and one object per row, keys in column order', () => {
     const json = formatJson({
       columns: ['pathway', 'year', 'warming_k'],
