@@ -166,8 +166,8 @@ export function batchCommand(io: CliIo): Command {
  * Writes and prints a batch's summary (from one run or merged shards) and its errors, then ends
  * with exit code 3 when some scenarios failed, or 2 when none could be assessed. The summary is an
  * OutputDocument of the output registry: `data` is the summary table (CSV, JSON, the xlsx `data`
- * sheet), `tables` the short human table and, when some scenarios failed, the errors table
- * (Markdown, HTML, xlsx sheets); the errors also go to JSON (`errors`) and, beside a CSV, to
+ * sheet), `tables` the short human table (the terminal's), the summary again with human digits and,
+ * when some scenarios failed, the errors table (Markdown, HTML, xlsx sheets); the errors also go to JSON (`errors`) and, beside a CSV, to
  * NAME.errors.csv.
  */
 export async function emitBatch(outcome: BatchOutcome, ctx: { settings: BatchSettings; notes: string[]; inputs: string[]; out?: string; showNotes?: boolean; io: CliIo }): Promise<void> {
@@ -178,14 +178,16 @@ export async function emitBatch(outcome: BatchOutcome, ctx: { settings: BatchSet
   const errorList = outcome.errors.map((e) => ({ model: e.model, scenario: e.scenario, code: e.code, problems: batchErrorLines(e) }));
   const rows = outcome.rows;
   const counts = AR6_WARMING_CATEGORIES.map((c) => [c.code, rows.filter((r) => r.category === c.code).length] as const).filter(([, n]) => n > 0);
+  const summary = batchSummaryTable(outcome, settings.thresholds);
   const doc = batchDocument({
     title: `warmcast batch: ${settings.table.path}`,
     subtitle:
       `${rows.length} scenario${rows.length === 1 ? '' : 's'} assessed, ${settings.members} members each (seed ${settings.seed}); warming relative to ${settings.baseline.join('-')}; peak over ${PEAK_YEARS.join('-')}. ` +
       `AR6 WG3 categories: ${counts.map(([c, n]) => `${c} ${n}`).join(', ')}`,
     baseline: settings.baseline,
-    data: batchSummaryTable(outcome, settings.thresholds),
-    tables: [batchHumanTable(outcome, settings), ...(hasErrors ? [errors] : [])],
+    data: summary,
+    // Markdown and HTML show the short table, then every column (as the previous Markdown summary did), then the failures.
+    tables: [batchHumanTable(outcome, settings), { ...summary, name: 'summary', caption: 'every figure per scenario' }, ...(hasErrors ? [errors] : [])],
     notes: ctx.notes,
     members: settings.members,
     ...(hasErrors ? { json: { errors: errorList } } : {}),
@@ -249,7 +251,7 @@ function batchHumanTable(outcome: BatchOutcome, settings: BatchSettings): Output
   const col = (key: string, label: string, values: string[]) => ({ key, label, values });
   return {
     name: 'scenarios',
-    caption: 'one line per scenario (every column in the data table)',
+    caption: 'one line per scenario',
     columns: [
       col('model', 'model', rows.map((r) => r.model)),
       col('scenario', 'scenario', rows.map((r) => r.scenario)),

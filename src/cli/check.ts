@@ -5,7 +5,7 @@ import { describeAgentSources, describePathway, readPathway } from '../io/index.
 import { describeScenarioTable } from '../io/iamc-describe.js';
 import { isScenarioTable, readScenarioTable } from '../io/iamc-read.js';
 import type { CliIo } from './cli-io.js';
-import { pathwayArg, absentEmissionsOption } from './options.js';
+import { pathwayArg, absentEmissionsOption, co2JumpOption } from './options.js';
 import { addScenarioOptions, readPathwayArgs, type ScenarioOptions } from './scenario-options.js';
 
 /** `warmcast check FILE...`: report what each pathway file or scenario table holds, or every problem in it. */
@@ -14,13 +14,14 @@ export function checkCommand(io: CliIo): Command {
     .description('check pathway files and scenario tables: what was read (years, columns, units, interpolation, splice, where each forcing agent comes from; for a table each scenario\'s agents given and filled) or every problem found')
     .argument('<pathway...>', 'pathway CSV files, bundled names or scenario tables (IAMC layout, .csv or .xlsx)')
     .addOption(absentEmissionsOption())
-    .option('--no-splice', 'check without splicing onto the bundled history');
+    .option('--no-splice', 'check without splicing onto the bundled history')
+    .addOption(co2JumpOption());
   addScenarioOptions(cmd, true)
     .addHelpText('after', '\nExamples:\n  warmcast check my-pathway.csv pathways/swift.csv\n  warmcast check scenarios.xlsx                      # every scenario: agents given and filled\n  warmcast check scenarios.xlsx --scenario Quick     # one scenario in full\n')
-    .action(async (pathways: string[], opts: ScenarioOptions & { splice: boolean; absentEmissions?: AbsentEmissionsRule }) => {
+    .action(async (pathways: string[], opts: ScenarioOptions & { splice: boolean; absentEmissions?: AbsentEmissionsRule; co2JumpIntended?: boolean }) => {
       const problems: InputProblem[] = [];
       const picking = opts.scenario !== undefined || opts.model !== undefined;
-      const load = { splice: opts.splice, absentEmissions: opts.absentEmissions };
+      const load = { splice: opts.splice, absentEmissions: opts.absentEmissions, co2JumpIntended: opts.co2JumpIntended };
       for (const arg of pathways) {
         try {
           const path = pathwayArg(arg, io);

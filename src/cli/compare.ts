@@ -11,7 +11,7 @@ import { ensembleInput, projectPathway } from '../projection/index.js';
 import { comparisonDocument, ensembleWarming, scopedNotes, standardCautions, thresholdBaselineNote, type ScopedNote } from '../report/index.js';
 import type { CliIo } from './cli-io.js';
 import { addScenarioOptions, readPathwayArgs, type ScenarioOptions } from './scenario-options.js';
-import { addModelOptions, baselineOption, cautionsHelp, type ModelOptions, pathwayArg, resolveModelParams, thresholdsOption, wholeNumberOption, absentEmissionsOption } from './options.js';
+import { addModelOptions, baselineOption, cautionsHelp, type ModelOptions, pathwayArg, resolveModelParams, thresholdsOption, wholeNumberOption, absentEmissionsOption, co2JumpOption } from './options.js';
 import { addReportOptions, announceWritten, observedRecord, pathwayInputs, printDocument, rowChoice, writeDocument, type ReportOptions } from './output.js';
 import { ensembleParameters } from './provenance.js';
 
@@ -22,6 +22,7 @@ interface CompareOptions extends ModelOptions, ReportOptions, ScenarioOptions {
   thresholds: number[];
   baseline: [number, number];
   splice: boolean;
+  co2JumpIntended?: boolean;
   absentEmissions?: AbsentEmissionsRule;
   carbonFeedback: boolean;
 }
@@ -40,6 +41,7 @@ export function compareCommand(io: CliIo): Command {
     .addOption(baselineOption())
     .addOption(absentEmissionsOption())
     .option('--no-splice', 'do not splice pathways that start late onto the bundled history (each run then starts from zero warming in its first year)')
+    .addOption(co2JumpOption())
     .option('--no-carbon-feedback', 'emission-driven runs: switch off the carbon-climate feedback on uptake')
     .option('--members <count>', 'also run a parameter ensemble of this many members per option: medians with ranges, and each difference\'s range from paired members', wholeNumberOption('--members', 2))
     .option('--seed <integer>', 'random seed of the ensembles (with --members)', wholeNumberOption('--seed', 0), 1);
@@ -60,7 +62,7 @@ export function compareCommand(io: CliIo): Command {
           throw new ConfigError(`with --members each member takes its parameters from the calibrated set, so ${given.join(', ')} would be ignored: leave ${given.length > 1 ? 'them' : 'it'} out, or compare without --members`, given[0].slice(2));
         }
       }
-      const reads = await readPathwayArgs(args.map((arg) => splitLabel(arg).path), opts, { splice: opts.splice, absentEmissions: opts.absentEmissions }, io);
+      const reads = await readPathwayArgs(args.map((arg) => splitLabel(arg).path), opts, { splice: opts.splice, absentEmissions: opts.absentEmissions, co2JumpIntended: opts.co2JumpIntended }, io);
       const options = labelledOptions(args, reads, opts, io);
       const { params, paramsFile, notes: paramNotes, forcingScale, forcingNote } = resolveModelParams(opts, io);
       const baselineNote = thresholdBaselineNote(opts.baseline);

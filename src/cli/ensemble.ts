@@ -10,7 +10,7 @@ import { addScenarioOptions, readPathwayArgs, type ScenarioOptions } from './sce
 import { ensembleInput } from '../projection/index.js';
 import { ensembleDocument, standardCautions, thresholdBaselineNote } from '../report/index.js';
 import type { CliIo } from './cli-io.js';
-import { baselineOption, cautionsHelp, refuseOptions, resolveModelParams, thresholdsOption, wholeNumberOption, type RefusedOption, absentEmissionsOption } from './options.js';
+import { baselineOption, cautionsHelp, refuseOptions, resolveModelParams, thresholdsOption, wholeNumberOption, type RefusedOption, absentEmissionsOption, co2JumpOption } from './options.js';
 import { addReportOptions, announceWritten, observedRecord, pathwayInputs, printDocument, rowChoice, writeDocument, type ReportOptions } from './output.js';
 import { allocationError, checkEnsembleMemory, checkMergeMemory } from './memory-check.js';
 import { progressBar } from './progress.js';
@@ -26,6 +26,7 @@ interface EnsembleCliOptions extends ReportOptions, ScenarioOptions {
   baseline: [number, number];
   shard?: { index: number; count: number };
   splice: boolean;
+  co2JumpIntended?: boolean;
   absentEmissions?: AbsentEmissionsRule;
   prior: boolean;
 }
@@ -84,6 +85,7 @@ export function ensembleCommand(io: CliIo): Command {
     .addOption(absentEmissionsOption())
     .option('--shard <K/N>', 'run only the K-th of N equal slices of the members and write them as a shard file (.json) for `warmcast merge`', shardOption)
     .option('--no-splice', 'do not splice a pathway that starts late onto the bundled history')
+    .addOption(co2JumpOption())
     .option('--prior', 'draw the members from the prior of the calibrated set, unweighted by the observed record: the unconstrained spread, for comparison', false)
     .addOption(new Option('--co2-formula <name>', 'CO2 forcing: ar6 (Meinshausen et al. 2020 + AR6 adjustment) or log (Myhre et al. 1998)').choices(['ar6', 'log']).default('ar6', 'ar6'));
   refuseOptions(addScenarioOptions(cmd, false), ENSEMBLE_REFUSES)
@@ -102,7 +104,7 @@ export function ensembleCommand(io: CliIo): Command {
       if (opts.shard && !opts.out?.toLowerCase().endsWith('.json')) throw new ConfigError('--shard writes a shard file: give --out NAME.json', 'out');
       // Central parameters: the CO2 formula, and the CH4 and N2O of an emission pathway's central run.
       const { params } = resolveModelParams({ co2Formula: opts.co2Formula }, io);
-      const [read] = await readPathwayArgs([arg], opts, { splice: opts.splice, absentEmissions: opts.absentEmissions }, io, false);
+      const [read] = await readPathwayArgs([arg], opts, { splice: opts.splice, absentEmissions: opts.absentEmissions, co2JumpIntended: opts.co2JumpIntended }, io, false);
       const { input, notes } = ensembleInput(read.pathway, params, { baseline: opts.baseline });
       const inputs = pathwayInputs(read);
       const years = input.years.length;

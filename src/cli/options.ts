@@ -90,6 +90,14 @@ export function baselineOption(): Option {
 }
 
 /**
+ * `--co2-jump-intended`: a CO2 emission column whose first value after the history is near 12/44 of
+ * the rate diagnosed from the record is refused as Gt C unless this says the fall is meant.
+ */
+export function co2JumpOption(): Option {
+  return new Option('--co2-jump-intended', 'accept a first CO2 emission value near 12/44 of the rate the record implies (otherwise refused as Gt C typed under co2_gtco2)');
+}
+
+/**
  * `--absent-emissions <rule>`: what fills aerosol precursors, ozone precursors or halogenated gases
  * that an emission file does not give (`hold`, `follow-co2`, `zero-by-YEAR`); without it such a file
  * is refused with the choices listed.

@@ -5,7 +5,7 @@ import { projectPathway } from '../projection/index.js';
 import { runDocument, standardCautions, thresholdBaselineNote } from '../report/index.js';
 import type { CliIo } from './cli-io.js';
 import { addScenarioOptions, readPathwayArgs, type ScenarioOptions } from './scenario-options.js';
-import { addModelOptions, baselineOption, cautionsHelp, type ModelOptions, numberOption, resolveModelParams, absentEmissionsOption } from './options.js';
+import { addModelOptions, baselineOption, cautionsHelp, type ModelOptions, numberOption, resolveModelParams, absentEmissionsOption, co2JumpOption } from './options.js';
 import { addReportOptions, announceWritten, observedRecord, pathwayInputs, printDocument, rowChoice, writeDocument, type ReportOptions } from './output.js';
 
 /** The pathway `warmcast run` uses when none is given. */
@@ -14,6 +14,7 @@ export const DEFAULT_PATHWAY = 'delayed';
 interface RunOptions extends ModelOptions, ReportOptions, ScenarioOptions {
   baseline: [number, number];
   splice: boolean;
+  co2JumpIntended?: boolean;
   absentEmissions?: AbsentEmissionsRule;
   carbonFeedback: boolean;
   method: 'odex' | 'exact';
@@ -30,6 +31,7 @@ export function runCommand(io: CliIo): Command {
     .addOption(baselineOption())
     .addOption(absentEmissionsOption())
     .option('--no-splice', 'do not splice a pathway that starts late onto the bundled history (the run then starts from zero warming in its first year, not in equilibrium with that year\'s forcing)')
+    .addOption(co2JumpOption())
     .option('--no-carbon-feedback', 'emission-driven runs: switch off the carbon-climate feedback on uptake');
   addScenarioOptions(addModelOptions(cmd), true)
     .addOption(new Option('--method <name>', 'temperature stepping: exact (closed-form one-year propagator) or odex (ODE solver, the reference)').choices(['exact', 'odex']).default('exact', 'exact'))
@@ -42,7 +44,7 @@ export function runCommand(io: CliIo): Command {
     )
     .action(async (pathways: string[], opts: RunOptions) => {
       const args = pathways.length > 0 ? pathways : [DEFAULT_PATHWAY];
-      const reads = await readPathwayArgs(args, opts, { splice: opts.splice, absentEmissions: opts.absentEmissions }, io);
+      const reads = await readPathwayArgs(args, opts, { splice: opts.splice, absentEmissions: opts.absentEmissions, co2JumpIntended: opts.co2JumpIntended }, io);
       if (opts.out !== undefined && reads.length > 1) {
         throw new ConfigError('--out takes one pathway; to put several side by side use `warmcast compare`', 'out');
       }

@@ -1,3 +1,8 @@
+// Why not a package such as `parse-json` (8.3.0): it passes on the engine's message, whose wording
+// changes between Node versions, with a position and a code frame; the plain-word diagnoses below
+// (a comma before }, single quotes, the line where an unclosed object opened) are what a params file's
+// author needs, and it would add three dependencies for less.
+
 /** Where a text stops being JSON and why, in plain words. */
 export interface JsonSyntaxError {
   /** 0-based index of the offending character in the text (its length when the text ends too soon). */

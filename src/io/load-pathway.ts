@@ -6,6 +6,8 @@ import { resolveEmissionForcing, type EmissionForcing } from '../forcing/emissio
 import { splitLumpedForcing } from '../forcing/lumped-forcing.js';
 import type { Pathway } from '../pathway.js';
 import { bundledPathwayNames, bundledPathwaysDir, loadHistory } from './bundled-pathways.js';
+import { co2UnitProblem } from './co2-unit-check.js';
+import { nearestName } from './nearest-name.js';
 import { parsePathway, type ParsedPathway } from './parse-pathway.js';
 import { readTextFile } from './read-text-file.js';
 import { spliceOntoHistory } from './splice-onto-history.js';
@@ -17,6 +19,11 @@ export interface LoadPathwayOptions {
   splice?: boolean;
   /** Folder of bundled pathways and history.csv (default: the one shipped with warmcast). */
   pathwaysDir?: string;
+  /**
+   * The user says a CO2 emission jump at the join with the history is meant, so a first value near
+   * 12/44 of the rate diagnosed from the record is not refused as Gt C (see co2UnitProblem).
+   */
+  co2JumpIntended?: boolean;
   /**
    * What fills a group of short-lived species (aerosol precursors, ozone precursors, halogenated
    * gases) that an emission file gives neither as emissions nor as forcing; without it such a file
@@ -79,7 +86,11 @@ export function pathwayFromParsed(
   // agent columns are replaced by the file's and not added to them.
   const emissionForcing = resolveEmissionForcing(annual, history, { absent: options.absentEmissions, firstRowLine: parsed.rowLines[0] });
   let pathway = splitLumpedForcing(emissionForcing.pathway);
-  if (history) pathway = spliceOntoHistory(pathway, history);
+  if (history) {
+    pathway = spliceOntoHistory(pathway, history);
+    const problem = co2UnitProblem(parsed, pathway, history, options.co2JumpIntended ?? false);
+    if (problem) throw new InputError([problem]);
+  }
   return { parsed, annual, pathway, emissionForcing };
 }
 
@@ -95,7 +106,8 @@ export function pathwayFromParsed(
  * @param options - `splice` (default true), `pathwaysDir` (default: the bundled folder)
  * @returns the annual Pathway a run uses
  * @throws InputError (exit 2) when the file is missing and not a bundled name (the message lists the
- *   bundled names), a folder, unreadable, too large, not UTF-8, or invalid
+ *   bundled names and the nearest one to a typo), a folder, unreadable, too large, not UTF-8, or
+ *   invalid, or when its CO2 emissions look like Gt C (co2UnitProblem; `co2JumpIntended` says they are not)
  * @example
  * loadPathway('swift').provenance.spliceYear // 2025
  * loadPathway('my-plan.csv', { splice: false }).years[0] // the file's first year
@@ -119,10 +131,11 @@ function locate(arg: string, pathwaysDir: () => string): { path: string; source:
     if (existsSync(path)) return { path, source: `bundled:${name}` };
   }
   const names = dir === undefined ? [] : bundledPathwayNames(dir);
+  const guess = nearestName(arg.replace(/\.csv$/i, ''), names);
   throw new InputError([{
     file: arg,
     code: 'input.not-found',
-    message: 'must be an existing file or the name of a bundled pathway',
+    message: `must be an existing file or the name of a bundled pathway${guess === undefined ? '' : `; did you mean "${guess}"?`}`,
     value: arg,
     expected: names.length > 0
       ? `a CSV file path or one of the bundled pathways: ${names.join(', ')}`

@@ -2,10 +2,10 @@ import Papa from 'papaparse';
 import { InputError, type InputProblem } from '../errors.js';
 import { LUMPED_PARTS } from '../forcing/lumped-forcing.js';
 import { HALOGEN_COLUMNS } from '../carbon/halogen-species.js';
-import { GASES, HALOGEN_CONCENTRATION_COLUMNS, HALOGEN_EMISSION_COLUMNS, LUMPED_FORCING_COLUMNS, PATHWAY_COLUMNS, type Gas, type PathwayColumn } from '../pathway.js';
+import { COLUMN_UNITS, GASES, HALOGEN_CONCENTRATION_COLUMNS, HALOGEN_EMISSION_COLUMNS, LUMPED_FORCING_COLUMNS, PATHWAY_COLUMNS, type Gas, type PathwayColumn } from '../pathway.js';
 import { commonDayOfDates, isoDateToYear } from './iso-date-year.js';
+import { ambiguousDecimalPoint, columnSuggestion, dateHint, looksLikeUnitsRow, thousandsSeparated } from './input-hints.js';
 import { nearestHalogen } from './nearest-halogen.js';
-import { nearestName } from './nearest-name.js';
 import { outOfBounds } from './value-bounds.js';
 
 /** A pathway file as read, before interpolation: one entry per data row, in file order. */
@@ -135,6 +135,9 @@ export function parsePathway(text: string, file: string): ParsedPathway {
   let latestTime = -Infinity;
   let latestTimeText = '';
   let latestTimeLine = 0;
+  /** Decimal-comma files: whether any cell used a decimal comma, and cells such as 37.500 that then mean 37500. */
+  let sawDecimalComma = false;
+  const dottedCells: { line: number; column: string; value: string }[] = [];
 
   for (let i = 0; i < lines.length; i++) {
     const lineNumber = i + 1;
@@ -162,6 +165,17 @@ export function parsePathway(text: string, file: string): ParsedPathway {
     const cells = splitCells(lines[i], delimiter, lineNumber, report);
     if (cells === undefined) continue;
     if (cells.every((c) => c.trim() === '')) continue;
+    if (rowLines.length === 0 && looksLikeUnitsRow(cells.map((c) => c.trim()), (c) => readNumber(c, delimiter).ok)) {
+      report({
+        code: 'input.units-row',
+        line: lineNumber,
+        message: `must hold numbers: this looks like a row of units under the header on line ${headerLine}; `
+          + 'delete it or start it with # (units are in the column names: co2_ppm is ppm, co2_gtco2 Gt CO2 per year)',
+        value: lines[i],
+        expected: 'the first data row, such as "2030,440"',
+      });
+      continue;
+    }
     if (cells.length !== headerCells.length) {
       report({
         code: 'input.cell-count',
@@ -183,6 +197,10 @@ export function parsePathway(text: string, file: string): ParsedPathway {
         time = readTime(cell, role, lineNumber, delimiter, report);
       } else if (role.kind === 'data') {
         values.get(role.column)!.push(readValue(cell, role, lineNumber, delimiter, report));
+        if (delimiter !== ',') {
+          if (DECIMAL_COMMA_NUMBER.test(cell)) sawDecimalComma = true;
+          else if (ambiguousDecimalPoint(cell)) dottedCells.push({ line: lineNumber, column: role.header, value: cell });
+        }
       }
     }
     times.push(time);
@@ -224,6 +242,18 @@ export function parsePathway(text: string, file: string): ParsedPathway {
     }
   }
 
+  if (sawDecimalComma) {
+    for (const at of dottedCells) {
+      report({
+        ...at,
+        code: 'input.thousands-separator',
+        message: `must be written with the file's decimal comma: in a file whose numbers use decimal commas, ${at.value} reads as `
+          + `${at.value.replace(/\./g, '')} with a thousands separator`,
+        expected: `${at.value.replace(/\./g, '')} without the separator, or ${at.value.replace('.', ',')} if a decimal was meant`,
+      });
+    }
+  }
+
   if (headerLine === 0) {
     report({
       code: 'input.no-header',
@@ -239,6 +269,8 @@ export function parsePathway(text: string, file: string): ParsedPathway {
     });
   }
 
+  // In file order (a problem found at the end, such as a thousands separator, goes back to its line).
+  problems.sort((a, b) => (a.line ?? 0) - (b.line ?? 0));
   if (dropped > 0) {
     problems.push({
       file,
@@ -369,7 +401,7 @@ function readHeader(cells: string[], line: number, report: Report): CellRole[] {
         roles.push({ kind: 'skip' });
         return;
       }
-      const guess = hint === undefined ? nearestName(key, known) : undefined;
+      const guess = hint === undefined ? columnSuggestion(key, known, (c) => COLUMN_UNITS[c as PathwayColumn]) : undefined;
       report({
         code: 'input.unknown-column',
         line,
@@ -377,7 +409,7 @@ function readHeader(cells: string[], line: number, report: Report): CellRole[] {
         message: hint !== undefined
           ? `must be a known column name; give ${hint}`
           : guess !== undefined
-            ? `must be a known column name; did you mean "${guess}"?`
+            ? `must be a known column name; ${guess}`
             : 'must be a known column name',
         value: header,
         expected: `one of year, date, ${LISTED_COLUMNS.join(', ')}`,
@@ -477,6 +509,10 @@ export function readNumber(cell: string, delimiter: string): NumberRead {
     return { ok: false, code: 'input.not-finite', message: 'must be a finite number', expected: `a number such as ${example}` };
   }
   if (decimalComma && DECIMAL_COMMA_NUMBER.test(cell)) return { ok: true, value: Number(cell.replace(',', '.')) };
+  const plain = thousandsSeparated(cell, decimalComma);
+  if (plain !== undefined) {
+    return { ok: false, code: 'input.thousands-separator', message: `must be a number without thousands separators (write ${plain})`, expected: `a number such as ${example}` };
+  }
   return {
     ok: false,
     code: 'input.bad-number',
@@ -515,7 +551,9 @@ function readTime(
   if (role.name === 'year') {
     const read = readNumber(cell, delimiter);
     if (!read.ok) {
-      report({ ...at, code: read.code, message: read.message, expected: 'a year such as 2030 or 2030.5' });
+      const asDate = /^\d{4}-\d{2}-\d{2}/.test(cell) || dateHint(cell) !== undefined;
+      const message = asDate ? `must be a year: ${cell} is a date; name the column "date" (ISO 8601 dates such as 2030-07-01) or give years` : read.message;
+      report({ ...at, code: asDate ? 'input.date-in-year-column' : read.code, message, expected: 'a year such as 2030 or 2030.5' });
       return NaN;
     }
     if (!(read.value >= YEAR_MIN && read.value <= YEAR_MAX)) {
@@ -530,7 +568,7 @@ function readTime(
   }
   const read = isoDateToYear(cell);
   if (!read.ok) {
-    report({ ...at, code: 'input.bad-date', message: `must be an ISO 8601 date: ${read.reason}`, expected: 'a full date such as 2030-07-01 (1 or 2 July means that whole year)' });
+    report({ ...at, code: 'input.bad-date', message: dateHint(cell) ?? `must be an ISO 8601 date: ${read.reason}`, expected: 'a full date such as 2030-07-01 (1 or 2 July means that whole year)' });
     return NaN;
   }
   if (!(read.year >= YEAR_MIN && read.year <= YEAR_MAX)) {

@@ -16,6 +16,11 @@ import {
 import { basename, dirname, join, resolve } from 'node:path';
 import { ConfigError } from '../errors.js';
 
+// Why not the `write-file-atomic` package (7.0.1, the last line for Node 20): it writes one file and
+// renames it into place at once, so a CSV would be in place before its .meta.json sidecar is written;
+// keeping the pair all-or-nothing would still need every part below (checking all targets first,
+// staging both, renaming together, putting back on failure), and its errors name the temporary file.
+
 /** Options of writeFileAtomic and writeFilesAtomic. */
 export interface WriteFileAtomicOptions {
   /** Files read by this run; writing over any of them is refused (compared as resolved real paths). */

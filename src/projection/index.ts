@@ -1,5 +1,11 @@
 export { PROJECTION_COLUMNS, projectPathway, rebase } from './project-pathway.js';
 export type { Projection, ProjectionOptions } from './project-pathway.js';
 export { ensembleInput } from './ensemble-input.js';
+export { attributePathway } from './attribute-pathway.js';
+export type { AttributedProjection } from './attribute-pathway.js';
 export { AR6_ENERGY_BUDGET, EARTH_AREA_M2, OCEAN_SHARE_OF_HEAT_GAIN, energyBudget, energyBudgetNote } from './energy-budget.js';
 export type { EnergyBudget } from './energy-budget.js';
+export { attributeMembers } from './attribute-members.js';
+export type { AttributionRanges } from './attribute-members.js';
+export { carbonBudget } from './carbon-budget.js';
+export type { BudgetAssumptions, CarbonBudget, CarbonBudgetOptions } from './carbon-budget.js';

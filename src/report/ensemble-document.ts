@@ -81,7 +81,7 @@ export function ensembleDocument(r: EnsembleResult, options: EnsembleDocumentOpt
   const s = options.summary.sampled;
   const subtitle =
     `${r.memberCount} members, seed ${c.seed}: ECS ${kelvin(s.ecs_k.p50)} K [${kelvin(s.ecs_k.p05)}-${kelvin(s.ecs_k.p95)}], TCR ${kelvin(s.tcr_k.p50)} K [${kelvin(s.tcr_k.p05)}-${kelvin(s.tcr_k.p95)}] ` +
-    `sampled to the IPCC AR6 ranges; figures are medians [5-95 %] across members; warming relative to the ${c.baseline[0]}-${c.baseline[1]} mean`;
+    `(${membersOrigin(c.scheme)}); figures are medians [5-95 %] across members; warming relative to the ${c.baseline[0]}-${c.baseline[1]} mean`;
   return projectionDocument({
     command: 'ensemble',
     title: options.name,
@@ -132,4 +132,11 @@ function memberTables(h: EnsembleHeadlines): OutputTable[] {
 
 function percentOf(v: number): string {
   return percent(v);
+}
+
+/** Where an ensemble's members came from, in a few words, by its member source's scheme. */
+function membersOrigin(scheme: string): string {
+  if (scheme.startsWith('calibrated set')) return 'from the calibrated set, constrained by the observed record';
+  if (scheme.startsWith('prior of calibrated set')) return 'from the prior, not constrained by the observed record';
+  return 'sampled to the IPCC AR6 assessed ranges';
 }

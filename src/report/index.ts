@@ -45,3 +45,6 @@ export { jsonText } from './write-json.js';
 export { markdownEscape, markdownTable, markdownText } from './write-markdown.js';
 export { svgText } from './write-svg.js';
 export { xlsxBytes } from './write-xlsx.js';
+export { attributionDocument } from './attribution-document.js';
+export type { AttributionDocumentOptions } from './attribution-document.js';
+export { BUDGET_UNCERTAINTY, budgetDocument } from './budget-document.js';

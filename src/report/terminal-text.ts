@@ -44,7 +44,7 @@ export function terminalText(doc: OutputDocument, options: TerminalTextOptions =
     out.push(...plainTable({ ...t, notes: [] }, width));
   }
   if (doc.tables.length > 0) {
-    out.push('');
+    if (doc.headline.length > 0) out.push('');
     out.push(...plainTable({ ...doc.tables[0], notes: [] }, width));
   }
   if (options.chart !== false && doc.terminalChart) {

@@ -32,7 +32,7 @@ describe('warmcast batch', () => {
       const scenario = all.rows[i].scenario;
       const alone = await runCli(['ensemble', 'table.csv', '--scenario', scenario, '--model', model, ...SETTINGS, '--thresholds', '1.5,2', '--out', `alone-${i}.json`, '--no-chart'], dir);
       expect(alone.code, alone.err).toBe(0);
-      const h = json(dir, `alone-${i}.json`).headlines;
+      const h = json(dir, `alone-${i}.json`).ensemble;
       // The ensemble's members' own peak is over the whole run; warming peaks after 2001, so it is the batch's 2001-2100 peak.
       expect(all.rows[i].peak_warming_p05_k).toBe(h.peak.warming_k.p05);
       expect(all.rows[i].peak_warming_p50_k).toBe(h.peak.warming_k.p50);
@@ -82,11 +82,13 @@ describe('warmcast batch', () => {
     expect(json(dir, 'xlsx.json').rows).toEqual(json(dir, 'csv.json').rows);
     const workbook = new ExcelJS.Workbook();
     await workbook.xlsx.readFile(join(dir, 'summary.xlsx'));
-    const sheet = workbook.getWorksheet('summary')!;
+    // The output registry's workbook: the summary at full precision in its data sheet, the short table in its own.
+    const sheet = workbook.getWorksheet('data')!;
+    expect(workbook.getWorksheet('scenarios')).toBeDefined();
     expect(sheet.getRow(1).getCell(1).value).toBe('model');
     expect(sheet.getRow(2).getCell(7).value).toBe(json(dir, 'csv.json').rows[0].peak_warming_p50_k);
     expect(readdirSync(join(dir, 'years')).sort()).toEqual(['Model_A--Quick.csv', 'Model_A--Quick.meta.json', 'Model_A--Slow.csv', 'Model_A--Slow.meta.json', 'Model_B--Quick.csv', 'Model_B--Quick.meta.json']);
-    expect(readFileSync(join(dir, 'years', 'Model_A--Slow.csv'), 'utf8').split('\n')[0]).toMatch(/^year,warming_p05_k,.*warming_p95_k,prob_above_1\.5,prob_above_2$/);
+    expect(readFileSync(join(dir, 'years', 'Model_A--Slow.csv'), 'utf8').split('\n')[0]).toMatch(/^year,warming_p05_k,.*warming_p95_k,crossed_by_1\.5,prob_above_1\.5,crossed_by_2,prob_above_2$/);
   });
 
   it('a scenario without aerosol precursors fails unless --absent-emissions states an assumption, which filled_by then names', async () => {
@@ -112,13 +114,17 @@ describe('warmcast batch', () => {
     expect(shard.code).toBe(2);
     expect(shard.err).toContain('--shard writes a shard file');
     expect(existsSync(join(dir, 'x.csv'))).toBe(false);
+    // A summary has no chart: .svg is refused by the output registry's check, before any scenario runs.
+    const svg = await runCli(['batch', 'plain.csv', '--out', 'x.svg'], dir);
+    expect(svg.code).toBe(2);
+    expect(svg.err).toContain('the extension must be one of .csv, .json, .md, .html, .xlsx');
   });
 });
 
 describe('--scenario and check TABLE', () => {
   it('run, compare and check take TABLE --scenario NAME; an ambiguous name asks for --model', async () => {
     const dir = await tables();
-    const run = await runCli(['run', 'table.csv', '--scenario', 'Slow', '--no-chart'], dir);
+    const run = await runCli(['run', 'table.csv', '--scenario', 'Slow', '--no-chart', '--notes'], dir);
     expect(run.code, run.err).toBe(0);
     expect(run.out).toContain('read from the scenario table');
     const ambiguous = await runCli(['run', 'table.csv', '--scenario', 'quick'], dir);

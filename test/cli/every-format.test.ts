@@ -72,3 +72,35 @@ describe('every command writes every format', () => {
     expect(r.err).toMatch(/\.csv, \.json, \.md, \.svg, \.html, \.xlsx/);
   });
 });
+
+describe('attribute and budget write every format that fits them', () => {
+  it('attribute writes .csv + .meta.json, .json, .md, .svg, .html and .xlsx, each readable', async () => {
+    const dir = tempDir();
+    for (const ext of Object.keys(OUTPUT_FORMATS)) {
+      const r = await runCli(['attribute', 'swift', '--out', `a${ext}`, '--no-chart'], dir);
+      expect(r.code, `attribute ${ext}: ${r.err}`).toBe(0);
+    }
+    const csv = Papa.parse<Record<string, string>>(readFileSync(join(dir, 'a.csv'), 'utf8'), { header: true, skipEmptyLines: true });
+    expect(csv.errors).toEqual([]);
+    expect(Object.keys(csv.data[0])).toContain('warming_co2_k');
+    expect(JSON.parse(readFileSync(join(dir, 'a.json'), 'utf8')).command).toBe('attribute');
+    expect(readGfmTables(readFileSync(join(dir, 'a.md'), 'utf8')).length).toBeGreaterThanOrEqual(1);
+    expect(xmlProblems(readFileSync(join(dir, 'a.svg'), 'utf8'))).toEqual([]);
+    const wb = new ExcelJS.Workbook();
+    await wb.xlsx.load(readFileSync(join(dir, 'a.xlsx')) as unknown as ArrayBuffer);
+    expect(wb.getWorksheet('data')).toBeDefined();
+  });
+
+  it('budget writes .csv + .meta.json, .json, .md, .html and .xlsx, and refuses .svg (it has no chart) before any work', async () => {
+    const dir = tempDir();
+    for (const ext of ['.csv', '.json', '.md', '.html', '.xlsx']) {
+      const r = await runCli(['budget', '--limit', '2', '--chance', '50', '--members', '20', '--out', `b${ext}`], dir);
+      expect(r.code, `budget ${ext}: ${r.err}`).toBe(0);
+    }
+    const csv = Papa.parse<Record<string, string>>(readFileSync(join(dir, 'b.csv'), 'utf8'), { header: true, skipEmptyLines: true });
+    expect(Object.keys(csv.data[0])).toEqual(['limit_k', 'chance', 'budget_gtco2', 'net_zero_year', 'status']);
+    const svg = await runCli(['budget', '--out', 'b.svg'], dir);
+    expect(svg.code).toBe(2);
+    expect(svg.err).toMatch(/--out .*b\.svg: the extension must be one of/);
+  });
+});

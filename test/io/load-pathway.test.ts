@@ -63,10 +63,15 @@ describe('loadPathway', () => {
     expect(h.years[0]).toBe(2020);
   });
 
+  it('loadPathway(swfit) suggests the bundled swift (a swap of two letters is one edit)', () => {
+    expect(problemOf('swfit', { pathwaysDir: fileURLToPath(new URL('../../pathways', import.meta.url)) }).message)
+      .toBe('must be an existing file or the name of a bundled pathway; did you mean "swift"?');
+  });
+
   it('loadPathway of an unknown name lists the bundled names', () => {
     expect(problemOf('clam')).toEqual({
       file: 'clam', code: 'input.not-found', value: 'clam',
-      message: 'must be an existing file or the name of a bundled pathway',
+      message: 'must be an existing file or the name of a bundled pathway; did you mean "calm"?',
       expected: 'a CSV file path or one of the bundled pathways: calm, history',
     });
     expect(problemOf(join(dir, 'no', 'such.csv')).code).toBe('input.not-found');

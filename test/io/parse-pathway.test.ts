@@ -308,3 +308,47 @@ describe('parsePathway on awkward but valid fixtures', () => {
     expect(Array.from(p.rowLines)).toEqual([5, 7]);
   });
 });
+
+describe('parsePathway hints for common slips', () => {
+  it('parsePathway(bad/units-row.csv) names line 3 as a units row once, instead of a bad number per cell', () => {
+    const file = 'bad/units-row.csv';
+    expect(problemsOf(read(file), file)).toEqual([{
+      file, code: 'input.units-row', line: 3, value: 'yr,ppm,ppb',
+      message: 'must hold numbers: this looks like a row of units under the header on line 2; delete it or start it with # '
+        + '(units are in the column names: co2_ppm is ppm, co2_gtco2 Gt CO2 per year)',
+      expected: 'the first data row, such as "2030,440"',
+    }]);
+  });
+
+  it('parsePathway(bad/thousands-separators.csv) refuses 1.234,5 and, in a decimal-comma file, 37.500, at their lines', () => {
+    const file = 'bad/thousands-separators.csv';
+    expect(problemsOf(read(file), file).map((p) => [p.code, p.line, p.column, p.value])).toEqual([
+      ['input.thousands-separator', 3, 'co2_gtco2', '37.500'],
+      ['input.thousands-separator', 4, 'ch4_mt', '1.234,5'],
+    ]);
+  });
+
+  it('parsePathway accepts 37.500 in a semicolon file that uses no decimal comma (nothing to be confused with)', () => {
+    expect(parsePathway('year;co2_gtco2\n2030;37.500\n', 's.csv').columns.co2_gtco2).toEqual(Float64Array.of(37.5));
+  });
+
+  it('parsePathway(bad/dates-mixed-up.csv) explains a time after a space and day/month order', () => {
+    const file = 'bad/dates-mixed-up.csv';
+    expect(problemsOf(read(file), file).map((p) => [p.line, p.message])).toEqual([
+      [3, 'must be an ISO 8601 date without a time after a space: 2030-07-01 00:00:00 carries a time of day, as spreadsheets export dates; '
+        + 'give the date alone (2030-07-01), or join a time with T (2030-07-01T12:00)'],
+      [4, 'must be an ISO 8601 date (year-month-day): 31/12/2031 reads as day/month/year; write 2031-12-31'],
+    ]);
+  });
+
+  it('parsePathway says a date in a year column belongs in a date column', () => {
+    const [p] = problemsOf('year,co2_ppm\n2030-07-01,440\n', 'y.csv');
+    expect(p).toMatchObject({ code: 'input.date-in-year-column', line: 2, column: 'year',
+      message: 'must be a year: 2030-07-01 is a date; name the column "date" (ISO 8601 dates such as 2030-07-01) or give years' });
+  });
+
+  it('parsePathway asks "co2_ppm or co2_gtco2?" for a bare co2 header', () => {
+    const [p] = problemsOf('year,co2\n2030,440\n', 'c.csv');
+    expect(p.message).toBe('must be a known column name; did you mean "co2_ppm" (ppm) or "co2_gtco2" (Gt CO2 yr-1)?');
+  });
+});

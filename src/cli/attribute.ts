@@ -1,0 +1,50 @@
+import { Command } from 'commander';
+import { readPathway } from '../io/load-pathway.js';
+import { attributeMembers } from '../projection/attribute-members.js';
+import { attributePathway } from '../projection/index.js';
+import { attributionDocument, standardCautions } from '../report/index.js';
+import type { CliIo } from './cli-io.js';
+import { memberSource } from './member-source.js';
+import { absentEmissionsOption, addModelOptions, baselineOption, cautionsHelp, type ModelOptions, pathwayArg, resolveModelParams, wholeNumberOption } from './options.js';
+import { addReportOptions, announceWritten, pathwayInputs, printDocument, type ReportOptions, writeDocument } from './output.js';
+import { DEFAULT_PATHWAY } from './run.js';
+
+interface AttributeOptions extends ModelOptions, ReportOptions {
+  baseline: [number, number];
+  splice: boolean;
+  members?: number;
+  seed: number;
+  prior: boolean;
+  absentEmissions?: string;
+}
+
+/** `warmcast attribute [pathway]`: warming split by forcing agent, adding up to the total. */
+export function attributeCommand(io: CliIo): Command {
+  const cmd = new Command('attribute')
+    .description("split a pathway's warming by forcing agent (warming_<agent>_k, adding up to warming_k in every year)")
+    .argument('[pathway]', `pathway CSV file or bundled name (default: ${DEFAULT_PATHWAY})`);
+  addReportOptions(cmd)
+    .addOption(baselineOption())
+    .option('--no-splice', 'do not splice a pathway that starts late onto the bundled history')
+    .option('-n, --members <count>', 'add 5-95 % ranges from this many members of the calibrated set', wholeNumberOption('--members', 2))
+    .option('--seed <integer>', 'random seed of the members', wholeNumberOption('--seed', 0), 1)
+    .option('--prior', 'with --members: draw from the prior, unconstrained by the observed record, instead of the calibrated set', false)
+    .addOption(absentEmissionsOption());
+  addModelOptions(cmd).addHelpText('after', '\nExamples:\n  warmcast attribute delayed\n  warmcast attribute swift-emissions --members 500 --out swift-by-agent.csv\n' + cautionsHelp(standardCautions()));
+  cmd.action((pathway: string | undefined, opts: AttributeOptions) => {
+    const { params, paramsFile, notes: paramNotes, forcingScale, forcingNote } = resolveModelParams(opts, io);
+    const read = readPathway(pathwayArg(pathway ?? DEFAULT_PATHWAY, io), { splice: opts.splice, absentEmissions: opts.absentEmissions as never });
+    const result = attributePathway(read.pathway, { params, baseline: opts.baseline, forcingScale });
+    const ranges = opts.members ? attributeMembers(read.pathway, { params, members: opts.members, seed: opts.seed, baseline: opts.baseline, source: memberSource(opts.prior) }) : undefined;
+    const notes = [...read.pathway.provenance.notes, ...result.projection.notes, ...result.notes, ...(ranges?.notes ?? []), ...paramNotes, ...(forcingNote ? [forcingNote] : [])];
+    const doc = attributionDocument(result, { notes, ...(ranges ? { ranges } : {}), from: opts.from, to: opts.to });
+    return (async () => {
+      if (opts.out !== undefined) {
+        const inputs = [...pathwayInputs(read), ...(paramsFile ? [paramsFile] : [])];
+        announceWritten(await writeDocument(opts.out, doc, { inputs, params, baseline: opts.baseline, io, ...(ranges ? { seed: opts.seed } : {}) }), io);
+      }
+      printDocument(doc, opts, io);
+    })();
+  });
+  return cmd;
+}

@@ -1,0 +1,84 @@
+import { energyBalance } from '../climate/energy-balance.js';
+import { ar6Members } from '../ensemble/ar6-members.js';
+import { forcingScaleKey, type MemberSource } from '../ensemble/member-parameters.js';
+import { runMembers } from '../ensemble/run-members.js';
+import { AR6_SAMPLING } from '../ensemble/sampling.js';
+import { FORCING_AGENTS, ghgForcingFunction, type ForcingAgent } from '../forcing/agents.js';
+import type { ClimateParams } from '../climate/params.js';
+import { quantileSorted } from '../numerics/quantiles.js';
+import type { Pathway } from '../pathway.js';
+import { ensembleInput } from './ensemble-input.js';
+
+/** Percentiles of each agent's warming across members, per year. */
+export interface AttributionRanges {
+  years: Float64Array;
+  /** Per agent: 5 %, 50 % and 95 % of the members' warming from that agent, K, one value per year. */
+  byAgent: Record<string, { p05: Float64Array; p50: Float64Array; p95: Float64Array }>;
+  members: number;
+  notes: string[];
+}
+
+/**
+ * Warming by agent across an ensemble: each member runs the pathway (emission-driven members with
+ * their own carbon cycle, runMembers), then its two-box model is run on each agent's ERF as that
+ * member sees it (its scale_<agent> times the agent's series; its own CO2, CH4 and N2O forcing when
+ * it runs a carbon cycle), rebased to the baseline; per agent and year the 5/50/95 % of the members.
+ * For each member the agents add up to its warming (linearity), but the percentiles of the parts do
+ * not add up to the percentiles of the total.
+ *
+ * @param pathway annual pathway (spliced onto history)
+ * @param options central parameters (for the CH4 and N2O members share), members, seed, source, baseline
+ */
+export function attributeMembers(
+  pathway: Pathway,
+  options: { params: ClimateParams; members: number; seed: number; source?: MemberSource; baseline?: readonly [number, number] },
+): AttributionRanges {
+  const baseline = options.baseline ?? ([1850, 1900] as const);
+  const { input, notes } = ensembleInput(pathway, options.params);
+  const years = input.years;
+  const n = years.length;
+  const source = options.source ?? ar6Members(AR6_SAMPLING, options.params.co2Formula, input.carbon !== undefined);
+  const { parameters } = source.draw(options.seed, 0, options.members);
+  const m = parameters.count;
+  const v = parameters.values;
+  const co2 = input.carbon ? new Float64Array(m * n) : undefined;
+  if (input.carbon) runMembers({ co2Formula: options.params.co2Formula, forcing: input.forcing.byAgent, carbon: input.carbon }, parameters, undefined, co2);
+  const ghg = ghgForcingFunction({ co2Formula: options.params.co2Formula });
+  const b0 = baseline[0] - years[0];
+  const b1 = baseline[1] - years[0];
+  // Member-major per agent: warming of member r in year k at r * n + k.
+  const parts: Record<string, Float64Array> = Object.fromEntries(FORCING_AGENTS.map((a) => [a, new Float64Array(m * n)]));
+  const f = new Float64Array(n);
+  for (let r = 0; r < m; r++) {
+    const twoBox = { feedbackWm2K: v.feedback_wm2k[r], upperHeatCapacity: v.upper_heat_capacity[r], deepHeatCapacity: v.deep_heat_capacity[r], exchangeWm2K: v.exchange_wm2k[r], deepEfficacy: v.deep_efficacy[r] };
+    for (const agent of FORCING_AGENTS) {
+      const scale = v[forcingScaleKey(agent as ForcingAgent)]?.[r] ?? 1;
+      const own = co2 && input.carbon && (agent === 'co2' || agent === 'ch4' || agent === 'n2o');
+      for (let k = 0; k < n; k++) {
+        f[k] = own ? scale * ghg(co2![k * m + r], input.carbon!.ch4Ppb[k], input.carbon!.n2oPpb[k])[agent as 'co2' | 'ch4' | 'n2o'] : scale * input.forcing.byAgent[agent as ForcingAgent][k];
+      }
+      const t = energyBalance(twoBox, f).surfaceK;
+      let mean = 0;
+      for (let k = b0; k <= b1; k++) mean += t[k];
+      mean /= b1 - b0 + 1;
+      const out = parts[agent];
+      for (let k = 0; k < n; k++) out[r * n + k] = t[k] - mean;
+    }
+  }
+  const byAgent: AttributionRanges['byAgent'] = {};
+  const column = new Float64Array(m);
+  for (const agent of FORCING_AGENTS) {
+    const p05 = new Float64Array(n);
+    const p50 = new Float64Array(n);
+    const p95 = new Float64Array(n);
+    for (let k = 0; k < n; k++) {
+      for (let r = 0; r < m; r++) column[r] = parts[agent][r * n + k];
+      column.sort();
+      p05[k] = quantileSorted(column, 0.05);
+      p50[k] = quantileSorted(column, 0.5);
+      p95[k] = quantileSorted(column, 0.95);
+    }
+    byAgent[agent] = { p05, p50, p95 };
+  }
+  return { years, byAgent, members: m, notes: [...notes, `ranges: 5-95 % of ${m} members (seed ${options.seed}); ${source.notes.join(' ')}`.trim()] };
+}

@@ -1,0 +1,253 @@
+import type { ClimateParams } from '../climate/params.js';
+import { energyBalance } from '../climate/energy-balance.js';
+import { gtco2ToGtc } from '../carbon/units.js';
+import { ConfigError } from '../errors.js';
+import { co2Forcing } from '../forcing/co2.js';
+import type { ForcingAgent } from '../forcing/agents.js';
+import { forcingScaleKey, sliceMemberParameters, type MemberParameters, type MemberSource } from '../ensemble/member-parameters.js';
+import { ar6Members } from '../ensemble/ar6-members.js';
+import { AR6_SAMPLING } from '../ensemble/sampling.js';
+import { runMembers, type MemberTask } from '../ensemble/run-members.js';
+import { attributeWarming } from '../metrics/attribution.js';
+import {
+  remainingBudget,
+  straightLineFamily,
+  stretchedShapeFamily,
+  type BudgetMember,
+  type BudgetRow,
+  type Co2PathFamily,
+  type RemainingBudget,
+} from '../metrics/remaining-budget.js';
+import type { Pathway } from '../pathway.js';
+import { ensembleInput } from './ensemble-input.js';
+import { projectPathway } from './project-pathway.js';
+
+/** Options of {@link carbonBudget}. */
+export interface CarbonBudgetOptions {
+  /** Warming limits, K above 1850-1900. */
+  limits: number[];
+  /** Chances of keeping peak warming at or below each limit, in (0, 1). */
+  chances: number[];
+  /** First calendar year counted (default: the first year after the history). */
+  fromYear?: number;
+  /** Members and seed of the ensemble. */
+  members: number;
+  seed: number;
+  /** Where the members come from (default: AR6-range sampling). */
+  source?: MemberSource;
+  /** Central parameters: the CH4 and N2O concentrations all members share, and the current CO2 rate. */
+  params: ClimateParams;
+  /** The central run's multiplier per forcing agent (the calibrated set's medians), as `run` uses. */
+  forcingScale?: Partial<Record<ForcingAgent, number>>;
+  /** Last year run (default: 250 years after fromYear, so a late net zero still shows its peak). */
+  endYear?: number;
+  /**
+   * The user's own net CO2 shape (Gt CO2 per calendar year from fromYear on), stretched in time
+   * instead of the straight-line decline (`warmcast budget --shape`).
+   */
+  shape?: Float64Array;
+}
+
+/** What a budget rests on, for notes and provenance. */
+export interface BudgetAssumptions {
+  /** The members' warming over the ten years before fromYear, K: median, 5 % and 95 %. */
+  historicalWarmingK: [number, number, number];
+  /** Years of that mean. */
+  historicalPeriod: [number, number];
+  /** Net CO2 rate the straight-line decline starts from (diagnosed at the end of the history), Gt CO2 yr-1. */
+  currentRateGtco2: number;
+  /** Central run along the first limit's 50 % pathway: warming from every agent but CO2 at its net zero, K. */
+  nonCo2WarmingAtNetZeroK: number;
+  /** Its net-zero year. */
+  referenceNetZeroYear: number;
+  /** Members' CO2-only warming change in the 50 years after that net zero, K: median, 5 % and 95 %. */
+  zeroEmissionsCommitmentK: [number, number, number];
+}
+
+/** Result of {@link carbonBudget}. */
+export interface CarbonBudget extends RemainingBudget {
+  fromYear: number;
+  assumptions: BudgetAssumptions;
+  notes: string[];
+}
+
+/** A pathway extended to `lastYear` by holding each series' last value. */
+function extendPathway(p: Pathway, lastYear: number): Pathway {
+  const n0 = p.years.length;
+  const n = lastYear - p.years[0] + 1;
+  if (n <= n0) return p;
+  const years = Float64Array.from({ length: n }, (_, i) => p.years[0] + i);
+  const series: Pathway['series'] = {};
+  for (const [k, v] of Object.entries(p.series) as [keyof Pathway['series'], Float64Array][]) {
+    const w = new Float64Array(n);
+    w.set(v);
+    w.fill(v[n0 - 1], n0);
+    series[k] = w;
+  }
+  return { ...p, years, series };
+}
+
+/**
+ * Remaining CO2 budgets for an ensemble (see remainingBudget in metrics/): the non-CO2 pathway
+ * (spliced onto the history, held at its last values to the end of the run) fixes everything but
+ * net CO2 from the end of the history on; net CO2 is diagnosed from the record to the end of the
+ * history, held at the current rate until fromYear, and from fromYear follows the budget family.
+ * Each member runs its own carbon cycle and two-box model (runMembers); its CH4 and N2O
+ * concentrations come from one central run, as in an emission-driven ensemble.
+ *
+ * @param nonCo2 the non-CO2 pathway, spliced onto the history (any CO2 it gives is replaced)
+ * @param options limits, chances, members, seed, central parameters, and an optional shape
+ * @returns per limit and chance the budget and its net-zero year, per member budgets, assumptions
+ * @throws ConfigError when the pathway has no history to continue from, or fromYear lies before
+ *   the history's end or too late to see a peak
+ */
+export function carbonBudget(nonCo2: Pathway, options: CarbonBudgetOptions): CarbonBudget {
+  const historyEnd = nonCo2.provenance.historyLastYear;
+  if (historyEnd === undefined) throw new ConfigError('the non-CO2 pathway must start after the bundled history, to be spliced onto it', 'non-co2');
+  const fromYear = options.fromYear ?? historyEnd + 1;
+  if (fromYear <= historyEnd) throw new ConfigError(`--from must be after the history's last year, ${historyEnd}, got ${fromYear}`, 'from');
+  const endYear = options.endYear ?? fromYear + 250;
+  const pathway = extendPathway(nonCo2, endYear);
+  const n = pathway.years.length;
+  const y0 = pathway.years[0];
+  const joinIndex = historyEnd + 1 - y0;
+  const fromIndex = fromYear - y0;
+
+  // CO2: the record's concentrations to the end of the history, emissions after it.
+  const co2Ppm = Float64Array.from(pathway.series.co2_ppm ?? []);
+  if (co2Ppm.length !== n) throw new ConfigError('the history must give co2_ppm', 'non-co2');
+  co2Ppm.fill(NaN, joinIndex);
+  const placeholder = new Float64Array(n).fill(NaN);
+  placeholder.fill(0, joinIndex);
+  const spliced: Pathway = { ...pathway, series: { ...pathway.series, co2_ppm: co2Ppm, co2_gtco2: placeholder } };
+  const central = projectPathway(spliced, { params: options.params, forcingScale: options.forcingScale });
+  const rate = central.columns.co2_gtco2[joinIndex - 1];
+  const notes: string[] = [];
+  if (!(rate > 0)) throw new ConfigError(`the net CO2 rate diagnosed at the end of the history is ${rate.toFixed(1)} Gt CO2 per year: a budget needs a positive rate to fall from`, 'rate');
+
+  const { input, notes: inputNotes } = ensembleInput(spliced, options.params);
+  notes.push(...inputNotes.filter((t) => !t.startsWith('emission-driven pathway')));
+  const task: MemberTask = { co2Formula: options.params.co2Formula, forcing: input.forcing.byAgent, carbon: input.carbon };
+  if (!task.carbon) throw new ConfigError('internal: the budget pathway is not emission-driven', 'non-co2');
+  const carbon = task.carbon;
+  const source = options.source ?? ar6Members(AR6_SAMPLING, options.params.co2Formula, true);
+  const { parameters } = source.draw(options.seed, 0, options.members);
+
+  const family: Co2PathFamily = options.shape
+    ? stretchedShapeFamily(options.shape, fromYear, [0.05, maxStretch(options.shape, endYear - fromYear - 70)])
+    : straightLineFamily(rate, fromYear, endYear - fromYear - 70);
+  const baseline: [number, number] = [1850, 1900];
+  const members: BudgetMember[] = [];
+  const runOne = (r: number, future: Float64Array, co2Out?: Float64Array) => {
+    const emission = new Float64Array(n).fill(NaN);
+    for (let k = joinIndex; k < n; k++) emission[k] = gtco2ToGtc(k < fromIndex ? rate : future[k - fromIndex]);
+    const one = sliceMemberParameters(parameters, r, r + 1);
+    const w = runMembers({ ...task, carbon: { ...carbon, co2: { ...carbon.co2, emissionGtc: emission } } }, one, undefined, co2Out);
+    return rebased(w, baseline[0] - y0, baseline[1] - y0);
+  };
+  for (let r = 0; r < parameters.count; r++) members.push({ warming: (future) => runOne(r, future) });
+  const result = remainingBudget(members, family, { years: pathway.years, fromYear, limits: options.limits, chances: options.chances });
+
+  // Assumptions, along the first limit's 50 % pathway (or its median member where it cannot be met).
+  const perMember = result.members[0].map((m) => m.x).filter((x) => Number.isFinite(x)).sort((a, b) => a - b);
+  const xRef = perMember.length ? perMember[Math.floor(perMember.length / 2)] : family.min;
+  const futureRef = family.path(xRef, n - fromIndex);
+  const refNetZero = family.netZeroYear(xRef);
+  const zec: number[] = [];
+  const hist: number[] = [];
+  const co2 = new Float64Array(n);
+  for (let r = 0; r < parameters.count; r++) {
+    const w = runOne(r, futureRef, co2);
+    hist.push(mean(w, fromIndex - 10, fromIndex - 1));
+    zec.push(co2OnlyCommitment(parameters, r, co2, carbon.n2oPpb, options.params, refNetZero - y0));
+  }
+  const refSeries = new Float64Array(n).fill(NaN);
+  for (let k = joinIndex; k < n; k++) refSeries[k] = k < fromIndex ? rate : futureRef[k - fromIndex];
+  const refRun = projectPathway({ ...spliced, series: { ...spliced.series, co2_gtco2: refSeries } }, { params: options.params, forcingScale: options.forcingScale });
+  const forcing = Object.fromEntries(Object.entries(refRun.columns).filter(([k]) => /^forcing_.*_wm2$/.test(k) && k !== 'forcing_wm2' && k !== 'forcing_aerosol_wm2').map(([k, v]) => [k.slice(8, -4), v]));
+  const parts = attributeWarming(options.params, refRun.years, forcing, baseline);
+  const kz = Math.min(n - 1, refNetZero - y0);
+  const nonCo2WarmingAtNetZeroK = refRun.columns.warming_k[kz] - parts.warmingK.co2[kz];
+
+  const assumptions: BudgetAssumptions = {
+    historicalWarmingK: percentiles3(hist),
+    historicalPeriod: [fromYear - 10, fromYear - 1],
+    currentRateGtco2: rate,
+    nonCo2WarmingAtNetZeroK,
+    referenceNetZeroYear: refNetZero,
+    zeroEmissionsCommitmentK: percentiles3(zec),
+  };
+  notes.push(...budgetNotes(result.rows, assumptions, fromYear, historyEnd, options, source));
+  return { ...result, fromYear, assumptions, notes };
+}
+
+/** Largest stretch of a shape whose net zero still leaves `room` years in the run. */
+function maxStretch(shape: Float64Array, room: number): number {
+  let zero = shape.findIndex((v) => v <= 0);
+  if (zero < 1) zero = 1;
+  return Math.max(0.1, room / zero);
+}
+
+/** A member's warming rebased to the mean of indices [from, to]. */
+function rebased(w: Float64Array, from: number, to: number): Float64Array {
+  const m = mean(w, from, to);
+  return w.map((v) => v - m);
+}
+
+function mean(v: ArrayLike<number>, from: number, to: number): number {
+  let s = 0;
+  for (let k = from; k <= to; k++) s += v[k];
+  return s / (to - from + 1);
+}
+
+/** Median, 5 % and 95 % (nearest rank) of values. */
+function percentiles3(values: number[]): [number, number, number] {
+  const s = [...values].sort((a, b) => a - b);
+  const at = (q: number) => s[Math.min(s.length - 1, Math.max(0, Math.round(q * (s.length - 1))))];
+  return [at(0.5), at(0.05), at(0.95)];
+}
+
+/**
+ * Member r's CO2-only warming change over the 50 years after index `zero`: the two-box model run on
+ * its CO2 ERF alone (its own CO2, scaled by its scale_co2), the zero-emissions commitment of CO2.
+ */
+function co2OnlyCommitment(
+  parameters: MemberParameters,
+  r: number,
+  co2Ppm: Float64Array,
+  n2oPpb: Float64Array,
+  params: ClimateParams,
+  zero: number,
+): number {
+  const v = parameters.values;
+  const scale = v[forcingScaleKey('co2')]?.[r] ?? 1;
+  const f = co2Ppm.map((c, k) => scale * co2Forcing(params.co2Formula, c, n2oPpb[k]));
+  const t = energyBalance(
+    { feedbackWm2K: v.feedback_wm2k[r], upperHeatCapacity: v.upper_heat_capacity[r], deepHeatCapacity: v.deep_heat_capacity[r], exchangeWm2K: v.exchange_wm2k[r], deepEfficacy: v.deep_efficacy[r] },
+    f,
+  ).surfaceK;
+  const later = Math.min(t.length - 1, zero + 50);
+  return t[later] - t[zero];
+}
+
+/** The notes a budget carries: method, assumptions, and what could not be met. */
+function budgetNotes(rows: BudgetRow[], a: BudgetAssumptions, fromYear: number, historyEnd: number, options: CarbonBudgetOptions, source: MemberSource): string[] {
+  const k = (x: number) => x.toFixed(2);
+  const notes = [
+    `remaining CO2 budget: per member, the largest cumulative net CO2 from 1 January ${fromYear} for which its peak warming (highest 20-year mean, the IPCC AR6 convention) stays at or below the limit, along ` +
+      (options.shape
+        ? 'the given net CO2 shape stretched or compressed in time'
+        : `net CO2 falling in a straight line from the current rate, ${a.currentRateGtco2.toFixed(1)} Gt CO2 a year (diagnosed from the record at the end of ${historyEnd}), to net zero, then zero`) +
+      `; the budget at a chance p is the (1 - p) quantile of the members' budgets (${options.members} members, seed ${options.seed})`,
+    `members: ${source.notes.join(' ')}`.trim(),
+    `historical warming to date: ${k(a.historicalWarmingK[0])} K [${k(a.historicalWarmingK[1])} to ${k(a.historicalWarmingK[2])}] (members' ${a.historicalPeriod[0]}-${a.historicalPeriod[1]} mean above 1850-1900; median [5-95 %])`,
+    `non-CO2 warming at net zero: ${k(a.nonCo2WarmingAtNetZeroK)} K in ${a.referenceNetZeroYear} in the central run along the ${options.limits[0]} K, 50 % budget pathway (every agent but CO2; the non-CO2 path is fixed, so a weaker non-CO2 mitigation shrinks every budget)`,
+    `zero-emissions commitment: CO2-only warming changes by ${k(a.zeroEmissionsCommitmentK[0])} K [${k(a.zeroEmissionsCommitmentK[1])} to ${k(a.zeroEmissionsCommitmentK[2])}] in the 50 years after net zero (${a.referenceNetZeroYear}) across the members; it is part of every member's peak`,
+  ];
+  if (fromYear > historyEnd + 1) notes.push(`net CO2 is held at the current rate from ${historyEnd + 1} to ${fromYear - 1}, before the budget starts`);
+  for (const r of rows) {
+    if (!r.met) notes.push(`${r.limitK} K with ${Math.round(r.chance * 100)} % chance cannot be met: more than ${Math.round((1 - r.chance) * 100)} % of the members peak above it even if net CO2 fell to zero at once in ${fromYear}`);
+    else if (r.atLeast) notes.push(`${r.limitK} K with ${Math.round(r.chance * 100)} %: at least ${r.budgetGtco2.toFixed(0)} Gt CO2 (enough members stay below it with the latest net zero searched)`);
+  }
+  return notes;
+}

@@ -1,0 +1,105 @@
+import type { AttributionRanges } from '../projection/attribute-members.js';
+import type { AttributedProjection } from '../projection/attribute-pathway.js';
+import type { OutputDocument } from './output-document.js';
+import type { OutputColumn, OutputTable } from './output-table.js';
+import { shortCaution, standardCautions } from './standard-cautions.js';
+import type { ChartLine } from './terminal-chart.js';
+
+/** What an attribution document shows besides the result. */
+export interface AttributionDocumentOptions {
+  /** Notes on how the inputs were read and run. */
+  notes: string[];
+  /** Ranges across members (`--members`). */
+  ranges?: AttributionRanges;
+  /** First and last year of the tables, charts and files (`--from`, `--to`). */
+  from?: number;
+  to?: number;
+}
+
+/** Mean of a series over inclusive years (years consecutive from `first`). */
+function periodMean(first: number, values: ArrayLike<number>, from: number, to: number): number {
+  let s = 0;
+  for (let y = from; y <= to; y++) s += values[y - first];
+  return s / (to - from + 1);
+}
+
+/**
+ * The output document of `warmcast attribute`: the yearly `warming_<agent>_k` table (with
+ * `_p05/_p50/_p95` across members when there are ranges), a table of agents by period (2010-2019
+ * mean, 2030, 2050, 2100 where the run has them), and a chart of the main agents.
+ */
+export function attributionDocument(r: AttributedProjection, options: AttributionDocumentOptions): OutputDocument {
+  const { attribution: a, projection: p } = r;
+  const { ranges } = options;
+  const first = p.years[0];
+  const last = p.years[p.years.length - 1];
+  const lo = Math.max(first, options.from ?? first);
+  const hi = Math.min(last, options.to ?? last);
+  const i0 = lo - first;
+  const i1 = hi - first + 1;
+  const cut = (v: Float64Array) => v.slice(i0, i1);
+
+  const data: OutputColumn[] = [
+    { key: 'year', values: cut(p.years) },
+    { key: 'warming_k', values: cut(p.columns.warming_k) },
+    ...a.agents.map((x) => ({ key: `warming_${x}_k`, values: cut(a.warmingK[x]) })),
+  ];
+  if (ranges) for (const x of a.agents) for (const q of ['p05', 'p50', 'p95'] as const) data.push({ key: `warming_${x}_${q}_k`, values: cut(ranges.byAgent[x][q]) });
+
+  const periods: { label: string; from: number; to: number }[] = [];
+  if (lo <= 2010 && hi >= 2019) periods.push({ label: '2010-2019', from: 2010, to: 2019 });
+  for (const y of [2030, 2050, 2100]) if (y >= lo && y <= hi) periods.push({ label: String(y), from: y, to: y });
+  const cell = (agent: string, q: { from: number; to: number }) => {
+    const central = periodMean(first, a.warmingK[agent], q.from, q.to);
+    if (!ranges) return central.toFixed(3);
+    const b = ranges.byAgent[agent];
+    return `${central.toFixed(2)} [${periodMean(first, b.p05, q.from, q.to).toFixed(2)}, ${periodMean(first, b.p95, q.from, q.to).toFixed(2)}]`;
+  };
+  const byPeriod: OutputTable = {
+    name: 'by_agent',
+    caption: `Warming by forcing agent, K relative to ${p.baseline[0]}-${p.baseline[1]}` + (ranges ? ' (central run [5 %, 95 %] of the members)' : ''),
+    columns: [
+      { key: 'agent', values: [...a.agents, 'total (warming_k)'] },
+      ...periods.map((q) => ({
+        key: q.label,
+        values: [...a.agents.map((x) => cell(x, q)), periodMean(first, p.columns.warming_k, q.from, q.to).toFixed(ranges ? 2 : 3)],
+      })),
+    ],
+    notes: ranges ? ["each member's parts add up to its warming; the ranges of the parts do not add up to a range of the total"] : [],
+  };
+
+  // The chart: the three main gases, all aerosol, and the rest together (a chart, so grouping is fine; the files keep every agent).
+  const c0 = Math.max(i0, 1850 - first);
+  const years = p.years.slice(c0, i1);
+  const sum = (agents: string[]) => {
+    const v = new Float64Array(years.length);
+    for (const x of agents) for (let i = 0; i < v.length; i++) v[i] += a.warmingK[x][c0 + i];
+    return v;
+  };
+  const aerosol = a.agents.filter((x) => x.startsWith('aerosol'));
+  const gases = ['co2', 'ch4', 'n2o'].filter((x) => a.agents.includes(x));
+  const rest = a.agents.filter((x) => !gases.includes(x) && !aerosol.includes(x));
+  const series: ChartLine[] = [
+    ...gases.map((x) => ({ label: x.toUpperCase(), years, values: a.warmingK[x].slice(c0, i1) })),
+    ...(aerosol.length ? [{ label: 'aerosol (all)', years, values: sum(aerosol) }] : []),
+    { label: 'all other agents', years, values: sum(rest) },
+  ];
+  const subtitle =
+    `ECS ${p.params.ecsK.toFixed(2)} K, TCR ${p.params.tcrK.toFixed(2)} K, one central run` +
+    (ranges ? ` with ranges from ${ranges.members} members` : '') +
+    `; warming relative to the ${p.baseline[0]}-${p.baseline[1]} mean; the parts add up to warming_k in every year`;
+  return {
+    command: 'attribute',
+    title: `${p.name}: warming by forcing agent`,
+    subtitle,
+    baseline: p.baseline,
+    headline: [],
+    data: { name: 'data', columns: data },
+    tables: [byPeriod],
+    charts: [{ title: `Warming by agent, ${p.name}`, xLabel: 'Year', yLabel: `Warming relative to ${p.baseline[0]}-${p.baseline[1]} (K)`, series }],
+    terminalChart: { series, options: { title: `Warming by agent, ${p.name} (K)`, yLabel: 'K', height: 10 } },
+    notes: options.notes,
+    cautions: standardCautions(ranges ? `Ranges are the 5-95 % spread of ${ranges.members} members; they cover the members' parameters only, not the pathway or the model structure.` : undefined),
+    shortCaution: shortCaution('attribute', Boolean(ranges)),
+  };
+}

@@ -1,0 +1,53 @@
+/** `warmcast attribute` in-process: the terminal table and the yearly file whose parts add up to warming_k. */
+import { readFileSync } from 'node:fs';
+import { join } from 'node:path';
+import { describe, expect, it } from 'vitest';
+import { FORCING_AGENTS } from '../../src/forcing/agents.js';
+import { runCli, tempDirs } from './cli-harness.js';
+
+const tmp = tempDirs('attribute');
+
+describe('warmcast attribute', () => {
+  it('prints one row per agent at 2010-2019, 2030, 2050 and 2100, and a total', async () => {
+    const r = await runCli(['attribute', 'delayed', '--no-chart']);
+    expect(r.code).toBe(0);
+    expect(r.out).toMatch(/agent\s+2010-2019\s+2030\s+2050\s+2100/);
+    for (const agent of FORCING_AGENTS) expect(r.out).toMatch(new RegExp(`^\\s+${agent}\\s`, 'm'));
+    expect(r.out).toContain('total (warming_k)');
+  });
+
+  it('--out x.csv: warming_<agent>_k for every agent adds up to warming_k in every year (linearity of the two-box model)', async () => {
+    const dir = tmp();
+    const r = await runCli(['attribute', 'swift', '--out', 'a.csv', '--no-chart'], dir);
+    expect(r.code).toBe(0);
+    const [header, ...rows] = readFileSync(join(dir, 'a.csv'), 'utf8').trim().split('\n');
+    const cols = header.split(',');
+    expect(cols).toEqual(['year', 'warming_k', ...FORCING_AGENTS.map((a) => `warming_${a}_k`)]);
+    for (const row of rows) {
+      const v = row.split(',').map(Number);
+      const parts = v.slice(2).reduce((a, b) => a + b, 0);
+      expect(Math.abs(parts - v[1])).toBeLessThan(1e-9);
+    }
+  });
+});
+
+describe('warmcast attribute --members', () => {
+  it('adds warming_<agent>_p05/p50/p95_k with p05 <= p50 <= p95 in every year, and ranges in the terminal table', async () => {
+    const dir = tmp();
+    const r = await runCli(['attribute', 'swift-emissions', '--members', '40', '--out', 'm.csv', '--no-chart'], dir);
+    expect(r.code, r.err).toBe(0);
+    expect(r.out).toMatch(/co2\s+0\.\d\d \[0\.\d\d, \d\.\d\d\]/);
+    expect(r.out).toMatch(/ranges from 40 members/);
+    const [header, ...rows] = readFileSync(join(dir, 'm.csv'), 'utf8').trim().split('\n');
+    const cols = header.split(',');
+    for (const agent of FORCING_AGENTS) {
+      const [i05, i50, i95] = ['p05', 'p50', 'p95'].map((q) => cols.indexOf(`warming_${agent}_${q}_k`));
+      expect(i05).toBeGreaterThan(0);
+      for (const row of rows) {
+        const v = row.split(',').map(Number);
+        expect(v[i05]).toBeLessThanOrEqual(v[i50] + 1e-12);
+        expect(v[i50]).toBeLessThanOrEqual(v[i95] + 1e-12);
+      }
+    }
+  });
+});
