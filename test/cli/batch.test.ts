@@ -132,6 +132,9 @@ describe('--scenario and check TABLE', () => {
     expect(ambiguous.err).toContain('add --model NAME');
     const compare = await runCli(['compare', 'table.xlsx', '--scenario', 'Slow', '--scenario', 'Quick', '--model', 'Model A', '--no-chart'], dir);
     expect(compare.code, compare.err).toBe(0);
+    // Each scenario taken from the table is an option of its own, labelled by its name.
+    expect(compare.out).toContain('Comparison of 2 options against Slow');
+    expect(compare.out).toMatch(/^ {2}Quick +\d\.\d\d/m);
     const notTable = await runCli(['run', 'swift', '--scenario', 'Slow'], dir);
     expect(notTable.code).toBe(2);
     expect(notTable.err).toContain('--scenario picks a scenario of a scenario table');
