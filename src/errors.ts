@@ -27,6 +27,12 @@ export interface InputLocation {
   column?: string;
   /** Key of a JSON object (a parameters file), as written. */
   key?: string;
+  /** Worksheet of a spreadsheet (an .xlsx scenario table); `line` is then its row number. */
+  sheet?: string;
+  /** Model, scenario and variable of a scenario table's row (IAMC layout), as written. */
+  model?: string;
+  scenario?: string;
+  variable?: string;
 }
 
 /** One problem found in an input file. */
@@ -48,14 +54,19 @@ export interface InputProblem extends InputLocation {
 
 /**
  * Formats one problem as `file:line: column "x": message (got "v"; expected ...)`; a JSON problem
- * names its `key "x"` instead, and a `literal` is shown as written (`got "3.0"`, `got null`).
+ * names its `key "x"` instead, and a `literal` is shown as written (`got "3.0"`, `got null`). A
+ * scenario table's problem adds its sheet (`file [sheet "data"] row 12:`) and the row's model,
+ * scenario and variable.
  */
 export function formatInputProblem(p: InputProblem): string {
   let where = p.file;
-  if (p.line !== undefined) where += `:${p.line}`;
+  if (p.sheet !== undefined) where += ` [sheet "${p.sheet}"]${p.line !== undefined ? ` row ${p.line}` : ''}`;
+  else if (p.line !== undefined) where += `:${p.line}`;
   let text = `${where}: `;
   if (p.column !== undefined) text += `column "${p.column}": `;
   if (p.key !== undefined) text += `key "${p.key}": `;
+  const row = [p.model !== undefined ? `model "${p.model}"` : '', p.scenario !== undefined ? `scenario "${p.scenario}"` : '', p.variable !== undefined ? `variable "${p.variable}"` : ''].filter(Boolean);
+  if (row.length > 0) text += `${row.join(', ')}: `;
   text += p.message;
   const extras: string[] = [];
   if (p.literal !== undefined) extras.push(`got ${shorten(p.literal)}`);
@@ -96,5 +107,16 @@ export class ConfigError extends WarmcastError {
 export class NumericalError extends WarmcastError {
   constructor(message: string, code = 'numerical.failure') {
     super(message, code, 1);
+  }
+}
+
+/**
+ * A batch finished and wrote what it could, but some of its items (scenarios of a table) failed; the
+ * message says how many and where they are listed. Exit code 3, so that a scheduler can tell a
+ * partial result from a complete one (0) and from a run that produced nothing (1, 2).
+ */
+export class PartialFailureError extends WarmcastError {
+  constructor(message: string, code = 'batch.some-failed') {
+    super(message, code, 3);
   }
 }

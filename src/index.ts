@@ -39,6 +39,13 @@ export { calibratedMemberSource, priorMemberSource, representativeParams } from 
 export type { CalibratedSet } from './ensemble/calibrated-set.js';
 export { readCalibratedSet } from './io/read-calibrated-set.js';
 
+// Scenario tables (IAMC layout, .csv or .xlsx): read a table, pick a scenario, get the pathway every
+// function above takes; and the IPCC AR6 WG3 warming category of a scenario's ensemble.
+export { readScenarioTable, scenarioPathway, selectScenario } from './io/index.js';
+export type { IamcScenario, IamcTable, ScenarioChoice } from './io/index.js';
+export { AR6_WARMING_CATEGORIES, warmingCategory } from './batch/index.js';
+export type { CategoryEvidence, WarmingCategory } from './batch/index.js';
+
 // The inverse questions: remaining CO2 budgets for a limit and a chance, and warming by forcing agent.
 export { attributeMembers, attributePathway, carbonBudget } from './projection/index.js';
 export type { AttributedProjection, AttributionRanges, BudgetAssumptions, CarbonBudget, CarbonBudgetOptions } from './projection/index.js';

@@ -2,7 +2,7 @@
 import { describe, expect, it } from 'vitest';
 import { readdirSync, readFileSync } from 'node:fs';
 import * as library from '../src/index.js';
-import { calibrate, ensembleInput, forcingByAgent, loadPathway, projectPathway, runEnsemble, comparePathways } from '../src/index.js';
+import { calibrate, ensembleInput, forcingByAgent, loadPathway, projectPathway, runEnsemble, comparePathways, readScenarioTable, scenarioPathway, selectScenario } from '../src/index.js';
 
 // The intended library surface (DEVELOPERS.md, "The library surface"): adding or removing a name is a
 // deliberate change to one of these lists.
@@ -13,6 +13,7 @@ const VALUES = [
   'gtcToGtco2', 'gtco2ToGtc', 'listBundledPathways', 'loadHistory', 'loadPathway', 'mergeShards', 'n2oErfAr6',
   'parsePathway', 'peak', 'projectPathway', 'PUBLISHED_CHECKS', 'runEnsemble', 'runPublishedChecks', 'shardFromJson', 'shardToJson',
   'spliceOntoHistory', 'standardCautions', 'toAnnual', 'attributeMembers', 'attributePathway', 'carbonBudget',
+  'readScenarioTable', 'scenarioPathway', 'selectScenario', 'AR6_WARMING_CATEGORIES', 'warmingCategory',
 ];
 const TYPES = [
   'BundledPathway', 'CalibratedSet', 'CalibrationTargets', 'ClimateParams', 'Co2Formula', 'Comparison', 'ComparisonOptions', 'CrossingPeriod',
@@ -20,6 +21,7 @@ const TYPES = [
   'LoadPathwayOptions', 'ParsedPathway', 'Pathway', 'PathwayColumn', 'PathwayProvenance', 'Peak', 'Projection', 'ProjectionOptions',
   'MemberSource', 'OutputDocument', 'OutputFormat', 'OutputTable', 'PublishedCheck', 'VerificationRow',
   'AttributedProjection', 'AttributionRanges', 'BudgetAssumptions', 'CarbonBudget', 'CarbonBudgetOptions',
+  'IamcScenario', 'IamcTable', 'ScenarioChoice', 'CategoryEvidence', 'WarmingCategory',
 ];
 
 /** The names src/index.ts exports as types (`export type { A, B } from ...`), read from its text. */
@@ -73,5 +75,13 @@ describe('library surface (README example)', () => {
     expect(ens.percentiles.p05[i]).toBeLessThan(ens.percentiles.p95[i]);
     expect(ens.crossings[1].byMilestone.map((m) => m.year)).toEqual([2050, 2100]);
   });
-});
 
+  it('reads a scenario of the bundled IAMC example table into a pathway the projection takes (README example)', async () => {
+    const table = await readScenarioTable(new URL('../pathways/examples/invented-scenarios.csv', import.meta.url).pathname);
+    const { pathway } = scenarioPathway(selectScenario(table, { scenario: 'Immediate-01', model: 'Gridline 2.1' }), { absentEmissions: { kind: 'follow-co2' } });
+    const run = projectPathway(pathway, { params: calibrate({ ecsK: 3, tcrK: 1.8 }) });
+    // The table gives 2020 CO2 as 40366 Mt CO2/yr: read as 40.366 Gt CO2/yr.
+    expect(pathway.series.co2_gtco2![pathway.years.indexOf(2020)]).toBeCloseTo(40.366, 6);
+    expect(run.columns.warming_k[run.years.indexOf(2100)]).toBeGreaterThan(0.5);
+  });
+});

@@ -2,18 +2,20 @@ import type { AbsentEmissionsRule } from '../forcing/absent-emissions.js';
 import { basename, extname } from 'node:path';
 import { Command } from 'commander';
 import { ConfigError } from '../errors.js';
-import { readPathway } from '../io/load-pathway.js';
+import { isScenarioTable } from '../io/iamc-read.js';
+import type { ReadPathwayResult } from '../io/load-pathway.js';
 import { comparePathways, pairedDifferenceRange, type PathwayWarming } from '../metrics/index.js';
 import { runEnsemble } from '../ensemble/index.js';
 import { memberSource } from './member-source.js';
 import { ensembleInput, projectPathway } from '../projection/index.js';
 import { comparisonDocument, ensembleWarming, scopedNotes, standardCautions, thresholdBaselineNote, type ScopedNote } from '../report/index.js';
 import type { CliIo } from './cli-io.js';
+import { addScenarioOptions, readPathwayArgs, type ScenarioOptions } from './scenario-options.js';
 import { addModelOptions, baselineOption, cautionsHelp, type ModelOptions, pathwayArg, resolveModelParams, thresholdsOption, wholeNumberOption, absentEmissionsOption, co2JumpOption } from './options.js';
 import { addReportOptions, announceWritten, observedRecord, pathwayInputs, printDocument, rowChoice, writeDocument, type ReportOptions } from './output.js';
 import { ensembleParameters } from './provenance.js';
 
-interface CompareOptions extends ModelOptions, ReportOptions {
+interface CompareOptions extends ModelOptions, ReportOptions, ScenarioOptions {
   members?: number;
   seed: number;
   labels?: string[];
@@ -43,10 +45,10 @@ export function compareCommand(io: CliIo): Command {
     .option('--no-carbon-feedback', 'emission-driven runs: switch off the carbon-climate feedback on uptake')
     .option('--members <count>', 'also run a parameter ensemble of this many members per option: medians with ranges, and each difference\'s range from paired members', wholeNumberOption('--members', 2))
     .option('--seed <integer>', 'random seed of the ensembles (with --members)', wholeNumberOption('--seed', 0), 1);
-  addModelOptions(cmd)
+  addScenarioOptions(addModelOptions(cmd), true)
     .addHelpText(
       'after',
-      '\nExamples:\n  warmcast compare steady delayed swift\n  warmcast compare now=steady plan=swift --years 2030,2050,2100 --out table.md\n' +
+      '\nExamples:\n  warmcast compare steady delayed swift\n  warmcast compare scenarios.xlsx --scenario Quick --scenario Slow\n  warmcast compare now=steady plan=swift --years 2030,2050,2100 --out table.md\n' +
         '  warmcast compare steady delayed swift --labels S,D,W --members 500 --out report.html\n' +
         cautionsHelp(standardCautions()),
     )
@@ -60,13 +62,13 @@ export function compareCommand(io: CliIo): Command {
           throw new ConfigError(`with --members each member takes its parameters from the calibrated set, so ${given.join(', ')} would be ignored: leave ${given.length > 1 ? 'them' : 'it'} out, or compare without --members`, given[0].slice(2));
         }
       }
-      const options = labelledArgs(args, opts.labels);
+      const reads = await readPathwayArgs(args.map((arg) => splitLabel(arg).path), opts, { splice: opts.splice, absentEmissions: opts.absentEmissions, co2JumpIntended: opts.co2JumpIntended }, io);
+      const options = labelledOptions(args, reads, opts, io);
       const { params, paramsFile, notes: paramNotes, forcingScale, forcingNote } = resolveModelParams(opts, io);
       const baselineNote = thresholdBaselineNote(opts.baseline);
       const files: string[] = [];
       const scoped: ScopedNote[] = [];
-      const runs = options.map(({ label, path, name }) => {
-        const read = readPathway(pathwayArg(path, io), { splice: opts.splice, absentEmissions: opts.absentEmissions, co2JumpIntended: opts.co2JumpIntended });
+      const runs = options.map(({ label, read, name }) => {
         files.push(...pathwayInputs(read));
         const p = projectPathway(read.pathway, { params, baseline: opts.baseline, carbonFeedback: opts.carbonFeedback, forcingScale });
         scoped.push(...[...p.provenance.notes, ...p.notes].map((text) => ({ pathway: label, text })));
@@ -128,24 +130,47 @@ function labelsOption(text: string): string[] {
   return labels;
 }
 
+/** `LABEL=PATH` split into its label and path; a plain argument has no label. */
+function splitLabel(arg: string): { given?: string; path: string } {
+  const m = /^([^=/\\]+)=(.+)$/.exec(arg);
+  return m ? { given: m[1].trim(), path: m[2] } : { path: arg };
+}
+
 /**
- * The label and path of each argument: `--labels` gives the labels (a `LABEL=` typed before a path
+ * The options a command line names, each with its read and label: one per pathway argument, and one
+ * per `--scenario` of a scenario table argument (typed as the scenario name, or labelled by `LABEL=`
+ * when the table gives one scenario), in the order readPathwayArgs reads them.
+ *
+ * @throws ConfigError as labelledArgs does, counting each scenario taken from a table as an option
+ */
+function labelledOptions(args: readonly string[], reads: readonly ReadPathwayResult[], opts: CompareOptions, io: CliIo): { label: string; read: ReadPathwayResult; name?: string }[] {
+  const typed: { given?: string; path: string; typed: string }[] = [];
+  for (const arg of args) {
+    const { given, path } = splitLabel(arg);
+    const scenarios = isScenarioTable(pathwayArg(path, io)) ? (opts.scenario ?? [undefined]) : [undefined];
+    for (const scenario of scenarios) {
+      const own = scenario ?? basename(path, extname(path));
+      typed.push({ path, typed: own, ...(given !== undefined && scenarios.length === 1 ? { given } : {}) });
+    }
+  }
+  return labelledArgs(typed, opts.labels).map((o, j) => ({ label: o.label, read: reads[j], ...(o.name !== undefined ? { name: o.name } : {}) }));
+}
+
+/**
+ * The label of each option: `--labels` gives the labels (a `LABEL=` typed before a path
  * then names the option in the key line), else `LABEL=PATH`, else the argument as typed (its file name without the extension), replaced by a letter
  * when longer than 14 characters so that no header repeats long names.
  *
  * @throws ConfigError when --labels does not give one label per option, or two labels are the same
  */
-function labelledArgs(args: readonly string[], labels?: readonly string[]): { label: string; path: string; name?: string }[] {
+function labelledArgs(args: readonly { given?: string; path: string; typed: string }[], labels?: readonly string[]): { label: string; path: string; name?: string }[] {
   if (labels && labels.length !== args.length) {
     throw new ConfigError(`--labels must give one label per option: ${args.length} options, ${labels.length} labels`, 'labels');
   }
-  const out = args.map((arg, j) => {
-    const m = /^([^=/\\]+)=(.+)$/.exec(arg);
-    const path = m ? m[2] : arg;
-    const typed = basename(path, extname(path));
+  const out = args.map(({ given, path, typed }, j) => {
     // --labels wins over LABEL=PATH; the LABEL typed then names the option in the key line.
-    const label = labels ? labels[j] : m ? m[1].trim() : typed.length <= MAX_DEFAULT_LABEL ? typed : String.fromCharCode(65 + (j % 26));
-    return { label, path, ...(m && labels ? { name: m[1].trim() } : {}) };
+    const label = labels ? labels[j] : given !== undefined ? given : typed.length <= MAX_DEFAULT_LABEL ? typed : String.fromCharCode(65 + (j % 26));
+    return { label, path, ...(given !== undefined && labels ? { name: given } : {}) };
   });
   const seen = new Set<string>();
   for (const { label } of out) {

@@ -5,11 +5,12 @@ import { resolve } from 'node:path';
 import { ConfigError, InputError } from '../errors.js';
 import { ensembleHeadlines, runEnsemble, shardFromJson, shardMerger, shardRange, shardToJson, summarizeEnsemble, type EnsembleOrigin, type EnsembleResult } from '../ensemble/index.js';
 import { writeFilesAtomic } from '../io/index.js';
-import { readPathway } from '../io/load-pathway.js';
+import { isBatchShardFile, mergeBatchFiles } from './batch.js';
+import { addScenarioOptions, readPathwayArgs, type ScenarioOptions } from './scenario-options.js';
 import { ensembleInput } from '../projection/index.js';
 import { ensembleDocument, standardCautions, thresholdBaselineNote } from '../report/index.js';
 import type { CliIo } from './cli-io.js';
-import { baselineOption, cautionsHelp, pathwayArg, refuseOptions, resolveModelParams, thresholdsOption, wholeNumberOption, type RefusedOption, absentEmissionsOption, co2JumpOption } from './options.js';
+import { baselineOption, cautionsHelp, refuseOptions, resolveModelParams, thresholdsOption, wholeNumberOption, type RefusedOption, absentEmissionsOption, co2JumpOption } from './options.js';
 import { addReportOptions, announceWritten, observedRecord, pathwayInputs, printDocument, rowChoice, writeDocument, type ReportOptions } from './output.js';
 import { allocationError, checkEnsembleMemory, checkMergeMemory } from './memory-check.js';
 import { progressBar } from './progress.js';
@@ -17,7 +18,7 @@ import { memberSource } from './member-source.js';
 import { unreadableReason } from './unreadable-reason.js';
 import { buildProvenance, ensembleParameters, sha256File } from './provenance.js';
 
-interface EnsembleCliOptions extends ReportOptions {
+interface EnsembleCliOptions extends ReportOptions, ScenarioOptions {
   co2Formula?: 'ar6' | 'log';
   members: number;
   seed: number;
@@ -87,7 +88,7 @@ export function ensembleCommand(io: CliIo): Command {
     .addOption(co2JumpOption())
     .option('--prior', 'draw the members from the prior of the calibrated set, unweighted by the observed record: the unconstrained spread, for comparison', false)
     .addOption(new Option('--co2-formula <name>', 'CO2 forcing: ar6 (Meinshausen et al. 2020 + AR6 adjustment) or log (Myhre et al. 1998)').choices(['ar6', 'log']).default('ar6', 'ar6'));
-  refuseOptions(cmd, ENSEMBLE_REFUSES)
+  refuseOptions(addScenarioOptions(cmd, false), ENSEMBLE_REFUSES)
     .addHelpText(
       'after',
       '\nEach member takes its parameters from the calibrated set (pathways/calibrated-members.json), so --ecs, --tcr and --params are not taken;\n--prior draws from its prior instead, to show what the observed record adds.\n' +
@@ -103,7 +104,7 @@ export function ensembleCommand(io: CliIo): Command {
       if (opts.shard && !opts.out?.toLowerCase().endsWith('.json')) throw new ConfigError('--shard writes a shard file: give --out NAME.json', 'out');
       // Central parameters: the CO2 formula, and the CH4 and N2O of an emission pathway's central run.
       const { params } = resolveModelParams({ co2Formula: opts.co2Formula }, io);
-      const read = readPathway(pathwayArg(arg, io), { splice: opts.splice, absentEmissions: opts.absentEmissions, co2JumpIntended: opts.co2JumpIntended });
+      const [read] = await readPathwayArgs([arg], opts, { splice: opts.splice, absentEmissions: opts.absentEmissions, co2JumpIntended: opts.co2JumpIntended }, io, false);
       const { input, notes } = ensembleInput(read.pathway, params, { baseline: opts.baseline });
       const inputs = pathwayInputs(read);
       const years = input.years.length;
@@ -153,6 +154,8 @@ export function mergeCommand(io: CliIo): Command {
         cautionsHelp(standardCautions(UNCERTAINTY_HELP)),
     )
     .action(async (files: string[], opts: ReportOptions) => {
+      // Shards of `warmcast batch` (scenarios of a table) merge into a batch summary.
+      if (isBatchShardFile(resolve(io.cwd, files[0]))) return mergeBatchFiles(files, opts, io);
       // One shard at a time, so that only the merged members and one shard's data are held.
       const merger = shardMerger();
       let checked = false;

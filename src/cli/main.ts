@@ -1,6 +1,7 @@
 import { Command, CommanderError } from 'commander';
 import { WarmcastError } from '../errors.js';
 import { attributeCommand } from './attribute.js';
+import { batchCommand } from './batch.js';
 import { budgetCommand } from './budget.js';
 import { calibrateCommand } from './calibrate.js';
 import { checkCommand } from './check.js';
@@ -29,8 +30,8 @@ export async function main(argv: string[], io: CliIo): Promise<number> {
     .version(packageVersion(), '-V, --version')
     .option('--debug', 'show stack traces for errors')
     .showHelpAfterError('(add --help for usage)')
-    .addHelpText('after', '\nExamples:\n  warmcast run                      # the default bundled pathway\n  warmcast run swift --out swift.csv\n  warmcast compare steady delayed swift --out report.html\n  warmcast ensemble swift --members 2000 --seed 7 --out swift-ens.csv\n  warmcast pathways\n');
-  for (const make of [runCommand, compareCommand, ensembleCommand, attributeCommand, budgetCommand, mergeCommand, calibrateCommand, checkCommand, verifyCommand, pathwaysCommand]) {
+    .addHelpText('after', '\nExamples:\n  warmcast run                      # the default bundled pathway\n  warmcast run swift --out swift.csv\n  warmcast compare steady delayed swift --out report.html\n  warmcast ensemble swift --members 2000 --seed 7 --out swift-ens.csv\n  warmcast batch pathways/examples/invented-scenarios.csv --out summary.csv\n  warmcast pathways\n');
+  for (const make of [runCommand, compareCommand, ensembleCommand, batchCommand, attributeCommand, budgetCommand, mergeCommand, calibrateCommand, checkCommand, verifyCommand, pathwaysCommand]) {
     program.addCommand(make(io));
   }
   const configure = (cmd: Command) => {

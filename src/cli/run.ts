@@ -1,17 +1,17 @@
 import type { AbsentEmissionsRule } from '../forcing/absent-emissions.js';
 import { Command, Option } from 'commander';
 import { ConfigError } from '../errors.js';
-import { readPathway } from '../io/load-pathway.js';
 import { projectPathway } from '../projection/index.js';
 import { runDocument, standardCautions, thresholdBaselineNote } from '../report/index.js';
 import type { CliIo } from './cli-io.js';
-import { addModelOptions, baselineOption, cautionsHelp, type ModelOptions, numberOption, pathwayArg, resolveModelParams, absentEmissionsOption, co2JumpOption } from './options.js';
+import { addScenarioOptions, readPathwayArgs, type ScenarioOptions } from './scenario-options.js';
+import { addModelOptions, baselineOption, cautionsHelp, type ModelOptions, numberOption, resolveModelParams, absentEmissionsOption, co2JumpOption } from './options.js';
 import { addReportOptions, announceWritten, observedRecord, pathwayInputs, printDocument, rowChoice, writeDocument, type ReportOptions } from './output.js';
 
 /** The pathway `warmcast run` uses when none is given. */
 export const DEFAULT_PATHWAY = 'delayed';
 
-interface RunOptions extends ModelOptions, ReportOptions {
+interface RunOptions extends ModelOptions, ReportOptions, ScenarioOptions {
   baseline: [number, number];
   splice: boolean;
   co2JumpIntended?: boolean;
@@ -33,25 +33,25 @@ export function runCommand(io: CliIo): Command {
     .option('--no-splice', 'do not splice a pathway that starts late onto the bundled history (the run then starts from zero warming in its first year, not in equilibrium with that year\'s forcing)')
     .addOption(co2JumpOption())
     .option('--no-carbon-feedback', 'emission-driven runs: switch off the carbon-climate feedback on uptake');
-  addModelOptions(cmd)
+  addScenarioOptions(addModelOptions(cmd), true)
     .addOption(new Option('--method <name>', 'temperature stepping: exact (closed-form one-year propagator) or odex (ODE solver, the reference)').choices(['exact', 'odex']).default('exact', 'exact'))
     .option('--rtol <value>', 'odex relative tolerance', numberOption('--rtol'), 1e-10)
     .option('--atol <value>', 'odex absolute tolerance, K', numberOption('--atol'), 1e-10)
     .addHelpText(
       'after',
-      '\nExamples:\n  warmcast run                                  # the default bundled pathway\n  warmcast run my-pathway.csv --out out.csv\n  warmcast run swift --ecs 4 --tcr 2.2 --to 2100\n  warmcast run steady --out steady.xlsx\n' +
+      '\nExamples:\n  warmcast run                                  # the default bundled pathway\n  warmcast run my-pathway.csv --out out.csv\n  warmcast run swift --ecs 4 --tcr 2.2 --to 2100\n  warmcast run steady --out steady.xlsx\n  warmcast run scenarios.xlsx --scenario Quick\n' +
         cautionsHelp(standardCautions()),
     )
     .action(async (pathways: string[], opts: RunOptions) => {
       const args = pathways.length > 0 ? pathways : [DEFAULT_PATHWAY];
-      if (opts.out !== undefined && args.length > 1) {
+      const reads = await readPathwayArgs(args, opts, { splice: opts.splice, absentEmissions: opts.absentEmissions, co2JumpIntended: opts.co2JumpIntended }, io);
+      if (opts.out !== undefined && reads.length > 1) {
         throw new ConfigError('--out takes one pathway; to put several side by side use `warmcast compare`', 'out');
       }
       if (!(opts.rtol > 0 && opts.atol > 0)) throw new ConfigError('--rtol and --atol must be positive', 'rtol');
       const { params, paramsFile, notes: paramNotes, forcingScale, forcingNote } = resolveModelParams(opts, io);
       const baselineNote = thresholdBaselineNote(opts.baseline);
-      for (const arg of args) {
-        const read = readPathway(pathwayArg(arg, io), { splice: opts.splice, absentEmissions: opts.absentEmissions, co2JumpIntended: opts.co2JumpIntended });
+      for (const read of reads) {
         const p = projectPathway(read.pathway, {
           params,
           baseline: opts.baseline,

@@ -57,10 +57,30 @@ export function readPathway(arg: string, options: LoadPathwayOptions = {}): Read
   const pathwaysDir = () => options.pathwaysDir ?? bundledPathwaysDir();
   const { path, source } = locate(arg, pathwaysDir);
   const parsed = parsePathway(readTextFile(path), path);
+  return pathwayFromParsed(parsed, { ...options, source, isHistory: isHistoryFile(path, pathwaysDir()) });
+}
+
+/**
+ * The stages after reading, shared by pathway files and the scenarios of a scenario table: the
+ * parsed rows put on the annual grid (toAnnual), `notes` from the reader put first in the
+ * provenance, the forcing of short-lived emissions resolved against the history (with the
+ * `absentEmissions` rule), lumped forcing split over its agents, and the result spliced onto the
+ * bundled history (spliceOntoHistory) unless `splice` is false or the rows are the history itself.
+ *
+ * @param parsed rows as read (parsePathway, or one scenario of readIamcTable)
+ * @param options splice and pathwaysDir as for readPathway; `source` for provenance (default the
+ *   parsed file); `notes` of the reader (a table's CO2 sum, skipped regions); `isHistory`
+ */
+export function pathwayFromParsed(
+  parsed: ParsedPathway,
+  options: LoadPathwayOptions & { source?: string; notes?: string[]; isHistory?: boolean } = {},
+): ReadPathwayResult {
   let annual = toAnnual(parsed);
-  if (source !== path) annual = { ...annual, provenance: { ...annual.provenance, source } };
-  const splice = options.splice !== false && !isHistoryFile(path, pathwaysDir());
-  const history = splice ? loadHistory(pathwaysDir()) : undefined;
+  const source = options.source ?? parsed.file;
+  if (source !== parsed.file || options.notes?.length) {
+    annual = { ...annual, provenance: { ...annual.provenance, source, notes: [...(options.notes ?? []), ...annual.provenance.notes] } };
+  }
+  const history = options.splice !== false && !options.isHistory ? loadHistory(options.pathwaysDir ?? bundledPathwaysDir()) : undefined;
   // Forcing from the file's emissions first (it sees the lumped columns as the user wrote them), then
   // lumped aerosol_wm2 / other_wm2 become agent columns before the splice, so that the history's
   // agent columns are replaced by the file's and not added to them.

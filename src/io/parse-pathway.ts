@@ -6,7 +6,7 @@ import { COLUMN_UNITS, GASES, HALOGEN_CONCENTRATION_COLUMNS, HALOGEN_EMISSION_CO
 import { commonDayOfDates, isoDateToYear } from './iso-date-year.js';
 import { ambiguousDecimalPoint, columnSuggestion, dateHint, looksLikeUnitsRow, thousandsSeparated } from './input-hints.js';
 import { nearestHalogen } from './nearest-halogen.js';
-import { VALUE_BOUNDS } from './value-bounds.js';
+import { outOfBounds } from './value-bounds.js';
 
 /** A pathway file as read, before interpolation: one entry per data row, in file order. */
 export interface ParsedPathway {
@@ -305,10 +305,11 @@ export function parsePathway(text: string, file: string): ParsedPathway {
   };
 }
 
-type Report = (p: Omit<InputProblem, 'file'>) => void;
+/** Collects a problem of the file being read (the file is added by the collector). */
+export type Report = (p: Omit<InputProblem, 'file'>) => void;
 
-/** `,` unless the header has no comma outside quotes and has a `;` (or else a tab). */
-function detectDelimiter(headerLine: string): string {
+/** `,` unless the header has no comma outside quotes and has a `;` (or else a tab). Shared with the scenario-table reader. */
+export function detectDelimiter(headerLine: string): string {
   let inQuotes = false;
   const seen = new Set<string>();
   for (const ch of headerLine) {
@@ -321,8 +322,8 @@ function detectDelimiter(headerLine: string): string {
   return ',';
 }
 
-/** The cells of one physical line (papaparse does the quoting), or undefined after a quote problem. */
-function splitCells(line: string, delimiter: string, lineNumber: number, report: Report): string[] | undefined {
+/** The cells of one physical line (papaparse does the quoting), or undefined after a quote problem. Shared with the scenario-table reader. */
+export function splitCells(line: string, delimiter: string, lineNumber: number, report: Report): string[] | undefined {
   // Unquoted lines (nearly all) split directly: papaparse costs about 10 us a call, 20 s for a 64 MiB file.
   if (!line.includes('"')) return line.split(delimiter);
   const parsed = Papa.parse<string[]>(line, { delimiter, quoteChar: '"', escapeChar: '"', header: false });
@@ -483,10 +484,10 @@ function readHeader(cells: string[], line: number, report: Report): CellRole[] {
   return roles;
 }
 
-type NumberRead = { ok: true; value: number } | { ok: false; code: string; message: string; expected: string };
+export type NumberRead = { ok: true; value: number } | { ok: false; code: string; message: string; expected: string };
 
-/** Reads one number cell; a decimal comma is accepted when the delimiter is not a comma. */
-function readNumber(cell: string, delimiter: string): NumberRead {
+/** Reads one number cell; a decimal comma is accepted when the delimiter is not a comma. Shared with the scenario-table reader. */
+export function readNumber(cell: string, delimiter: string): NumberRead {
   if (NUMBER.test(cell)) return { ok: true, value: Number(cell) };
   const decimalComma = delimiter !== ',';
   const example = decimalComma ? '415,2 or 415.2' : '415.2';
@@ -523,26 +524,8 @@ function readValue(
     report({ code: read.code, line, column: role.header, message: read.message, value: cell, expected: read.expected });
     return NaN;
   }
-  const b = VALUE_BOUNDS[role.column];
-  if (read.value < 0 && b.min === 0) {
-    report({
-      code: 'input.negative',
-      line,
-      column: role.header,
-      message: `must not be negative: ${b.quantity} cannot be below 0 ${b.unit}`,
-      value: cell,
-      expected: `a value from 0 to ${b.max} ${b.unit}`,
-    });
-  } else if (!(read.value >= b.min && read.value <= b.max)) {
-    report({
-      code: 'input.out-of-range',
-      line,
-      column: role.header,
-      message: `must be a plausible value for ${b.quantity}`,
-      value: cell,
-      expected: `a value from ${b.min} to ${b.max} ${b.unit}`,
-    });
-  }
+  const outside = outOfBounds(role.column, read.value);
+  if (outside) report({ line, column: role.header, value: cell, ...outside });
   return read.value;
 }
 

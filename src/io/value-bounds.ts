@@ -140,6 +140,21 @@ export const VALUE_BOUNDS: Readonly<Record<PathwayColumn, ValueBounds>> = {
   ...SPECIES_BOUNDS,
 };
 
+/**
+ * Says why `value` is not plausible for `column` (outside VALUE_BOUNDS), as an input problem's code,
+ * message and expected form; undefined when it is. A negative value where the bound is 0 is "must not
+ * be negative". One check for pathway files and scenario tables.
+ *
+ * @param value in the column's unit
+ * @example outOfBounds('co2_gtco2', 40000) // { code: 'input.out-of-range', message: 'must be a plausible value for a CO2 emission rate', expected: 'a value from -100 to 500 Gt CO2 yr-1' }
+ */
+export function outOfBounds(column: PathwayColumn, value: number): { code: string; message: string; expected: string } | undefined {
+  const b = VALUE_BOUNDS[column];
+  if (value < 0 && b.min === 0) return { code: 'input.negative', message: `must not be negative: ${b.quantity} cannot be below 0 ${b.unit}`, expected: `a value from 0 to ${b.max} ${b.unit}` };
+  if (value >= b.min && value <= b.max) return undefined;
+  return { code: 'input.out-of-range', message: `must be a plausible value for ${b.quantity}`, expected: `a value from ${b.min} to ${b.max} ${b.unit}` };
+}
+
 /** Bounds of a per-agent forcing column (common practice, no source; `why` names the history's extreme). */
 function agentBounds(min: number, max: number, quantity: string, why: string): ValueBounds {
   return { min, max, quantity, unit: 'W m-2', source: `${why} (IPCC AR6 record in pathways/history.csv); the bounds leave room for any scenario we know of (common practice, no source)` };
