@@ -53,7 +53,7 @@ export function csvSheet(text: string, file: string): IamcSheet {
  * @param file the path, for messages
  * @throws InputError when the bytes are not an .xlsx workbook
  */
-export async function xlsxSheets(bytes: Buffer, file: string): Promise<IamcSheet[]> {
+export async function xlsxSheets(bytes: Uint8Array, file: string): Promise<IamcSheet[]> {
   const workbook = new ExcelJS.Workbook();
   try {
     await workbook.xlsx.load(bytes as unknown as ArrayBuffer);
