@@ -83,3 +83,21 @@ export function co2PulseResponse(background: Pathway, pulseYear: number, params:
   }
   return out;
 }
+
+/**
+ * The background of the Joos et al. 2013 PD100 experiment (section 2.2; from memory): the recorded
+ * CO2 of `history` to 2010, then held at 389 ppm, to 1000 years after a pulse in 2015. Only CO2 is
+ * given, so the other gases stay at their 1750 values.
+ *
+ * @param history the bundled history (loadHistory), whose co2_ppm is read
+ * @returns a concentration pathway from the history's first year to 3015
+ * @example co2PulseResponse(pd100Background(loadHistory()), 2015, calibrate(), { forcing: { co2Formula: 'ar6' }, pulseGtc: 100 })
+ */
+export function pd100Background(history: Pathway): Pathway {
+  const first = history.years[0];
+  const length = 2015 + 1000 - first + 1;
+  const years = Float64Array.from({ length }, (_, i) => first + i);
+  const recorded = history.series.co2_ppm!;
+  const co2 = years.map((y) => (y <= 2010 ? recorded[y - first] : 389));
+  return { name: 'PD100 background', years, series: { co2_ppm: co2 }, metadata: {}, provenance: { source: 'Joos et al. 2013 PD100 protocol', notes: [] } };
+}

@@ -1,6 +1,7 @@
 import { energyBalance } from '../climate/energy-balance.js';
 import type { TwoBoxParams } from '../climate/two-box.js';
 import { ConfigError } from '../errors.js';
+import { rebase } from './warming-levels.js';
 
 /** Warming by forcing agent, K above the baseline, one series per agent, adding up to the total. */
 export interface Attribution {
@@ -40,24 +41,14 @@ export function attributeWarming(
   baseline: readonly [number, number] = [1850, 1900],
 ): Attribution {
   const n = years.length;
-  const [from, to] = baseline;
-  if (!(from <= to && from >= years[0] && to <= years[n - 1])) {
-    throw new ConfigError(`baseline ${from}-${to} must lie within the run's years ${years[0]}-${years[n - 1]}`, 'baseline');
-  }
   const agents = Object.keys(forcingByAgent);
   const warmingK: Record<string, Float64Array> = {};
   const totalK = new Float64Array(n);
   for (const agent of agents) {
     const f = forcingByAgent[agent];
     if (f.length !== n) throw new ConfigError(`forcing of ${agent} has ${f.length} values for ${n} years`, 'forcing');
-    const t = energyBalance(params, Float64Array.from(f), 'exact').surfaceK;
-    let mean = 0;
-    for (let y = from; y <= to; y++) mean += t[y - years[0]];
-    mean /= to - from + 1;
-    for (let i = 0; i < n; i++) {
-      t[i] -= mean;
-      totalK[i] += t[i];
-    }
+    const t = rebase(years, energyBalance(params, Float64Array.from(f), 'exact').surfaceK, baseline, agent);
+    for (let i = 0; i < n; i++) totalK[i] += t[i];
     warmingK[agent] = t;
   }
   return { years, agents, warmingK, totalK };

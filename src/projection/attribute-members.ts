@@ -5,6 +5,7 @@ import { runMembers } from '../ensemble/run-members.js';
 import { AR6_SAMPLING } from '../ensemble/sampling.js';
 import { FORCING_AGENTS, ghgForcingFunction, type ForcingAgent } from '../forcing/agents.js';
 import type { ClimateParams } from '../climate/params.js';
+import { rebase } from '../metrics/warming-levels.js';
 import { quantileSorted } from '../numerics/quantiles.js';
 import type { Pathway } from '../pathway.js';
 import { ensembleInput } from './ensemble-input.js';
@@ -44,8 +45,6 @@ export function attributeMembers(
   const co2 = input.carbon ? new Float64Array(m * n) : undefined;
   if (input.carbon) runMembers({ co2Formula: options.params.co2Formula, forcing: input.forcing.byAgent, carbon: input.carbon }, parameters, undefined, co2);
   const ghg = ghgForcingFunction({ co2Formula: options.params.co2Formula });
-  const b0 = baseline[0] - years[0];
-  const b1 = baseline[1] - years[0];
   // Member-major per agent: warming of member r in year k at r * n + k.
   const parts: Record<string, Float64Array> = Object.fromEntries(FORCING_AGENTS.map((a) => [a, new Float64Array(m * n)]));
   const f = new Float64Array(n);
@@ -57,12 +56,7 @@ export function attributeMembers(
       for (let k = 0; k < n; k++) {
         f[k] = own ? scale * ghg(co2![k * m + r], input.carbon!.ch4Ppb[k], input.carbon!.n2oPpb[k])[agent as 'co2' | 'ch4' | 'n2o'] : scale * input.forcing.byAgent[agent as ForcingAgent][k];
       }
-      const t = energyBalance(twoBox, f).surfaceK;
-      let mean = 0;
-      for (let k = b0; k <= b1; k++) mean += t[k];
-      mean /= b1 - b0 + 1;
-      const out = parts[agent];
-      for (let k = 0; k < n; k++) out[r * n + k] = t[k] - mean;
+      parts[agent].set(rebase(years, energyBalance(twoBox, f).surfaceK, baseline, agent), r * n);
     }
   }
   const byAgent: AttributionRanges['byAgent'] = {};

@@ -9,6 +9,7 @@ import { ar6Members } from '../ensemble/ar6-members.js';
 import { AR6_SAMPLING } from '../ensemble/sampling.js';
 import { runMembers, type MemberTask } from '../ensemble/run-members.js';
 import { attributeWarming } from '../metrics/attribution.js';
+import { rebase } from '../metrics/warming-levels.js';
 import {
   remainingBudget,
   straightLineFamily,
@@ -143,7 +144,7 @@ export function carbonBudget(nonCo2: Pathway, options: CarbonBudgetOptions): Car
     for (let k = joinIndex; k < n; k++) emission[k] = gtco2ToGtc(k < fromIndex ? rate : future[k - fromIndex]);
     const one = sliceMemberParameters(parameters, r, r + 1);
     const w = runMembers({ ...task, carbon: { ...carbon, co2: { ...carbon.co2, emissionGtc: emission } } }, one, undefined, co2Out);
-    return rebased(w, baseline[0] - y0, baseline[1] - y0);
+    return rebase(pathway.years, w, baseline, `member ${r}`);
   };
   for (let r = 0; r < parameters.count; r++) members.push({ warming: (future) => runOne(r, future) });
   const result = remainingBudget(members, family, { years: pathway.years, fromYear, limits: options.limits, chances: options.chances });
@@ -186,12 +187,6 @@ function maxStretch(shape: Float64Array, room: number): number {
   let zero = shape.findIndex((v) => v <= 0);
   if (zero < 1) zero = 1;
   return Math.max(0.1, room / zero);
-}
-
-/** A member's warming rebased to the mean of indices [from, to]. */
-function rebased(w: Float64Array, from: number, to: number): Float64Array {
-  const m = mean(w, from, to);
-  return w.map((v) => v - m);
 }
 
 function mean(v: ArrayLike<number>, from: number, to: number): number {

@@ -1,4 +1,4 @@
-import { co2PulseResponse } from '../carbon/pulse-response.js';
+import { co2PulseResponse, pd100Background } from '../carbon/pulse-response.js';
 import { runEmissionDriven } from '../carbon/run-emission-driven.js';
 import type { EmissionRunOptions } from '../carbon/run-emission-driven.js';
 import { calibrate } from '../climate/calibrate.js';
@@ -29,13 +29,7 @@ const mean = (a: Float64Array, from: number, to: number) => a.slice(from, to + 1
 export const joosPulse: PublishedCheck = {
   id: 'joos-2013-pulse',
   run: () => {
-    const history = loadHistory();
-    const first = history.years[0];
-    const length = 2015 + 1000 - first + 1;
-    const years = Float64Array.from({ length }, (_, i) => first + i);
-    const recorded = history.series.co2_ppm!;
-    const co2 = years.map((y) => (y <= 2010 ? recorded[y - first] : 389));
-    const background: Pathway = { name: 'PD100 background', years, series: { co2_ppm: co2 }, metadata: {}, provenance: { source: 'verify', notes: [] } };
+    const background = pd100Background(loadHistory());
     const { params, options } = defaults();
     const r = co2PulseResponse(background, 2015, params, { ...options, feedback: true, pulseGtc: 100 });
     const source = 'Joos et al. 2013, ACP 13, 2793 (multi-model mean ± spread)';

@@ -2,9 +2,9 @@
 // multi-model analysis of a 100 Gt C pulse emitted into a constant 389 ppm background (PD100).
 import { describe, it } from 'vitest';
 import { co2ImpulseResponse, co2PulseResponse, type PulseResponse } from '../../src/carbon/index.js';
+import { pd100Background } from '../../src/carbon/pulse-response.js';
 import { calibrate } from '../../src/climate/index.js';
 import { loadHistory } from '../../src/io/index.js';
-import type { Pathway } from '../../src/pathway.js';
 import { expectClose, expectWithin } from '../asserts.js';
 
 // Published multi-model means and spreads of the airborne fraction (Joos et al. 2013, section 4.1
@@ -35,13 +35,7 @@ describe('Joos et al. 2013 multi-model fit (Table 5)', () => {
  * at 389 ppm; a 100 Gt C pulse in 2015; CO2 forcing only.
  */
 function pd100(feedback: boolean): PulseResponse {
-  const history = loadHistory();
-  const first = history.years[0];
-  const length = 2015 + 1000 - first + 1;
-  const years = Float64Array.from({ length }, (_, i) => first + i);
-  const recorded = history.series.co2_ppm!;
-  const co2 = years.map((y) => (y <= 2010 ? recorded[y - first] : 389));
-  const background: Pathway = { name: 'PD100 background', years, series: { co2_ppm: co2 }, metadata: {}, provenance: { source: 'test', notes: [] } };
+  const background = pd100Background(loadHistory());
   const params = calibrate();
   return co2PulseResponse(background, 2015, params, { forcing: { co2Formula: params.co2Formula, forcing2xWm2: params.forcing2xWm2 }, feedback, pulseGtc: 100 });
 }
