@@ -24,8 +24,8 @@ export type { BundledPathway, LoadPathwayOptions, ParsedPathway } from './io/ind
 // The model: calibration from ECS and TCR, forcing by agent, the energy balance.
 export { calibrate, energyBalance } from './climate/index.js';
 export type { CalibrationTargets, ClimateParams, EnergyBalanceResult } from './climate/index.js';
-export { FORCING_AGENTS, ch4ErfAr6, co2ErfAr6, forcingByAgent, n2oErfAr6 } from './forcing/index.js';
-export type { Co2Formula, ForcingAgent, ForcingOptions } from './forcing/index.js';
+export { EMITTED_SPECIES, FORCING_AGENTS, ch4ErfAr6, co2ErfAr6, forcingByAgent, n2oErfAr6 } from './forcing/index.js';
+export type { Co2Formula, EmittedSpecies, ForcingAgent, ForcingOptions } from './forcing/index.js';
 export { diagnoseEmissions, gtcToGtco2, gtco2ToGtc } from './carbon/index.js';
 
 // Projections and ensembles.
@@ -46,7 +46,8 @@ export type { IamcScenario, IamcTable, ScenarioChoice } from './io/index.js';
 export { AR6_WARMING_CATEGORIES, warmingCategory } from './batch/index.js';
 export type { CategoryEvidence, WarmingCategory } from './batch/index.js';
 
-// The inverse questions: remaining CO2 budgets for a limit and a chance, and warming by forcing agent.
+// The inverse questions: remaining CO2 budgets for a limit and a chance, and warming by forcing agent
+// (and, for emission pathways, by emitted species).
 export { attributeMembers, attributePathway, carbonBudget } from './projection/index.js';
 export type { AttributedProjection, AttributionRanges, BudgetAssumptions, CarbonBudget, CarbonBudgetOptions } from './projection/index.js';
 

@@ -137,6 +137,8 @@ export interface Pathway {
   /**
    * Set when forcing was computed from emissions (resolveEmissionForcing): from `year` on, ozone and
    * stratospheric water vapour also respond to the run's CH4 (and N2O) relative to the year before.
+   * `eescPpt`, when the halogenated gases' concentrations were computed, is their EESC above
+   * pre-industrial (ppt), one value per year from `year`: the split by emitted species uses it.
    */
-  responsiveFrom?: { year: number; ozone: boolean; stratH2o: boolean };
+  responsiveFrom?: { year: number; ozone: boolean; stratH2o: boolean; eescPpt?: Float64Array };
 }

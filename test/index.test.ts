@@ -7,7 +7,7 @@ import { calibrate, ensembleInput, forcingByAgent, loadPathway, projectPathway, 
 // The intended library surface (DEVELOPERS.md, "The library surface"): adding or removing a name is a
 // deliberate change to one of these lists.
 const VALUES = [
-  'AR6_SAMPLING', 'ar6Members', 'calibratedMemberSource', 'COLUMN_UNITS', 'priorMemberSource', 'readCalibratedSet', 'representativeParams', 'ConfigError', 'FORCING_AGENTS', 'InputError', 'NumericalError', 'PATHWAY_COLUMNS', 'WarmcastError',
+  'AR6_SAMPLING', 'ar6Members', 'calibratedMemberSource', 'COLUMN_UNITS', 'priorMemberSource', 'readCalibratedSet', 'representativeParams', 'ConfigError', 'FORCING_AGENTS', 'InputError', 'NumericalError', 'PATHWAY_COLUMNS', 'WarmcastError', 'EMITTED_SPECIES',
   'calibrate', 'ch4ErfAr6', 'co2ErfAr6', 'comparePathways', 'comparisonDocument', 'crossingPeriod', 'ensembleDocument', 'OUTPUT_FORMATS', 'renderDocument', 'runDocument',
   'cumulativeToNetZero', 'diagnoseEmissions', 'energyBalance', 'ensembleInput', 'forcingByAgent', 'formatInputProblem',
   'gtcToGtco2', 'gtco2ToGtc', 'listBundledPathways', 'loadHistory', 'loadPathway', 'mergeShards', 'n2oErfAr6',
@@ -17,7 +17,7 @@ const VALUES = [
 ];
 const TYPES = [
   'BundledPathway', 'CalibratedSet', 'CalibrationTargets', 'ClimateParams', 'Co2Formula', 'Comparison', 'ComparisonOptions', 'CrossingPeriod',
-  'EnergyBalanceResult', 'EnsembleInput', 'EnsembleOptions', 'EnsembleResult', 'EnsembleSampling', 'ForcingAgent', 'ForcingOptions', 'InputProblem',
+  'EmittedSpecies', 'EnergyBalanceResult', 'EnsembleInput', 'EnsembleOptions', 'EnsembleResult', 'EnsembleSampling', 'ForcingAgent', 'ForcingOptions', 'InputProblem',
   'LoadPathwayOptions', 'ParsedPathway', 'Pathway', 'PathwayColumn', 'PathwayProvenance', 'Peak', 'Projection', 'ProjectionOptions',
   'MemberSource', 'OutputDocument', 'OutputFormat', 'OutputTable', 'PublishedCheck', 'VerificationRow',
   'AttributedProjection', 'AttributionRanges', 'BudgetAssumptions', 'CarbonBudget', 'CarbonBudgetOptions',

@@ -4,7 +4,7 @@ import { topOfAtmosphereImbalance } from '../climate/two-box.js';
 import { ConfigError, NumericalError } from '../errors.js';
 import { forcingByAgent, ghgForcingFunction, type ForcingOptions, type ForcingSeries } from '../forcing/agents.js';
 import { PREINDUSTRIAL } from '../forcing/constants.js';
-import { chemistryAnchor, methaneChemistryWm2 } from '../forcing/methane-chemistry.js';
+import { anchoredChemistryWm2, chemistryAnchor } from '../forcing/methane-chemistry.js';
 import { FORCING_COLUMNS, GASES, type Gas, type Pathway } from '../pathway.js';
 import { annualCarbonState, atmosphericGtc } from './annual-carbon-step.js';
 import { gasYear } from './annual-gas-step.js';
@@ -202,11 +202,10 @@ export function runEmissionDriven(pathway: Pathway, params: ClimateParams, optio
     n2oPpb[k] = gases.n2o.yearInto(k);
     const f = ghg(co2Ppm[k], ch4Ppb[k], n2oPpb[k]);
     totalWm2[k] = f.co2 + f.ch4 + f.n2o + other[k];
-    if (chemistry && k >= chemistry.fromIndex) {
+    if (chemistry) {
       // Ozone and strat. H2O follow the run's CH4 and N2O from the join (forcingByAgent adds the same).
-      const r = chemistry.refIndex;
-      const c = methaneChemistryWm2(ch4Ppb[k], n2oPpb[k], ch4Ppb[r], n2oPpb[r]);
-      totalWm2[k] += (chemistry.ozone ? c.ozone : 0) + (chemistry.stratH2o ? c.stratH2o : 0);
+      const c = anchoredChemistryWm2(chemistry, ch4Ppb, n2oPpb, k, options.forcing.agentScale);
+      totalWm2[k] += c.ozone + c.stratH2o;
     }
     // The one two-box step (climate/two-box-step.ts), forcing linear between the years' values.
     if (k > 0) stepTwoBoxInto(steps, totalWm2.subarray(k - 1, k), totalWm2.subarray(k, k + 1), t1, d1);

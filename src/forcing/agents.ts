@@ -3,7 +3,7 @@ import { ch4ErfAr6 } from './ch4.js';
 import { co2Forcing, forcingOfDoubling, type Co2Formula } from './co2.js';
 import { PREINDUSTRIAL } from './constants.js';
 import { LUMPED_PARTS, lumpedShare } from './lumped-forcing.js';
-import { methaneChemistryWm2, type ChemistryAnchor } from './methane-chemistry.js';
+import { anchoredChemistryWm2, type ChemistryAnchor } from './methane-chemistry.js';
 import { n2oErfAr6 } from './n2o.js';
 
 /**
@@ -146,11 +146,10 @@ export function forcingByAgent(length: number, inputs: ForcingInputs, options: F
   const chem = inputs.chemistry;
   if (chem && inputs.ch4Ppb && inputs.n2oPpb) {
     const { ch4Ppb, n2oPpb } = inputs;
-    const r = chem.refIndex;
     for (let i = chem.fromIndex; i < length; i++) {
-      const c = methaneChemistryWm2(ch4Ppb[i], n2oPpb[i], ch4Ppb[r], n2oPpb[r]);
-      if (chem.ozone) byAgent.ozone[i] += c.ozone;
-      if (chem.stratH2o) byAgent.strat_h2o[i] += c.stratH2o;
+      const c = anchoredChemistryWm2(chem, ch4Ppb, n2oPpb, i, options.agentScale);
+      byAgent.ozone[i] += c.ozone;
+      byAgent.strat_h2o[i] += c.stratH2o;
     }
   }
   const total = new Float64Array(length);

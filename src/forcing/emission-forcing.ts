@@ -313,13 +313,15 @@ export function resolveEmissionForcing(file: Pathway, history: Pathway | undefin
   }
   if (groups.halogens === 'forcing') sources.other_ghg = 'the file (forcing)';
 
+  // EESC of the halogenated gases (zero when they were not computed), for ozone and the species split.
+  const eesc = new Float64Array(n);
+  for (const g of halogenPpt ? HALOGEN_SPECIES : []) {
+    const d = halogenPpt![g.column]!;
+    for (let k = 0; k < n; k++) eesc[k] += eescPpt(g, d[k]);
+  }
+
   // Ozone: precursor and EESC terms here, CH4 and N2O terms in forcingByAgent.
   if (computes(groups.ozone)) {
-    const eesc = new Float64Array(n);
-    for (const g of halogenPpt ? HALOGEN_SPECIES : []) {
-      const d = halogenPpt![g.column]!;
-      for (let k = 0; k < n; k++) eesc[k] += eescPpt(g, d[k]);
-    }
     const base = historyAt('ozone_wm2');
     const o = AR6_OZONE;
     const p = precursorMt;
@@ -347,7 +349,7 @@ export function resolveEmissionForcing(file: Pathway, history: Pathway | undefin
     ...file,
     series: series as Pathway['series'],
     provenance: { ...file.provenance, notes, assumptions: [...(file.provenance.assumptions ?? []), ...assumptions] },
-    responsiveFrom: { year: years[0], ozone: computes(groups.ozone), stratH2o: !stratGiven },
+    responsiveFrom: { year: years[0], ozone: computes(groups.ozone), stratH2o: !stratGiven, ...(halogenPpt ? { eescPpt: eesc } : {}) },
   };
   return { pathway, sources, assumptions, aerosolScale, halogenPpt, precursorMt };
 }

@@ -19,3 +19,5 @@ export { AR6_OZONE, ozoneErfChangeWm2 } from './ozone.js';
 export type { OzoneDriverChange } from './ozone.js';
 export { STRAT_H2O_PER_CH4_ERF, stratH2oErfWm2 } from './strat-h2o.js';
 export { NATURAL_BACKGROUND_WM2, NATURAL_BACKGROUND_YEARS } from './natural-background.js';
+export { EMITTED_SPECIES, EMITTED_SPECIES_LABELS, eescSeries, forcingBySpecies, ozoneShares, presentDayEescPpt } from './emitted-species.js';
+export type { EmittedSpecies, OzoneShares } from './emitted-species.js';

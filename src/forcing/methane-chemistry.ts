@@ -26,6 +26,24 @@ export function methaneChemistryWm2(ch4Ppb: number, n2oPpb: number, ch4RefPpb: n
   };
 }
 
+/**
+ * The chemistry terms a run adds in year index `k` (zero before the anchor and for agents the file
+ * gives itself), each times its agent's scale, which applies to them as to the rest of the agent:
+ * the one place both the temperature loop and forcingByAgent take them from.
+ */
+export function anchoredChemistryWm2(
+  chem: ChemistryAnchor,
+  ch4Ppb: ArrayLike<number>,
+  n2oPpb: ArrayLike<number>,
+  k: number,
+  scale: { ozone?: number; strat_h2o?: number } = {},
+): ChemistryChange {
+  if (k < chem.fromIndex) return { ozone: 0, stratH2o: 0 };
+  const r = chem.refIndex;
+  const c = methaneChemistryWm2(ch4Ppb[k], n2oPpb[k], ch4Ppb[r], n2oPpb[r]);
+  return { ozone: chem.ozone ? (scale.ozone ?? 1) * c.ozone : 0, stratH2o: chem.stratH2o ? (scale.strat_h2o ?? 1) * c.stratH2o : 0 };
+}
+
 /** Where a run adds the CH4 and N2O chemistry terms: from `fromIndex` on, relative to the state at `refIndex`. */
 export interface ChemistryAnchor {
   fromIndex: number;

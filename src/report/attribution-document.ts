@@ -1,4 +1,6 @@
-import type { AttributionRanges } from '../projection/attribute-members.js';
+import { EMITTED_SPECIES_LABELS, type EmittedSpecies } from '../forcing/emitted-species.js';
+import type { Attribution } from '../metrics/attribution.js';
+import type { AttributionRanges, PartRange } from '../projection/attribute-members.js';
 import type { AttributedProjection } from '../projection/attribute-pathway.js';
 import type { OutputDocument } from './output-document.js';
 import type { OutputColumn, OutputTable } from './output-table.js';
@@ -25,8 +27,10 @@ function periodMean(first: number, values: ArrayLike<number>, from: number, to: 
 
 /**
  * The output document of `warmcast attribute`: the yearly `warming_<agent>_k` table (with
- * `_p05/_p50/_p95` across members when there are ranges), a table of agents by period (2010-2019
- * mean, 2030, 2050, 2100 where the run has them), and a chart of the main agents.
+ * `_p05/_p50/_p95` across members when there are ranges) and, for emission pathways, the
+ * `warming_from_<species>_k` columns of the split by emitted species; a table of agents by period
+ * (2010-2019 mean, 2030, 2050, 2100 where the run has them) and one of species; and a chart of the
+ * main agents.
  */
 export function attributionDocument(r: AttributedProjection, options: AttributionDocumentOptions): OutputDocument {
   const { attribution: a, projection: p } = r;
@@ -39,34 +43,43 @@ export function attributionDocument(r: AttributedProjection, options: Attributio
   const i1 = hi - first + 1;
   const cut = (v: Float64Array) => v.slice(i0, i1);
 
+  const species = r.bySpecies;
   const data: OutputColumn[] = [
     { key: 'year', values: cut(p.years) },
     { key: 'warming_k', values: cut(p.columns.warming_k) },
     ...a.agents.map((x) => ({ key: `warming_${x}_k`, values: cut(a.warmingK[x]) })),
+    ...(species ? species.agents.map((x) => ({ key: `warming_from_${x}_k`, values: cut(species.warmingK[x]) })) : []),
   ];
   if (ranges) for (const x of a.agents) for (const q of ['p05', 'p50', 'p95'] as const) data.push({ key: `warming_${x}_${q}_k`, values: cut(ranges.byAgent[x][q]) });
+  if (ranges?.bySpecies && species) for (const x of species.agents) for (const q of ['p05', 'p50', 'p95'] as const) data.push({ key: `warming_from_${x}_${q}_k`, values: cut(ranges.bySpecies[x][q]) });
 
   const periods: { label: string; from: number; to: number }[] = [];
   if (lo <= 2010 && hi >= 2019) periods.push({ label: '2010-2019', from: 2010, to: 2019 });
   for (const y of [2030, 2050, 2100]) if (y >= lo && y <= hi) periods.push({ label: String(y), from: y, to: y });
-  const cell = (agent: string, q: { from: number; to: number }) => {
-    const central = periodMean(first, a.warmingK[agent], q.from, q.to);
-    if (!ranges) return central.toFixed(3);
-    const b = ranges.byAgent[agent];
-    return `${central.toFixed(2)} [${periodMean(first, b.p05, q.from, q.to).toFixed(2)}, ${periodMean(first, b.p95, q.from, q.to).toFixed(2)}]`;
+  const rangeNote = "each member's parts add up to its warming; the ranges of the parts do not add up to a range of the total";
+  /** Milestone table of one split (by agent or by species): a row per part and the total. */
+  const periodTable = (name: string, what: string, split: Attribution, labels: (x: string) => string, partRanges?: Record<string, PartRange>): OutputTable => {
+    const cell = (x: string, q: { from: number; to: number }) => {
+      const central = periodMean(first, split.warmingK[x], q.from, q.to);
+      if (!partRanges) return central.toFixed(3);
+      const b = partRanges[x];
+      return `${central.toFixed(2)} [${periodMean(first, b.p05, q.from, q.to).toFixed(2)}, ${periodMean(first, b.p95, q.from, q.to).toFixed(2)}]`;
+    };
+    return {
+      name,
+      caption: `Warming by ${what}, K relative to ${p.baseline[0]}-${p.baseline[1]}` + (partRanges ? ' (central run [5 %, 95 %] of the members)' : ''),
+      columns: [
+        { key: name === 'by_agent' ? 'agent' : 'species', values: [...split.agents.map(labels), 'total (warming_k)'] },
+        ...periods.map((q) => ({
+          key: q.label,
+          values: [...split.agents.map((x) => cell(x, q)), periodMean(first, p.columns.warming_k, q.from, q.to).toFixed(partRanges ? 2 : 3)],
+        })),
+      ],
+      notes: partRanges ? [rangeNote] : [],
+    };
   };
-  const byPeriod: OutputTable = {
-    name: 'by_agent',
-    caption: `Warming by forcing agent, K relative to ${p.baseline[0]}-${p.baseline[1]}` + (ranges ? ' (central run [5 %, 95 %] of the members)' : ''),
-    columns: [
-      { key: 'agent', values: [...a.agents, 'total (warming_k)'] },
-      ...periods.map((q) => ({
-        key: q.label,
-        values: [...a.agents.map((x) => cell(x, q)), periodMean(first, p.columns.warming_k, q.from, q.to).toFixed(ranges ? 2 : 3)],
-      })),
-    ],
-    notes: ranges ? ["each member's parts add up to its warming; the ranges of the parts do not add up to a range of the total"] : [],
-  };
+  const tables = [periodTable('by_agent', 'forcing agent', a, (x) => x, ranges?.byAgent)];
+  if (species) tables.push(periodTable('by_species', 'emitted species (each with the ozone and strat. H2O it makes)', species, (x) => EMITTED_SPECIES_LABELS[x as EmittedSpecies] ?? x, ranges?.bySpecies));
 
   // The chart: the three main gases, all aerosol, and the rest together (a chart, so grouping is fine; the files keep every agent).
   const c0 = Math.max(i0, 1850 - first);
@@ -95,7 +108,8 @@ export function attributionDocument(r: AttributedProjection, options: Attributio
     baseline: p.baseline,
     headline: [],
     data: { name: 'data', columns: data },
-    tables: [byPeriod],
+    tables,
+    terminalTables: tables.length,
     charts: [{ title: `Warming by agent, ${p.name}`, xLabel: 'Year', yLabel: `Warming relative to ${p.baseline[0]}-${p.baseline[1]} (K)`, series }],
     terminalChart: { series, options: { title: `Warming by agent, ${p.name} (K)`, yLabel: 'K', height: 10 } },
     notes: options.notes,

@@ -32,6 +32,8 @@ export interface OutputDocument {
   data: OutputTable;
   /** Human tables, milestone years. The first is the terminal's compact table. */
   tables: OutputTable[];
+  /** How many of `tables` the terminal prints (default 1). */
+  terminalTables?: number;
   /** SVG charts (SVG and HTML files). */
   charts: SvgChartOptions[];
   /** The terminal chart. */

@@ -43,9 +43,9 @@ export function terminalText(doc: OutputDocument, options: TerminalTextOptions =
     const t = headlineTable(doc.headline, doc.baseline, true);
     out.push(...plainTable({ ...t, notes: [] }, width));
   }
-  if (doc.tables.length > 0) {
-    if (doc.headline.length > 0) out.push('');
-    out.push(...plainTable({ ...doc.tables[0], notes: [] }, width));
+  for (const [i, t] of doc.tables.slice(0, doc.terminalTables ?? 1).entries()) {
+    if (i > 0 || doc.headline.length > 0) out.push('');
+    out.push(...plainTable({ ...t, notes: [] }, width));
   }
   if (options.chart !== false && doc.terminalChart) {
     out.push('');

@@ -3,6 +3,7 @@ import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { FORCING_AGENTS } from '../../src/forcing/agents.js';
+import { EMITTED_SPECIES } from '../../src/forcing/emitted-species.js';
 import { runCli, tempDirs } from './cli-harness.js';
 
 const tmp = tempDirs('attribute');
@@ -31,6 +32,45 @@ describe('warmcast attribute', () => {
   });
 });
 
+describe('warmcast attribute, emission pathways: also by emitted species', () => {
+  it('prints the species table under the agents table, methane with its ozone and strat. H2O above the CH4 agent', async () => {
+    const r = await runCli(['attribute', 'clean-air-emissions', '--no-chart'], tmp());
+    expect(r.code, r.err).toBe(0);
+    expect(r.out).toMatch(/Warming by emitted species/);
+    const agentCh4 = Number(/^\s+ch4\s+(-?\d\.\d+)/m.exec(r.out)![1]);
+    const speciesCh4 = Number(/^\s+CH4 \(\+ ozone, strat\. H2O\)\s+(-?\d\.\d+)/m.exec(r.out)![1]);
+    expect(speciesCh4).toBeGreaterThan(agentCh4);
+  });
+
+  it('--out x.csv: warming_from_<species>_k add up to warming_k in every year, as the agents do', async () => {
+    const dir = tmp();
+    const r = await runCli(['attribute', 'clean-air-emissions', '--out', 'e.csv', '--no-chart'], dir);
+    expect(r.code, r.err).toBe(0);
+    const [header, ...rows] = readFileSync(join(dir, 'e.csv'), 'utf8').trim().split('\n');
+    const cols = header.split(',');
+    const speciesCols = EMITTED_SPECIES.map((x) => cols.indexOf(`warming_from_${x}_k`));
+    expect(Math.min(...speciesCols)).toBeGreaterThan(0);
+    for (const row of rows) {
+      const v = row.split(',').map(Number);
+      expect(Math.abs(speciesCols.reduce((t, i) => t + v[i], 0) - v[1])).toBeLessThan(1e-9);
+    }
+  });
+
+  it('a concentration pathway has no species columns, and a note says why', async () => {
+    const dir = tmp();
+    const r = await runCli(['attribute', 'swift', '--out', 'c.csv', '--no-chart', '--notes'], dir);
+    expect(r.code, r.err).toBe(0);
+    expect(readFileSync(join(dir, 'c.csv'), 'utf8')).not.toContain('warming_from_');
+    expect(r.out).toMatch(/by emitted species: for emission pathways/);
+  });
+
+  it('--scenario picks a scenario of a scenario table', async () => {
+    const r = await runCli(['attribute', 'pathways/examples/invented-scenarios.csv', '--scenario', 'Immediate-01', '--model', 'Gridline 2.1', '--no-chart']);
+    expect(r.code, r.err).toBe(0);
+    expect(r.out).toMatch(/Warming by emitted species/);
+  });
+});
+
 describe('warmcast attribute --members', () => {
   it('adds warming_<agent>_p05/p50/p95_k with p05 <= p50 <= p95 in every year, and ranges in the terminal table', async () => {
     const dir = tmp();
@@ -40,8 +80,8 @@ describe('warmcast attribute --members', () => {
     expect(r.out).toMatch(/ranges from 40 members/);
     const [header, ...rows] = readFileSync(join(dir, 'm.csv'), 'utf8').trim().split('\n');
     const cols = header.split(',');
-    for (const agent of FORCING_AGENTS) {
-      const [i05, i50, i95] = ['p05', 'p50', 'p95'].map((q) => cols.indexOf(`warming_${agent}_${q}_k`));
+    for (const key of [...FORCING_AGENTS, ...EMITTED_SPECIES.map((x) => `from_${x}`)]) {
+      const [i05, i50, i95] = ['p05', 'p50', 'p95'].map((q) => cols.indexOf(`warming_${key}_${q}_k`));
       expect(i05).toBeGreaterThan(0);
       for (const row of rows) {
         const v = row.split(',').map(Number);
