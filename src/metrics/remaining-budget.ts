@@ -1,4 +1,5 @@
 import { ConfigError } from '../errors.js';
+import { quantileSorted } from '../numerics/quantiles.js';
 import { runningMean } from './running-mean.js';
 
 /** The AR6 warming-level window, years. */
@@ -262,13 +263,10 @@ function largestWithin(peak: (x: number) => number, limit: number, family: Co2Pa
 }
 
 /**
- * The q quantile of sorted values (definition 7): -Infinity when either order statistic it rests on
- * is -Infinity (too many members exceed the limit at once), else linear between them.
+ * The q quantile of sorted values (quantileSorted, definition 7): -Infinity when the lower order
+ * statistic it rests on is -Infinity (too many members exceed the limit at once; sorted ascending, so
+ * the upper one can be -Infinity only if the lower one is), else linear between them.
  */
 function quantileOrMinusInfinity(sorted: number[], q: number): number {
-  const h = (sorted.length - 1) * q;
-  const lo = Math.floor(h);
-  const hi = Math.ceil(h);
-  if (sorted[lo] === -Infinity || sorted[hi] === -Infinity) return -Infinity;
-  return sorted[lo] + (h - lo) * (sorted[hi] - sorted[lo]);
+  return sorted[Math.floor((sorted.length - 1) * q)] === -Infinity ? -Infinity : quantileSorted(sorted, q);
 }

@@ -10,6 +10,7 @@ import { AR6_SAMPLING } from '../ensemble/sampling.js';
 import { runMembers, type MemberTask } from '../ensemble/run-members.js';
 import { attributeWarming } from '../metrics/attribution.js';
 import { rebase } from '../metrics/warming-levels.js';
+import { quantileSorted } from '../numerics/quantiles.js';
 import {
   remainingBudget,
   straightLineFamily,
@@ -195,11 +196,10 @@ function mean(v: ArrayLike<number>, from: number, to: number): number {
   return s / (to - from + 1);
 }
 
-/** Median, 5 % and 95 % (nearest rank) of values. */
+/** Median, 5 % and 95 % of values (quantileSorted, definition 7). */
 function percentiles3(values: number[]): [number, number, number] {
   const s = [...values].sort((a, b) => a - b);
-  const at = (q: number) => s[Math.min(s.length - 1, Math.max(0, Math.round(q * (s.length - 1))))];
-  return [at(0.5), at(0.05), at(0.95)];
+  return [quantileSorted(s, 0.5), quantileSorted(s, 0.05), quantileSorted(s, 0.95)];
 }
 
 /**
