@@ -97,20 +97,28 @@ export function attributionDocument(r: AttributedProjection, options: Attributio
     ...(aerosol.length ? [{ label: 'aerosol (all)', years, values: sum(aerosol) }] : []),
     { label: 'all other agents', years, values: sum(rest) },
   ];
+  // For emission pathways, a second chart: the species that matter most for planning, each with the chemistry it drives.
+  const speciesSeries: ChartLine[] = species
+    ? (['co2', 'ch4', 'n2o', 'halogens', 'nox_co_nmvoc', 'aerosol_precursors'] as const).map((x) => ({ label: EMITTED_SPECIES_LABELS[x], years, values: species.warmingK[x].slice(c0, i1) }))
+    : [];
+  const yLabel = `Warming relative to ${p.baseline[0]}-${p.baseline[1]} (K)`;
   const subtitle =
     `ECS ${p.params.ecsK.toFixed(2)} K, TCR ${p.params.tcrK.toFixed(2)} K, one central run` +
     (ranges ? ` with ranges from ${ranges.members} members` : '') +
     `; warming relative to the ${p.baseline[0]}-${p.baseline[1]} mean; the parts add up to warming_k in every year`;
   return {
     command: 'attribute',
-    title: `${p.name}: warming by forcing agent`,
+    title: `${p.name}: warming by forcing agent${species ? ' and by emitted species' : ''}`,
     subtitle,
     baseline: p.baseline,
     headline: [],
     data: { name: 'data', columns: data },
     tables,
     terminalTables: tables.length,
-    charts: [{ title: `Warming by agent, ${p.name}`, xLabel: 'Year', yLabel: `Warming relative to ${p.baseline[0]}-${p.baseline[1]} (K)`, series }],
+    charts: [
+      { title: `Warming by agent, ${p.name}`, xLabel: 'Year', yLabel, series },
+      ...(species ? [{ title: `Warming by emitted species, ${p.name}`, xLabel: 'Year', yLabel, series: speciesSeries }] : []),
+    ],
     terminalChart: { series, options: { title: `Warming by agent, ${p.name} (K)`, yLabel: 'K', height: 10 } },
     notes: options.notes,
     cautions: standardCautions(ranges ? `Ranges are the 5-95 % spread of ${ranges.members} members; they cover the members' parameters only, not the pathway or the model structure.` : undefined),
