@@ -1,3 +1,4 @@
+import { attribution2010s } from './attribution-checks.js';
 import { calibrationRoundTrip } from './calibration-checks.js';
 import { historicalEmissions, joosPulse, tcre, zeroEmissionsCommitment } from './carbon-checks.js';
 import { ar6GasForcing2019, doublingForcing } from './forcing-checks.js';
@@ -10,7 +11,7 @@ import { twoBoxAnalytic, twoBoxOdex } from './two-box-checks.js';
 
 /**
  * Every published check `warmcast verify` runs, in the order of the table: forcing, the two-box
- * model, calibration, the carbon cycle, the history against the AR6 ERF series, observed warming and HadCRUT5. Adding a check is adding its entry here.
+ * model, calibration, the carbon cycle, the history against the AR6 ERF series, observed warming and HadCRUT5, the calibrated posterior, and warming by agent and species. Adding a check is adding its entry here.
  */
 export const PUBLISHED_CHECKS: readonly PublishedCheck[] = [
   ar6GasForcing2019,
@@ -26,6 +27,7 @@ export const PUBLISHED_CHECKS: readonly PublishedCheck[] = [
   historyObserved,
   hadcrut5Fit,
   posteriorRanges,
+  attribution2010s,
 ];
 
 /**
