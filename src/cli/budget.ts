@@ -1,17 +1,17 @@
 import { Command } from 'commander';
 import { ConfigError } from '../errors.js';
-import { readPathway } from '../io/load-pathway.js';
 import { carbonBudget } from '../projection/carbon-budget.js';
 import { BUDGET_UNCERTAINTY, budgetDocument, standardCautions } from '../report/index.js';
 import type { CliIo } from './cli-io.js';
 import { memberSource } from './member-source.js';
-import { cautionsHelp, numberListOption, pathwayArg, resolveModelParams, wholeNumberOption, yearOption } from './options.js';
+import { absentEmissionsOption, cautionsHelp, numberListOption, resolveModelParams, wholeNumberOption, yearOption } from './options.js';
 import { announceWritten, checkOutExtension, pathwayInputs, printDocument, writeDocument } from './output.js';
+import { addScenarioOptions, readPathwayArgs, type ScenarioOptions } from './scenario-options.js';
 
 /** The bundled non-CO2 path budgets assume unless `--non-co2` names another. */
 export const DEFAULT_NON_CO2 = 'budget-non-co2';
 
-interface BudgetOptions {
+interface BudgetOptions extends ScenarioOptions {
   limit: number[];
   chance: number[];
   from?: number;
@@ -22,6 +22,7 @@ interface BudgetOptions {
   prior: boolean;
   out?: string;
   notes?: boolean;
+  absentEmissions?: string;
 }
 
 /**
@@ -40,7 +41,7 @@ export function chancesFromOption(values: number[]): number[] {
 
 /** `warmcast budget`: remaining CO2 budgets for warming limits at chances, or the latest net zero for a shape. */
 export function budgetCommand(io: CliIo): Command {
-  return new Command('budget')
+  const cmd = new Command('budget')
     .description('remaining CO2 budget (Gt CO2) that keeps peak warming at or below each limit with each chance, and the net-zero year of a straight-line decline that spends it')
     .option('--limit <K,...>', 'warming limits, K above 1850-1900', numberListOption('--limit'), [1.5, 2])
     .option('--chance <p,...>', 'chances of staying at or below each limit, per cent (50,67,83) or fractions (0.5,0.67)', numberListOption('--chance'), [50, 67, 83])
@@ -52,9 +53,12 @@ export function budgetCommand(io: CliIo): Command {
     .option('--prior', 'draw the members from the prior, unconstrained by the observed record, instead of the calibrated set', false)
     .option('-o, --out <file>', 'write the budget table; the extension picks the format: .csv (+ .meta.json), .json, .md, .html, .xlsx; - for stdout as CSV')
     .option('--notes', 'print every note on how the budget was made (files always keep them)')
+    .addOption(absentEmissionsOption());
+  addScenarioOptions(cmd, false);
+  return cmd
     .addHelpText(
       'after',
-      '\nExamples:\n  warmcast budget --limit 1.5,1.7,2 --chance 50,67,83\n  warmcast budget --from 2030 --out budgets.md\n  warmcast budget --shape swift-emissions --limit 1.7 --chance 67\n' +
+      '\nExamples:\n  warmcast budget --limit 1.5,1.7,2 --chance 50,67,83\n  warmcast budget --from 2030 --out budgets.md\n  warmcast budget --shape swift-emissions --limit 1.7 --chance 67\n  warmcast budget --shape scenarios.xlsx --scenario Quick --limit 2 --chance 67\n' +
         cautionsHelp(standardCautions(BUDGET_UNCERTAINTY)),
     )
     .action(async (opts: BudgetOptions) => {
@@ -62,8 +66,11 @@ export function budgetCommand(io: CliIo): Command {
       if (opts.out && opts.out !== '-') checkOutExtension(opts.out, { charts: [] });
       const { params, forcingScale } = resolveModelParams({}, io);
       const source = memberSource(opts.prior);
-      const nonCo2Read = readPathway(pathwayArg(opts.nonCo2 ?? opts.shape ?? DEFAULT_NON_CO2, io), { splice: true });
-      const shapeRead = opts.shape ? readPathway(pathwayArg(opts.shape, io), { splice: true }) : undefined;
+      // The non-CO2 path is the shape's own unless --non-co2 names one; --scenario picks from whichever is a scenario table.
+      const args = [opts.nonCo2 ?? opts.shape ?? DEFAULT_NON_CO2, ...(opts.shape && opts.nonCo2 ? [opts.shape] : [])];
+      const reads = await readPathwayArgs(args, opts, { splice: true, absentEmissions: opts.absentEmissions as never }, io, false);
+      const nonCo2Read = reads[0];
+      const shapeRead = opts.shape ? reads[reads.length - 1] : undefined;
       const shape = shapeRead
         ? shapeFrom(shapeRead.pathway.years, shapeRead.pathway.series.co2_gtco2, opts.from ?? (shapeRead.pathway.provenance.historyLastYear ?? 0) + 1, opts.shape!)
         : undefined;

@@ -1,5 +1,5 @@
 /** `warmcast budget` in-process: chance parsing, the table's columns, and what cannot be met. */
-import { readFileSync } from 'node:fs';
+import { readFileSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { chancesFromOption } from '../../src/cli/budget.js';
@@ -40,5 +40,22 @@ describe('warmcast budget', () => {
     expect(r.out).toMatch(/not possible/);
     const all = await runCli(['budget', '--limit', '1.1', '--chance', '83', '--members', '40', '--notes']);
     expect(all.out).toMatch(/1\.1 K with 83 % chance cannot be met/);
+  });
+
+  it('--shape with a file that lacks precursors: refused with the --absent-emissions hint, which budget accepts', async () => {
+    const dir = tmp();
+    writeFileSync(join(dir, 's.csv'), 'year,co2_gtco2,ch4_mt,n2o_mt\n2025,40,380,11\n2050,0,300,10\n2100,0,250,9\n');
+    const refused = await runCli(['budget', '--shape', 's.csv', '--limit', '1.7', '--chance', '67', '--members', '40'], dir);
+    expect(refused.code).toBe(2);
+    expect(refused.err).toMatch(/--absent-emissions/);
+    const held = await runCli(['budget', '--shape', 's.csv', '--limit', '1.7', '--chance', '67', '--members', '40', '--absent-emissions', 'hold'], dir);
+    expect(held.code, held.err).toBe(0);
+    expect(held.out).toMatch(/net-zero year of the stretched shape/);
+  });
+
+  it('--shape TABLE --scenario NAME --model NAME takes the shape from a scenario table', async () => {
+    const r = await runCli(['budget', '--shape', 'pathways/examples/invented-scenarios.csv', '--scenario', 'Immediate-01', '--model', 'Gridline 2.1', '--limit', '2', '--chance', '50', '--members', '40']);
+    expect(r.code, r.err).toBe(0);
+    expect(r.out).toMatch(/2 K\s+\d+ \(\d{4}\)/);
   });
 });
