@@ -40,7 +40,7 @@ export function attributeCommand(io: CliIo): Command {
       const ranges = opts.members
         ? attributeMembers(read.pathway, { params, members: opts.members, seed: opts.seed, baseline: opts.baseline, source: memberSource(opts.prior), ozoneShares: result.ozoneShares })
         : undefined;
-      const speciesNote = result.bySpecies ? [] : ['by emitted species: for emission pathways (co2_gtco2) only; this pathway gives concentrations or forcing, so its warming is split by agent'];
+      const speciesNote = result.bySpecies || result.projection.carbon ? [] : ['by emitted species: for emission pathways (co2_gtco2) only; this pathway gives concentrations or forcing, so its warming is split by agent'];
       const notes = [...read.pathway.provenance.notes, ...result.projection.notes, ...result.notes, ...speciesNote, ...(ranges?.notes ?? []), ...paramNotes, ...(forcingNote ? [forcingNote] : [])];
       const doc = attributionDocument(result, { notes, ...(ranges ? { ranges } : {}), from: opts.from, to: opts.to });
       if (opts.out !== undefined) {

@@ -1,3 +1,4 @@
+import { HALOGEN_PRESENT_DAY_YEAR } from '../carbon/halogen-present-day.js';
 import type { ClimateParams } from '../climate/params.js';
 import { FORCING_AGENTS, type ForcingAgent } from '../forcing/agents.js';
 import { EMITTED_SPECIES, eescSeries, forcingBySpecies, ozoneShares, type OzoneShares } from '../forcing/emitted-species.js';
@@ -15,6 +16,8 @@ export interface AttributedProjection {
   ozoneShares?: OzoneShares;
   /** How the split was made, for provenance. */
   notes: string[];
+  /** Why an emission-driven run has no split by species (shown on the terminal too), when it has none. */
+  speciesSkipped?: string;
 }
 
 /** The note on the agent convention, shared by every attribution output. */
@@ -63,6 +66,11 @@ export function attributePathway(pathway: Pathway, options: ProjectionOptions): 
   const attribution = attributeWarming(params, projection.years, forcing, projection.baseline);
   const notes = [AGENT_ATTRIBUTION_NOTE];
   if (!projection.carbon) return { projection, attribution, notes };
+  const y = projection.years;
+  if (!pathway.responsiveFrom?.eescPpt && !(y[0] <= HALOGEN_PRESENT_DAY_YEAR && y[y.length - 1] >= HALOGEN_PRESENT_DAY_YEAR)) {
+    const why = `by emitted species: not made, because the run has neither ${HALOGEN_PRESENT_DAY_YEAR} (to anchor the ozone-depleting gases' EESC to the bundled concentrations) nor halogen concentrations of its own; splice the pathway onto the history or give halogenated-gas emissions`;
+    return { projection, attribution, notes: [...notes, why], speciesSkipped: why };
+  }
   const { shares, note } = runOzoneShares(projection, pathway.responsiveFrom);
   const species = forcingBySpecies(forcing, shares, options.forcingScale?.ozone ?? 1);
   const bySpecies = attributeWarming(params, projection.years, Object.fromEntries(EMITTED_SPECIES.map((s) => [s, species[s]])), projection.baseline);

@@ -121,6 +121,7 @@ export function attributionDocument(r: AttributedProjection, options: Attributio
     ],
     terminalChart: { series, options: { title: `Warming by agent, ${p.name} (K)`, yLabel: 'K', height: 10 } },
     notes: options.notes,
+    ...(r.speciesSkipped ? { terminalNotes: [r.speciesSkipped] } : {}),
     cautions: standardCautions(ranges ? `Ranges are the 5-95 % spread of ${ranges.members} members; they cover the members' parameters only, not the pathway or the model structure.` : undefined),
     shortCaution: shortCaution('attribute', Boolean(ranges)),
   };

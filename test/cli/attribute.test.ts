@@ -64,6 +64,13 @@ describe('warmcast attribute, emission pathways: also by emitted species', () =>
     expect(r.out).toMatch(/by emitted species: for emission pathways/);
   });
 
+  it('an emission pathway not spliced onto the history (no 2019 to anchor EESC to) is split by agent, and the terminal says why not by species', async () => {
+    const r = await runCli(['attribute', 'swift-emissions', '--no-splice', '--baseline', '2025-2030', '--no-chart'], tmp());
+    expect(r.code, r.err).toBe(0);
+    expect(r.out).not.toMatch(/Warming by emitted species/);
+    expect(r.out).toMatch(/by emitted species: not made/);
+  });
+
   it('--scenario picks a scenario of a scenario table', async () => {
     const r = await runCli(['attribute', 'pathways/examples/invented-scenarios.csv', '--scenario', 'Immediate-01', '--model', 'Gridline 2.1', '--no-chart']);
     expect(r.code, r.err).toBe(0);
