@@ -5,7 +5,7 @@ import { attributionDocument, standardCautions } from '../report/index.js';
 import type { CliIo } from './cli-io.js';
 import { memberSource } from './member-source.js';
 import { absentEmissionsOption, addModelOptions, baselineOption, cautionsHelp, type ModelOptions, resolveModelParams, wholeNumberOption } from './options.js';
-import { addReportOptions, announceWritten, pathwayInputs, printDocument, type ReportOptions, writeDocument } from './output.js';
+import { addReportOptions, announceWritten, pathwayInputs, printDocument, type ReportOptions, rowChoice, writeDocument } from './output.js';
 import { DEFAULT_PATHWAY } from './run.js';
 import { addScenarioOptions, readPathwayArgs, type ScenarioOptions } from './scenario-options.js';
 
@@ -31,7 +31,8 @@ export function attributeCommand(io: CliIo): Command {
     .option('--prior', 'with --members: draw from the prior, unconstrained by the observed record, instead of the calibrated set', false)
     .addOption(absentEmissionsOption());
   addScenarioOptions(cmd, false);
-  addModelOptions(cmd).addHelpText('after', '\nExamples:\n  warmcast attribute delayed\n  warmcast attribute swift-emissions --members 500 --out swift-by-agent.csv\n  warmcast attribute scenarios.xlsx --scenario Quick\n' + cautionsHelp(standardCautions()));
+  addModelOptions(cmd).addHelpText('after', '\nExamples:\n  warmcast attribute delayed\n  warmcast attribute clean-air-emissions --members 500 --out by-species.csv\n  warmcast attribute scenarios.xlsx --scenario Quick\n' +
+      cautionsHelp(standardCautions("Without --members one central run is shown, with no range; with it, ranges are the 5-95 % spread of the members' parameters only, not the pathway or the model structure.")));
   cmd.action((pathway: string | undefined, opts: AttributeOptions) => {
     const { params, paramsFile, notes: paramNotes, forcingScale, forcingNote } = resolveModelParams(opts, io);
     return (async () => {
@@ -42,7 +43,10 @@ export function attributeCommand(io: CliIo): Command {
         : undefined;
       const speciesNote = result.bySpecies || result.projection.carbon ? [] : ['by emitted species: for emission pathways (co2_gtco2) only; this pathway gives concentrations or forcing, so its warming is split by agent'];
       const notes = [...read.pathway.provenance.notes, ...result.projection.notes, ...result.notes, ...speciesNote, ...(ranges?.notes ?? []), ...paramNotes, ...(forcingNote ? [forcingNote] : [])];
-      const doc = attributionDocument(result, { notes, ...(ranges ? { ranges } : {}), from: opts.from, to: opts.to });
+      const y = result.projection.years;
+      const rows = rowChoice(opts, y[0], y[y.length - 1], read.pathway.provenance.spliceYear ?? y[0]);
+      const columns = opts.years || opts.every ? rows.years : undefined;
+      const doc = attributionDocument(result, { notes, ...(ranges ? { ranges } : {}), from: opts.from, to: opts.to, ...(columns ? { columns } : {}) });
       if (opts.out !== undefined) {
         const inputs = [...pathwayInputs(read), ...(paramsFile ? [paramsFile] : [])];
         announceWritten(await writeDocument(opts.out, doc, { inputs, params, baseline: opts.baseline, io, ...(ranges ? { seed: opts.seed } : {}) }), io);

@@ -5,7 +5,7 @@ import { calibrate, type CalibrationTargets } from '../climate/calibrate.js';
 import { CALIBRATION_DEFAULTS, PARAM_KEYS, type ClimateParams } from '../climate/params.js';
 import { ConfigError, InputError } from '../errors.js';
 import { parseAbsentEmissionsRule } from '../forcing/absent-emissions.js';
-import { AR6_REFERENCE_PERIOD } from '../report/index.js';
+import { AR6_REFERENCE_PERIOD, wrap } from '../report/index.js';
 import { parseParams } from '../io/read-params.js';
 import { readCalibratedSet } from '../io/read-calibrated-set.js';
 import { representativeParams } from '../ensemble/calibrated-set.js';
@@ -284,5 +284,8 @@ export function pathwayArg(arg: string, io: CliIo): string {
  * @example cautionsHelp(['Global mean only.']) // '\nCautions:\n  - Global mean only.\n'
  */
 export function cautionsHelp(cautions: readonly string[]): string {
-  return `\nCautions:\n${cautions.map((c) => `  - ${c}`).join('\n')}\n`;
+  return `\nCautions:\n${cautions.flatMap((c) => wrap(c, HELP_WIDTH, '  - ')).join('\n')}\n`;
 }
+
+/** Width the cautions of `--help` are wrapped to (commander's own help wraps at the terminal's width, 80 by default). */
+const HELP_WIDTH = 80;

@@ -25,6 +25,8 @@ export interface AttributionRanges {
   byAgent: Record<string, PartRange>;
   /** Per emitted species (with `ozoneShares`): the same for the species split (forcingBySpecies). */
   bySpecies?: Record<string, PartRange>;
+  /** The same for each member's whole warming (the sum of its parts). */
+  total: PartRange;
   members: number;
   notes: string[];
 }
@@ -81,9 +83,13 @@ export function attributeMembers(
     const species = forcingBySpecies(forcing, shares!, scaleOf('ozone'));
     for (const s of EMITTED_SPECIES) speciesParts[s].set(rebase(years, energyBalance(twoBox, species[s]).surfaceK, baseline, s), r * n);
   }
+  // Each member's warming is the sum of its agents' (linearity).
+  const total = new Float64Array(m * n);
+  for (const values of Object.values(agentParts)) for (let i = 0; i < m * n; i++) total[i] += values[i];
   return {
     years,
     byAgent: partRanges(agentParts, m, n),
+    total: partRanges({ total }, m, n).total,
     ...(speciesParts ? { bySpecies: partRanges(speciesParts, m, n) } : {}),
     members: m,
     notes: [...notes, `ranges: 5-95 % of ${m} members (seed ${options.seed}); ${source.notes.join(' ')}`.trim()],

@@ -50,6 +50,25 @@ export function runOzoneShares(projection: Projection, responsiveFrom: Pathway['
 }
 
 /**
+ * Why an emission-driven run cannot be split by emitted species, or undefined when it can. The split
+ * needs the future's ozone to come from the file's emissions (ozone and aerosol precursors, or a
+ * stated --absent-emissions rule): ozone given as forcing (`ozone_wm2`, or a lumped `other_wm2` split
+ * in AR6's 2019 shares) has no emissions behind it to share out. It also needs the EESC of the
+ * ozone-depleting gases: halogen concentrations of the run's own, or 2019 in the run to anchor the
+ * bundled ones.
+ */
+export function speciesSplitObstacle(pathway: Pathway, years: Float64Array): string | undefined {
+  const from = pathway.responsiveFrom;
+  if (!from?.ozone) {
+    return 'by emitted species: not made, because the file gives ozone as forcing (ozone_wm2, or other_wm2 split in AR6 shares), so there are no emissions to share its future out by; give the ozone precursors (nox_mt, co_mt, nmvoc_mt) or --absent-emissions with a file of CO2, CH4 and N2O emissions';
+  }
+  if (!from.eescPpt && !(years[0] <= HALOGEN_PRESENT_DAY_YEAR && years[years.length - 1] >= HALOGEN_PRESENT_DAY_YEAR)) {
+    return `by emitted species: not made, because the run has neither ${HALOGEN_PRESENT_DAY_YEAR} (to anchor the ozone-depleting gases' EESC to the bundled concentrations) nor halogen concentrations of its own; splice the pathway onto the history or give halogenated-gas emissions`;
+  }
+  return undefined;
+}
+
+/**
  * Projects a pathway and splits its warming by forcing agent (see attributeWarming): one
  * `warming_<agent>_k` series per agent of the run, adding up to `warming_k` in every year. An
  * emission-driven run is also split by emitted species (forcingBySpecies: methane with the ozone and
@@ -66,11 +85,8 @@ export function attributePathway(pathway: Pathway, options: ProjectionOptions): 
   const attribution = attributeWarming(params, projection.years, forcing, projection.baseline);
   const notes = [AGENT_ATTRIBUTION_NOTE];
   if (!projection.carbon) return { projection, attribution, notes };
-  const y = projection.years;
-  if (!pathway.responsiveFrom?.eescPpt && !(y[0] <= HALOGEN_PRESENT_DAY_YEAR && y[y.length - 1] >= HALOGEN_PRESENT_DAY_YEAR)) {
-    const why = `by emitted species: not made, because the run has neither ${HALOGEN_PRESENT_DAY_YEAR} (to anchor the ozone-depleting gases' EESC to the bundled concentrations) nor halogen concentrations of its own; splice the pathway onto the history or give halogenated-gas emissions`;
-    return { projection, attribution, notes: [...notes, why], speciesSkipped: why };
-  }
+  const why = speciesSplitObstacle(pathway, projection.years);
+  if (why) return { projection, attribution, notes: [...notes, why], speciesSkipped: why };
   const { shares, note } = runOzoneShares(projection, pathway.responsiveFrom);
   const species = forcingBySpecies(forcing, shares, options.forcingScale?.ozone ?? 1);
   const bySpecies = attributeWarming(params, projection.years, Object.fromEntries(EMITTED_SPECIES.map((s) => [s, species[s]])), projection.baseline);

@@ -16,6 +16,8 @@ export interface AttributionDocumentOptions {
   /** First and last year of the tables, charts and files (`--from`, `--to`). */
   from?: number;
   to?: number;
+  /** Years of the milestone tables' columns (`--years`, `--every`); default the 2010-2019 mean, 2030, 2050 and 2100. */
+  columns?: readonly number[];
 }
 
 /** Mean of a series over inclusive years (years consecutive from `first`). */
@@ -29,8 +31,8 @@ function periodMean(first: number, values: ArrayLike<number>, from: number, to: 
  * The output document of `warmcast attribute`: the yearly `warming_<agent>_k` table (with
  * `_p05/_p50/_p95` across members when there are ranges) and, for emission pathways, the
  * `warming_from_<species>_k` columns of the split by emitted species; a table of agents by period
- * (2010-2019 mean, 2030, 2050, 2100 where the run has them) and one of species; and a chart of the
- * main agents.
+ * (2010-2019 mean, 2030, 2050, 2100 where the run has them, or the years of `columns`) and one of
+ * species; and a chart of the main agents (and one of the main species).
  */
 export function attributionDocument(r: AttributedProjection, options: AttributionDocumentOptions): OutputDocument {
   const { attribution: a, projection: p } = r;
@@ -50,20 +52,20 @@ export function attributionDocument(r: AttributedProjection, options: Attributio
     ...a.agents.map((x) => ({ key: `warming_${x}_k`, values: cut(a.warmingK[x]) })),
     ...(species ? species.agents.map((x) => ({ key: `warming_from_${x}_k`, values: cut(species.warmingK[x]) })) : []),
   ];
+  if (ranges) for (const q of ['p05', 'p50', 'p95'] as const) data.push({ key: `warming_${q}_k`, values: cut(ranges.total[q]) });
   if (ranges) for (const x of a.agents) for (const q of ['p05', 'p50', 'p95'] as const) data.push({ key: `warming_${x}_${q}_k`, values: cut(ranges.byAgent[x][q]) });
   if (ranges?.bySpecies && species) for (const x of species.agents) for (const q of ['p05', 'p50', 'p95'] as const) data.push({ key: `warming_from_${x}_${q}_k`, values: cut(ranges.bySpecies[x][q]) });
 
   const periods: { label: string; from: number; to: number }[] = [];
-  if (lo <= 2010 && hi >= 2019) periods.push({ label: '2010-2019', from: 2010, to: 2019 });
-  for (const y of [2030, 2050, 2100]) if (y >= lo && y <= hi) periods.push({ label: String(y), from: y, to: y });
+  if (!options.columns && lo <= 2010 && hi >= 2019) periods.push({ label: '2010-2019', from: 2010, to: 2019 });
+  for (const y of options.columns ?? [2030, 2050, 2100]) if (y >= lo && y <= hi) periods.push({ label: String(y), from: y, to: y });
   const rangeNote = "each member's parts add up to its warming; the ranges of the parts do not add up to a range of the total";
   /** Milestone table of one split (by agent or by species): a row per part and the total. */
   const periodTable = (name: string, what: string, split: Attribution, labels: (x: string) => string, partRanges?: Record<string, PartRange>): OutputTable => {
-    const cell = (x: string, q: { from: number; to: number }) => {
-      const central = periodMean(first, split.warmingK[x], q.from, q.to);
-      if (!partRanges) return central.toFixed(3);
-      const b = partRanges[x];
-      return `${central.toFixed(2)} [${periodMean(first, b.p05, q.from, q.to).toFixed(2)}, ${periodMean(first, b.p95, q.from, q.to).toFixed(2)}]`;
+    const cell = (central: Float64Array, q: { from: number; to: number }, b?: PartRange) => {
+      const c = periodMean(first, central, q.from, q.to);
+      if (!b) return c.toFixed(3);
+      return `${c.toFixed(2)} [${periodMean(first, b.p05, q.from, q.to).toFixed(2)}, ${periodMean(first, b.p95, q.from, q.to).toFixed(2)}]`;
     };
     return {
       name,
@@ -72,10 +74,11 @@ export function attributionDocument(r: AttributedProjection, options: Attributio
         { key: name === 'by_agent' ? 'agent' : 'species', values: [...split.agents.map(labels), 'total (warming_k)'] },
         ...periods.map((q) => ({
           key: q.label,
-          values: [...split.agents.map((x) => cell(x, q)), periodMean(first, p.columns.warming_k, q.from, q.to).toFixed(partRanges ? 2 : 3)],
+          values: [...split.agents.map((x) => cell(split.warmingK[x], q, partRanges?.[x])), cell(p.columns.warming_k, q, ranges?.total)],
         })),
       ],
       notes: partRanges ? [rangeNote] : [],
+      terminalOverflow: 'wrap',
     };
   };
   const tables = [periodTable('by_agent', 'forcing agent', a, (x) => x, ranges?.byAgent)];

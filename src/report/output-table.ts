@@ -13,6 +13,12 @@ export interface OutputTable {
   columns: OutputColumn[];
   /** Sentences under the table in human formats (how to read it). */
   notes?: string[];
+  /**
+   * On a narrow terminal: `wrap` continues the columns that do not fit in further blocks (each led by
+   * the first column), for tables whose every column was asked for (years, chances); `drop` (default)
+   * leaves them out with a line saying how many, for tables the files give in full anyway.
+   */
+  terminalOverflow?: 'wrap' | 'drop';
 }
 
 /** One column of an OutputTable. */

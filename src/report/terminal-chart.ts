@@ -219,7 +219,8 @@ export function terminalChart(series: readonly ChartLine[], options: TerminalCha
     const i = x1 === x0 ? 0 : Math.round(((t - x0) / (x1 - x0)) * (samples - 1));
     axis[axisCol + i] = i === 0 ? '└' : '┬';
     const text = String(t);
-    const start = Math.max(0, axisCol + i - Math.floor(text.length / 2));
+    // Centred under its tick, but never past the chart's width (the last tick sits at the right edge).
+    const start = Math.max(0, Math.min(axisCol + i - Math.floor(text.length / 2), width - text.length));
     if (start > labels.length || labels.length === 0) labels = labels.padEnd(start) + text;
   }
   out.push(axis.join(''), labels);

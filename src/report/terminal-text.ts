@@ -65,7 +65,8 @@ export function terminalText(doc: OutputDocument, options: TerminalTextOptions =
 /**
  * A table laid out for a terminal: caption, header, rule, rows; columns two spaces apart, numbers
  * and ranges right-aligned, indented by two spaces. Columns that do not fit `width` are left out
- * from the right, and a last line says how many (the files keep them).
+ * from the right with a last line saying how many (the files keep them), or, for a table with
+ * `terminalOverflow: 'wrap'`, go on in further blocks below, each led by the first column.
  */
 export function plainTable(t: OutputTable, width = Infinity): string[] {
   const rows = rowCount(t);
@@ -75,16 +76,33 @@ export function plainTable(t: OutputTable, width = Infinity): string[] {
     const head = clean(humanLabel(c));
     return { head, cells, right: j > 0 || isNumeric(c), w: Math.max(head.length, ...cells.map((s) => s.length)) };
   });
-  let kept = cols.length;
-  const used = (k: number) => 2 + cols.slice(0, k).reduce((s, c) => s + c.w, 0) + 2 * (k - 1);
-  while (kept > 1 && used(kept) > width) kept--;
-  const shown = cols.slice(0, kept);
-  const line = (cells: string[]) => '  ' + cells.map((s, j) => (shown[j].right ? s.padStart(shown[j].w) : s.padEnd(shown[j].w))).join('  ').trimEnd();
+  // Blocks of columns that fit the width, each led by the first column (the row labels); a column
+  // wider than the width on its own still gets a block.
+  const blocks: (typeof cols)[] = [];
+  let block = [cols[0]];
+  let dropped = 0;
+  for (const c of cols.slice(1)) {
+    const used = 2 + block.reduce((s, b) => s + b.w + 2, 0) + c.w;
+    if (used > width && block.length > 1) {
+      if (t.terminalOverflow !== 'wrap') {
+        dropped = cols.length - cols.indexOf(c);
+        break;
+      }
+      blocks.push(block);
+      block = [cols[0]];
+    }
+    block.push(c);
+  }
+  blocks.push(block);
   const out: string[] = [];
   if (t.caption) out.push(...wrap(t.caption, width, '  '));
-  out.push(line(shown.map((c) => c.head)), '  ' + shown.map((c) => '-'.repeat(c.w)).join('  '));
-  for (let r = 0; r < rows; r++) out.push(line(shown.map((c) => c.cells[r])));
-  if (kept < cols.length) out.push(...wrap(`(${cols.length - kept} more column${cols.length - kept === 1 ? '' : 's'} in the output files; widen the terminal to see them)`, width, '  '));
+  for (const [i, shown] of blocks.entries()) {
+    const line = (cells: string[]) => '  ' + cells.map((s, j) => (shown[j].right ? s.padStart(shown[j].w) : s.padEnd(shown[j].w))).join('  ').trimEnd();
+    if (i > 0) out.push('');
+    out.push(line(shown.map((c) => c.head)), '  ' + shown.map((c) => '-'.repeat(c.w)).join('  '));
+    for (let r = 0; r < rows; r++) out.push(line(shown.map((c) => c.cells[r])));
+  }
+  if (dropped > 0) out.push(...wrap(`(${dropped} more column${dropped === 1 ? '' : 's'} in the output files; widen the terminal to see them)`, width, '  '));
   for (const n of t.notes ?? []) out.push(...wrap(n, width, '  '));
   return out;
 }

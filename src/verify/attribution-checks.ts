@@ -6,14 +6,14 @@ import { withinRange, type PublishedCheck } from './published-check.js';
 /**
  * Warming in 2010-2019 relative to 1850-1900 split by agent and by emitted species, with the AR6
  * central climate response (ECS 3 K, TCR 1.8 K, calibrate's defaults) on the history of a bundled
- * emission future (delayed-emissions), beside IPCC AR6 WG1 SPM Figure SPM.2 (panel b by agent
+ * emission future (clean-air-emissions, which gives its precursors), beside IPCC AR6 WG1 SPM Figure SPM.2 (panel b by agent
  * group, panel c by emitted species; all values from memory, the ranges those recalled for the bars).
  * The same comparisons as test/reference/ar6-attribution.test.ts and ar6-species-attribution.test.ts.
  */
 export const attribution2010s: PublishedCheck = {
   id: 'attribution-2010s',
   run: () => {
-    const r = attributePathway(loadPathway('delayed-emissions'), { params: calibrate() });
+    const r = attributePathway(loadPathway('clean-air-emissions'), { params: calibrate() });
     const first = r.projection.years[0];
     const mean = (v: Float64Array) => {
       let s = 0;

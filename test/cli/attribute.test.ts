@@ -64,6 +64,13 @@ describe('warmcast attribute, emission pathways: also by emitted species', () =>
     expect(r.out).toMatch(/by emitted species: for emission pathways/);
   });
 
+  it('an emission pathway that gives ozone as forcing (lumped other_wm2) is split by agent only, and the terminal says why', async () => {
+    const r = await runCli(['attribute', 'swift-emissions', '--no-chart'], tmp());
+    expect(r.code, r.err).toBe(0);
+    expect(r.out).not.toMatch(/Warming by emitted species/);
+    expect(r.out).toMatch(/by emitted species: not made, because the file gives ozone as forcing/);
+  });
+
   it('an emission pathway not spliced onto the history (no 2019 to anchor EESC to) is split by agent, and the terminal says why not by species', async () => {
     const r = await runCli(['attribute', 'swift-emissions', '--no-splice', '--baseline', '2025-2030', '--no-chart'], tmp());
     expect(r.code, r.err).toBe(0);
@@ -78,17 +85,32 @@ describe('warmcast attribute, emission pathways: also by emitted species', () =>
   });
 });
 
+describe('warmcast attribute: years and their checks', () => {
+  it('--years picks the columns of the tables (the files keep every year)', async () => {
+    const r = await runCli(['attribute', 'clean-air-emissions', '--years', '2030,2040', '--no-chart']);
+    expect(r.code, r.err).toBe(0);
+    expect(r.out).toMatch(/agent\s+2030\s+2040\s*$/m);
+    expect(r.out).not.toMatch(/2010-2019/);
+  });
+  it('--from after --to is refused with exit 2, not an empty table', async () => {
+    const r = await runCli(['attribute', 'clean-air-emissions', '--from', '2100', '--to', '2050', '--no-chart']);
+    expect(r.code).toBe(2);
+    expect(r.err).toMatch(/--from \(2100\) must not be after --to \(2050\)/);
+  });
+});
+
 describe('warmcast attribute --members', () => {
   it('adds warming_<agent>_p05/p50/p95_k with p05 <= p50 <= p95 in every year, and ranges in the terminal table', async () => {
     const dir = tmp();
-    const r = await runCli(['attribute', 'swift-emissions', '--members', '40', '--out', 'm.csv', '--no-chart'], dir);
+    const r = await runCli(['attribute', 'clean-air-emissions', '--members', '40', '--out', 'm.csv', '--no-chart'], dir);
     expect(r.code, r.err).toBe(0);
     expect(r.out).toMatch(/co2\s+0\.\d\d \[0\.\d\d, \d\.\d\d\]/);
     expect(r.out).toMatch(/ranges from 40 members/);
+    expect(r.out).toMatch(/total \(warming_k\)\s+\d\.\d\d \[\d\.\d\d, \d\.\d\d\]/);
     const [header, ...rows] = readFileSync(join(dir, 'm.csv'), 'utf8').trim().split('\n');
     const cols = header.split(',');
-    for (const key of [...FORCING_AGENTS, ...EMITTED_SPECIES.map((x) => `from_${x}`)]) {
-      const [i05, i50, i95] = ['p05', 'p50', 'p95'].map((q) => cols.indexOf(`warming_${key}_${q}_k`));
+    for (const key of ['', ...FORCING_AGENTS.map((x) => `${x}_`), ...EMITTED_SPECIES.map((x) => `from_${x}_`)]) {
+      const [i05, i50, i95] = ['p05', 'p50', 'p95'].map((q) => cols.indexOf(`warming_${key}${q}_k`));
       expect(i05).toBeGreaterThan(0);
       for (const row of rows) {
         const v = row.split(',').map(Number);

@@ -4,8 +4,8 @@
  * memory: CO2 about 0.8 K, CH4 about 0.5 K, N2O about 0.1 K, halogenated gases about 0.1 K, NOx with
  * NMVOC and CO together about 0.1-0.2 K, SO2, OC, BC and NH3 together about -0.5 K). The bands below
  * are those values widened to the ranges recalled for the bars, also from memory. The AR6 central
- * climate response (ECS 3 K, TCR 1.8 K, calibrate()) and the bundled emission future delayed-emissions
- * (its history part) are used, so the forcing is AR6's as published.
+ * climate response (ECS 3 K, TCR 1.8 K, calibrate()) and the bundled emission future clean-air-emissions
+ * (its history part; the future gives the precursors, so the species split is made) are used, so the forcing is AR6's as published.
  *
  * Then a check from the linearity of the model, not from a paper: cutting methane emissions changes
  * the total warming by what it changes methane's species warming, plus two small parts the ERF-based
@@ -24,26 +24,26 @@ import { expectClose, expectWithin } from '../asserts.js';
 const params = calibrate();
 const attribute = (read: ReadPathwayResult) => attributePathway(read.pathway, { params });
 
-const delayed = attribute(readPathway('delayed-emissions'));
-const first = delayed.projection.years[0];
+const run = attribute(readPathway('clean-air-emissions'));
+const first = run.projection.years[0];
 const mean2010s = (v: Float64Array) => {
   let s = 0;
   for (let y = 2010; y <= 2019; y++) s += v[y - first];
   return s / 10;
 };
-const species = (x: string) => mean2010s(delayed.bySpecies!.warmingK[x]);
+const species = (x: string) => mean2010s(run.bySpecies!.warmingK[x]);
 
 describe('warming by emitted species, 2010-2019 vs 1850-1900, beside AR6 WG1 Figure SPM.2c (from memory)', () => {
   it('adds up to warming_k in every year', () => {
-    const w = delayed.projection.columns.warming_k;
-    for (let k = 0; k < w.length; k++) expectClose(delayed.bySpecies!.totalK[k], w[k], 1e-9, `year ${first + k}`);
+    const w = run.projection.columns.warming_k;
+    for (let k = 0; k < w.length; k++) expectClose(run.bySpecies!.totalK[k], w[k], 1e-9, `year ${first + k}`);
   });
   it('CO2 is the CO2 agent (nothing else is given to it)', () => {
-    expectClose(species('co2'), mean2010s(delayed.attribution.warmingK.co2), 1e-12, 'CO2');
+    expectClose(species('co2'), mean2010s(run.attribution.warmingK.co2), 1e-12, 'CO2');
   });
   it('methane, with its ozone and stratospheric water vapour, within 0.3-0.8 K (SPM.2c about 0.5 K)', () => {
     expectWithin(species('ch4'), 0.3, 0.8, 'CH4 species, K');
-    expect(species('ch4')).toBeGreaterThan(mean2010s(delayed.attribution.warmingK.ch4) + 0.05);
+    expect(species('ch4')).toBeGreaterThan(mean2010s(run.attribution.warmingK.ch4) + 0.05);
   });
   it('N2O within 0.05-0.2 K (SPM.2c about 0.1 K)', () => expectWithin(species('n2o'), 0.05, 0.2, 'N2O species, K'));
   it('halogenated gases with their ozone depletion within 0.0-0.25 K (SPM.2c about 0.1 K)', () => expectWithin(species('halogens'), 0.0, 0.25, 'halogens, K'));
@@ -62,8 +62,8 @@ describe("methane's emission-based ERF in 2019 beside AR6 WG1 Figure 6.12 (a fin
   // the band pins the measured ratio so a change to it is seen.
   it('is 0.55-0.75 of AR6\'s 1.2 W m-2 (measured 0.66)', () => {
     const k = 2019 - first;
-    const c = delayed.projection.columns;
-    const erf = c.forcing_ch4_wm2[k] + c.forcing_strat_h2o_wm2[k] + delayed.ozoneShares!.ch4[k];
+    const c = run.projection.columns;
+    const erf = c.forcing_ch4_wm2[k] + c.forcing_strat_h2o_wm2[k] + run.ozoneShares!.ch4[k];
     expectWithin(erf / 1.2, 0.55, 0.75, 'CH4 emission-based ERF 2019 / AR6');
   });
 });

@@ -16,4 +16,16 @@ describe('terminal layout helpers', () => {
     expect(lines[0]).toBe('  year  a_long_column_k');
     expect(lines.slice(3).map((l) => l.trim()).join(' ')).toBe('(2 more columns in the output files; widen the terminal to see them)');
   });
+
+  it("plainTable with terminalOverflow 'wrap' puts those columns in further blocks, each led by the first column", () => {
+    const t = { name: 't', terminalOverflow: 'wrap' as const, columns: [{ key: 'year', values: Float64Array.of(2030) }, ...['a', 'b', 'c'].map((k) => ({ key: `${k}_long_column_k`, values: Float64Array.of(1) }))] };
+    const lines = plainTable(t, 30);
+    for (const l of lines) expect(l.length).toBeLessThanOrEqual(30);
+    expect(lines.filter((l) => l.trim().startsWith('year')).map((l) => l.trim().split(/\s+/))).toEqual([
+      ['year', 'a_long_column_k'],
+      ['year', 'b_long_column_k'],
+      ['year', 'c_long_column_k'],
+    ]);
+    expect(lines.filter((l) => l === '')).toHaveLength(2);
+  });
 });
