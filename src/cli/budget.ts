@@ -71,9 +71,9 @@ export function budgetCommand(io: CliIo): Command {
       '--shape <file>',
       "keep this pathway's own net CO2 shape (co2_gtco2) and find the latest net zero, stretching or compressing its decline in time; the reported cumulative CO2 counts its net CO2 up to net zero (later net-negative emissions are not subtracted, though the runs include them); its non-CO2 emissions are used unless --non-co2 is given",
     )
-    .option('-n, --members <count>', 'members; fewer than the calibrated set has are drawn at random with --seed, and the budgets then move with the seed (the notes say by how much) (default: every member of the calibrated set once, in order, so the budgets do not depend on the seed)', wholeNumberOption('--members', 1))
+    .option('-n, --members <count>', 'how many members to use; fewer than the calibrated set has are drawn at random with --seed, and the budgets then move with the seed (the notes say by how much) (default: every member of the calibrated set once, in order, so the budgets do not depend on the seed)', wholeNumberOption('--members', 1))
     .option('--seed <integer>', 'random seed of a --members subsample or --prior draw, and of the bootstrap that estimates the sampling spread', wholeNumberOption('--seed', 0), 1)
-    .option('--prior', 'draw the members from the prior, unconstrained by the observed record, instead of the calibrated set', false)
+    .option('--prior', 'draw the members at random from the prior, unconstrained by the observed record, instead of the calibrated set (as many as the set has, unless --members)', false)
     .option('-o, --out <file>', 'write the budget table; the extension picks the format: .csv (+ .meta.json), .json, .md, .html, .xlsx; - for stdout as CSV')
     .option('--notes', 'print every note on how the budget was made (files always keep them)')
     .addOption(absentEmissionsOption());
@@ -81,7 +81,7 @@ export function budgetCommand(io: CliIo): Command {
   return cmd
     .addHelpText(
       'after',
-      '\nExamples:\n  warmcast budget --limit 1.5,1.7,2 --chance 50,67,83\n  warmcast budget --from 2030 --out budgets.md\n  warmcast budget --shape swift-emissions --limit 1.7 --chance 67\n  warmcast budget --shape scenarios.xlsx --scenario Quick --limit 2 --chance 67\n' +
+      '\nExamples:\n  warmcast budget --limit 1.5,1.7,2 --chance 50,67,83\n  warmcast budget --from 2030 --out budgets.md\n  warmcast budget --members 500 --seed 2 --notes   (a quicker random subsample; the notes give how far it moves with the seed)\n  warmcast budget --shape swift-emissions --limit 1.7 --chance 67\n  warmcast budget --shape scenarios.xlsx --scenario Quick --limit 2 --chance 67\n' +
         cautionsHelp(standardCautions(BUDGET_UNCERTAINTY)),
     )
     .action(async (opts: BudgetOptions) => {
