@@ -316,16 +316,18 @@ export interface BudgetSpread {
  * The sampling spread of each budget, by the bootstrap (Efron 1979): the members' budgets are drawn
  * again with replacement, as many as there are, `replicates` times; each budget is recomputed from
  * every resample as {@link remainingBudget} computes it. The standard deviation over the resamples
- * estimates how far the budget of another draw of as many members would lie from this one (the
- * seed's effect), and for the members of a finite set, how far the set's own budget lies from that
- * of the distribution it was drawn from.
+ * estimates the budget's standard deviation from one draw of as many members to another (the
+ * seed's effect), and for the whole of a finite set, the sampling error of the set's own budget
+ * against the distribution the set was drawn from.
  *
  * @param result the members' budgets (remainingBudget)
  * @param family the family they were found along (to turn parameters into Gt CO2)
  * @param replicates number of resamples (a few hundred give the standard deviation to about 5 %)
  * @param random uniform numbers in [0, 1), injected so the spread is reproducible
  * @returns one spread per row of `result.rows`, in the same order
- * @example budgetSamplingSpread(result, family, 200, random)[0].sdGtco2 // 14.2 for 500 members at 1.5 K, 50 %
+ * @example
+ * // 400 members whose budgets spread as a normal distribution with sd 100 Gt CO2, at 50 %:
+ * budgetSamplingSpread(result, family, 1000, random)[0].sdGtco2 // ≈ 6.2 (asymptotically 100 sqrt(0.25 / 400) / 0.399 = 6.3)
  */
 export function budgetSamplingSpread(result: RemainingBudget, family: Co2PathFamily, replicates: number, random: () => number): BudgetSpread[] {
   const spreads: BudgetSpread[] = [];
