@@ -322,7 +322,7 @@ export interface BudgetSpread {
  *
  * @param result the members' budgets (remainingBudget)
  * @param family the family they were found along (to turn parameters into Gt CO2)
- * @param replicates number of resamples (a few hundred give the standard deviation to about 5 %)
+ * @param replicates number of resamples (200 give the standard deviation to about 5 %: 1 / sqrt(2 (replicates - 1)))
  * @param random uniform numbers in [0, 1), injected so the spread is reproducible
  * @returns one spread per row of `result.rows`, in the same order
  * @example

@@ -101,8 +101,8 @@ export interface CarbonBudget extends RemainingBudget {
   notes: string[];
 }
 
-/** Resamples of the bootstrap that estimates each budget's sampling spread (a few hundred give its standard deviation to about 5 %). */
-const SPREAD_REPLICATES = 400;
+/** Resamples of the bootstrap that estimates each budget's sampling spread: 200 give its standard deviation to about 5 % (1 / sqrt(2 x 199)). */
+const SPREAD_REPLICATES = 200;
 
 /**
  * Years of the non-CO2 path a budget needs after fromYear: at today's rate of about 40 Gt CO2 a
