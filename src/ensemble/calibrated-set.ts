@@ -81,7 +81,7 @@ export function calibratedMemberSource(set: CalibratedSet): MemberSource {
   return {
     scheme: `calibrated set ${set.file.split(/[\\/]/).pop()} sha256 ${set.sha256}; member i takes set member floor(u K), u the first uniform of xoroshiro128+ from fmix32(seed, i)`,
     notes: [
-      `members drawn with replacement from the ${set.count} equally weighted members of the calibrated set (${set.file.split(/[\\/]/).pop()}, sha256 ${set.sha256.slice(0, 12)}…): a prior over the two-box physics, per-agent forcing scales and carbon-cycle multipliers, weighted by HadCRUT5 warming, AR6 ocean heat content, cumulative CO2 emissions and the AR6 aerosol ERF`,
+      `members drawn with replacement from the ${set.count} equally weighted members of the calibrated set ${describeSet(set)}`,
     ],
     draw(seed, from, to) {
       const count = to - from;
@@ -95,6 +95,37 @@ export function calibratedMemberSource(set: CalibratedSet): MemberSource {
       return { parameters: { count, values: values as MemberParameters['values'] }, redraws: 0 };
     },
   };
+}
+
+/**
+ * Every member of the calibrated set once, in the set's order: member i is set member i, with no
+ * seed and no resampling, so what is computed from them does not move with the seed (the default of
+ * `warmcast budget`, whose quantiles need every member of a few thousand to sit still).
+ *
+ * @param set the calibrated set
+ * @returns a MemberSource whose draw(seed, from, to) ignores the seed and gives set members from..to - 1
+ * @throws ConfigError from draw when `to` is beyond the set's size
+ * @example calibratedSetInOrder(set).draw(1, 0, set.count).parameters.values.feedback_wm2k[0] === set.members.feedback_wm2k[0] // true
+ */
+export function calibratedSetInOrder(set: CalibratedSet): MemberSource {
+  const keys = Object.keys(set.members);
+  return {
+    scheme: `calibrated set ${set.file.split(/[\\/]/).pop()} sha256 ${set.sha256}; member i is set member i, in order`,
+    notes: [
+      `every one of the ${set.count} equally weighted members of the calibrated set once, in order, no resampling ${describeSet(set)}`,
+    ],
+    draw(_seed, from, to) {
+      if (!(from >= 0 && to <= set.count && from <= to)) throw new ConfigError(`the calibrated set has ${set.count} members: members ${from} to ${to - 1} cannot be taken in order`, 'members');
+      const values: Record<string, Float64Array> = {};
+      for (const key of keys) values[key] = set.members[key]!.slice(from, to);
+      return { parameters: { count: to - from, values: values as MemberParameters['values'] }, redraws: 0 };
+    },
+  };
+}
+
+/** The set's file, digest and what it is, for the notes of a member source. */
+function describeSet(set: CalibratedSet): string {
+  return `(${set.file.split(/[\\/]/).pop()}, sha256 ${set.sha256.slice(0, 12)}…): a prior over the two-box physics, per-agent forcing scales and carbon-cycle multipliers, weighted by HadCRUT5 warming, AR6 ocean heat content, cumulative CO2 emissions and the AR6 aerosol ERF`;
 }
 
 /**

@@ -6,6 +6,13 @@ import { runningMean } from './running-mean.js';
 const WARMING_LEVEL_WINDOW_YEARS = 20;
 
 /**
+ * How closely each member's budget is found, Gt CO2: the search stops when the member's largest
+ * cumulative CO2 within the limit is known to this, from below. Half of the 1 Gt CO2 the tables
+ * round to, so a budget (a quantile of the members' budgets) is off by less than that.
+ */
+export const BUDGET_TOLERANCE_GTCO2 = 0.5;
+
+/**
  * One ensemble member as the budget search sees it: the warming it shows for a given future of net
  * CO2 emissions, everything else (its parameters, the history, the non-CO2 path) held fixed.
  */
@@ -33,7 +40,7 @@ export interface Co2PathFamily {
   min: number;
   /** Largest x the run lets us see a peak after (the caller's bound, clamped to the run). */
   max: number;
-  /** Bisection stops when x is known to this (default 0.01). */
+  /** Root finding stops when x is known to this: {@link BUDGET_TOLERANCE_GTCO2} in units of x. */
   tolerance: number;
 }
 
@@ -66,6 +73,8 @@ export interface BudgetRow {
   budgetGtco2: number;
   /** Calendar year net CO2 reaches zero along the family member that spends the budget; NaN when not met. */
   netZeroYear: number;
+  /** The family parameter of that pathway (the (1 - chance) quantile of the members'); -Infinity when not met. */
+  x: number;
   /** False when more than 1 - chance of the members exceed the limit even with the family's earliest net zero. */
   met: boolean;
   /** True when the figures are lower bounds: enough members stay below the limit with the latest net zero searched. */
@@ -113,7 +122,7 @@ export function straightLineFamily(rate: number, fromYear: number, maxYears: num
     netZeroYear: (x) => Math.floor(fromYear + x),
     min: 0,
     max: maxYears,
-    tolerance: 0.01,
+    tolerance: (2 * BUDGET_TOLERANCE_GTCO2) / rate,
   };
 }
 
@@ -156,7 +165,7 @@ export function stretchedShapeFamily(shape: ArrayLike<number>, fromYear: number,
     netZeroYear: (x) => Math.floor(fromYear + x * zero),
     min: xRange[0],
     max: xRange[1],
-    tolerance: 1e-4,
+    tolerance: BUDGET_TOLERANCE_GTCO2 / total,
   };
 }
 
@@ -175,8 +184,10 @@ export function peakWindowMean(warmingK: ArrayLike<number>, fromIndex: number): 
  * Remaining CO2 budgets: for each member, the largest cumulative net CO2 from 1 January of
  * `fromYear` along a family of pathways (by default net CO2 falling in a straight line from the
  * current rate to net zero, then zero; the members' non-CO2 path fixed) for which the member's peak
- * warming (the highest 20-year mean, AR6 convention) stays at or below the limit; found by bracketed root finding
- * (regula falsi, Illinois variant) on the family's parameter, peak warming rising with it. The budget at chance p is the (1 - p)
+ * warming (the highest 20-year mean, AR6 convention) stays at or below the limit; found to within
+ * {@link BUDGET_TOLERANCE_GTCO2} by bracketed root finding (regula falsi, Illinois variant) on the
+ * family's parameter, peak warming rising with it (every run of a member narrows the brackets of its
+ * other limits too). The budget at chance p is the (1 - p)
  * quantile of the members' parameters (linear between order statistics, Hyndman & Fan 1996
  * definition 7), mapped to cumulative CO2, so that a share p of the members stays at or below the
  * limit with it.
@@ -200,13 +211,19 @@ export function remainingBudget(members: readonly BudgetMember[], family: Co2Pat
 
   const perLimit: MemberBudget[][] = limits.map(() => []);
   for (const member of members) {
-    const peakFor = (x: number) => peakWindowMean(member.warming(family.path(x, futureLength)), fromIndex);
+    // Every (x, peak) tried for this member: peak rises with x, so each one narrows the bracket of every later limit.
+    const tried: TrialPoint[] = [];
+    const peakFor = (x: number) => {
+      const peak = peakWindowMean(member.warming(family.path(x, futureLength)), fromIndex);
+      tried.push({ x, peak });
+      return peak;
+    };
     const atMin = peakFor(family.min);
     const atMax = peakFor(family.max);
     limits.forEach((limit, li) => {
       if (atMin > limit) perLimit[li].push({ x: -Infinity, status: 'exceeded' });
       else if (atMax <= limit) perLimit[li].push({ x: family.max, status: 'beyond' });
-      else perLimit[li].push({ x: largestWithin(peakFor, limit, family, atMin, atMax), status: 'found' });
+      else perLimit[li].push({ x: largestWithin(peakFor, limit, family.tolerance, tightestBracket(tried, limit)), status: 'found' });
     });
   }
 
@@ -221,6 +238,7 @@ export function remainingBudget(members: readonly BudgetMember[], family: Co2Pat
         chance,
         budgetGtco2: met ? family.cumulativeGtco2(x) : NaN,
         netZeroYear: met ? family.netZeroYear(x) : NaN,
+        x,
         met,
         atLeast: met && x >= family.max,
       });
@@ -229,22 +247,44 @@ export function remainingBudget(members: readonly BudgetMember[], family: Co2Pat
   return { rows, members: perLimit };
 }
 
+/** One evaluation of a member's peak warming, K, at the family parameter x. */
+interface TrialPoint {
+  x: number;
+  peak: number;
+}
+
 /**
- * The largest x in [min, max] with peak(x) <= limit, given peak(min) <= limit < peak(max): the
+ * The narrowest bracket of a limit among the points tried: the largest x whose peak is at or below
+ * it and the smallest x whose peak is above it (peak rising with x). The family's min and max are
+ * among the points, on either side.
+ */
+function tightestBracket(tried: readonly TrialPoint[], limit: number): [TrialPoint, TrialPoint] {
+  let lo: TrialPoint = { x: -Infinity, peak: -Infinity };
+  let hi: TrialPoint = { x: Infinity, peak: Infinity };
+  for (const t of tried) {
+    if (t.peak <= limit) {
+      if (t.x > lo.x) lo = t;
+    } else if (t.x < hi.x) hi = t;
+  }
+  return [lo, hi];
+}
+
+/**
+ * The largest x in the bracket with peak(x) <= limit, given peak(lo) <= limit < peak(hi): the
  * Illinois variant of regula falsi (Dowell & Jarratt 1971), which keeps a bracket like bisection but
  * converges in a few evaluations on a smooth, near-linear peak(x); it stops when the bracket is
- * narrower than the family's tolerance and returns the side that holds the limit.
+ * narrower than `tolerance` and returns the side that holds the limit.
  */
-function largestWithin(peak: (x: number) => number, limit: number, family: Co2PathFamily, atMin: number, atMax: number): number {
-  let lo = family.min;
-  let hi = family.max;
-  let flo = atMin - limit;
-  let fhi = atMax - limit;
+function largestWithin(peak: (x: number) => number, limit: number, tolerance: number, [from, to]: [TrialPoint, TrialPoint]): number {
+  let lo = from.x;
+  let hi = to.x;
+  let flo = from.peak - limit;
+  let fhi = to.peak - limit;
   let side = 0;
-  for (let i = 0; i < 100 && hi - lo > family.tolerance; i++) {
+  for (let i = 0; i < 100 && hi - lo > tolerance; i++) {
     let x = lo - (flo * (hi - lo)) / (fhi - flo);
     // Keep the trial point well inside the bracket so the bracket always shrinks.
-    const margin = 0.5 * family.tolerance;
+    const margin = 0.5 * tolerance;
     x = Math.min(hi - margin, Math.max(lo + margin, x));
     const fx = peak(x) - limit;
     if (fx <= 0) {
@@ -262,11 +302,70 @@ function largestWithin(peak: (x: number) => number, limit: number, family: Co2Pa
   return lo;
 }
 
+/** How much a budget moves when the members are drawn again: one per row of {@link RemainingBudget}. */
+export interface BudgetSpread {
+  limitK: number;
+  chance: number;
+  /** Standard deviation of the budget over the resamples in which it is possible, Gt CO2 (NaN if in none). */
+  sdGtco2: number;
+  /** Share of the resamples in which the budget is not possible. */
+  notPossibleShare: number;
+}
+
+/**
+ * The sampling spread of each budget, by the bootstrap (Efron 1979): the members' budgets are drawn
+ * again with replacement, as many as there are, `replicates` times; each budget is recomputed from
+ * every resample as {@link remainingBudget} computes it. The standard deviation over the resamples
+ * estimates the budget's standard deviation from one draw of as many members to another (the
+ * seed's effect), and for the whole of a finite set, the sampling error of the set's own budget
+ * against the distribution the set was drawn from.
+ *
+ * @param result the members' budgets (remainingBudget)
+ * @param family the family they were found along (to turn parameters into Gt CO2)
+ * @param replicates number of resamples (200 give the standard deviation to about 5 %: 1 / sqrt(2 (replicates - 1)))
+ * @param random uniform numbers in [0, 1), injected so the spread is reproducible
+ * @returns one spread per row of `result.rows`, in the same order
+ * @example
+ * // 400 members whose budgets spread as a normal distribution with sd 100 Gt CO2, at 50 %:
+ * budgetSamplingSpread(result, family, 1000, random)[0].sdGtco2 // ≈ 6.2 (asymptotically 100 sqrt(0.25 / 400) / 0.399 = 6.3)
+ */
+export function budgetSamplingSpread(result: RemainingBudget, family: Co2PathFamily, replicates: number, random: () => number): BudgetSpread[] {
+  const spreads: BudgetSpread[] = [];
+  const perLimit = result.rows.length / result.members.length;
+  result.members.forEach((memberBudgets, li) => {
+    const xs = memberBudgets.map((m) => m.x);
+    const n = xs.length;
+    const rows = result.rows.slice(li * perLimit, (li + 1) * perLimit);
+    const budgets: number[][] = rows.map(() => []);
+    const resample = new Float64Array(n);
+    for (let b = 0; b < replicates; b++) {
+      for (let i = 0; i < n; i++) resample[i] = xs[Math.floor(random() * n)];
+      resample.sort();
+      rows.forEach((r, j) => {
+        const x = quantileOrMinusInfinity(resample, 1 - r.chance);
+        if (x > -Infinity) budgets[j].push(family.cumulativeGtco2(x));
+      });
+    }
+    rows.forEach((r, j) => {
+      spreads.push({ limitK: r.limitK, chance: r.chance, sdGtco2: standardDeviation(budgets[j]), notPossibleShare: 1 - budgets[j].length / replicates });
+    });
+  });
+  return spreads;
+}
+
+/** Sample standard deviation (n - 1 in the denominator); NaN for fewer than two values. */
+function standardDeviation(values: readonly number[]): number {
+  const n = values.length;
+  if (n < 2) return NaN;
+  const mean = values.reduce((a, b) => a + b, 0) / n;
+  return Math.sqrt(values.reduce((a, v) => a + (v - mean) ** 2, 0) / (n - 1));
+}
+
 /**
  * The q quantile of sorted values (quantileSorted, definition 7): -Infinity when the lower order
  * statistic it rests on is -Infinity (too many members exceed the limit at once; sorted ascending, so
  * the upper one can be -Infinity only if the lower one is), else linear between them.
  */
-function quantileOrMinusInfinity(sorted: number[], q: number): number {
+function quantileOrMinusInfinity(sorted: ArrayLike<number>, q: number): number {
   return sorted[Math.floor((sorted.length - 1) * q)] === -Infinity ? -Infinity : quantileSorted(sorted, q);
 }

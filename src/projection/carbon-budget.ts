@@ -1,3 +1,5 @@
+import { uniformFloat64 } from 'pure-rand/distribution/uniformFloat64';
+import { xoroshiro128plusFromState } from 'pure-rand/generator/xoroshiro128plus';
 import type { ClimateParams } from '../climate/params.js';
 import { energyBalance } from '../climate/energy-balance.js';
 import { gtco2ToGtc } from '../carbon/units.js';
@@ -6,17 +8,21 @@ import { co2Forcing } from '../forcing/co2.js';
 import type { ForcingAgent } from '../forcing/agents.js';
 import { forcingScaleKey, sliceMemberParameters, type MemberParameters, type MemberSource } from '../ensemble/member-parameters.js';
 import { ar6Members } from '../ensemble/ar6-members.js';
+import { memberState } from '../ensemble/member-generators.js';
 import { AR6_SAMPLING } from '../ensemble/sampling.js';
 import { runMembers, type MemberTask } from '../ensemble/run-members.js';
 import { attributeWarming } from '../metrics/attribution.js';
 import { rebase } from '../metrics/warming-levels.js';
 import { quantileSorted } from '../numerics/quantiles.js';
 import {
+  BUDGET_TOLERANCE_GTCO2,
+  budgetSamplingSpread,
   remainingBudget,
   straightLineFamily,
   stretchedShapeFamily,
   type BudgetMember,
   type BudgetRow,
+  type BudgetSpread,
   type Co2PathFamily,
   type RemainingBudget,
 } from '../metrics/remaining-budget.js';
@@ -32,11 +38,16 @@ export interface CarbonBudgetOptions {
   chances: number[];
   /** First calendar year counted (default: the first year after the history). */
   fromYear?: number;
-  /** Members and seed of the ensemble. */
+  /** Members and seed of the ensemble (the seed also drives the bootstrap of the sampling spread). */
   members: number;
   seed: number;
   /** Where the members come from (default: AR6-range sampling). */
   source?: MemberSource;
+  /**
+   * Whether the members are a random draw, so that the budgets move with the seed (default true);
+   * false for a whole fixed set taken in order (calibratedSetInOrder). Only the notes differ.
+   */
+  resampled?: boolean;
   /** Central parameters: the CH4 and N2O concentrations all members share, and the current CO2 rate. */
   params: ClimateParams;
   /** The central run's multiplier per forcing agent (the calibrated set's medians), as `run` uses. */
@@ -58,11 +69,26 @@ export interface BudgetAssumptions {
   historicalPeriod: [number, number];
   /** Net CO2 rate the straight-line decline starts from (diagnosed at the end of the history), Gt CO2 yr-1. */
   currentRateGtco2: number;
-  /** Central run along the first limit's 50 % pathway: warming from every agent but CO2 at its net zero, K. */
+  /**
+   * What the pathway of one asked budget shows: the first possible one in the order asked (a found
+   * budget before a lower bound); absent when no asked budget is possible.
+   */
+  reference?: BudgetReference;
+}
+
+/** The non-CO2 warming and zero-emissions commitment along the pathway that spends one budget. */
+export interface BudgetReference {
+  /** The budget whose pathway this is: its limit, K, and chance, in (0, 1). */
+  limitK: number;
+  chance: number;
+  /** Its net-zero year (the table's). */
+  netZeroYear: number;
+  /** Central run along that pathway: warming from every agent but CO2 in the net-zero year, K. */
   nonCo2WarmingAtNetZeroK: number;
-  /** Its net-zero year. */
-  referenceNetZeroYear: number;
-  /** Members' CO2-only warming change in the 50 years after that net zero, K: median, 5 % and 95 %. */
+  /**
+   * Members' CO2-only warming change over the 50 years after that net zero with net CO2 held at
+   * zero from then on (a shape's later net-negative emissions left out), K: median, 5 % and 95 %.
+   */
   zeroEmissionsCommitmentK: [number, number, number];
 }
 
@@ -70,7 +96,29 @@ export interface BudgetAssumptions {
 export interface CarbonBudget extends RemainingBudget {
   fromYear: number;
   assumptions: BudgetAssumptions;
+  /** How far each budget would move with another draw of as many members (bootstrap), one per row. */
+  spread: BudgetSpread[];
   notes: string[];
+}
+
+/** Resamples of the bootstrap that estimates each budget's sampling spread: 200 give its standard deviation to about 5 % (1 / sqrt(2 x 199)). */
+const SPREAD_REPLICATES = 200;
+
+/**
+ * Years of the non-CO2 path a budget needs after fromYear: at today's rate of about 40 Gt CO2 a
+ * year, a straight-line decline over 50 years spends about 1000 Gt CO2, so the budgets of the usual
+ * limits reach net zero within the path (common practice, no source). Past the path's end its
+ * last values are held.
+ */
+const MIN_NON_CO2_YEARS = 50;
+
+/**
+ * A chance as the per cent a user would write: 0.5 -> "50 %", 0.667 -> "66.7 %" (never rounded
+ * to a whole per cent, so two chances never print alike).
+ * @example chanceText(0.667) // '66.7 %'
+ */
+export function chanceText(chance: number): string {
+  return `${Number((chance * 100).toPrecision(12))} %`;
 }
 
 /** A pathway extended to `lastYear` by holding each series' last value. */
@@ -95,19 +143,31 @@ function extendPathway(p: Pathway, lastYear: number): Pathway {
  * net CO2 from the end of the history on; net CO2 is diagnosed from the record to the end of the
  * history, held at the current rate until fromYear, and from fromYear follows the budget family.
  * Each member runs its own carbon cycle and two-box model (runMembers); its CH4 and N2O
- * concentrations come from one central run, as in an emission-driven ensemble.
+ * concentrations come from one central run, as in an emission-driven ensemble. The assumptions
+ * (non-CO2 warming at net zero, zero-emissions commitment) are read along the pathway of the first
+ * possible budget asked for, so their net-zero year is that budget's.
  *
  * @param nonCo2 the non-CO2 pathway, spliced onto the history (any CO2 it gives is replaced)
  * @param options limits, chances, members, seed, central parameters, and an optional shape
- * @returns per limit and chance the budget and its net-zero year, per member budgets, assumptions
+ * @returns per limit and chance the budget and its net-zero year, per member budgets, assumptions,
+ *   each budget's sampling spread
  * @throws ConfigError when the pathway has no history to continue from, or fromYear lies before
- *   the history's end or too late to see a peak
+ *   the history's end or leaves fewer than 50 years of the non-CO2 path after it
  */
 export function carbonBudget(nonCo2: Pathway, options: CarbonBudgetOptions): CarbonBudget {
   const historyEnd = nonCo2.provenance.historyLastYear;
   if (historyEnd === undefined) throw new ConfigError('the non-CO2 pathway must start after the bundled history, to be spliced onto it', 'non-co2');
   const fromYear = options.fromYear ?? historyEnd + 1;
   if (fromYear <= historyEnd) throw new ConfigError(`--from must be after the history's last year, ${historyEnd}, got ${fromYear}`, 'from');
+  const pathLast = nonCo2.years[nonCo2.years.length - 1];
+  const pathName = nonCo2.provenance.source.startsWith('bundled:') ? `the bundled ${nonCo2.provenance.source.slice('bundled:'.length)} path` : nonCo2.provenance.source;
+  if (pathLast - fromYear + 1 < MIN_NON_CO2_YEARS) {
+    throw new ConfigError(
+      `--from ${fromYear}: the non-CO2 path (${pathName}) covers ${nonCo2.provenance.spliceYear ?? nonCo2.years[0]}-${pathLast}, and a budget needs it to run at least ${MIN_NON_CO2_YEARS} years after --from, ` +
+        `to ${fromYear + MIN_NON_CO2_YEARS - 1}: give --from ${pathLast - MIN_NON_CO2_YEARS + 1} or earlier, or a --non-co2 path that runs longer`,
+      'from',
+    );
+  }
   const endYear = options.endYear ?? fromYear + 250;
   const pathway = extendPathway(nonCo2, endYear);
   const n = pathway.years.length;
@@ -126,6 +186,7 @@ export function carbonBudget(nonCo2: Pathway, options: CarbonBudgetOptions): Car
   const rate = central.columns.co2_gtco2[joinIndex - 1];
   const notes: string[] = [];
   if (!(rate > 0)) throw new ConfigError(`the net CO2 rate diagnosed at the end of the history is ${rate.toFixed(1)} Gt CO2 per year: a budget needs a positive rate to fall from`, 'rate');
+  if (pathLast < endYear) notes.push(`the non-CO2 path (${pathName}) ends in ${pathLast}: its ${pathLast} values are held to ${endYear}, the end of the budget runs`);
 
   const { input, notes: inputNotes } = ensembleInput(spliced, options.params);
   notes.push(...inputNotes.filter((t) => !t.startsWith('emission-driven pathway')));
@@ -140,47 +201,70 @@ export function carbonBudget(nonCo2: Pathway, options: CarbonBudgetOptions): Car
     : straightLineFamily(rate, fromYear, endYear - fromYear - 70);
   const baseline: [number, number] = [1850, 1900];
   const members: BudgetMember[] = [];
+  // Each member's parameters as a block of one, sliced once: the search runs every member a dozen times.
+  const blocks = Array.from({ length: parameters.count }, (_, r) => sliceMemberParameters(parameters, r, r + 1));
   const runOne = (r: number, future: Float64Array, co2Out?: Float64Array) => {
     const emission = new Float64Array(n).fill(NaN);
     for (let k = joinIndex; k < n; k++) emission[k] = gtco2ToGtc(k < fromIndex ? rate : future[k - fromIndex]);
-    const one = sliceMemberParameters(parameters, r, r + 1);
-    const w = runMembers({ ...task, carbon: { ...carbon, co2: { ...carbon.co2, emissionGtc: emission } } }, one, undefined, co2Out);
+    const w = runMembers({ ...task, carbon: { ...carbon, co2: { ...carbon.co2, emissionGtc: emission } } }, blocks[r], undefined, co2Out);
     return rebase(pathway.years, w, baseline, `member ${r}`);
   };
   for (let r = 0; r < parameters.count; r++) members.push({ warming: (future) => runOne(r, future) });
   const result = remainingBudget(members, family, { years: pathway.years, fromYear, limits: options.limits, chances: options.chances });
 
-  // Assumptions, along the first limit's 50 % pathway (or its median member where it cannot be met).
-  const perMember = result.members[0].map((m) => m.x).filter((x) => Number.isFinite(x)).sort((a, b) => a - b);
-  const xRef = perMember.length ? perMember[Math.floor(perMember.length / 2)] : family.min;
-  const futureRef = family.path(xRef, n - fromIndex);
-  const refNetZero = family.netZeroYear(xRef);
+  // The pathway of the first possible budget asked for (a found one before a lower bound), with net
+  // CO2 held at zero after its net zero, so the commitment is that of zero emissions even for a shape
+  // that goes net negative. Warming to date does not depend on the future, so with no possible
+  // budget it is read along an immediate stop.
+  const refRow = result.rows.find((r) => r.met && !r.atLeast) ?? result.rows.find((r) => r.met);
+  const futureRef = refRow ? zeroAfterNetZero(family.path(refRow.x, n - fromIndex), refRow.netZeroYear - fromYear) : family.path(family.min, n - fromIndex);
   const zec: number[] = [];
   const hist: number[] = [];
   const co2 = new Float64Array(n);
   for (let r = 0; r < parameters.count; r++) {
     const w = runOne(r, futureRef, co2);
     hist.push(mean(w, fromIndex - 10, fromIndex - 1));
-    zec.push(co2OnlyCommitment(parameters, r, co2, carbon.n2oPpb, options.params, refNetZero - y0));
+    if (refRow) zec.push(co2OnlyCommitment(parameters, r, co2, carbon.n2oPpb, options.params, refRow.netZeroYear - y0));
   }
-  const refSeries = new Float64Array(n).fill(NaN);
-  for (let k = joinIndex; k < n; k++) refSeries[k] = k < fromIndex ? rate : futureRef[k - fromIndex];
-  const refRun = projectPathway({ ...spliced, series: { ...spliced.series, co2_gtco2: refSeries } }, { params: options.params, forcingScale: options.forcingScale });
-  const forcing = Object.fromEntries(Object.entries(refRun.columns).filter(([k]) => /^forcing_.*_wm2$/.test(k) && k !== 'forcing_wm2' && k !== 'forcing_aerosol_wm2').map(([k, v]) => [k.slice(8, -4), v]));
-  const parts = attributeWarming(options.params, refRun.years, forcing, baseline);
-  const kz = Math.min(n - 1, refNetZero - y0);
-  const nonCo2WarmingAtNetZeroK = refRun.columns.warming_k[kz] - parts.warmingK.co2[kz];
+  let reference: BudgetReference | undefined;
+  if (refRow) {
+    const refSeries = new Float64Array(n).fill(NaN);
+    for (let k = joinIndex; k < n; k++) refSeries[k] = k < fromIndex ? rate : futureRef[k - fromIndex];
+    const refRun = projectPathway({ ...spliced, series: { ...spliced.series, co2_gtco2: refSeries } }, { params: options.params, forcingScale: options.forcingScale });
+    const forcing = Object.fromEntries(Object.entries(refRun.columns).filter(([k]) => /^forcing_.*_wm2$/.test(k) && k !== 'forcing_wm2' && k !== 'forcing_aerosol_wm2').map(([k, v]) => [k.slice(8, -4), v]));
+    const parts = attributeWarming(options.params, refRun.years, forcing, baseline);
+    const kz = refRow.netZeroYear - y0;
+    reference = {
+      limitK: refRow.limitK,
+      chance: refRow.chance,
+      netZeroYear: refRow.netZeroYear,
+      nonCo2WarmingAtNetZeroK: refRun.columns.warming_k[kz] - parts.warmingK.co2[kz],
+      zeroEmissionsCommitmentK: percentiles3(zec),
+    };
+  }
 
   const assumptions: BudgetAssumptions = {
     historicalWarmingK: percentiles3(hist),
     historicalPeriod: [fromYear - 10, fromYear - 1],
     currentRateGtco2: rate,
-    nonCo2WarmingAtNetZeroK,
-    referenceNetZeroYear: refNetZero,
-    zeroEmissionsCommitmentK: percentiles3(zec),
+    reference,
   };
-  notes.push(...budgetNotes(result.rows, assumptions, fromYear, historyEnd, options, source));
-  return { ...result, fromYear, assumptions, notes };
+  // One stream no member uses (members take streams 0, 1, ...), so the bootstrap never repeats a member's draws.
+  const rng = xoroshiro128plusFromState(memberState(options.seed, Number.MAX_SAFE_INTEGER));
+  const spread = budgetSamplingSpread(result, family, SPREAD_REPLICATES, () => uniformFloat64(rng));
+  notes.push(...budgetNotes(result.rows, spread, assumptions, fromYear, historyEnd, options, source));
+  return { ...result, fromYear, assumptions, spread, notes };
+}
+
+/**
+ * A budget pathway with net CO2 held at zero after its net zero: annual totals from fromYear, the
+ * net-zero year's total kept if positive and every later year zero.
+ */
+function zeroAfterNetZero(future: Float64Array, netZeroIndex: number): Float64Array {
+  const out = Float64Array.from(future);
+  if (netZeroIndex >= 0 && netZeroIndex < out.length) out[netZeroIndex] = Math.max(0, out[netZeroIndex]);
+  out.fill(0, Math.max(0, netZeroIndex + 1));
+  return out;
 }
 
 /** Largest stretch of a shape whose net zero still leaves `room` years in the run. */
@@ -225,24 +309,61 @@ function co2OnlyCommitment(
   return t[later] - t[zero];
 }
 
-/** The notes a budget carries: method, assumptions, and what could not be met. */
-function budgetNotes(rows: BudgetRow[], a: BudgetAssumptions, fromYear: number, historyEnd: number, options: CarbonBudgetOptions, source: MemberSource): string[] {
-  const k = (x: number) => x.toFixed(2);
+/** The notes a budget carries: method, sampling spread, assumptions, and what could not be met. */
+function budgetNotes(
+  rows: BudgetRow[],
+  spread: BudgetSpread[],
+  a: BudgetAssumptions,
+  fromYear: number,
+  historyEnd: number,
+  options: CarbonBudgetOptions,
+  source: MemberSource,
+): string[] {
+  const k = (x: number) => x.toFixed(2).replace(/^-(0\.00)$/, '$1');
+  const resampled = options.resampled ?? true;
   const notes = [
     `remaining CO2 budget: per member, the largest cumulative net CO2 from 1 January ${fromYear} for which its peak warming (highest 20-year mean, the IPCC AR6 convention) stays at or below the limit, along ` +
       (options.shape
-        ? 'the given net CO2 shape stretched or compressed in time'
+        ? "the given net CO2 shape stretched or compressed in time; the cumulative CO2 is the shape's net CO2 up to its net zero: net-negative emissions after it are not subtracted, though the members' runs, and so their peaks, include them"
         : `net CO2 falling in a straight line from the current rate, ${a.currentRateGtco2.toFixed(1)} Gt CO2 a year (diagnosed from the record at the end of ${historyEnd}), to net zero, then zero`) +
-      `; the budget at a chance p is the (1 - p) quantile of the members' budgets (${options.members} members, seed ${options.seed})`,
+      `; each member's budget found to within ${BUDGET_TOLERANCE_GTCO2} Gt CO2; the budget at a chance p is the (1 - p) quantile of the members' budgets (${options.members} members${resampled ? `, seed ${options.seed}` : ''})`,
     `members: ${source.notes.join(' ')}`.trim(),
+    samplingNote(spread, options.members, options.seed, resampled),
     `historical warming to date: ${k(a.historicalWarmingK[0])} K [${k(a.historicalWarmingK[1])} to ${k(a.historicalWarmingK[2])}] (members' ${a.historicalPeriod[0]}-${a.historicalPeriod[1]} mean above 1850-1900; median [5-95 %])`,
-    `non-CO2 warming at net zero: ${k(a.nonCo2WarmingAtNetZeroK)} K in ${a.referenceNetZeroYear} in the central run along the ${options.limits[0]} K, 50 % budget pathway (every agent but CO2; the non-CO2 path is fixed, so a weaker non-CO2 mitigation shrinks every budget)`,
-    `zero-emissions commitment: CO2-only warming changes by ${k(a.zeroEmissionsCommitmentK[0])} K [${k(a.zeroEmissionsCommitmentK[1])} to ${k(a.zeroEmissionsCommitmentK[2])}] in the 50 years after net zero (${a.referenceNetZeroYear}) across the members; it is part of every member's peak`,
   ];
+  const ref = a.reference;
+  if (ref) {
+    const along = `the pathway of the ${ref.limitK} K, ${chanceText(ref.chance)} budget`;
+    notes.push(
+      `non-CO2 warming at net zero: ${k(ref.nonCo2WarmingAtNetZeroK)} K in ${ref.netZeroYear} (every agent but CO2), in the central run along ${along}; the non-CO2 path is fixed, so a weaker non-CO2 mitigation shrinks every budget`,
+      `zero-emissions commitment: CO2-only warming changes by ${k(ref.zeroEmissionsCommitmentK[0])} K [${k(ref.zeroEmissionsCommitmentK[1])} to ${k(ref.zeroEmissionsCommitmentK[2])}] across the members in the 50 years after net zero in ${ref.netZeroYear}, along ${along} with net CO2 held at zero from then on; ` +
+        (options.shape
+          ? "the shape's own net CO2 after its net zero (net-negative emissions, if any) is left out of this figure but is part of the budget runs"
+          : "it is part of every member's peak"),
+    );
+  } else {
+    notes.push('non-CO2 warming at net zero and zero-emissions commitment: not given, as no budget asked for is possible, so there is no budget pathway to read them along');
+  }
   if (fromYear > historyEnd + 1) notes.push(`net CO2 is held at the current rate from ${historyEnd + 1} to ${fromYear - 1}, before the budget starts`);
   for (const r of rows) {
-    if (!r.met) notes.push(`${r.limitK} K with ${Math.round(r.chance * 100)} % chance cannot be met: more than ${Math.round((1 - r.chance) * 100)} % of the members peak above it even if net CO2 fell to zero at once in ${fromYear}`);
-    else if (r.atLeast) notes.push(`${r.limitK} K with ${Math.round(r.chance * 100)} %: at least ${r.budgetGtco2.toFixed(0)} Gt CO2 (enough members stay below it with the latest net zero searched)`);
+    if (!r.met) notes.push(`${r.limitK} K with ${chanceText(r.chance)} chance cannot be met: more than ${chanceText(1 - r.chance)} of the members peak above it even if net CO2 fell to zero at once in ${fromYear}`);
+    else if (r.atLeast) notes.push(`${r.limitK} K with ${chanceText(r.chance)}: at least ${r.budgetGtco2.toFixed(0)} Gt CO2 (enough members stay below it with the latest net zero searched)`);
   }
   return notes;
+}
+
+/** How far the budgets would move with another draw of the members, one note. */
+function samplingNote(spread: BudgetSpread[], members: number, seed: number, resampled: boolean): string {
+  const per = spread
+    .map((s) => {
+      const where = `${s.limitK} K ${chanceText(s.chance)}`;
+      if (s.notPossibleShare >= 1) return `${where} not possible in every resample`;
+      const sd = `${where} ±${s.sdGtco2.toFixed(0)} Gt CO2`;
+      return s.notPossibleShare > 0 ? `${sd} and not possible in ${Math.round(100 * s.notPossibleShare)} % of resamples` : sd;
+    })
+    .join('; ');
+  const how = `sampling spread (1 standard deviation of each budget over ${SPREAD_REPLICATES} bootstrap resamples of the members' budgets)`;
+  return resampled
+    ? `${how}: these ${members} members are a random draw (seed ${seed}), so each budget moves with the seed, by about this from one draw to another: ${per}`
+    : `${how}: the ${members} members are a whole set taken in order, so the budgets do not depend on the seed; the set is itself a finite sample, and its budgets carry a sampling error of about: ${per}`;
 }

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { calibratedMemberSource, calibratedSetFromJson, priorMemberSource, representativeParams } from '../../src/ensemble/calibrated-set.js';
+import { calibratedMemberSource, calibratedSetFromJson, calibratedSetInOrder, priorMemberSource, representativeParams } from '../../src/ensemble/calibrated-set.js';
 import { readCalibratedSet } from '../../src/io/read-calibrated-set.js';
 import { ConfigError } from '../../src/errors.js';
 import { TWO_BOX_KEYS } from '../../src/ensemble/member-parameters.js';
@@ -28,6 +28,21 @@ describe('calibratedMemberSource', () => {
       const matches = Array.from({ length: set.count }, (_, k) => k).filter((k) => Object.keys(set.members).every((key) => set.members[key]![k] === parameters.values[key]![r]));
       expect(matches.length).toBeGreaterThan(0);
     }
+  });
+});
+
+describe('calibratedSetInOrder', () => {
+  it('gives set member i as member i, the same for every seed, and refuses to go past the set', () => {
+    const source = calibratedSetInOrder(set);
+    const all = source.draw(1, 0, set.count).parameters;
+    const other = source.draw(99, 0, set.count).parameters;
+    expect(all.count).toBe(set.count);
+    for (const key of Object.keys(set.members)) {
+      expect(Array.from(all.values[key]!)).toEqual(Array.from(set.members[key]!));
+      expect(Array.from(other.values[key]!)).toEqual(Array.from(set.members[key]!));
+    }
+    expect(Array.from(source.draw(1, 10, 20).parameters.values.feedback_wm2k)).toEqual(Array.from(set.members.feedback_wm2k.subarray(10, 20)));
+    expect(() => source.draw(1, 0, set.count + 1)).toThrow(ConfigError);
   });
 });
 

@@ -1,5 +1,17 @@
 import { describe, expect, it } from 'vitest';
-import { remainingBudget, straightLineDecline, straightLineFamily, stretchedShapeFamily, type BudgetMember } from '../../src/metrics/remaining-budget.js';
+import { xoroshiro128plus } from 'pure-rand/generator/xoroshiro128plus';
+import { uniformFloat64 } from 'pure-rand/distribution/uniformFloat64';
+import { normalQuantile } from '../../src/ensemble/normal-quantile.js';
+import {
+  BUDGET_TOLERANCE_GTCO2,
+  budgetSamplingSpread,
+  remainingBudget,
+  straightLineDecline,
+  straightLineFamily,
+  stretchedShapeFamily,
+  type BudgetMember,
+  type RemainingBudget,
+} from '../../src/metrics/remaining-budget.js';
 import { expectClose } from '../asserts.js';
 
 const years = Float64Array.from({ length: 2300 - 1750 + 1 }, (_, i) => 1750 + i);
@@ -37,7 +49,8 @@ describe('remainingBudget on constructed members (TCRE relation, AR6 WG1 SPM D.1
   it('one member: budget = (limit - historical - non-CO2) / TCRE, by hand', () => {
     // 1.1 K to date, TCRE 0.45 K per 1000 Gt CO2 (AR6 central value), 0.1 K non-CO2: (1.5 - 1.2) / 0.00045 = 666.7 Gt CO2.
     const r = remainingBudget([tcreMember(1.1, 0.00045, 0.1)], straightLineFamily(40, fromYear, 200), { years, fromYear, limits: [1.5], chances: [0.5] });
-    expectClose(r.rows[0].budgetGtco2, 0.3 / 0.00045, 0.5, 'budget, Gt CO2 (bisection to 0.01 yr at 40 Gt/yr = 0.2 Gt)');
+    expectClose(r.rows[0].budgetGtco2, 0.3 / 0.00045, BUDGET_TOLERANCE_GTCO2, 'budget, Gt CO2 (found to the stated tolerance)');
+    expect(r.rows[0].budgetGtco2).toBeLessThanOrEqual(0.3 / 0.00045 + 1e-9);
     // Net zero of the straight line that spends it: 2025 + 2 x 666.7 / 40 = 2058.3 -> reached during 2058.
     expect(r.rows[0].netZeroYear).toBe(2058);
   });
@@ -85,5 +98,66 @@ describe('remainingBudget on constructed members (TCRE relation, AR6 WG1 SPM D.1
 
   it('a shape that never reaches net zero is refused', () => {
     expect(() => stretchedShapeFamily([40, 30, 20], fromYear, [0.1, 5])).toThrow(/never reaches zero/);
+  });
+});
+
+describe('remainingBudget: brackets shared between limits', () => {
+  it('several limits give each the budget of that limit alone (TCRE relation, AR6 WG1 SPM D.1)', () => {
+    const member = tcreMember(1.1, 0.00045, 0.1);
+    const together = remainingBudget([member], straightLineFamily(40, fromYear, 200), { years, fromYear, limits: [1.5, 1.7, 2], chances: [0.5] });
+    for (const [i, limit] of [1.5, 1.7, 2].entries()) {
+      expectClose(together.rows[i].budgetGtco2, (limit - 1.2) / 0.00045, BUDGET_TOLERANCE_GTCO2, `${limit} K`);
+      expect(together.rows[i].x).toBeCloseTo((2 * together.rows[i].budgetGtco2) / 40, 9);
+    }
+  });
+});
+
+describe('budgetSamplingSpread (bootstrap, Efron 1979)', () => {
+  /** A result whose n members' budgets are the n quantiles of a normal distribution, mean 1000 and sd 100 Gt CO2. */
+  function normalBudgets(n: number, chances: number[]): { result: RemainingBudget; family: ReturnType<typeof straightLineFamily> } {
+    const family = straightLineFamily(40, fromYear, 200);
+    // Cumulative CO2 = 20 x along this family, so x = budget / 20.
+    const xs = Array.from({ length: n }, (_, i) => (1000 + 100 * normalQuantile((i + 0.5) / n)) / 20);
+    const result: RemainingBudget = {
+      members: [xs.map((x) => ({ x, status: 'found' as const }))],
+      rows: chances.map((chance) => ({ limitK: 2, chance, budgetGtco2: NaN, netZeroYear: NaN, x: NaN, met: true, atLeast: false })),
+    };
+    return { result, family };
+  }
+
+  it('the spread of a quantile matches its asymptotic standard error sqrt(p (1 - p) / n) / f(q) (Serfling 1980, sect. 2.3; from memory)', () => {
+    const n = 400;
+    const { result, family } = normalBudgets(n, [0.5, 0.83]);
+    const rng = xoroshiro128plus(42);
+    const spread = budgetSamplingSpread(result, family, 1000, () => uniformFloat64(rng));
+    const density = (z: number) => Math.exp(-0.5 * z * z) / Math.sqrt(2 * Math.PI) / 100;
+    for (const [j, chance] of [0.5, 0.83].entries()) {
+      const p = 1 - chance;
+      const asymptotic = Math.sqrt((p * (1 - p)) / n) / density(normalQuantile(p));
+      // The members are exact normal quantiles, not a random sample, so what remains is the noise of
+      // 1000 resamples (about 2 %) and a quantile's discreteness; 20 % is allowed (a factor sqrt(2) would fail).
+      expectClose(spread[j].sdGtco2, asymptotic, 0.2 * asymptotic, `chance ${chance}: ${asymptotic.toFixed(1)} Gt CO2`);
+      expect(spread[j].notPossibleShare).toBe(0);
+    }
+  });
+
+  it('shrinks as 1 / sqrt(n): four times the members, half the spread (Serfling 1980; from memory)', () => {
+    const sd = (n: number) => {
+      const { result, family } = normalBudgets(n, [0.5]);
+      const rng = xoroshiro128plus(7);
+      return budgetSamplingSpread(result, family, 1000, () => uniformFloat64(rng))[0].sdGtco2;
+    };
+    expectClose(sd(400) / sd(1600), 2, 0.3, 'ratio');
+  });
+
+  it('counts the resamples in which a budget is not possible', () => {
+    // 10 members exceed the limit at once and 10 keep below it: the median is possible in about half the resamples.
+    const family = straightLineFamily(40, fromYear, 200);
+    const members = [...Array(10).fill({ x: -Infinity, status: 'exceeded' }), ...Array.from({ length: 10 }, (_, i) => ({ x: 10 + i, status: 'found' as const }))];
+    const result: RemainingBudget = { members: [members], rows: [{ limitK: 1.5, chance: 0.5, budgetGtco2: NaN, netZeroYear: NaN, x: -Infinity, met: false, atLeast: false }] };
+    const rng = xoroshiro128plus(3);
+    const [s] = budgetSamplingSpread(result, family, 2000, () => uniformFloat64(rng));
+    // The median of 20 draws rests on order statistic floor(19 / 2) = 9: -Infinity when 10 or more draws are -Infinity, P = 0.588 (binomial, by hand).
+    expectClose(s.notPossibleShare, 0.588, 0.04, 'share not possible (2000 resamples: +/- 2 binomial sd)');
   });
 });
