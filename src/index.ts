@@ -35,7 +35,7 @@ export { AR6_SAMPLING, ar6Members, mergeShards, runEnsemble, shardFromJson, shar
 export type { EnsembleInput, EnsembleOptions, EnsembleResult, EnsembleSampling, MemberSource } from './ensemble/index.js';
 // The calibrated parameter set (pathways/calibrated-members.json): the CLI's default ensemble members
 // and, through representativeParams, its default single-run model.
-export { calibratedMemberSource, priorMemberSource, representativeParams } from './ensemble/calibrated-set.js';
+export { calibratedMemberSource, calibratedSetInOrder, priorMemberSource, representativeParams } from './ensemble/calibrated-set.js';
 export type { CalibratedSet } from './ensemble/calibrated-set.js';
 export { readCalibratedSet } from './io/read-calibrated-set.js';
 

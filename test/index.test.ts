@@ -7,7 +7,7 @@ import { calibrate, ensembleInput, forcingByAgent, loadPathway, projectPathway, 
 // The intended library surface (DEVELOPERS.md, "The library surface"): adding or removing a name is a
 // deliberate change to one of these lists.
 const VALUES = [
-  'AR6_SAMPLING', 'ar6Members', 'calibratedMemberSource', 'COLUMN_UNITS', 'priorMemberSource', 'readCalibratedSet', 'representativeParams', 'ConfigError', 'FORCING_AGENTS', 'InputError', 'NumericalError', 'PATHWAY_COLUMNS', 'WarmcastError', 'EMITTED_SPECIES',
+  'AR6_SAMPLING', 'ar6Members', 'calibratedMemberSource', 'calibratedSetInOrder', 'COLUMN_UNITS', 'priorMemberSource', 'readCalibratedSet', 'representativeParams', 'ConfigError', 'FORCING_AGENTS', 'InputError', 'NumericalError', 'PATHWAY_COLUMNS', 'WarmcastError', 'EMITTED_SPECIES',
   'calibrate', 'ch4ErfAr6', 'co2ErfAr6', 'comparePathways', 'comparisonDocument', 'crossingPeriod', 'ensembleDocument', 'OUTPUT_FORMATS', 'renderDocument', 'runDocument',
   'cumulativeToNetZero', 'diagnoseEmissions', 'energyBalance', 'ensembleInput', 'forcingByAgent', 'formatInputProblem',
   'gtcToGtco2', 'gtco2ToGtc', 'listBundledPathways', 'loadHistory', 'loadPathway', 'mergeShards', 'n2oErfAr6',

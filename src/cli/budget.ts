@@ -6,6 +6,7 @@ import type { ReadPathwayResult } from '../io/load-pathway.js';
 import { carbonBudget } from '../projection/carbon-budget.js';
 import { BUDGET_UNCERTAINTY, budgetDocument, standardCautions } from '../report/index.js';
 import type { CliIo } from './cli-io.js';
+import { progressBar } from './progress.js';
 import { absentEmissionsOption, cautionsHelp, numberListOption, resolveModelParams, wholeNumberOption, yearOption } from './options.js';
 import { announceWritten, checkOutExtension, pathwayInputs, printDocument, writeDocument } from './output.js';
 import { addScenarioOptions, readPathwayArgs, type ScenarioOptions } from './scenario-options.js';
@@ -115,6 +116,7 @@ export function budgetCommand(io: CliIo): Command {
         forcingScale,
         source,
         shape,
+        onProgress: progressBar(io, 'members', 500),
       });
       const pathNotes = nonCo2PathNotes(nonCo2Read, args[0], Boolean(opts.shape && !opts.nonCo2), fromYear);
       if (shapeRead && opts.nonCo2) pathNotes.push(...shapeFileNotes(shapeRead, opts.shape!, fromYear));

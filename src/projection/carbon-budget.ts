@@ -54,6 +54,8 @@ export interface CarbonBudgetOptions {
   forcingScale?: Partial<Record<ForcingAgent, number>>;
   /** Last year run (default: 250 years after fromYear, so a late net zero still shows its peak). */
   endYear?: number;
+  /** Called as the members' searches go (members started so far, members), for a progress bar. */
+  onProgress?: (done: number, total: number) => void;
   /**
    * The user's own net CO2 shape (Gt CO2 per calendar year from fromYear on), stretched in time
    * instead of the straight-line decline (`warmcast budget --shape`).
@@ -209,7 +211,15 @@ export function carbonBudget(nonCo2: Pathway, options: CarbonBudgetOptions): Car
     const w = runMembers({ ...task, carbon: { ...carbon, co2: { ...carbon.co2, emissionGtc: emission } } }, blocks[r], undefined, co2Out);
     return rebase(pathway.years, w, baseline, `member ${r}`);
   };
-  for (let r = 0; r < parameters.count; r++) members.push({ warming: (future) => runOne(r, future) });
+  const progress = options.onProgress;
+  for (let r = 0; r < parameters.count; r++) {
+    members.push({
+      warming: (future) => {
+        progress?.(r + 1, parameters.count);
+        return runOne(r, future);
+      },
+    });
+  }
   const result = remainingBudget(members, family, { years: pathway.years, fromYear, limits: options.limits, chances: options.chances });
 
   // The pathway of the first possible budget asked for (a found one before a lower bound), with net

@@ -59,6 +59,7 @@ export function budgetDocument(r: CarbonBudget, options: { notes: string[]; shap
         values: limits.map((l) => (cell(l, c, 'budget') === 'not possible' ? 'not possible' : `${cell(l, c, 'budget')} (${cell(l, c, 'year').replace('>= ', '')})`)),
       })),
     ],
+    terminalOverflow: 'wrap',
   };
   const a = r.assumptions;
   const budgets = grid('budget', `Remaining CO2 budget from 1 January ${r.fromYear}, Gt CO2, by chance of keeping peak warming at or below the limit`);

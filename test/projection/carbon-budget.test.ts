@@ -82,3 +82,15 @@ describe('carbonBudget refusals', () => {
     expect(r.notes.join('\n')).toMatch(/ends in 2150: its 2150 values are held to 2275/);
   });
 });
+
+describe('carbonBudget progress', () => {
+  it('reports each member as its search starts, ending at all of them (for the CLI progress bar)', () => {
+    const seen: number[] = [];
+    carbonBudget(nonCo2, { ...base, onProgress: (done, total) => {
+      expect(total).toBe(24);
+      seen.push(done);
+    } });
+    expect(Math.max(...seen)).toBe(24);
+    expect(seen.every((d, i) => i === 0 || d >= seen[i - 1])).toBe(true);
+  });
+});
