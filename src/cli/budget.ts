@@ -1,4 +1,4 @@
-import { Command } from 'commander';
+import { Command, Option } from 'commander';
 import { calibratedMemberSource, calibratedSetInOrder, priorMemberSource } from '../ensemble/calibrated-set.js';
 import { ConfigError } from '../errors.js';
 import { readCalibratedSet } from '../io/read-calibrated-set.js';
@@ -64,8 +64,12 @@ function refuseRepeats(option: string, values: number[]): void {
 export function budgetCommand(io: CliIo): Command {
   const cmd = new Command('budget')
     .description('remaining CO2 budget (Gt CO2) that keeps peak warming at or below each limit with each chance, and the net-zero year of a straight-line decline that spends it')
-    .option('--limit <K,...>', 'warming limits, K above 1850-1900', numberListOption('--limit'), [1.5, 2])
-    .option('--chance <p,...>', 'chances of staying at or below each limit, all per cents (50,67,83) or all fractions (0.5,0.67); a list mixing the two is refused', numberListOption('--chance'), [50, 67, 83])
+    .addOption(new Option('--limit <K,...>', 'warming limits, K above 1850-1900').argParser(numberListOption('--limit')).default([1.5, 2], '1.5,2'))
+    .addOption(
+      new Option('--chance <p,...>', 'chances of staying at or below each limit, all per cents (50,67,83) or all fractions (0.5,0.67); a list mixing the two is refused')
+        .argParser(numberListOption('--chance'))
+        .default([50, 67, 83], '50,67,83'),
+    )
     .option('--from <year>', 'count the budget from 1 January of this year (default: the first year after the history)', yearOption)
     .option('--non-co2 <file>', `non-CO2 emissions (and other forcing) the budget assumes (default: the bundled ${DEFAULT_NON_CO2} path)`)
     .option(
