@@ -69,3 +69,40 @@ describe('co2UnitProblem and the "# co2-jump: intended" line', () => {
     }
   });
 });
+
+describe('co2UnitProblem: a global pathway does not start at a tenth or at ten times the world\'s CO2 (common practice, no source)', () => {
+  const write = async (name: string, text: string) => {
+    const { mkdtempSync, writeFileSync } = await import('node:fs');
+    const { tmpdir } = await import('node:os');
+    const { join } = await import('node:path');
+    const path = join(mkdtempSync(join(tmpdir(), 'warmcast-jump-')), name);
+    writeFileSync(path, text);
+    return path;
+  };
+  const opts = { absentEmissions: { kind: 'hold' } as const };
+  const codeOf = (path: string, more = {}) => {
+    try {
+      loadPathway(path, { ...opts, ...more });
+    } catch (e) {
+      return (e as InputError).problems[0].code;
+    }
+    return undefined;
+  };
+
+  it('refuses a first value 9 times the record (a country\'s Mt typed as Gt), naming the likely slip', async () => {
+    const path = await write('up.csv', 'year,co2_gtco2,ch4_mt,n2o_mt\n2025,400,2,0.1\n2050,0,1,0.1\n');
+    expect(codeOf(path)).toBe('input.co2-jump-up');
+    expect(codeOf(path, { co2JumpIntended: true })).toBeUndefined();
+  });
+  it("refuses a first value of 1/100 of the record (a country's emissions read as the world's)", async () => {
+    const path = await write('down.csv', 'year,co2_gtco2,ch4_mt,n2o_mt\n2025,0.4,2,0.1\n2050,0,1,0.1\n');
+    expect(codeOf(path)).toBe('input.co2-jump-down');
+    const r = await runCli(['run', path, '--absent-emissions', 'hold', '--no-chart']);
+    expect(r.code).toBe(2);
+    expect(r.err).toMatch(/looks like a country's or a sector's emissions/);
+  });
+  it('accepts an immediate stop (0 in the first year) and a file that starts more than 5 years after the record', async () => {
+    expect(codeOf(await write('stop.csv', 'year,co2_gtco2,ch4_mt,n2o_mt\n2025,0,300,9\n2050,0,250,9\n'))).toBeUndefined();
+    expect(codeOf(await write('late.csv', 'year,co2_gtco2,ch4_mt,n2o_mt\n2035,5,300,9\n2060,0,250,9\n'))).toBeUndefined();
+  });
+});
