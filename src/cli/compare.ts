@@ -8,7 +8,7 @@ import { comparePathways, pairedDifferenceRange, type PathwayWarming } from '../
 import { runEnsemble } from '../ensemble/index.js';
 import { memberSource } from './member-source.js';
 import { ensembleInput, projectPathway } from '../projection/index.js';
-import { comparisonDocument, ensembleWarming, scopedNotes, standardCautions, thresholdBaselineNote, type ScopedNote } from '../report/index.js';
+import { CALIBRATED_SET_CAUTION, comparisonDocument, ensembleWarming, scopedNotes, standardCautions, thresholdBaselineNote, type ScopedNote } from '../report/index.js';
 import type { CliIo } from './cli-io.js';
 import { addScenarioOptions, readPathwayArgs, type ScenarioOptions } from './scenario-options.js';
 import { addModelOptions, baselineOption, cautionsHelp, type ModelOptions, pathwayArg, resolveModelParams, thresholdsOption, wholeNumberOption, absentEmissionsOption, co2JumpOption } from './options.js';
@@ -50,7 +50,7 @@ export function compareCommand(io: CliIo): Command {
       'after',
       '\nExamples:\n  warmcast compare steady delayed swift\n  warmcast compare scenarios.xlsx --scenario Quick --scenario Slow\n  warmcast compare now=steady plan=swift --years 2030,2050,2100 --out table.md\n' +
         '  warmcast compare steady delayed swift --labels S,D,W --members 500 --out report.html\n' +
-        cautionsHelp(standardCautions()),
+        cautionsHelp(standardCautions(`Without --members each option is one central run, with no range; with it, ranges are the spread of the members' parameters only, not the pathway or the model structure. ${CALIBRATED_SET_CAUTION}`)),
     )
     .action(async (args: string[], opts: CompareOptions) => {
       if (opts.members !== undefined) {

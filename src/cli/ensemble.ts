@@ -8,7 +8,7 @@ import { writeFilesAtomic } from '../io/index.js';
 import { isBatchShardFile, mergeBatchFiles } from './batch.js';
 import { addScenarioOptions, readPathwayArgs, type ScenarioOptions } from './scenario-options.js';
 import { ensembleInput } from '../projection/index.js';
-import { ensembleDocument, standardCautions, thresholdBaselineNote } from '../report/index.js';
+import { CALIBRATED_SET_CAUTION, ensembleDocument, standardCautions, thresholdBaselineNote } from '../report/index.js';
 import type { CliIo } from './cli-io.js';
 import { baselineOption, cautionsHelp, refuseOptions, resolveModelParams, thresholdsOption, wholeNumberOption, type RefusedOption, absentEmissionsOption, co2JumpOption } from './options.js';
 import { addReportOptions, announceWritten, observedRecord, pathwayInputs, printDocument, rowChoice, writeDocument, type ReportOptions } from './output.js';
@@ -46,7 +46,8 @@ function uncertaintyText(r: EnsembleResult): string {
       : 'whose ECS, TCR, 2xCO2 forcing and aerosol forcing were drawn to match the IPCC AR6 assessed ranges, not constrained by observed warming';
   return (
     `Ranges are the 5-95 % and 17-83 % spread of ${r.memberCount} members ${drawn}.${carbon} They do not include uncertainty in the pathway, ` +
-    'year-to-year internal variability, or model structure beyond these parameters.'
+    'year-to-year internal variability, or model structure beyond these parameters.' +
+    (scheme.startsWith('calibrated set') ? ` ${CALIBRATED_SET_CAUTION}` : '')
   );
 }
 
@@ -213,8 +214,10 @@ const NOT_RECORDED = "the pathway's name, input files and notes were not recorde
 
 /** What the cautions say about an ensemble's ranges, in --help (the files carry the run's own text). */
 const UNCERTAINTY_HELP =
-  'Ranges are the 5-95 % and 17-83 % spread of members whose ECS, TCR, 2xCO2 forcing and aerosol forcing were drawn to match the IPCC AR6 ' +
-  'assessed ranges; they do not include uncertainty in the pathway or in the model structure, and they are not constrained by observed warming.';
+  'Ranges are the 5-95 % and 17-83 % spread of members drawn from the calibrated parameter set (two-box physics, forcing multipliers and ' +
+  'carbon cycle from a broad prior, weighted by the observed warming, ocean heat uptake, carbon sinks and AR6 aerosol forcing), or with --prior ' +
+  'from that prior unweighted; they do not include uncertainty in the pathway, internal variability or the model structure. ' +
+  CALIBRATED_SET_CAUTION;
 
 /** Writes an ensemble's files (if asked) and prints its headline, table and chart. */
 async function emitEnsemble(

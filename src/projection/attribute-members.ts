@@ -28,6 +28,8 @@ export interface AttributionRanges {
   /** The same for each member's whole warming (the sum of its parts). */
   total: PartRange;
   members: number;
+  /** Where the members came from (MemberSource.scheme, e.g. `calibrated set ...`). */
+  scheme: string;
   notes: string[];
 }
 
@@ -92,6 +94,7 @@ export function attributeMembers(
     total: partRanges({ total }, m, n).total,
     ...(speciesParts ? { bySpecies: partRanges(speciesParts, m, n) } : {}),
     members: m,
+    scheme: source.scheme,
     notes: [...notes, `ranges: 5-95 % of ${m} members (seed ${options.seed}); ${source.notes.join(' ')}`.trim()],
   };
 }

@@ -4,7 +4,7 @@ import type { AttributionRanges, PartRange } from '../projection/attribute-membe
 import type { AttributedProjection } from '../projection/attribute-pathway.js';
 import type { OutputDocument } from './output-document.js';
 import type { OutputColumn, OutputTable } from './output-table.js';
-import { shortCaution, standardCautions } from './standard-cautions.js';
+import { CALIBRATED_SET_CAUTION, shortCaution, standardCautions } from './standard-cautions.js';
 import type { ChartLine } from './terminal-chart.js';
 
 /** What an attribution document shows besides the result. */
@@ -125,7 +125,7 @@ export function attributionDocument(r: AttributedProjection, options: Attributio
     terminalChart: { series, options: { title: `Warming by agent, ${p.name} (K)`, yLabel: 'K', height: 10 } },
     notes: options.notes,
     ...(r.speciesSkipped ? { terminalNotes: [r.speciesSkipped] } : {}),
-    cautions: standardCautions(ranges ? `Ranges are the 5-95 % spread of ${ranges.members} members; they cover the members' parameters only, not the pathway or the model structure.` : undefined),
+    cautions: standardCautions(ranges ? `Ranges are the 5-95 % spread of ${ranges.members} members; they cover the members' parameters only, not the pathway or the model structure.${ranges.scheme.startsWith('calibrated set') ? ` ${CALIBRATED_SET_CAUTION}` : ''}` : undefined),
     shortCaution: shortCaution('attribute', Boolean(ranges)),
   };
 }

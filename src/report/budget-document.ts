@@ -2,13 +2,14 @@ import { chanceText, type CarbonBudget } from '../projection/carbon-budget.js';
 import type { OutputDocument } from './output-document.js';
 import type { OutputTable } from './output-table.js';
 import { kelvin } from './format-numbers.js';
-import { shortCaution, standardCautions } from './standard-cautions.js';
+import { CALIBRATED_SET_CAUTION, shortCaution, standardCautions } from './standard-cautions.js';
 
 /** What the chances of a budget cover, for its cautions. */
 export const BUDGET_UNCERTAINTY =
   'The chances come from the spread of the ensemble members\' climate response and carbon cycle only: the non-CO2 path is one assumed path, ' +
   'the CO2 pathway family one shape, and the model structure one model. Budgets are very sensitive to the non-CO2 assumption and to warming to date; ' +
-  'compare with the remaining carbon budgets the IPCC assesses before quoting them.';
+  'compare with the remaining carbon budgets the IPCC assesses before quoting them. ' +
+  CALIBRATED_SET_CAUTION;
 
 /**
  * The output document of `warmcast budget`: the table `limit_k, chance, budget_gtco2, net_zero_year`

@@ -28,7 +28,7 @@ export { runDocument } from './run-document.js';
 export type { RunDocumentOptions } from './run-document.js';
 export { scopedNotes } from './scoped-notes.js';
 export type { ScopedNote } from './scoped-notes.js';
-export { shortCaution, standardCautions } from './standard-cautions.js';
+export { CALIBRATED_SET_CAUTION, shortCaution, standardCautions } from './standard-cautions.js';
 export { svgChart } from './svg-chart.js';
 export type { ChartBand, SvgChartOptions } from './svg-chart.js';
 export { terminalChart } from './terminal-chart.js';

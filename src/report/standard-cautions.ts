@@ -20,6 +20,16 @@ export function standardCautions(uncertainty?: string): string[] {
 }
 
 /**
+ * What every range drawn from the calibrated set carries (src/ensemble/CALIBRATION.md): the set is
+ * narrower than IPCC AR6's assessed ranges and probably leans low in sensitivity, since its
+ * likelihood has no pattern-effect or model-error term. `--prior` gives the unconstrained spread.
+ */
+export const CALIBRATED_SET_CAUTION =
+  "The calibrated set's ranges are narrower than the IPCC AR6 assessed ranges (its TCR and ECS sit in the lower part of AR6's likely ranges) " +
+  'and probably lean low in sensitivity: its fit to the observed record has no pattern-effect or model-error term. Read its probabilities as ' +
+  'narrower than the real uncertainty; --prior shows the spread before the record is used.';
+
+/**
  * The one caution line a terminal prints under the results, pointing to the full cautions, which
  * every file and `--help` carry.
  *
@@ -30,7 +40,7 @@ export function standardCautions(uncertainty?: string): string[] {
 export function shortCaution(command: string, ranged: boolean): string {
   return (
     (ranged
-      ? 'reduced-complexity global-mean estimates; ranges cover sampled model parameters only, not the pathway or the model structure'
+      ? 'reduced-complexity global-mean estimates; ranges cover model parameters only, not the pathway or the model structure, and are narrower than AR6\'s'
       : 'a reduced-complexity global-mean estimate from one set of parameters, with no range') +
     `; read the full cautions (warmcast ${command} --help, or any output file) before using these numbers`
   );

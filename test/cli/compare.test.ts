@@ -97,7 +97,7 @@ describe('warmcast compare', () => {
     expect(c.peak).toEqual(e.peak);
     expect(c.crossings).toEqual(e.crossings);
     expect(c.atYears).toEqual(e.atYears);
-    expect(cmp.out).toMatch(/^ {2}caution: .*ranges cover sampled model parameters only/m);
+    expect(cmp.out).toMatch(/^ {2}caution: .*ranges cover model parameters only/m);
   });
 
   it('--years are put in order once each, and a year outside the pathways is refused with exit 2', async () => {
