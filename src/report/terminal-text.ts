@@ -40,8 +40,9 @@ export function terminalText(doc: OutputDocument, options: TerminalTextOptions =
     // A long headline line wraps under its text, keeping its label ('  warming   ') as the lead.
     for (const l of headlineLines(doc.headline[0], doc.baseline)) out.push(...(l.length <= width ? [l] : wrap(l.slice(12), width, l.slice(0, 12))));
   } else if (doc.headline.length > 1) {
+    // The headline is the answer (warming, peaks, crossing years): on a narrow terminal it wraps rather than hide a column.
     const t = headlineTable(doc.headline, doc.baseline, true);
-    out.push(...plainTable({ ...t, notes: [] }, width));
+    out.push(...plainTable({ ...t, notes: [], terminalOverflow: 'wrap' }, width));
   }
   for (const [i, t] of doc.tables.slice(0, doc.terminalTables ?? 1).entries()) {
     if (i > 0 || doc.headline.length > 0) out.push('');
