@@ -30,7 +30,7 @@ describe('terminal output at COLUMNS=120 (issue 16 checks)', () => {
     expect(lines.join(' ')).toMatch(/warmcast run --help, or any output file/);
   });
 
-  it('compare of three bundled pathways: at most 55 lines, none over 120 characters; with long names and members still within 120', async () => {
+  it('compare of three bundled pathways: at most 55 lines, none over 120 characters; with long names and members still within 120 characters and 60 lines', async () => {
     const lines = await terminal(['compare', 'steady', 'delayed', 'swift'], 120);
     console.info(`compare of three: ${lines.length} lines, widest ${widest(lines)}`);
     expect(lines.length).toBeLessThanOrEqual(55);
@@ -38,7 +38,9 @@ describe('terminal output at COLUMNS=120 (issue 16 checks)', () => {
     const ranged = await terminal(['compare', 'A policy option with a long name=steady', 'Another long option name=delayed', 'swift', '--members', '40'], 120);
     console.info(`compare of three with members and long names: ${ranged.length} lines, widest ${widest(ranged)}`);
     expect(widest(ranged)).toBeLessThanOrEqual(120);
-    expect(ranged.length).toBeLessThanOrEqual(55);
+    // Long names push the headline's crossing-year columns past 120 characters; they wrap into a
+    // second block (6 lines) rather than hide, so this case has 5 lines more than the bundled one.
+    expect(ranged.length).toBeLessThanOrEqual(60);
   });
 
   it('at 80 columns, and at the 100 used when piped, every command still fits', async () => {
