@@ -286,10 +286,11 @@ function batchNotes(thresholds: number[]): string[] {
 function agreementNote(outcome: BatchOutcome): string {
   const below = outcome.rows.filter((r) => r.categoryAgreement < UNCERTAIN_AGREEMENT).length;
   if (below === 0) return `every scenario's category is given by at least ${Math.round(UNCERTAIN_AGREEMENT * 100)} % of ${CATEGORY_RESAMPLES} bootstrap resamples of its members (category_agreement): no category marked "?"`;
+  const n = outcome.rows.length;
   return (
-    `${below} of ${outcome.rows.length} scenario${outcome.rows.length === 1 ? '' : 's'} ha${below === 1 ? 's' : 've'} a category marked "?": ` +
-    `fewer than ${Math.round(UNCERTAIN_AGREEMENT * 100)} % of ${CATEGORY_RESAMPLES} bootstrap resamples of its members give the same category (category_agreement), ` +
-    'so a rerun with another seed or member count may move it to a neighbouring category; quote it with that caution'
+    `${below} of ${n} scenario${n === 1 ? '' : 's'} ${below === 1 ? 'has its' : 'have their'} category marked "?" (category_agreement below ${UNCERTAIN_AGREEMENT}: ` +
+    `fewer than ${Math.round(UNCERTAIN_AGREEMENT * 100)} % of ${CATEGORY_RESAMPLES} bootstrap resamples of the members give the same category); ` +
+    'a rerun with another seed or member count may move such a scenario to a neighbouring category, so quote it with that caution'
   );
 }
 
