@@ -179,12 +179,14 @@ export async function emitBatch(outcome: BatchOutcome, ctx: { settings: BatchSet
   const errorList = outcome.errors.map((e) => ({ model: e.model, scenario: e.scenario, code: e.code, problems: batchErrorLines(e) }));
   const rows = outcome.rows;
   const counts = AR6_WARMING_CATEGORIES.map((c) => [c.code, rows.filter((r) => r.category === c.code).length] as const).filter(([, n]) => n > 0);
+  const uncertain = rows.filter((r) => r.categoryAgreement < UNCERTAIN_AGREEMENT).length;
   const summary = batchSummaryTable(outcome, settings.thresholds);
   const doc = batchDocument({
     title: `warmcast batch: ${settings.table.path}`,
     subtitle:
       `${rows.length} scenario${rows.length === 1 ? '' : 's'} assessed, ${settings.members} members each (seed ${settings.seed}); warming relative to ${settings.baseline.join('-')}; peak over ${PEAK_YEARS.join('-')}. ` +
-      `AR6 WG3 categories: ${counts.map(([c, n]) => `${c} ${n}`).join(', ')}`,
+      `AR6 WG3 categories: ${counts.map(([c, n]) => `${c} ${n}`).join(', ')}` +
+      (uncertain > 0 ? `; ${uncertain} marked "?" (category_agreement below ${UNCERTAIN_AGREEMENT})` : ''),
     baseline: settings.baseline,
     data: summary,
     // Markdown and HTML show the short table, then every column (as the previous Markdown summary did), then the failures.
