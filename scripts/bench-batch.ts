@@ -4,10 +4,13 @@
 // second of wall time and of CPU time, and the projected wall time for 1,000 scenarios x 600
 // members (target: under 3 minutes on a 2-core machine). Wall time depends on what else the machine
 // runs: the load average is printed beside it, and CPU time per scenario-member is the steadier figure.
+// The category bootstrap (category_agreement, part of every row) is also timed alone on the same
+// number of 600-member scenarios, as a share of the batch's CPU time (target: under 10 %).
 //
 // Try: npm run bench:batch             (or: node dist/scripts/bench-batch.js --scenarios 20 --workers 1)
 import { availableParallelism, loadavg } from 'node:os';
 import { performance } from 'node:perf_hooks';
+import { categoryAgreement, categoryBootstrapRandom, CATEGORY_RESAMPLES } from '../src/batch/category-agreement.js';
 import { runBatch } from '../src/batch/run-batch.js';
 import { calibrate } from '../src/climate/calibrate.js';
 import { batchScenario } from '../src/cli/batch-scenario.js';
@@ -48,3 +51,12 @@ if (JSON.stringify(alone.rows) !== JSON.stringify(outcome.rows.slice(0, 3))) thr
 console.log(`${scenarioCount} scenarios x ${members} members, ${years} years each (emission-driven), ${workers} thread${workers === 1 ? '' : 's'}; load average ${loadavg()[0].toFixed(1)} on ${availableParallelism()} cores`);
 console.log(`wall ${wallS.toFixed(1)} s: ${perWall.toFixed(0)} scenario-members/s; projected 1,000 x 600: ${(target / perWall).toFixed(0)} s`);
 console.log(`CPU ${cpuS.toFixed(1)} s: ${perCpu.toFixed(0)} scenario-members per CPU-second; 1,000 x 600 is ${(target / perCpu).toFixed(0)} CPU-s, ${(target / perCpu / availableParallelism()).toFixed(0)} s on ${availableParallelism()} idle cores`);
+
+// The bootstrap alone, on members whose peaks straddle 2 K (every category test runs on each resample).
+const peak = Float64Array.from({ length: members }, (_, i) => 1.6 + (0.8 * i) / members);
+const end = Float64Array.from(peak, (p) => p - 0.2);
+const boot0 = process.cpuUsage();
+for (let s = 0; s < scenarioCount; s++) categoryAgreement(peak, end, 'C4', CATEGORY_RESAMPLES, categoryBootstrapRandom(s));
+const bootCpu = process.cpuUsage(boot0);
+const bootS = (bootCpu.user + bootCpu.system) / 1e6;
+console.log(`category bootstrap (${CATEGORY_RESAMPLES} resamples per scenario): ${bootS.toFixed(2)} CPU-s for ${scenarioCount} scenarios, ${((100 * bootS) / cpuS).toFixed(1)} % of the batch's CPU time (target: under 10 %)`);

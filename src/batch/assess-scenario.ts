@@ -4,6 +4,7 @@ import { cumulativeToNetZero } from '../metrics/cumulative-to-net-zero.js';
 import { quantilesInPlace } from '../numerics/quantiles.js';
 import type { Pathway } from '../pathway.js';
 import { ensembleInput } from '../projection/index.js';
+import { categoryAgreement, categoryBootstrapRandom, CATEGORY_RESAMPLES } from './category-agreement.js';
 import { categoryEvidence, warmingCategory } from './warming-category.js';
 
 /** The percentiles a batch reports for peak warming and 2100 warming, and their names. */
@@ -52,6 +53,12 @@ export interface ScenarioAssessment {
   /** AR6 WG3 warming category code (C1-C8) and its name. */
   category: string;
   categoryName: string;
+  /**
+   * Share of CATEGORY_RESAMPLES bootstrap resamples of the members (seeded from the batch seed) that
+   * give the same category, 0 to 1: below UNCERTAIN_AGREEMENT another draw of as many members may
+   * well give a neighbouring category.
+   */
+  categoryAgreement: number;
   /** Agents the scenario does not give, with how they were filled, in a few words each. */
   filledBy: string;
 }
@@ -61,7 +68,8 @@ export interface ScenarioAssessment {
  * central parameters, members and seed give the same members): the percentiles of the members'
  * own peak warming over 2001-2100 and of their 2100 warming, the median peak year, the share of
  * members whose peak exceeds each threshold, the median crossing year of each (20-year means,
- * IPCC AR6), net-zero CO2 year and the cumulative CO2 to it, and the AR6 WG3 category.
+ * IPCC AR6), net-zero CO2 year and the cumulative CO2 to it, and the AR6 WG3 category with its
+ * agreement under a bootstrap of the members (categoryAgreement).
  *
  * @param pathway the scenario as a run uses it (spliced onto the history)
  * @param ids model and scenario names, and the filled-agents text (pathwayCoverage)
@@ -90,6 +98,7 @@ export async function assessScenario(
   };
   const evidence = categoryEvidence(peakK, warming2100K);
   const category = warmingCategory(evidence);
+  const agreement = categoryAgreement(peakK, warming2100K, category.code, CATEGORY_RESAMPLES, categoryBootstrapRandom(options.seed));
   // Years by the inverse empirical distribution (Hyndman & Fan 1996, definition 1), as the ensemble's own peak year.
   const sortedYears = Float64Array.from(peakYear).sort();
   const co2 = pathway.series.co2_gtco2;
@@ -113,6 +122,7 @@ export async function assessScenario(
     cumulativeFromYear: netZero ? netZero.fromYear : null,
     category: category.code,
     categoryName: category.name,
+    categoryAgreement: agreement,
     filledBy: ids.filledBy,
   };
   return { assessment, result, notes };

@@ -3,8 +3,8 @@ import type { BatchOutcome } from './run-batch.js';
 
 /** The `format` member of a batch shard file. */
 export const BATCH_SHARD_FORMAT = 'warmcast-batch-shard';
-/** Version of the batch shard layout. */
-export const BATCH_SHARD_VERSION = 1;
+/** Version of the batch shard layout (2: rows carry categoryAgreement, which version 1 lacks and cannot be recomputed from). */
+export const BATCH_SHARD_VERSION = 2;
 
 /** What every shard of one batch must share: the table and the ensemble settings. */
 export interface BatchSettings {
@@ -45,7 +45,7 @@ export function isBatchShardText(text: string): boolean {
 
 /**
  * Reads a batch shard file.
- * @throws InputError when it is not a batch shard of this version
+ * @throws InputError when it is not a batch shard of this version (an older one is named as such)
  */
 export function batchShardFromJson(text: string, file: string): BatchShard {
   let data: Record<string, unknown>;
@@ -53,6 +53,10 @@ export function batchShardFromJson(text: string, file: string): BatchShard {
     data = JSON.parse(text) as Record<string, unknown>;
   } catch (e) {
     throw new InputError([{ file, code: 'input.bad-json', message: `must be JSON: ${(e as Error).message}`, expected: 'a shard file written by `warmcast batch --shard K/N --out NAME.json`' }]);
+  }
+  if (data.format === BATCH_SHARD_FORMAT && typeof data.version === 'number' && data.version < BATCH_SHARD_VERSION) {
+    // The members are not kept in a shard, so an older shard's rows cannot be given their category agreement.
+    throw new InputError([{ file, code: 'input.old-batch-shard', message: `is a batch shard of version ${data.version}, written by an earlier warmcast; this version merges shards of version ${BATCH_SHARD_VERSION} only (their rows carry category_agreement)`, expected: 'the shard rerun with this warmcast: `warmcast batch ... --shard K/N --out NAME.json`' }]);
   }
   if (data.format !== BATCH_SHARD_FORMAT || data.version !== BATCH_SHARD_VERSION) {
     throw new InputError([{ file, code: 'input.not-batch-shard', message: `must be a batch shard file of version ${BATCH_SHARD_VERSION}`, expected: 'a shard file written by `warmcast batch --shard K/N --out NAME.json` of this version' }]);

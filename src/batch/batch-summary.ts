@@ -16,7 +16,8 @@ export function medianCrossingColumn(thresholdK: number): string {
  * The batch summary as a table, one row per assessed scenario in table order: model, scenario,
  * category (AR6 WG3 code) and its name, peak_warming_pXX_k, peak_year_p50, warming_2100_pXX_k,
  * prob_peak_above_<t> and median_crossing_year_<t> per threshold, net_zero_co2_year,
- * cumulative_co2_to_net_zero_gtco2 with cumulative_co2_from_year, and filled_by. Missing values
+ * cumulative_co2_to_net_zero_gtco2 with cumulative_co2_from_year, filled_by, and category_agreement
+ * (last, so that columns scripts read by position keep their places). Missing values
  * (no 2100, not crossed, no net zero) are NaN, written as empty cells.
  *
  * @param outcome rows of runBatch (or merged shards)
@@ -31,7 +32,8 @@ export function batchSummaryTable(outcome: BatchOutcome, thresholds: readonly nu
     columns.push({
       key,
       values: Float64Array.from(values, (v) => (v === null ? NaN : v)),
-      ...(key.includes('year') || key.startsWith('cumulative_') ? { digits: 0 } : key.startsWith('prob_') ? { digits: 2 } : {}),
+      // category_agreement to three decimals: a multiple of 1/200 just below 0.9 must not read as 0.90.
+      ...(key.includes('year') || key.startsWith('cumulative_') ? { digits: 0 } : key.startsWith('prob_') ? { digits: 2 } : key === 'category_agreement' ? { digits: 3 } : {}),
     });
   addText('model', rows.map((r) => r.model));
   addText('scenario', rows.map((r) => r.scenario));
@@ -46,6 +48,7 @@ export function batchSummaryTable(outcome: BatchOutcome, thresholds: readonly nu
   addNumber('cumulative_co2_to_net_zero_gtco2', rows.map((r) => r.cumulativeCo2ToNetZeroGtco2));
   addNumber('cumulative_co2_from_year', rows.map((r) => r.cumulativeFromYear));
   addText('filled_by', rows.map((r) => r.filledBy));
+  addNumber('category_agreement', rows.map((r) => r.categoryAgreement));
   return { name: 'summary', caption: 'one row per scenario assessed', columns };
 }
 

@@ -8,6 +8,7 @@ import { batchShardFromJson, batchShardToJson, isBatchShardText, mergeBatchShard
 import { batchErrorLines, type BatchOutcome } from '../batch/run-batch.js';
 import { runBatchThreads } from './batch-threads.js';
 import { AR6_WARMING_CATEGORIES } from '../batch/warming-category.js';
+import { CATEGORY_RESAMPLES, UNCERTAIN_AGREEMENT } from '../batch/category-agreement.js';
 import { ConfigError, InputError, PartialFailureError } from '../errors.js';
 import { shardRange } from '../ensemble/index.js';
 import { readScenarioTable } from '../io/iamc-read.js';
@@ -178,12 +179,14 @@ export async function emitBatch(outcome: BatchOutcome, ctx: { settings: BatchSet
   const errorList = outcome.errors.map((e) => ({ model: e.model, scenario: e.scenario, code: e.code, problems: batchErrorLines(e) }));
   const rows = outcome.rows;
   const counts = AR6_WARMING_CATEGORIES.map((c) => [c.code, rows.filter((r) => r.category === c.code).length] as const).filter(([, n]) => n > 0);
+  const uncertain = rows.filter((r) => r.categoryAgreement < UNCERTAIN_AGREEMENT).length;
   const summary = batchSummaryTable(outcome, settings.thresholds);
   const doc = batchDocument({
     title: `warmcast batch: ${settings.table.path}`,
     subtitle:
       `${rows.length} scenario${rows.length === 1 ? '' : 's'} assessed, ${settings.members} members each (seed ${settings.seed}); warming relative to ${settings.baseline.join('-')}; peak over ${PEAK_YEARS.join('-')}. ` +
-      `AR6 WG3 categories: ${counts.map(([c, n]) => `${c} ${n}`).join(', ')}`,
+      `AR6 WG3 categories: ${counts.map(([c, n]) => `${c} ${n}`).join(', ')}` +
+      (uncertain > 0 ? `; ${uncertain} marked "?" (category_agreement below ${UNCERTAIN_AGREEMENT})` : ''),
     baseline: settings.baseline,
     data: summary,
     // Markdown and HTML show the short table, then every column (as the previous Markdown summary did), then the failures.
@@ -214,7 +217,7 @@ export async function emitBatch(outcome: BatchOutcome, ctx: { settings: BatchSet
   const cut = ctx.out !== undefined && rows.length > 40;
   const shown = cut ? { ...human, columns: human.columns.map((c) => ({ ...c, values: (c.values as readonly string[]).slice(0, 20) })) } : human;
   const more = cut ? [`... ${rows.length - 20} more scenarios in the file written`] : [];
-  printDocument({ ...doc, tables: [shown], terminalNotes: more }, { out: ctx.out, notes: ctx.showNotes, chart: false }, io);
+  printDocument({ ...doc, tables: [shown], terminalNotes: [...more, agreementNote(outcome)] }, { out: ctx.out, notes: ctx.showNotes, chart: false }, io);
   finish(outcome, io, outcome.rows.length + outcome.errors.length);
 }
 
@@ -252,10 +255,11 @@ function batchHumanTable(outcome: BatchOutcome, settings: BatchSettings): Output
   return {
     name: 'scenarios',
     caption: 'one line per scenario',
+    notes: [agreementNote(outcome)],
     columns: [
       col('model', 'model', rows.map((r) => r.model)),
       col('scenario', 'scenario', rows.map((r) => r.scenario)),
-      col('category', 'cat.', rows.map((r) => r.category)),
+      col('category', 'cat.', rows.map((r) => (r.categoryAgreement < UNCERTAIN_AGREEMENT ? `${r.category}?` : r.category))),
       col('peak_warming_k', 'peak K (5-95 %)', rows.map((r) => `${r.peakWarmingK.p50.toFixed(2)} (${r.peakWarmingK.p05.toFixed(2)}-${r.peakWarmingK.p95.toFixed(2)})`)),
       col('peak_year_p50', 'peak yr', rows.map((r) => String(r.peakYearP50))),
       col('warming_2100_p50_k', '2100 K', rows.map((r) => (r.warming2100K ? r.warming2100K.p50.toFixed(2) : '-'))),
@@ -275,8 +279,21 @@ function batchNotes(thresholds: number[]): string[] {
     `net_zero_co2_year: first year from ${CUMULATIVE_FROM} (or the scenario's first year, cumulative_co2_from_year) with net CO2 emissions at or below zero; cumulative_co2_to_net_zero_gtco2: the sum of the annual net CO2 emissions from that year to the year before net zero (to the end when net zero is not reached)`,
     `category: IPCC AR6 WG3 warming category (codes C1-C8), the first whose criterion the members meet; criteria recalled from memory (AR6 WG3 Table SPM.2 and Annex III): ${AR6_WARMING_CATEGORIES.map((c) => `${c.code} ${c.criterion}`).join('; ')}`,
     'filled_by: the forcing agents a scenario does not give, and how the run fills them',
-    'every scenario runs the same members (same seed), so differences between rows come from the scenarios, not from sampling',
+    `category_agreement: share of ${CATEGORY_RESAMPLES} bootstrap resamples of the scenario's members (drawn with replacement, each keeping its peak and 2100 warming; seeded from --seed) that give the same category, 0 to 1; below ${UNCERTAIN_AGREEMENT} the category is marked "?" in the terminal, Markdown and HTML tables, as another draw of as many members (another --seed or --members) may give a neighbouring one`,
+    'every scenario runs the same members (same seed), so differences between rows come from the scenarios, not from sampling; each row still carries the sampling error of its members, which category_agreement measures for the category',
   ];
+}
+
+/** What category_agreement means for this batch, and how many scenarios fall below UNCERTAIN_AGREEMENT. */
+function agreementNote(outcome: BatchOutcome): string {
+  const below = outcome.rows.filter((r) => r.categoryAgreement < UNCERTAIN_AGREEMENT).length;
+  if (below === 0) return `every scenario's category is given by at least ${Math.round(UNCERTAIN_AGREEMENT * 100)} % of ${CATEGORY_RESAMPLES} bootstrap resamples of its members (category_agreement): no category marked "?"`;
+  const n = outcome.rows.length;
+  return (
+    `${below} of ${n} scenario${n === 1 ? '' : 's'} ${below === 1 ? 'has its' : 'have their'} category marked "?" (category_agreement below ${UNCERTAIN_AGREEMENT}: ` +
+    `fewer than ${Math.round(UNCERTAIN_AGREEMENT * 100)} % of ${CATEGORY_RESAMPLES} bootstrap resamples of the members give the same category); ` +
+    'a rerun with another seed or member count may move such a scenario to a neighbouring category, so quote it with that caution'
+  );
 }
 
 function batchUncertainty(members: number): string {

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { batchShardFromJson, batchShardToJson, isBatchShardText, mergeBatchShards, type BatchShard } from '../../src/batch/batch-shard.js';
+import { BATCH_SHARD_VERSION, batchShardFromJson, batchShardToJson, isBatchShardText, mergeBatchShards, type BatchShard } from '../../src/batch/batch-shard.js';
 
 const settings = { table: { path: 't.csv', sha256: 'ab' }, scenarios: 3, members: 10, seed: 1, thresholds: [1.5, 2], baseline: [1850, 1900] as [number, number], co2Formula: 'ar6', splice: true };
 const row = (index: number) => ({ index, model: 'M', scenario: `S${index}` }) as unknown as BatchShard['outcome']['rows'][number];
@@ -16,6 +16,13 @@ describe('batch shards', () => {
     expect(isBatchShardText(text)).toBe(true);
     expect(isBatchShardText('{"format":"warmcast-ensemble-shard"}')).toBe(false);
     expect(batchShardFromJson(text, 's.json')).toMatchObject(shard(1, [0]));
+  });
+
+  it('refuse a shard of an earlier version (its rows lack category_agreement), saying so', () => {
+    const old = batchShardToJson(shard(1, [0])).replace(`"version":${BATCH_SHARD_VERSION}`, '"version":1');
+    expect(BATCH_SHARD_VERSION).toBe(2);
+    expect(isBatchShardText(old)).toBe(true);
+    expect(() => batchShardFromJson(old, 'old.json')).toThrow(/^old\.json: is a batch shard of version 1, written by an earlier warmcast/);
   });
 
   it('merge in table order whatever the order of the files', () => {

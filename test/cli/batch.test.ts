@@ -42,6 +42,38 @@ describe('warmcast batch', () => {
     }
   });
 
+  it('gives each category its agreement under a bootstrap of the members (0 to 1, last column), marks one below 0.9 "?" in the terminal and Markdown only, and counts them in a note', async () => {
+    const dir = await tables();
+    const r = await runCli(['batch', 'table.csv', ...SETTINGS, '--out', 'summary.csv'], dir);
+    expect(r.code, r.err).toBe(0);
+    const lines = readFileSync(join(dir, 'summary.csv'), 'utf8').trim().split('\n');
+    const header = lines[0].split(',');
+    expect(header.at(-1)).toBe('category_agreement');
+    const agreement = lines.slice(1).map((l) => Number(l.split(',').at(-1)));
+    expect(agreement).toHaveLength(3);
+    for (const a of agreement) {
+      expect(a).toBeGreaterThanOrEqual(0);
+      expect(a).toBeLessThanOrEqual(1);
+      // A share of 200 resamples.
+      expect(Number.isInteger(Math.round(a * 200 * 1e9) / 1e9)).toBe(true);
+    }
+    // The CSV's category column stays a bare code.
+    for (const l of lines.slice(1)) expect(l.split(',')[2]).toMatch(/^C[1-8]$/);
+    const below = agreement.filter((a) => a < 0.9).length;
+    expect(r.out).toMatch(below === 0 ? /no category marked "\?"/ : new RegExp(`${below} of 3 scenarios (has its|have their) category marked "\\?"`));
+    // Terminal rows (after the table's rule line): "C3?" exactly where the agreement is below 0.9.
+    const out = r.out.split('\n');
+    const rule = out.findIndex((l) => /^ {2}-+ {2}-/.test(l));
+    const cells = out.slice(rule + 1, rule + 4).map((l) => l.trim().split(/ {2,}/));
+    expect(cells.map((c) => c[1])).toEqual(['Quick', 'Slow', 'Quick']);
+    expect(cells.map((c) => c[2].endsWith('?'))).toEqual(agreement.map((a) => a < 0.9));
+    const md = await runCli(['batch', 'table.csv', ...SETTINGS, '--out', 'summary.md'], dir);
+    expect(md.code).toBe(0);
+    const text = readFileSync(join(dir, 'summary.md'), 'utf8');
+    expect(text).toContain('category_agreement');
+    expect(text).toMatch(/bootstrap resamples of the (scenario's )?members/);
+  });
+
   it('shards merged equal one batch, row for row and error for error', async () => {
     const dir = await tables(true);
     expect((await runCli(['batch', 'table.csv', ...SETTINGS, '--out', 'all.json'], dir)).code).toBe(3);
@@ -52,6 +84,7 @@ describe('warmcast batch', () => {
     const m = json(dir, 'merged.json');
     expect(m.columns).toEqual(a.columns);
     expect(m.rows).toEqual(a.rows);
+    expect(m.rows.every((row: { category_agreement: number }) => row.category_agreement >= 0 && row.category_agreement <= 1)).toBe(true);
     expect(m.errors).toEqual(a.errors);
     // A missing shard is refused.
     const partial = await runCli(['merge', 's1.json', 's2.json', '--out', 'partial.json'], dir);
