@@ -13,9 +13,9 @@ import { ConfigError, InputError, PartialFailureError } from '../errors.js';
 import { shardRange } from '../ensemble/index.js';
 import { readScenarioTable } from '../io/iamc-read.js';
 import { bundledPathwaysDir, writeFilesAtomic } from '../io/index.js';
-import { csvText, shortCaution, standardCautions, type OutputDocument, type OutputTable } from '../report/index.js';
+import { CALIBRATED_SET_CAUTION, csvText, shortCaution, standardCautions, type OutputDocument, type OutputTable } from '../report/index.js';
 import type { CliIo } from './cli-io.js';
-import { absentEmissionsOption, baselineOption, pathwayArg, thresholdsOption, wholeNumberOption } from './options.js';
+import { absentEmissionsOption, baselineOption, cautionsHelp, pathwayArg, thresholdsOption, wholeNumberOption } from './options.js';
 import type { AbsentEmissionsRule } from '../forcing/absent-emissions.js';
 import { announceWritten, checkOutExtension, printDocument, writeDocument, type WrittenFile } from './output.js';
 import { progressBar } from './progress.js';
@@ -77,7 +77,8 @@ export function batchCommand(io: CliIo): Command {
         '\nExamples:\n  warmcast batch pathways/examples/invented-scenarios.csv --out summary.csv\n' +
         '  warmcast batch scenarios.xlsx --members 1000 --seed 7 --thresholds 1.5,2,3 --out summary.xlsx --out-dir trajectories\n' +
         '  warmcast batch scenarios.xlsx --shard 3/20 --out shard-3.json      # one task of an array job\n' +
-        '  warmcast merge shard-*.json --out summary.csv\n',
+        '  warmcast merge shard-*.json --out summary.csv\n' +
+        cautionsHelp([standardCautions()[0], batchUncertainty(BATCH_DEFAULT_MEMBERS).replace(`${BATCH_DEFAULT_MEMBERS} ensemble members`, 'the ensemble members (--members)'), standardCautions()[2]]),
     )
     .action(async (arg: string, opts: BatchOptions) => {
       if (opts.seed >= 2 ** 32) throw new ConfigError('--seed must be below 2^32', 'seed');
@@ -297,7 +298,7 @@ function agreementNote(outcome: BatchOutcome): string {
 }
 
 function batchUncertainty(members: number): string {
-  return `Ranges are the spread of ${members} ensemble members per scenario, drawn from the calibrated parameter set (climate response, forcing scales and carbon cycle, constrained by the observed record); they do not include uncertainty in the scenarios or in the model structure. Categories are this model's reading of the AR6 WG3 criteria, not the IPCC's classification of these scenarios.`;
+  return `Ranges are the spread of ${members} ensemble members per scenario, drawn from the calibrated parameter set (climate response, forcing scales and carbon cycle, constrained by the observed record); they do not include uncertainty in the scenarios or in the model structure. Categories are this model's reading of the AR6 WG3 criteria, not the IPCC's classification of these scenarios; category_agreement says how often resampling the members gives the same one. ${CALIBRATED_SET_CAUTION}`;
 }
 
 
