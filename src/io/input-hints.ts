@@ -20,8 +20,15 @@ import { nearestName } from './nearest-name.js';
  */
 export function columnSuggestion(header: string, known: readonly string[], unitOf: (column: string) => string | undefined): string | undefined {
   const key = header.trim().toLowerCase();
+  if (/^(comments?|notes?|remarks?|descriptions?|sources?|references?)$/.test(key)) {
+    return 'warmcast reads numbers only: delete this column, and put comments on lines starting with "#" (for example "# note: ...")';
+  }
   const near = nearestName(key, known);
-  if (near !== undefined) return `did you mean "${near}"?`;
+  if (near !== undefined) {
+    // co2_mtco2 -> co2_gtco2: the name is near, but the unit is a thousand times smaller.
+    const mtForGt = /(^|_)mt/.test(key) && /_gt/.test(near);
+    return `did you mean "${near}"?${mtForGt ? ' (in Gt CO2 per year: divide Mt CO2 by 1000)' : ''}`;
+  }
   // A quantity without its unit: every known name that is the quantity plus `_unit`.
   const quantity = key.replace(/[^a-z0-9]+/g, '_').replace(/^_|_$/g, '');
   const words = quantity.split('_');

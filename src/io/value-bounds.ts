@@ -152,7 +152,11 @@ export function outOfBounds(column: PathwayColumn, value: number): { code: strin
   const b = VALUE_BOUNDS[column];
   if (value < 0 && b.min === 0) return { code: 'input.negative', message: `must not be negative: ${b.quantity} cannot be below 0 ${b.unit}`, expected: `a value from 0 to ${b.max} ${b.unit}` };
   if (value >= b.min && value <= b.max) return undefined;
-  return { code: 'input.out-of-range', message: `must be a plausible value for ${b.quantity}`, expected: `a value from ${b.min} to ${b.max} ${b.unit}` };
+  // An emission a thousand times too large is almost always in the next smaller unit (Mt in a Gt column, kt in a Mt column).
+  const massUnit = /^(Gt|Mt|kt)\b/.test(b.unit);
+  const thousandth = massUnit && value > b.max && value / 1000 >= b.min && value / 1000 <= b.max;
+  const unitHint = thousandth ? `; it looks 1000 times too large: is it in thousandths of ${b.unit} (Mt for Gt, kt for Mt)? Then divide the column by 1000` : '';
+  return { code: 'input.out-of-range', message: `must be a plausible value for ${b.quantity}${unitHint}`, expected: `a value from ${b.min} to ${b.max} ${b.unit}` };
 }
 
 /** Bounds of a per-agent forcing column (common practice, no source; `why` names the history's extreme). */

@@ -22,6 +22,14 @@ describe('columnSuggestion', () => {
     expect(columnSuggestion('temperature', known, unitOf)).toBeUndefined();
     expect(columnSuggestion('gdp', known, unitOf)).toBeUndefined();
   });
+
+  it('columnSuggestion says to divide by 1000 when the near name is in Gt and the header in Mt (co2_mtco2)', () => {
+    expect(columnSuggestion('co2_mtco2', known, unitOf)).toBe('did you mean "co2_gtco2"? (in Gt CO2 per year: divide Mt CO2 by 1000)');
+  });
+
+  it('columnSuggestion sends a comment column to "#" lines', () => {
+    for (const h of ['comment', 'Notes', 'source']) expect(columnSuggestion(h, known, unitOf)).toMatch(/put comments on lines starting with "#"/);
+  });
 });
 
 describe('dateHint', () => {

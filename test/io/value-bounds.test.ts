@@ -4,7 +4,7 @@ import { describe, expect, it } from 'vitest';
 import { InputError } from '../../src/errors.js';
 import { bundledPathwaysDir, bundledPathwayNames } from '../../src/io/bundled-pathways.js';
 import { parsePathway } from '../../src/io/parse-pathway.js';
-import { VALUE_BOUNDS } from '../../src/io/value-bounds.js';
+import { outOfBounds, VALUE_BOUNDS } from '../../src/io/value-bounds.js';
 import { FORCING_COLUMNS, PATHWAY_COLUMNS } from '../../src/pathway.js';
 
 /** The problems parsePathway reports for `text`, or [] when it reads. */
@@ -56,5 +56,14 @@ describe('VALUE_BOUNDS', () => {
   it('parsePathway rejects aerosol_wm2 -50 (the value that once passed and gave -9.69 K)', () => {
     const [p] = problemsOf('year,aerosol_wm2\n2030,-50\n2050,0\n');
     expect(p).toMatchObject({ line: 2, column: 'aerosol_wm2', message: 'must be a plausible value for an aerosol effective radiative forcing' });
+  });
+});
+
+describe('outOfBounds: a value 1000 times too large', () => {
+  it('names the next smaller unit (Mt CO2 in the Gt CO2 column), and stays plain for other values out of range', () => {
+    expect(outOfBounds('co2_gtco2', 40000)!.message).toMatch(/looks 1000 times too large.*divide the column by 1000/);
+    expect(outOfBounds('co2_gtco2', 4e7)!.message).not.toMatch(/1000 times/);
+    expect(outOfBounds('co2_gtco2', 40)).toBeUndefined();
+    expect(outOfBounds('solar_wm2', 1361)!.message).not.toMatch(/1000 times/); // irradiance, not a unit slip
   });
 });
