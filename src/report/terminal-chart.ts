@@ -100,11 +100,19 @@ export function terminalChart(series: readonly ChartLine[], options: TerminalCha
   // Rows stand for round values: a step of 1, 2 or 5 x 10^k (d3-scale ticks) near (hi - lo) / height,
   // and the value range widened to whole steps, so each row's label is exactly the value drawn on it.
   const ticked = scaleLinear().domain([lo, hi]).nice(height).ticks(height);
-  const step = ticked.length > 1 ? ticked[1] - ticked[0] : (hi - lo) / height;
+  let step = ticked.length > 1 ? ticked[1] - ticked[0] : (hi - lo) / height;
+  // A threshold between two rows would be drawn on the nearer one, under the wrong label (1.5 K on
+  // the 1.6 row at 0.2 K steps): a step of 2 x 10^k becomes 2.5 x 10^k when that puts every
+  // threshold on a row of its own.
+  const onRow = (v: number, s: number) => Math.abs(v / s - Math.round(v / s)) < 1e-6;
+  const power = 10 ** Math.floor(Math.log10(step) + 1e-9);
+  if (Math.abs(step / power - 2) < 1e-9 && thresholds.some((t) => !onRow(t, step)) && thresholds.every((t) => onRow(t, 2.5 * power))) step = 2.5 * power;
   lo = Math.floor(lo / step + 1e-9) * step;
   hi = Math.ceil(hi / step - 1e-9) * step;
   const rowsWanted = Math.max(1, Math.round((hi - lo) / step));
-  const digits = Math.max(0, Math.ceil(-Math.log10(step) - 1e-9));
+  // Decimals that show every row's value exactly (0.25 needs two).
+  let digits = 0;
+  while (digits < 6 && !onRow(step, 10 ** -digits)) digits++;
   const fixed = (v: number) => {
     const s = v.toFixed(digits);
     return /^-0(\.0*)?$/.test(s) ? s.slice(1) : s;

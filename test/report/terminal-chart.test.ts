@@ -46,8 +46,9 @@ describe('terminalChart', () => {
   it('terminalChart puts each marker on the row whose value label is nearest the line\'s value at that column (within half a row step)', () => {
     const chart = render();
     const rows = plotRows(chart);
-    // 1.0 to 2.8 K in round steps of 0.2 K (d3-scale ticks for about 12 rows): 10 rows.
-    expect(rows.map((r) => r.value)).toEqual([2.8, 2.6, 2.4, 2.2, 2.0, 1.8, 1.6, 1.4, 1.2, 1.0]);
+    // 1.0 to 3.0 K: d3-scale ticks for about 12 rows give 0.2 K, which would put the 1.5 K line
+    // between rows, so the step is 0.25 K and every threshold has its own row: 9 rows.
+    expect(rows.map((r) => r.value)).toEqual([3.0, 2.75, 2.5, 2.25, 2.0, 1.75, 1.5, 1.25, 1.0]);
     const step = (rows[0].value - rows[rows.length - 1].value) / (rows.length - 1);
     const samples = Math.max(...rows.map((r) => r.cells.replace(/ +\d.*K$/, '').length)) + 1;
     const yearAt = (i: number) => 2020 + (i * 80) / (samples - 1);
@@ -63,6 +64,11 @@ describe('terminalChart', () => {
       });
     });
     expect(seen).toBeGreaterThan(10);
+  });
+
+  it('terminalChart draws each threshold line on the row labelled with its value', () => {
+    const rows = plotRows(render());
+    for (const t of [1.5, 2]) expect(rows.find((r) => r.value === t)!.cells).toMatch(/┄.*\s\d(\.\d)? K$/);
   });
 
   it('terminalChart draws nothing of a line before its first year', () => {
