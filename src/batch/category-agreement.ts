@@ -1,6 +1,4 @@
-import { uniformFloat64 } from 'pure-rand/distribution/uniformFloat64';
-import { xoroshiro128plusFromState } from 'pure-rand/generator/xoroshiro128plus';
-import { memberState } from '../ensemble/member-generators.js';
+import { BOOTSTRAP_STREAMS, bootstrapUniforms } from '../ensemble/member-generators.js';
 import { categoryEvidence, warmingCategory } from './warming-category.js';
 
 /** Bootstrap resamples behind category_agreement: 200 give a share near 0.9 to about +-0.02 (sqrt(0.9 x 0.1 / 200)). */
@@ -48,14 +46,12 @@ export function categoryAgreement(
 }
 
 /**
- * The uniform numbers of a batch's category bootstrap: pure-rand's xoroshiro128+ started from the
- * stream of member index 2^53 - 2 of `seed` (members take streams 0, 1, ...; no member reaches it).
+ * The uniform numbers of a batch's category bootstrap (bootstrapUniforms, its own stream of `seed`).
  * Every scenario of a batch starts the same stream, so its agreement depends only on its members and
  * the seed, whichever shard or thread assesses it (as the members do).
  *
  * @param seed the batch's seed, integer in [0, 2^32)
  */
 export function categoryBootstrapRandom(seed: number): () => number {
-  const rng = xoroshiro128plusFromState(memberState(seed, Number.MAX_SAFE_INTEGER - 1));
-  return () => uniformFloat64(rng);
+  return bootstrapUniforms(seed, BOOTSTRAP_STREAMS.categoryAgreement);
 }

@@ -78,7 +78,7 @@ export function batchCommand(io: CliIo): Command {
         '  warmcast batch scenarios.xlsx --members 1000 --seed 7 --thresholds 1.5,2,3 --out summary.xlsx --out-dir trajectories\n' +
         '  warmcast batch scenarios.xlsx --shard 3/20 --out shard-3.json      # one task of an array job\n' +
         '  warmcast merge shard-*.json --out summary.csv\n' +
-        cautionsHelp([standardCautions()[0], batchUncertainty(BATCH_DEFAULT_MEMBERS).replace(`${BATCH_DEFAULT_MEMBERS} ensemble members`, 'the ensemble members (--members)'), standardCautions()[2]]),
+        cautionsHelp([standardCautions()[0], batchUncertainty('the --members'), standardCautions()[2]]),
     )
     .action(async (arg: string, opts: BatchOptions) => {
       if (opts.seed >= 2 ** 32) throw new ConfigError('--seed must be below 2^32', 'seed');
@@ -297,7 +297,8 @@ function agreementNote(outcome: BatchOutcome): string {
   );
 }
 
-function batchUncertainty(members: number): string {
+/** The uncertainty caution of a batch; `members` is the count, or words for it (`--help`). */
+function batchUncertainty(members: number | string): string {
   return `Ranges are the spread of ${members} ensemble members per scenario, drawn from the calibrated parameter set (climate response, forcing scales and carbon cycle, constrained by the observed record); they do not include uncertainty in the scenarios or in the model structure. Categories are this model's reading of the AR6 WG3 criteria, not the IPCC's classification of these scenarios; category_agreement says how often resampling the members gives the same one. ${CALIBRATED_SET_CAUTION}`;
 }
 

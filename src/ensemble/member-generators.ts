@@ -1,4 +1,5 @@
 import type { RandomGenerator } from 'pure-rand/types/RandomGenerator';
+import { uniformFloat64 } from 'pure-rand/distribution/uniformFloat64';
 import { xoroshiro128plusFromState } from 'pure-rand/generator/xoroshiro128plus';
 
 /** Name of the scheme below, recorded in shard files so that only compatible shards merge. */
@@ -58,4 +59,23 @@ function fmix32(h: number): number {
 export function memberGenerators(seed: number, start: number): () => RandomGenerator {
   let i = start;
   return () => xoroshiro128plusFromState(memberState(seed, i++));
+}
+
+/**
+ * Streams kept for bootstraps over the members, far above any member index, so that a bootstrap
+ * never repeats a member's draws: one per use, so that two bootstraps of one seed are independent.
+ */
+export const BOOTSTRAP_STREAMS = { budgetSpread: Number.MAX_SAFE_INTEGER, categoryAgreement: Number.MAX_SAFE_INTEGER - 1 } as const;
+
+/**
+ * Uniform numbers in [0, 1) from stream `stream` of `seed` (xoroshiro128+ from memberState), for a
+ * bootstrap over the members; the same seed and stream give the same numbers on any machine.
+ *
+ * @param seed integer in [0, 2^32)
+ * @param stream one of BOOTSTRAP_STREAMS
+ * @example const random = bootstrapUniforms(1, BOOTSTRAP_STREAMS.budgetSpread); random() // in [0, 1)
+ */
+export function bootstrapUniforms(seed: number, stream: number): () => number {
+  const rng = xoroshiro128plusFromState(memberState(seed, stream));
+  return () => uniformFloat64(rng);
 }

@@ -1,5 +1,3 @@
-import { uniformFloat64 } from 'pure-rand/distribution/uniformFloat64';
-import { xoroshiro128plusFromState } from 'pure-rand/generator/xoroshiro128plus';
 import type { ClimateParams } from '../climate/params.js';
 import { energyBalance } from '../climate/energy-balance.js';
 import { gtco2ToGtc } from '../carbon/units.js';
@@ -8,7 +6,7 @@ import { co2Forcing } from '../forcing/co2.js';
 import type { ForcingAgent } from '../forcing/agents.js';
 import { forcingScaleKey, sliceMemberParameters, type MemberParameters, type MemberSource } from '../ensemble/member-parameters.js';
 import { ar6Members } from '../ensemble/ar6-members.js';
-import { memberState } from '../ensemble/member-generators.js';
+import { BOOTSTRAP_STREAMS, bootstrapUniforms } from '../ensemble/member-generators.js';
 import { AR6_SAMPLING } from '../ensemble/sampling.js';
 import { runMembers, type MemberTask } from '../ensemble/run-members.js';
 import { attributeWarming } from '../metrics/attribution.js';
@@ -259,9 +257,7 @@ export function carbonBudget(nonCo2: Pathway, options: CarbonBudgetOptions): Car
     currentRateGtco2: rate,
     reference,
   };
-  // One stream no member uses (members take streams 0, 1, ...), so the bootstrap never repeats a member's draws.
-  const rng = xoroshiro128plusFromState(memberState(options.seed, Number.MAX_SAFE_INTEGER));
-  const spread = budgetSamplingSpread(result, family, SPREAD_REPLICATES, () => uniformFloat64(rng));
+  const spread = budgetSamplingSpread(result, family, SPREAD_REPLICATES, bootstrapUniforms(options.seed, BOOTSTRAP_STREAMS.budgetSpread));
   notes.push(...budgetNotes(result.rows, spread, assumptions, fromYear, historyEnd, options, source));
   return { ...result, fromYear, assumptions, spread, notes };
 }
